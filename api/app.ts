@@ -1,0 +1,40 @@
+import path from "node:path";
+import express, { type Express } from "express";
+import type { AppContext } from "./context";
+import { errors } from "./errors";
+import { errorHandler } from "./middleware/error-handler";
+import { requestLogging } from "./middleware/request-logging";
+import { healthRoutes } from "./routes/health";
+
+/**
+ * Builds the Express app without listening: the API under /api and, when `webDist` is
+ * given, the built web app with a history fallback for every other path.
+ */
+export function createApp(context: AppContext): Express {
+  const app = express();
+  app.disable("x-powered-by");
+  app.set("trust proxy", "loopback");
+
+  app.use(requestLogging(context.logger));
+
+  const api = express.Router();
+  api.use(express.json({ limit: "1mb" }));
+  api.use(healthRoutes(context));
+  api.use((req) => {
+    throw errors.routeNotFound(req.method, req.originalUrl.split("?")[0]);
+  });
+  app.use("/api", api);
+
+  if (context.webDist) {
+    const dist = context.webDist;
+    // Hashed assets can be cached for good; index.html must be revalidated so a new build is seen.
+    app.use("/assets", express.static(path.join(dist, "assets"), { immutable: true, maxAge: "1y", fallthrough: false }));
+    app.use(express.static(dist, { index: false, maxAge: "1h" }));
+    app.get("/{*splat}", (_req, res) => {
+      res.set("Cache-Control", "no-cache").sendFile(path.join(dist, "index.html"));
+    });
+  }
+
+  app.use(errorHandler);
+  return app;
+}

@@ -1,0 +1,30 @@
+/**
+ * Entry point of one API process: reads the environment, listens, and shuts down cleanly
+ * on SIGINT/SIGTERM. Keeps no state that another process behind the same load balancer
+ * would need: sessions, rate limits and data live in PostgreSQL.
+ *
+ * Migrations are not run here (several processes may start at once); `npm start` and
+ * `npm run db:migrate` run them.
+ */
+import path from "node:path";
+import { fileURLToPath } from "node:url";
+import { EnvError, parseEnv } from "./env";
+import { startServer } from "./server";
+
+const defaultWebDist = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../dist/web");
+
+try {
+  const env = parseEnv(process.env);
+  const running = await startServer(env, { webDist: process.env.WEB_DIST ?? defaultWebDist });
+  running.context.logger.info({ url: running.url }, "listening");
+  console.log(`Sigmacube API listening on ${running.url}`);
+  const stop = (signal: string) => {
+    running.context.logger.info({ signal }, "shutting down");
+    void running.close().then(() => process.exit(0));
+  };
+  process.once("SIGINT", stop);
+  process.once("SIGTERM", stop);
+} catch (error) {
+  console.error(error instanceof EnvError ? error.message : error);
+  process.exit(1);
+}

@@ -1,0 +1,34 @@
+import type { Sequelize } from "sequelize";
+import { AppSetting } from "./models/app-setting";
+
+/**
+ * Version of the demo seed. Each capability that adds demo content (accounts, projects,
+ * load cases) adds a step below and raises this number; a database seeded by an older
+ * version gets the new steps on the next start.
+ */
+export const DEMO_SEED_VERSION = 1;
+const SEED_KEY = "demo_seed";
+
+type SeedRecord = { version: number; seededAt: string };
+
+/**
+ * Seeds the demo scenario (Quillon Process Works) on first start only.
+ * Returns what it did, so `npm start` can print it. Models must be initialised.
+ */
+export async function seedDemo(
+  sequelize: Sequelize,
+  log: (line: string) => void = () => {},
+): Promise<{ seeded: boolean; version: number }> {
+  return sequelize.transaction(async (transaction) => {
+    const existing = await AppSetting.findByPk(SEED_KEY, { transaction, lock: transaction.LOCK.UPDATE });
+    const done = (existing?.value as SeedRecord | undefined)?.version ?? 0;
+    if (done >= DEMO_SEED_VERSION) return { seeded: false, version: done };
+
+    // Version 1: nothing but the record itself. Accounts and projects arrive with their issues.
+    log(`demo seed: applying version ${DEMO_SEED_VERSION} (was ${done})`);
+
+    const value: SeedRecord = { version: DEMO_SEED_VERSION, seededAt: new Date().toISOString() };
+    await AppSetting.upsert({ key: SEED_KEY, value }, { transaction });
+    return { seeded: true, version: DEMO_SEED_VERSION };
+  });
+}

@@ -1,0 +1,50 @@
+import { NavLink, Outlet } from "react-router-dom";
+import { Caution } from "../components/Caution";
+import { LogoMark } from "../components/LogoMark";
+import { ServerStatus } from "../features/system-status/components/ServerStatus";
+
+const navigation = [{ to: "/", label: "Overview", end: true }];
+
+/** Header with the mark and navigation, the page, and a footer with the caution and server state. */
+export function Layout() {
+  return (
+    <div className="flex min-h-screen flex-col">
+      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-panel focus:p-2">
+        Skip to content
+      </a>
+      <header className="border-b border-rule bg-panel">
+        <div className="mx-auto flex max-w-6xl items-center gap-8 px-6 py-3">
+          <NavLink to="/" className="flex items-center gap-2.5 text-graphite no-underline" aria-label="Sigmacube home">
+            <LogoMark size={30} />
+            <span className="text-xl font-semibold tracking-tight">
+              Sigma<span className="text-ink">cube</span>
+            </span>
+          </NavLink>
+          <nav aria-label="Main" className="flex gap-1">
+            {navigation.map((item) => (
+              <NavLink
+                key={item.to}
+                to={item.to}
+                end={item.end}
+                className={({ isActive }) =>
+                  `rounded px-3 py-1.5 text-[15px] ${isActive ? "bg-ink-wash text-ink font-semibold" : "text-graphite-soft hover:text-ink"}`
+                }
+              >
+                {item.label}
+              </NavLink>
+            ))}
+          </nav>
+        </div>
+      </header>
+      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-6 py-8">
+        <Outlet />
+      </main>
+      <footer className="border-t border-rule bg-panel">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-x-8 gap-y-2 px-6 py-3 text-sm">
+          <Caution className="max-w-3xl" />
+          <ServerStatus />
+        </div>
+      </footer>
+    </div>
+  );
+}

@@ -1,0 +1,92 @@
+import { eigSym3, vonMisesOf } from "../eigen/sym3";
+
+/** Caller-owned outputs of {@link principalBatch}; all lengths are "at least". */
+export type PrincipalBatchOutput = {
+  /** 3N: σ1 σ2 σ3 per tensor */
+  values: Float64Array;
+  /** 9N: d1 d2 d3 per tensor (unit vectors, right-handed); omit to skip the directions */
+  directions?: Float64Array;
+  /** N: von Mises stress per tensor */
+  vonMises?: Float64Array;
+  /** N: Tresca stress σ1 − σ3 per tensor */
+  tresca?: Float64Array;
+};
+
+function tensorCount(input: Float64Array): number {
+  if (!(input instanceof Float64Array)) throw new TypeError("input must be a Float64Array");
+  if (input.length % 6 !== 0) {
+    throw new RangeError(
+      `input length ${input.length} is not a multiple of 6 (xx yy zz xy yz zx per tensor)`,
+    );
+  }
+  return input.length / 6;
+}
+
+function checkOut(arr: unknown, name: string, needed: number): Float64Array {
+  if (!(arr instanceof Float64Array)) throw new TypeError(`${name} must be a Float64Array`);
+  if (arr.length < needed) throw new RangeError(`${name} has length ${arr.length}, needs at least ${needed}`);
+  return arr;
+}
+
+function notFinite(k: number): RangeError {
+  return new RangeError(
+    `input tensor ${k} (input[${6 * k}..${6 * k + 5}]) has a component that is not finite`,
+  );
+}
+
+/**
+ * Principal stresses (and optionally directions, von Mises and Tresca stresses) of N tensors, into
+ * caller-owned arrays; nothing is allocated per tensor. Same kernel, conventions and accuracy as
+ * `principalStresses`: σ1 ≥ σ2 ≥ σ3, d3 = d1 × d2.
+ * @param input 6N components per tensor in the order xx yy zz xy yz zx (any one stress unit)
+ * @param out `values` (3N, stress unit), optional `directions` (9N, dimensionless), `vonMises` (N,
+ *   stress unit), `tresca` (N, σ1 − σ3, stress unit)
+ * @throws TypeError/RangeError for wrong array types or lengths, or a non-finite component (naming the tensor)
+ */
+export function principalBatch(input: Float64Array, out: PrincipalBatchOutput): void {
+  const n = tensorCount(input);
+  if (typeof out !== "object" || out === null) throw new TypeError("out must be an object");
+  const values = checkOut(out.values, "out.values", 3 * n);
+  const dirs = out.directions === undefined ? null : checkOut(out.directions, "out.directions", 9 * n);
+  const vm = out.vonMises === undefined ? null : checkOut(out.vonMises, "out.vonMises", n);
+  const tr = out.tresca === undefined ? null : checkOut(out.tresca, "out.tresca", n);
+  for (let k = 0; k < n; k++) {
+    const io = 6 * k;
+    if (!eigSym3(input, io, values, 3 * k, dirs, 9 * k)) throw notFinite(k);
+    if (vm !== null) {
+      vm[k] = vonMisesOf(
+        input[io],
+        input[io + 1],
+        input[io + 2],
+        input[io + 3],
+        input[io + 4],
+        input[io + 5],
+      );
+    }
+    if (tr !== null) tr[k] = values[3 * k] - values[3 * k + 2];
+  }
+}
+
+/**
+ * Von Mises stress of N tensors, into a caller-owned array, without computing principal stresses.
+ * @param input 6N components per tensor in the order xx yy zz xy yz zx (any one stress unit)
+ * @param out N von Mises stresses (same unit); length at least N
+ * @throws TypeError/RangeError for wrong array types or lengths, or a non-finite component
+ */
+export function vonMisesBatch(input: Float64Array, out: Float64Array): void {
+  const n = tensorCount(input);
+  checkOut(out, "out", n);
+  for (let k = 0; k < n; k++) {
+    const io = 6 * k;
+    const v = vonMisesOf(
+      input[io],
+      input[io + 1],
+      input[io + 2],
+      input[io + 3],
+      input[io + 4],
+      input[io + 5],
+    );
+    if (v !== v) throw notFinite(k);
+    out[k] = v;
+  }
+}

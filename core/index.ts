@@ -1,0 +1,57 @@
+/**
+ * Sigmacube core: the stress-tensor engine. Pure TypeScript, no DOM or Node APIs.
+ *
+ * Conventions: tension positive; shear components are tensor components (σxy = σyx), not
+ * engineering strains; one consistent stress unit per call (core computes in whatever unit it is
+ * given); principal stresses ordered σ1 ≥ σ2 ≥ σ3; angles in degrees at the API; the plane-stress
+ * principal angle θp runs from the x axis to σ1, counter-clockwise positive, in (−90°, 90°]; a rotation
+ * matrix's rows are the new axes written in the old frame, so σ' = R σ Rᵀ.
+ *
+ * Two layers: Float64Array batch kernels with caller-owned outputs (`principalBatch`,
+ * `vonMisesBatch`), and the small object API below, built on the same kernels.
+ */
+
+export type { StressTensor, Vec3, Mat3, Component } from "./tensor/types";
+export { COMPONENTS } from "./tensor/types";
+export type { Degrees, Radians } from "./units/angles";
+export { deg, rad, degToRad, radToDeg } from "./units/angles";
+export type { StressUnit } from "./units/stress";
+export {
+  STRESS_UNITS,
+  PASCALS_PER_PSI,
+  NEWTONS_PER_POUND_FORCE,
+  METRES_PER_INCH,
+  convertStress,
+} from "./units/stress";
+export {
+  ACCURACY,
+  HYDROSTATIC_DEVIATOR_REL,
+  ROTATION_ORTHONORMAL_TOL,
+  SYMMETRY_REL_TOL,
+  TRIG_REFINE_THRESHOLD,
+} from "./tolerances";
+
+export type { Principal } from "./eigen/principal";
+export { principalStresses, principalValues } from "./eigen/principal";
+export type { Invariants } from "./tensor/invariants";
+export {
+  invariants,
+  vonMises,
+  tresca,
+  maxShear,
+  octahedral,
+  lodeAngle,
+  triaxiality,
+} from "./tensor/invariants";
+export { rotateTensor, rotationFromAxisAngle, rotationFromEuler } from "./tensor/rotate";
+export { tractionOnPlane } from "./tensor/traction";
+export type { MohrCircle } from "./plane/mohr";
+export { mohrCircles } from "./plane/mohr";
+export type { PlaneStressResult } from "./plane/plane-stress";
+export { planeStress, transformPlaneStress } from "./plane/plane-stress";
+export type { Criterion, Material } from "./criteria/safety-factor";
+export { CRITERIA, safetyFactor } from "./criteria/safety-factor";
+export type { ParseTensorOptions, ParseTensorResult, ParseError } from "./parse/parse-tensor";
+export { parseTensor } from "./parse/parse-tensor";
+export type { PrincipalBatchOutput } from "./batch/principal-batch";
+export { principalBatch, vonMisesBatch } from "./batch/principal-batch";

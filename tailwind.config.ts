@@ -13,7 +13,7 @@ export default {
         paper: { DEFAULT: "#f5f1e8", deep: "#ebe5d7" },
         panel: "#fcfcfa",
         rule: { DEFAULT: "#d8d1c1", strong: "#b9b09c" },
-        graphite: { DEFAULT: "#2a2c30", soft: "#5b5e66", faint: "#8a8c92" },
+        graphite: { DEFAULT: "#2a2c30", soft: "#5b5e66", faint: "#676970" },
         ink: { DEFAULT: "#1d5a55", hover: "#154743", wash: "#e3eeec" },
         tension: { DEFAULT: "#c4561d", wash: "#f7e3d6" },
         compression: { DEFAULT: "#2767a8", wash: "#dde8f4" },

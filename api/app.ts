@@ -28,7 +28,10 @@ export function createApp(context: AppContext): Express {
   if (context.webDist) {
     const dist = context.webDist;
     // Hashed assets can be cached for good; index.html must be revalidated so a new build is seen.
-    app.use("/assets", express.static(path.join(dist, "assets"), { immutable: true, maxAge: "1y", fallthrough: false }));
+    app.use(
+      "/assets",
+      express.static(path.join(dist, "assets"), { immutable: true, maxAge: "1y", fallthrough: false }),
+    );
     app.use(express.static(dist, { index: false, maxAge: "1h" }));
     app.get("/{*splat}", (_req, res) => {
       res.set("Cache-Control", "no-cache").sendFile(path.join(dist, "index.html"));

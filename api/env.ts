@@ -25,7 +25,9 @@ export type Env = z.infer<typeof envSchema>;
 export class EnvError extends Error {
   override name = "EnvError";
   constructor(readonly problems: string[]) {
-    super(`Sigmacube cannot start: the environment is not valid.\n${problems.map((p) => `  - ${p}`).join("\n")}`);
+    super(
+      `Sigmacube cannot start: the environment is not valid.\n${problems.map((p) => `  - ${p}`).join("\n")}`,
+    );
   }
 }
 

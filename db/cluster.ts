@@ -65,7 +65,12 @@ async function pgRun(bin: string, tool: string, args: string[]) {
     return await run(cmd, argv, { encoding: "utf8" });
   } catch (error) {
     const e = error as { stderr?: string; stdout?: string; message: string };
-    throw new ClusterError(`${tool} failed: ${(e.stderr || e.stdout || e.message).trim()}`);
+    const detail = (e.stderr || e.stdout || e.message).trim();
+    const hint =
+      isRoot() && /Permission denied/.test(detail)
+        ? "\n(The postgres user must be able to enter every folder above the cluster's folder; a folder under /root usually is not.)"
+        : "";
+    throw new ClusterError(`${tool} failed: ${detail}${hint}`);
   }
 }
 
@@ -135,7 +140,9 @@ export async function startCluster(options: ClusterOptions): Promise<RunningClus
     `-p ${port}`,
     "-c listen_addresses=127.0.0.1",
     `-c unix_socket_directories=${socketDir}`,
-    ...(options.durable === false ? ["-c fsync=off", "-c synchronous_commit=off", "-c full_page_writes=off"] : []),
+    ...(options.durable === false
+      ? ["-c fsync=off", "-c synchronous_commit=off", "-c full_page_writes=off"]
+      : []),
   ].join(" ");
   await pgRun(bin, "pg_ctl", [
     "start",

@@ -6,7 +6,11 @@ import { SequelizeStorage, Umzug } from "umzug";
 const migrationsDir = path.join(path.dirname(fileURLToPath(import.meta.url)), "migrations");
 
 /** What a migration step receives; pass `transaction` to every query it makes. */
-export type MigrationContext = { queryInterface: QueryInterface; sequelize: Sequelize; transaction: Transaction };
+export type MigrationContext = {
+  queryInterface: QueryInterface;
+  sequelize: Sequelize;
+  transaction: Transaction;
+};
 
 /** What a migration module exports: `down` must undo every step of `up`. */
 export type Migration = {
@@ -34,7 +38,12 @@ export function createMigrator(sequelize: Sequelize, log: (message: string) => v
     },
     context: { queryInterface: sequelize.getQueryInterface(), sequelize },
     storage: new SequelizeStorage({ sequelize, tableName: "schema_migrations" }),
-    logger: { info: (e) => log(formatEvent(e)), warn: (e) => log(formatEvent(e)), error: (e) => log(formatEvent(e)), debug: () => {} },
+    logger: {
+      info: (e) => log(formatEvent(e)),
+      warn: (e) => log(formatEvent(e)),
+      error: (e) => log(formatEvent(e)),
+      debug: () => {},
+    },
   });
 }
 

@@ -11,7 +11,8 @@ function toHttpError(error: unknown): HttpError {
     return errors.invalidInput(error.issues.map((i) => ({ path: i.path.join("."), message: i.message })));
   }
   const parserError = error as BodyParserError;
-  if (parserError?.type === "entity.parse.failed") return errors.badRequest("The request body is not valid JSON.");
+  if (parserError?.type === "entity.parse.failed")
+    return errors.badRequest("The request body is not valid JSON.");
   if (parserError?.type === "entity.too.large") return errors.payloadTooLarge(`${parserError.limit} bytes`);
   // serve-static reports a missing file under /assets as a 404 error.
   if (parserError?.status === 404) return errors.notFound("This file");

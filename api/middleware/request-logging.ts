@@ -19,7 +19,11 @@ export function requestLogging(logger: Logger) {
     },
     customLogLevel: (_req, res, error) => (error || res.statusCode >= 500 ? "error" : "info"),
     serializers: {
-      req: (req: { id: string; method: string; url: string }) => ({ id: req.id, method: req.method, url: req.url }),
+      req: (req: { id: string; method: string; url: string }) => ({
+        id: req.id,
+        method: req.method,
+        url: req.url,
+      }),
       res: (res: { statusCode: number }) => ({ statusCode: res.statusCode }),
     },
   });

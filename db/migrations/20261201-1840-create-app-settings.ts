@@ -9,9 +9,9 @@ export const up: Migration["up"] = async ({ queryInterface, transaction }) => {
   await queryInterface.createTable(
     "app_settings",
     {
-    key: { type: DataTypes.STRING(100), primaryKey: true },
-    value: { type: DataTypes.JSONB, allowNull: false },
-    updated_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
+      key: { type: DataTypes.STRING(100), primaryKey: true },
+      value: { type: DataTypes.JSONB, allowNull: false },
+      updated_at: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
     },
     { transaction },
   );

@@ -35,7 +35,11 @@ describe("GET /api/health without a database", () => {
     try {
       const response = await request(app).get("/api/health").expect(503);
       const body = healthResponseSchema.parse(response.body);
-      expect(body).toMatchObject({ ok: false, version: appVersion, database: { ok: false, serverVersion: null } });
+      expect(body).toMatchObject({
+        ok: false,
+        version: appVersion,
+        database: { ok: false, serverVersion: null },
+      });
       expect(body.database.message).toMatch(/did not answer/);
     } finally {
       await close();
@@ -77,7 +81,10 @@ describe("unknown routes", () => {
       .set("Content-Type", "application/json")
       .send("{ not json")
       .expect(400);
-    expect(response.body.error).toMatchObject({ id: "bad_request", message: "The request body is not valid JSON." });
+    expect(response.body.error).toMatchObject({
+      id: "bad_request",
+      message: "The request body is not valid JSON.",
+    });
   });
 
   it("when any other path is asked for, then the app's index.html is served (history fallback)", async () => {

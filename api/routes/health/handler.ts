@@ -24,7 +24,11 @@ export function healthHandler(sequelize: Sequelize, version: string): RequestHan
         sequelize.query<{ server_version: string }>("show server_version", { type: QueryTypes.SELECT }),
         PING_TIMEOUT_MS,
       );
-      body = { ok: true, version, database: { ok: true, serverVersion: rows[0]?.server_version ?? null } };
+      body = {
+        ok: true,
+        version,
+        database: { ok: true, serverVersion: rows[0]?.server_version.split(" ")[0] ?? null },
+      };
     } catch (error) {
       req.log?.warn({ err: error }, "health: database check failed");
       body = {
@@ -33,6 +37,9 @@ export function healthHandler(sequelize: Sequelize, version: string): RequestHan
         database: { ok: false, serverVersion: null, message: "The database did not answer." },
       };
     }
-    res.status(body.ok ? 200 : 503).set("Cache-Control", "no-store").json(body);
+    res
+      .status(body.ok ? 200 : 503)
+      .set("Cache-Control", "no-store")
+      .json(body);
   };
 }

@@ -9,12 +9,19 @@ const navigation = [{ to: "/", label: "Overview", end: true }];
 export function Layout() {
   return (
     <div className="flex min-h-screen flex-col">
-      <a href="#main" className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-panel focus:p-2">
+      <a
+        href="#main"
+        className="sr-only focus:not-sr-only focus:absolute focus:left-2 focus:top-2 focus:bg-panel focus:p-2"
+      >
         Skip to content
       </a>
       <header className="border-b border-rule bg-panel">
         <div className="mx-auto flex max-w-6xl items-center gap-8 px-6 py-3">
-          <NavLink to="/" className="flex items-center gap-2.5 text-graphite no-underline" aria-label="Sigmacube home">
+          <NavLink
+            to="/"
+            className="flex items-center gap-2.5 text-graphite no-underline"
+            aria-label="Sigmacube home"
+          >
             <LogoMark size={30} />
             <span className="text-xl font-semibold tracking-tight">
               Sigma<span className="text-ink">cube</span>

@@ -6,8 +6,8 @@ export function Caution({ className = "" }: { className?: string }) {
   return (
     <p className={`text-sm text-graphite-soft ${className}`}>
       <span aria-hidden="true">⚠ </span>
-      Sigmacube is a screening and checking tool. Results assume linear-elastic material and small strains; the
-      governing design code and a licensed engineer decide whether a design is acceptable.
+      Sigmacube is a screening and checking tool. Results assume linear-elastic material and small strains;
+      the governing design code and a licensed engineer decide whether a design is acceptable.
     </p>
   );
 }

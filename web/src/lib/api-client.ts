@@ -18,10 +18,17 @@ export class ApiError extends Error {
  * the server's message, except the statuses in `acceptStatuses`, whose body is parsed too
  * (health answers 503 with a full body).
  */
-export async function apiGet<T>(path: string, schema: z.ZodType<T>, acceptStatuses: number[] = []): Promise<T> {
+export async function apiGet<T>(
+  path: string,
+  schema: z.ZodType<T>,
+  acceptStatuses: number[] = [],
+): Promise<T> {
   let response: Response;
   try {
-    response = await fetch(`/api${path}`, { headers: { Accept: "application/json" }, credentials: "same-origin" });
+    response = await fetch(`/api${path}`, {
+      headers: { Accept: "application/json" },
+      credentials: "same-origin",
+    });
   } catch {
     throw new ApiError(0, "network", "The server cannot be reached. Check that Sigmacube is running.");
   }

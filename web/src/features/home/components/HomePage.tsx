@@ -1,5 +1,3 @@
-import { Caution } from "../../../components/Caution";
-
 /** The order an engineer thinks in, which is also the order of the bench. */
 const steps = [
   {
@@ -26,8 +24,14 @@ const steps = [
 
 const record = [
   ["Load cases", "Operating, design, test and upset states side by side, with the one that governs named."],
-  ["Team workspaces", "Owners, editors, reviewers and viewers; share links that bring a colleague to the exact page."],
-  ["Calculation record", "Inputs, results and sources kept together, so a checker can review, approve and reopen the work later."],
+  [
+    "Team workspaces",
+    "Owners, editors, reviewers and viewers; share links that bring a colleague to the exact page.",
+  ],
+  [
+    "Calculation record",
+    "Inputs, results and sources kept together, so a checker can review, approve and reopen the work later.",
+  ],
 ];
 
 /** The landing page: what Sigmacube is for and how a check reads in it. */
@@ -41,8 +45,9 @@ export function HomePage() {
             A calculation sheet that computes, explains and keeps the record.
           </h1>
           <p className="mt-5 max-w-xl text-lg text-graphite-soft">
-            Sigmacube is for the engineers who find principal stresses, resolve them onto the planes that matter and
-            check them against the right yield or fracture criterion — and for the checkers who sign that work off.
+            Sigmacube is for the engineers who find principal stresses, resolve them onto the planes that
+            matter and check them against the right yield or fracture criterion — and for the checkers who
+            sign that work off.
           </p>
         </div>
         <PrincipalSketch />
@@ -81,8 +86,6 @@ export function HomePage() {
           ))}
         </dl>
       </section>
-
-      <Caution className="rounded border border-rule bg-panel px-4 py-3" />
     </div>
   );
 }
@@ -94,7 +97,12 @@ export function HomePage() {
 function PrincipalSketch() {
   return (
     <figure className="rounded border border-rule bg-panel p-4">
-      <svg viewBox="0 0 360 210" className="w-full bg-grid bg-[length:16px_16px]" role="img" aria-labelledby="sketch-title">
+      <svg
+        viewBox="0 0 360 210"
+        className="w-full bg-grid bg-[length:16px_16px]"
+        role="img"
+        aria-labelledby="sketch-title"
+      >
         <title id="sketch-title">
           A stress element with its three principal stresses, and the three Mohr circles they define
         </title>
@@ -106,33 +114,67 @@ function PrincipalSketch() {
         <g fill="none" strokeWidth={2} strokeLinecap="round">
           <path d="M110 70 V22 M104 30 L110 21 L116 30" className="stroke-tension" />
           <path d="M130 112 L168 131 M158 133 L169 132 L164 122" className="stroke-tension" />
-          <path d="M90 112 L62 126 M66 118 L61 127 L71 129" className="stroke-compression" />
+          {/* σ₃ is compressive: its arrow points into the face. */}
+          <path d="M58 128 L88 113 M78 112 L89 112 L83 121" className="stroke-compression" />
         </g>
         <g className="fill-graphite font-mono" fontSize={12}>
-          <text x="118" y="26">σ₁</text>
-          <text x="168" y="146">σ₂</text>
-          <text x="40" y="136">σ₃</text>
+          <text x="118" y="26">
+            σ₁
+          </text>
+          <text x="168" y="146">
+            σ₂
+          </text>
+          <text x="40" y="136">
+            σ₃
+          </text>
         </g>
         <g transform="translate(200 0)">
           <line x1="0" y1="110" x2="150" y2="110" className="stroke-graphite-faint" strokeWidth={1} />
           <line x1="20" y1="30" x2="20" y2="190" className="stroke-graphite-faint" strokeWidth={1} />
-          <circle cx="82" cy="110" r="52" className="fill-ink-wash stroke-ink" strokeWidth={1.5} fillOpacity={0.6} />
+          <circle
+            cx="82"
+            cy="110"
+            r="52"
+            className="fill-ink-wash stroke-ink"
+            strokeWidth={1.5}
+            fillOpacity={0.6}
+          />
           <circle cx="57" cy="110" r="27" className="fill-panel stroke-ink" strokeWidth={1.2} />
           <circle cx="109" cy="110" r="25" className="fill-panel stroke-ink" strokeWidth={1.2} />
           <g className="fill-graphite font-mono" fontSize={11}>
-            <text x="138" y="124">σ₁</text>
-            <text x="78" y="124">σ₂</text>
-            <text x="22" y="124">σ₃</text>
-            <text x="145" y="104">σₙ</text>
-            <text x="24" y="40">τ</text>
-            <text x="60" y="52">τₘₐₓ</text>
+            <text x="138" y="124">
+              σ₁
+            </text>
+            <text x="78" y="124">
+              σ₂
+            </text>
+            <text x="22" y="124">
+              σ₃
+            </text>
+            <text x="145" y="104">
+              σₙ
+            </text>
+            <text x="24" y="40">
+              τ
+            </text>
+            <text x="60" y="52">
+              τₘₐₓ
+            </text>
           </g>
-          <line x1="82" y1="58" x2="82" y2="110" className="stroke-graphite-soft" strokeDasharray="3 3" strokeWidth={1} />
+          <line
+            x1="82"
+            y1="58"
+            x2="82"
+            y2="110"
+            className="stroke-graphite-soft"
+            strokeDasharray="3 3"
+            strokeWidth={1}
+          />
         </g>
       </svg>
       <figcaption className="mt-2 text-sm text-graphite-soft">
-        The element in its principal frame, and the three circles of Mohr those stresses define: every plane through the
-        point lands in the shaded region.
+        The element in its principal frame, and the three circles of Mohr those stresses define: every plane
+        through the point lands in the shaded region.
       </figcaption>
     </figure>
   );

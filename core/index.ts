@@ -55,3 +55,17 @@ export type { ParseTensorOptions, ParseTensorResult, ParseError } from "./parse/
 export { parseTensor } from "./parse/parse-tensor";
 export type { PrincipalBatchOutput } from "./batch/principal-batch";
 export { principalBatch, vonMisesBatch } from "./batch/principal-batch";
+export {
+  IDENTITY_ROTATION,
+  multiplyMat3,
+  transposeMat3,
+  orthonormalize,
+  axisAngleFromRotation,
+  eulerFromRotation,
+  angleAboutZ,
+  frameWithFirstAxis,
+} from "./tensor/rotation-tools";
+export { principalFrame, maxShearFrame } from "./tensor/special-frames";
+export { envelopeInPlane, envelopeHit } from "./criteria/envelope";
+export type { PublishedMaterial } from "./materials/published";
+export { PUBLISHED_MATERIALS, FROM_MEMORY_NOTE, publishedMaterial } from "./materials/published";

@@ -19,8 +19,10 @@ export default defineConfig({
     chunkSizeWarningLimit: 900,
   },
   server: {
+    host: "127.0.0.1",
     port: 5173,
-    strictPort: false,
+    // scripts/dev.ts tells the API this origin (links in e-mail, the Origin check).
+    strictPort: true,
     proxy: { "/api": `http://127.0.0.1:${apiPort}` },
   },
   test: {

@@ -15,9 +15,13 @@ const defaultWebDist = path.resolve(path.dirname(fileURLToPath(import.meta.url))
 
 try {
   const env = parseEnv(process.env);
-  const running = await startServer(env, { webDist: process.env.WEB_DIST ?? defaultWebDist });
-  running.context.logger.info({ url: running.url }, "listening");
-  console.log(`Sigmacube API listening on ${running.url}`);
+  const running = await startServer(env, {
+    // WEB_DIST="" serves the API only (npm run dev, where Vite serves the app).
+    webDist: process.env.WEB_DIST === "" ? null : (process.env.WEB_DIST ?? defaultWebDist),
+  });
+  const listening = `http://${env.HOST}:${running.port}`;
+  running.context.logger.info({ listening, publicOrigin: running.url }, "listening");
+  console.log(`Sigmacube API listening on ${listening}`);
   const stop = (signal: string) => {
     running.context.logger.info({ signal }, "shutting down");
     void running.close().then(() => process.exit(0));

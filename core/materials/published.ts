@@ -7,7 +7,8 @@
  */
 
 /** The note shown beside every value recalled from memory. */
-export const FROM_MEMORY_NOTE = "recalled from memory — verify against the standard and your material certificate";
+export const FROM_MEMORY_NOTE =
+  "recalled from memory — verify against the standard and your material certificate";
 
 /** One published material grade. */
 export type PublishedMaterial = {

@@ -234,7 +234,7 @@ function matrix(
   const pairs: readonly [number, number, string, string][] = [
     [0, 1, "xy", "yx"],
     [1, 2, "yz", "zy"],
-    [2, 0, "zx", "xz"],
+    [0, 2, "xz", "zx"],
   ];
   for (const [i, j, upper, lower] of pairs) {
     const a = rows[i][j];

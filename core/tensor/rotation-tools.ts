@@ -179,9 +179,10 @@ export function eulerFromRotation(sequence: string, r: Mat3): Vec3 {
   let gamma: number;
   if (a !== c) {
     const e = (b - a + 3) % 3 === 1 ? 1 : -1; // +1 when (a, b, c) is a cyclic order of (x, y, z)
-    const sb = Math.min(1, Math.max(-1, e * q[a][c]));
-    beta = Math.asin(sb);
-    if (1 - Math.abs(sb) > LOCK) {
+    // atan2 rather than asin keeps β accurate near ±90°.
+    const cb = Math.hypot(q[b][c], q[c][c]);
+    beta = Math.atan2(e * q[a][c], cb);
+    if (cb > LOCK) {
       alpha = Math.atan2(-e * q[b][c], q[c][c]);
       gamma = Math.atan2(-e * q[a][b], q[a][a]);
     } else {
@@ -191,8 +192,9 @@ export function eulerFromRotation(sequence: string, r: Mat3): Vec3 {
   } else {
     const other = 3 - a - b;
     const e = (b - a + 3) % 3 === 1 ? 1 : -1;
-    beta = Math.acos(Math.min(1, Math.max(-1, q[a][a])));
-    if (Math.sin(beta) > LOCK) {
+    const sb = Math.hypot(q[b][a], q[other][a]);
+    beta = Math.atan2(sb, q[a][a]);
+    if (sb > LOCK) {
       alpha = Math.atan2(q[b][a], -e * q[other][a]);
       gamma = Math.atan2(q[a][b], e * q[a][other]);
     } else {

@@ -1,0 +1,85 @@
+import { z } from "zod";
+
+/**
+ * Sign-up, sign-in and password reset. Shared by the API (which validates) and the web
+ * forms (which show the same messages beside each field): imports only zod.
+ */
+
+/** Shortest password accepted; long passphrases beat clever rules (NIST SP 800-63B §5.1.1). */
+export const PASSWORD_MIN_LENGTH = 10;
+/** Longest password accepted: argon2 hashes anything, but a cap stops megabyte bodies being hashed. */
+export const PASSWORD_MAX_LENGTH = 200;
+
+// Deliberately loose (one @, a dot in the domain, no spaces): the mail server is the real check.
+const EMAIL_PATTERN = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
+
+/** An e-mail address as typed: trimmed; compared case-insensitively by the server. */
+export const emailSchema = z
+  .string({ error: "Enter your e-mail address." })
+  .trim()
+  .min(1, "Enter your e-mail address.")
+  .max(254, "An e-mail address has at most 254 characters.")
+  .regex(EMAIL_PATTERN, "Enter an e-mail address like name@example.com.");
+
+/** A new password: only a length rule, said plainly. */
+export const newPasswordSchema = z
+  .string({ error: "Choose a password." })
+  .min(PASSWORD_MIN_LENGTH, `Use at least ${PASSWORD_MIN_LENGTH} characters.`)
+  .max(PASSWORD_MAX_LENGTH, `Use at most ${PASSWORD_MAX_LENGTH} characters.`);
+
+/** A person's name as shown to their team. */
+export const personNameSchema = z
+  .string({ error: "Enter your name." })
+  .trim()
+  .min(1, "Enter your name.")
+  .max(100, "A name has at most 100 characters.");
+
+export const signUpBodySchema = z.object({
+  name: personNameSchema,
+  email: emailSchema,
+  password: newPasswordSchema,
+});
+export type SignUpBody = z.infer<typeof signUpBodySchema>;
+
+export const signInBodySchema = z.object({
+  email: emailSchema,
+  password: z
+    .string({ error: "Enter your password." })
+    .min(1, "Enter your password.")
+    .max(PASSWORD_MAX_LENGTH, `Use at most ${PASSWORD_MAX_LENGTH} characters.`),
+});
+export type SignInBody = z.infer<typeof signInBodySchema>;
+
+export const forgotPasswordBodySchema = z.object({ email: emailSchema });
+export type ForgotPasswordBody = z.infer<typeof forgotPasswordBodySchema>;
+
+/** A secret token from a link in an e-mail (base64url). */
+export const linkTokenSchema = z
+  .string({ error: "The link is incomplete." })
+  .regex(/^[A-Za-z0-9_-]{20,100}$/, "This link is not complete; open it again from the e-mail.");
+
+export const resetPasswordBodySchema = z.object({
+  token: linkTokenSchema,
+  password: newPasswordSchema,
+});
+export type ResetPasswordBody = z.infer<typeof resetPasswordBodySchema>;
+
+/** The signed-in person, as the API shows them to themselves. */
+export const userSchema = z.object({
+  id: z.uuid(),
+  name: z.string(),
+  email: z.string(),
+  createdAt: z.iso.datetime(),
+});
+export type User = z.infer<typeof userSchema>;
+
+/** `GET /api/auth/session`: who is signed in, or null. */
+export const sessionResponseSchema = z.object({ user: userSchema.nullable() });
+export type SessionResponse = z.infer<typeof sessionResponseSchema>;
+
+/** `POST /api/auth/sign-in`, `/sign-up`, `/reset-password`. */
+export const signedInResponseSchema = z.object({ user: userSchema });
+
+/** An answer that only says what happens next (forgot password). */
+export const notice = z.object({ message: z.string() });
+export type Notice = z.infer<typeof notice>;

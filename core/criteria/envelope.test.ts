@@ -1,0 +1,34 @@
+import { describe, expect, it } from "vitest";
+import { envelopeHit, envelopeInPlane } from "./envelope";
+
+describe("failure envelopes in the σA–σB plane", () => {
+  it("when the criterion is von Mises, then every point satisfies σA² − σAσB + σB² = Sy² (the distortion-energy ellipse; Shigley's Mechanical Engineering Design, eq. 5-13)", () => {
+    const pts = envelopeInPlane("von-mises", { yield: 355 });
+    expect(pts).toHaveLength(720);
+    for (const [a, b] of pts) expect(Math.sqrt(a * a - a * b + b * b)).toBeCloseTo(355, 9);
+  });
+
+  it("when the criterion is Tresca, then every point has max(|σA|, |σB|, |σA − σB|) = Sy (the maximum-shear hexagon; Shigley, §5-4)", () => {
+    for (const [a, b] of envelopeInPlane("tresca", { yield: 250 })) {
+      expect(Math.max(Math.abs(a), Math.abs(b), Math.abs(a - b))).toBeCloseTo(250, 9);
+    }
+  });
+
+  it("when the criterion is Mohr–Coulomb with St = 200, Sc = 750, then the fourth-quadrant points satisfy σA/St − σB/Sc = 1 and the corners are on the axes (Shigley, eq. 5-26)", () => {
+    const pts = envelopeInPlane("mohr-coulomb", { ultimateTension: 200, ultimateCompression: 750 }, 720);
+    const fourth = pts.filter(([a, b]) => a > 0 && b < 0);
+    expect(fourth.length).toBeGreaterThan(100);
+    for (const [a, b] of fourth) expect(a / 200 - b / 750).toBeCloseTo(1, 9);
+    expect(pts[0][0]).toBeCloseTo(200, 9);
+    expect(pts[540][1]).toBeCloseTo(-750, 9);
+  });
+
+  it("when a plane state is scaled to the envelope, then the hit is n times the state and n is the safety factor", () => {
+    const hit = envelopeHit(100, 50, "von-mises", { yield: 355 });
+    const vm = Math.sqrt(100 * 100 - 100 * 50 + 50 * 50);
+    expect(hit?.n).toBeCloseTo(355 / vm, 12);
+    expect(hit?.point[0]).toBeCloseTo((100 * 355) / vm, 9);
+    expect(envelopeHit(0, 0, "von-mises", { yield: 355 })).toBeNull();
+    expect(() => envelopeInPlane("tresca", {})).toThrow(/material.yield/);
+  });
+});

@@ -87,29 +87,14 @@ export function axisAngleFromRotation(r: Mat3): { axis: Vec3; angleDeg: number }
   const cos = Math.min(1, Math.max(-1, (trace - 1) / 2));
   const angle = Math.atan2(sinTimes2 / 2, cos);
   if (sinTimes2 < 1e-12 && cos > 0) return { axis: [0, 0, 1], angleDeg: 0 };
-  if (angle > Math.PI / 2 + 0.5 || sinTimes2 < 1e-6) {
-    // Near 180° the skew part vanishes: read the axis from the symmetric part (Q + I)/2 ≈ a aᵀ + …
-    const k = 1 - cos;
-    const d: Vec3 = [
-      Math.sqrt(Math.max(0, (q[0][0] - cos) / k)),
-      Math.sqrt(Math.max(0, (q[1][1] - cos) / k)),
-      Math.sqrt(Math.max(0, (q[2][2] - cos) / k)),
-    ];
-    // Signs from the off-diagonal products, relative to the largest component.
-    const big = d[0] >= d[1] && d[0] >= d[2] ? 0 : d[1] >= d[2] ? 1 : 2;
-    const axis: [number, number, number] = [d[0], d[1], d[2]];
-    for (let i = 0; i < 3; i++) {
-      if (i === big) continue;
-      const sym = q[big][i] + q[i][big];
-      if (sym < 0) axis[i] = -axis[i];
-    }
-    // Orient the axis so the skew part (if any) agrees with a positive angle.
-    if (axis[0] * sx + axis[1] * sy + axis[2] * sz < 0) {
-      axis[0] = -axis[0];
-      axis[1] = -axis[1];
-      axis[2] = -axis[2];
-    }
-    return { axis: normalised(axis, "axis"), angleDeg: radToDeg(angle) };
+  if (cos < 0) {
+    // Beyond 90° the skew part shrinks towards zero: read the axis from B = (Q + Qᵀ)/2 − cI = (1 − c)·a·aᵀ,
+    // taking its column with the largest diagonal (most accurate), signed by the skew part.
+    const b = [0, 1, 2].map((i) => [0, 1, 2].map((j) => (q[i][j] + q[j][i]) / 2 - (i === j ? cos : 0)));
+    const k = b[0][0] >= b[1][1] && b[0][0] >= b[2][2] ? 0 : b[1][1] >= b[2][2] ? 1 : 2;
+    let axis: Vec3 = normalised([b[0][k], b[1][k], b[2][k]], "axis");
+    if (axis[0] * sx + axis[1] * sy + axis[2] * sz < 0) axis = [-axis[0], -axis[1], -axis[2]];
+    return { axis, angleDeg: radToDeg(angle) };
   }
   return { axis: [sx / sinTimes2, sy / sinTimes2, sz / sinTimes2], angleDeg: radToDeg(angle) };
 }
@@ -173,7 +158,7 @@ export function eulerFromRotation(sequence: string, r: Mat3): Vec3 {
   const a = AXIS_INDEX[sequence[0]];
   const b = AXIS_INDEX[sequence[1]];
   const c = AXIS_INDEX[sequence[2]];
-  const LOCK = 1e-9;
+  const LOCK = 1e-10;
   let alpha: number;
   let beta: number;
   let gamma: number;

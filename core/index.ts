@@ -69,3 +69,13 @@ export { principalFrame, maxShearFrame } from "./tensor/special-frames";
 export { envelopeInPlane, envelopeHit } from "./criteria/envelope";
 export type { PublishedMaterial } from "./materials/published";
 export { PUBLISHED_MATERIALS, FROM_MEMORY_NOTE, publishedMaterial } from "./materials/published";
+
+export type { CombinationTerm } from "./checks/combine";
+export { combineLoadCases } from "./checks/combine";
+export type { CheckRequirement, CriterionCheck, StateEvaluation } from "./checks/evaluate";
+export { evaluateState } from "./checks/evaluate";
+export type { ComparisonRow, Governing } from "./checks/governing";
+export { findGoverning } from "./checks/governing";
+export { missingStrengths } from "./checks/requirements";
+export type { Verdict } from "./checks/verdict";
+export { CLOSE_BAND, utilisation, verdictFor } from "./checks/verdict";

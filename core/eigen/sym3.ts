@@ -51,7 +51,9 @@ export function eigSym3(
   if (t > amax) amax = t;
   t = Math.abs(a02);
   if (t > amax) amax = t;
-  if (!(amax <= Number.MAX_VALUE)) return false; // NaN or infinite component
+  // 0·x is NaN exactly when x is NaN or ±Infinity (NaN also escapes the comparisons above)
+  t = 0 * a00 + 0 * a11 + 0 * a22 + 0 * a01 + 0 * a12 + 0 * a02;
+  if (t !== 0) return false;
   if (amax === 0) {
     values[vo] = 0;
     values[vo + 1] = 0;

@@ -1,18 +1,41 @@
 import { HYDROSTATIC_DEVIATOR_REL, TRIG_REFINE_THRESHOLD } from "../tolerances";
 
-const SQRT3 = Math.sqrt(3);
+// Cubic fit of 2cos(acos(r)/3) in s = √((1 + r)/2) on r ∈ [0, 1] (max error 8.5e-7); two Newton
+// steps on x³ − 3x − 2r then reach full precision (checked against the trigonometric form).
+const F0 = 1.0059897783774554;
+const F1 = 1.122645530019404;
+const F2 = -0.15220035432435405;
+const F3 = 0.023565839423369237;
+
+/**
+ * Largest root of x³ − 3x − 2r = 0 for r ∈ [0, 1], i.e. 2cos(acos(r)/3), in [√3, 2]; the root there
+ * is simple (derivative 3x² − 3 ≥ 6), so Newton converges quadratically from the fitted start.
+ * @param r cos 3φ, dimensionless, in [0, 1]
+ */
+function farRoot(r: number): number {
+  const s = Math.sqrt(0.5 + 0.5 * r);
+  let x = F0 + s * (F1 + s * (F2 + s * F3));
+  let x2 = x * x;
+  x -= (x * x2 - 3 * x - 2 * r) / (3 * x2 - 3);
+  x2 = x * x;
+  x -= (x * x2 - 3 * x - 2 * r) / (3 * x2 - 3);
+  return x;
+}
 
 /**
  * Eigenvalues (and optionally eigenvectors) of one symmetric 3×3 matrix, written into caller-owned
  * arrays; allocates nothing. This is the kernel behind `principalStresses` and `principalBatch`.
  *
  * Method: the matrix is divided by its largest absolute entry, its deviator by the deviator's largest
- * entry (so neither 0, 1e-300 nor 1e200 can underflow or overflow). The eigenvalue farthest from the
- * other two comes from the trigonometric closed form, which is well conditioned for that root. Its
- * eigenvector is the longest cross product of two rows of (D − λI). The other two eigenpairs come from
- * the exact 2×2 problem in the plane orthogonal to it (one Jacobi rotation), so repeated and nearly
- * repeated roots keep full accuracy and the three vectors are orthonormal to rounding. Without vectors,
- * the closed form alone is used unless |cos 3φ| > {@link TRIG_REFINE_THRESHOLD} (a near-repeated root).
+ * entry (so neither 0, 1e-300 nor 1e200 can underflow or overflow). With p = √(j2/3) and
+ * r = det(D/p)/2 = cos 3φ, the eigenvalues of D/p are the roots of x³ − 3x − 2r = 0 (the
+ * trigonometric solution 2cos(φ + 2πk/3)). The root farthest from the other two (σ1 when r ≥ 0, else
+ * σ3) is simple and well conditioned; it is found by two Newton steps from a fitted start. Its
+ * eigenvector is the longest cross product of two rows of (D − λI). The other two eigenpairs come
+ * from the exact 2×2 problem in the plane orthogonal to it (one Jacobi rotation), so repeated and
+ * nearly repeated roots keep full accuracy and the three vectors are orthonormal to rounding. Without
+ * vectors, the pair comes straight from the cubic's remaining quadratic unless |r| >
+ * {@link TRIG_REFINE_THRESHOLD} (a nearly repeated pair, where that loses digits).
  *
  * Output: values σ1 ≥ σ2 ≥ σ3 at `values[vo..vo+2]`; if `vecs` is given, unit directions d1, d2, d3 at
  * `vecs[dvo..dvo+8]`, right-handed (d3 = d1 × d2), each of d1 and d2 signed so that its component of
@@ -108,24 +131,29 @@ export function eigSym3(
   let r = det / (2 * p * p2);
   if (r > 1) r = 1;
   else if (r < -1) r = -1;
-  const phi = Math.acos(r) / 3;
-  const c = Math.cos(phi);
-  const s = Math.sin(phi);
-  const mu1 = 2 * p * c;
-  const mu3 = -p * (c + SQRT3 * s);
+  // Roots of x³ − 3x − 2r = 0 are the eigenvalues of D/p. The far root (x1 for r ≥ 0, x3 for r < 0)
+  // comes from farRoot(|r|); the pair from the remaining quadratic x² + xf·x + (xf² − 3) = 0.
+  const topIsFar = r >= 0;
+  const xf = topIsFar ? farRoot(r) : -farRoot(-r);
+  const far = p * xf;
 
   if (vecs === null && r <= TRIG_REFINE_THRESHOLD && r >= -TRIG_REFINE_THRESHOLD) {
-    const mu2 = p * (SQRT3 * s - c);
-    values[vo] = amax * (m + dmax * mu1);
-    values[vo + 1] = amax * (m + dmax * mu2);
-    values[vo + 2] = amax * (m + dmax * mu3);
+    let disc = 12 - 3 * xf * xf;
+    if (disc < 0) disc = 0;
+    const q = Math.sqrt(disc);
+    const hiPair = p * 0.5 * (q - xf);
+    const loPair = p * -0.5 * (q + xf);
+    const l1 = topIsFar ? far : hiPair;
+    const l2 = topIsFar ? hiPair : loPair;
+    const l3 = topIsFar ? loPair : far;
+    values[vo] = amax * (m + dmax * l1);
+    values[vo + 1] = amax * (m + dmax * l2);
+    values[vo + 2] = amax * (m + dmax * l3);
     return true;
   }
 
   // The root far from the other two (σ1 when r ≥ 0, else σ3) and its eigenvector: the null vector of
   // B = D − far·I, taken as the longest cross product of two rows of B.
-  const topIsFar = r >= 0;
-  const far = topIsFar ? mu1 : mu3;
   const b00 = d00 - far;
   const b11 = d11 - far;
   const b22 = d22 - far;

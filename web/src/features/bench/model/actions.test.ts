@@ -1,0 +1,146 @@
+import { describe, expect, it } from "vitest";
+import {
+  PASCALS_PER_PSI,
+  principalValues,
+  rotateTensor,
+  rotationFromAxisAngle,
+  transformPlaneStress,
+  type Mat3,
+} from "../../../../../core";
+import * as act from "./actions";
+import { initialBenchState, type BenchState } from "./bench-state";
+import { EXAMPLE_STATES } from "./examples";
+
+const base = (): BenchState => ({
+  ...initialBenchState(),
+  tensor: { xx: 80, yy: -40, zz: 10, xy: 30, yz: -15, zx: 5 },
+});
+const maxDiff = (a: Mat3, b: Mat3) =>
+  Math.max(...a.flatMap((r, i) => r.map((v, j) => Math.abs(v - b[i][j]))));
+
+describe("bench actions", () => {
+  it("when σxy is edited in cell (0,1), then the cell (1,0) shows the same value: the grid is symmetric by construction", () => {
+    const s = act.setComponent(base(), act.componentAt(0, 1), 42);
+    expect(s.tensor.xy).toBe(42);
+    expect(act.componentAt(1, 0)).toBe("xy");
+    expect(s.tensor[act.componentAt(1, 0)]).toBe(42);
+    expect(act.componentAt(2, 1)).toBe("yz");
+    expect(act.componentAt(0, 2)).toBe("zx");
+    expect(act.setComponent(base(), "xx", Number.NaN)).toEqual(base());
+  });
+
+  it("when the unit is converted from MPa to psi, then the numbers scale by 10⁶/6894.757 Pa (1 psi = 1 lbf/in², NIST SP 811)", () => {
+    const s = act.changeUnit(base(), "psi", "convert");
+    expect(s.unit).toBe("psi");
+    expect(s.tensor.xx).toBeCloseTo((80 * 1e6) / PASCALS_PER_PSI, 8);
+    expect(s.tensor.xx).toBeCloseTo(11603.02, 1);
+    expect(s.tensor.yz).toBeCloseTo((-15 * 1e6) / PASCALS_PER_PSI, 8);
+  });
+
+  it("when the unit is reinterpreted, then the numbers stay and only the unit changes; undo gives back the old unit", () => {
+    const s = act.changeUnit(base(), "ksi", "reinterpret");
+    expect(s.unit).toBe("ksi");
+    expect(s.tensor).toEqual(base().tensor);
+    const back = act.undo(s);
+    expect(back.unit).toBe("MPa");
+    expect(act.redo(back).unit).toBe("ksi");
+  });
+
+  it("when edits are undone and redone, then each step returns the state before and after it", () => {
+    const a = act.setComponent(base(), "xx", 1);
+    const b = act.setComponent(a, "yy", 2);
+    expect(act.undo(b).tensor).toEqual(a.tensor);
+    expect(act.undo(act.undo(b)).tensor).toEqual(base().tensor);
+    expect(act.redo(act.undo(b)).tensor).toEqual(b.tensor);
+    // A new edit after an undo drops the redo branch.
+    expect(act.setComponent(act.undo(b), "zz", 3).history.future).toEqual([]);
+  });
+
+  it("when two turns are composed about axes fixed in x y z, then the frame is R₀·R(a₁)·R(a₂) and the readout equals core.rotateTensor with it", () => {
+    let s = act.turnElement(base(), [0, 0, 1], 90);
+    s = act.turnElement(s, [1, 0, 0], 90);
+    // Turned 90° about z, x′ lies along y; then 90° about the fixed x axis carries y onto z.
+    expect(
+      maxDiff(
+        [s.rotation[0], s.rotation[0], s.rotation[0]],
+        [
+          [0, 0, 1],
+          [0, 0, 1],
+          [0, 0, 1],
+        ],
+      ),
+    ).toBeLessThan(1e-12);
+    const expected = rotateTensor(base().tensor, s.rotation);
+    const twoStep = rotateTensor(base().tensor, [
+      rotationFromAxisAngle([0, 0, 1], 90)[0],
+      rotationFromAxisAngle([0, 0, 1], 90)[1],
+      rotationFromAxisAngle([0, 0, 1], 90)[2],
+    ]);
+    expect(expected.xx).toBeCloseTo(base().tensor.zz, 10);
+    expect(twoStep.xx).toBeCloseTo(base().tensor.yy, 10);
+  });
+
+  it("when turns about z add up, then the readout matches transformPlaneStress at the summed angle (Gere & Goodno, Mechanics of Materials, transformation equations)", () => {
+    const plane: BenchState = { ...base(), tensor: { xx: 80, yy: -40, zz: 0, xy: 30, yz: 0, zx: 0 } };
+    const s = act.turnElement(act.turnElement(plane, [0, 0, 1], 12.5), [0, 0, 1], 20);
+    const r = rotateTensor(s.tensor, s.rotation);
+    const p = transformPlaneStress(80, -40, 30, 32.5);
+    expect(r.xx).toBeCloseTo(p.sx, 10);
+    expect(r.yy).toBeCloseTo(p.sy, 10);
+    expect(r.xy).toBeCloseTo(p.txy, 10);
+  });
+
+  it("when the element snaps to the principal frame, then the readout is diagonal with core's principal values", () => {
+    const s = act.snapToPrincipal(base());
+    const r = rotateTensor(s.tensor, s.rotation);
+    const [s1, s2, s3] = principalValues(s.tensor);
+    expect(r.xx).toBeCloseTo(s1, 10);
+    expect(r.yy).toBeCloseTo(s2, 10);
+    expect(r.zz).toBeCloseTo(s3, 10);
+    expect(Math.abs(r.xy) + Math.abs(r.yz) + Math.abs(r.zx)).toBeLessThan(1e-10);
+    expect(act.resetRotation(s).rotation).toEqual([
+      [1, 0, 0],
+      [0, 1, 0],
+      [0, 0, 1],
+    ]);
+  });
+
+  it("when the element snaps to the maximum-shear frame, then σ′xy = τmax = (σ1 − σ3)/2", () => {
+    const s = act.snapToMaxShear(base());
+    const [s1, , s3] = principalValues(s.tensor);
+    expect(rotateTensor(s.tensor, s.rotation).xy).toBeCloseTo((s1 - s3) / 2, 10);
+  });
+
+  it("when a bad tensor is pasted, then the error names the place and the old values stay", () => {
+    const before = base();
+    const s = act.applyPaste(before, "80 30 5\n30 -40 -15\n5 abc 10");
+    expect(s.tensor).toEqual(before.tensor);
+    expect(s.pasteError).toMatch(/line 3, column 3/);
+    expect(s.history).toEqual(before.history);
+  });
+
+  it("when a good matrix with a unit is pasted, then it replaces the tensor in that unit and can be undone", () => {
+    const s = act.applyPaste(base(), "[10 2 0; 2 -5 0; 0 0 1] ksi");
+    expect(s.unit).toBe("ksi");
+    expect(s.tensor).toEqual({ xx: 10, yy: -5, zz: 1, xy: 2, yz: 0, zx: 0 });
+    expect(s.pasteNote).toMatch(/3×3 matrix, in ksi/);
+    expect(act.undo(s).tensor).toEqual(base().tensor);
+  });
+
+  it("when a strength is typed in psi, then it is stored in MPa and the material becomes custom", () => {
+    const s = act.setStrength(act.changeUnit(base(), "psi", "reinterpret"), "yield", 50000);
+    expect(s.material.yield).toBeCloseTo((50000 * PASCALS_PER_PSI) / 1e6, 9);
+    expect(s.material.presetId).toBeNull();
+    expect(act.setStrength(s, "yield", -1).material.yield).toBeNull();
+    expect(act.setRequiredFactor(s, 0.5).requiredFactor).toBe(s.requiredFactor);
+  });
+
+  it("when the mid-shell design example is loaded, then σθ = pr/t = 67.5 MPa and σx = pr/2t = 33.75 MPa (thin-wall cylinder, any strength-of-materials text)", () => {
+    const s = act.loadExample(base(), "shell-design");
+    expect(s.tensor.xx).toBeCloseTo(67.5, 12);
+    expect(s.tensor.yy).toBeCloseTo(33.75, 12);
+    const shaft = EXAMPLE_STATES.find((e) => e.id === "shaft-steady")!.tensor;
+    // τ = 16T/(πd³) = 16·850e3/(π·45³) ≈ 47.51 MPa (torsion of a solid round shaft).
+    expect(shaft.xy).toBeCloseTo(47.51, 2);
+  });
+});

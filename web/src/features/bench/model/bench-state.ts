@@ -1,0 +1,84 @@
+import {
+  IDENTITY_ROTATION,
+  type Criterion,
+  type Mat3,
+  type StressTensor,
+  type StressUnit,
+  type Vec3,
+} from "../../../../../core";
+
+/** How the stress is typed in. */
+export type InputForm = "grid" | "six" | "plane";
+/** How the element's rotation is written out and typed. */
+export type RotationView = "axis-angle" | "euler";
+/** Which Mohr picture is drawn. */
+export type MohrView = "3d" | "plane";
+/** What a drag on the 3D view turns. */
+export type DragTarget = "element" | "view";
+
+/** Euler sequences offered by name (intrinsic, each angle counter-clockwise positive). */
+export const EULER_SEQUENCES = ["ZYX", "XYZ", "ZXZ", "ZYZ"] as const;
+export type EulerSequence = (typeof EULER_SEQUENCES)[number];
+
+/** Material strengths, always stored in MPa (the unit of the published list); null = not given. */
+export type MaterialChoice = {
+  /** id of a built-in published material, or null when typed in */
+  presetId: string | null;
+  yield: number | null;
+  ultimateTension: number | null;
+  ultimateCompression: number | null;
+};
+
+/** What undo and redo step through: the tensor and the unit it is written in. */
+export type StressSnapshot = { tensor: StressTensor; unit: StressUnit };
+
+/** The whole editor state of the bench. Everything shown is derived from it through core. */
+export type BenchState = {
+  /** the stress state, in the original x y z axes, in `unit` */
+  tensor: StressTensor;
+  unit: StressUnit;
+  /** the element's frame: rows are x′ y′ z′ written in x y z (core's convention, σ′ = RσRᵀ) */
+  rotation: Mat3;
+  rotationView: RotationView;
+  eulerSequence: EulerSequence;
+  material: MaterialChoice;
+  /** the safety factor the design must reach */
+  requiredFactor: number;
+  /** criteria drawn on the envelope plot */
+  envelopeCriteria: Criterion[];
+  /** optional plane of interest through the element (unit normal in x y z) */
+  plane: { enabled: boolean; normal: Vec3 };
+  mohrView: MohrView;
+  inputForm: InputForm;
+  dragTarget: DragTarget;
+  /** the last rejected paste, shown beside the input; the tensor is never touched by a failed paste */
+  pasteError: string | null;
+  /** a short note on what the last successful paste was read as */
+  pasteNote: string | null;
+  history: { past: StressSnapshot[]; future: StressSnapshot[] };
+};
+
+/** Largest number of undo steps kept. */
+export const HISTORY_LIMIT = 100;
+
+/** The state a fresh bench opens with: the CT-7 mid-shell membrane state at design pressure. */
+export function initialBenchState(): BenchState {
+  return {
+    // Thin-wall membrane formulas, r = 600 mm, t = 8 mm, p = 0.9 MPa: σθ = pr/t, σx = pr/(2t), σr ≈ −p/2 at mid-wall.
+    tensor: { xx: (0.9 * 600) / 8, yy: (0.9 * 600) / (2 * 8), zz: -0.9 / 2, xy: 0, yz: 0, zx: 0 },
+    unit: "MPa",
+    rotation: IDENTITY_ROTATION,
+    rotationView: "axis-angle",
+    eulerSequence: "ZYX",
+    material: { presetId: "s355", yield: 355, ultimateTension: 470, ultimateCompression: 470 },
+    requiredFactor: 1.5,
+    envelopeCriteria: ["von-mises", "tresca"],
+    plane: { enabled: false, normal: [1, 1, 0] },
+    mohrView: "3d",
+    inputForm: "grid",
+    dragTarget: "element",
+    pasteError: null,
+    pasteNote: null,
+    history: { past: [], future: [] },
+  };
+}

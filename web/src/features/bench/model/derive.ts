@@ -1,0 +1,245 @@
+/**
+ * Everything the bench shows, derived from its state by asking core. Pure functions; the hooks
+ * memoise them so that a drag (which changes only the rotation) recomputes only what depends on it.
+ */
+import {
+  CRITERIA,
+  angleAboutZ,
+  axisAngleFromRotation,
+  convertStress,
+  envelopeHit,
+  envelopeInPlane,
+  eulerFromRotation,
+  maxShear,
+  mohrCircles,
+  planeStress,
+  principalStresses,
+  rotateTensor,
+  safetyFactor,
+  tractionOnPlane,
+  tresca,
+  vonMises,
+  type Criterion,
+  type Mat3,
+  type Material,
+  type MohrCircle,
+  type StressTensor,
+  type StressUnit,
+  type Vec3,
+} from "../../../../../core";
+import type { BenchState, EulerSequence, MaterialChoice } from "./bench-state";
+
+/** Display names of the criteria, typeset. */
+export const CRITERION_LABEL: Readonly<Record<Criterion, string>> = {
+  "von-mises": "von Mises",
+  tresca: "Tresca",
+  "max-principal": "Maximum principal",
+  "mohr-coulomb": "Mohr–Coulomb",
+  "modified-mohr": "Modified Mohr",
+};
+
+/** A verdict: the safety factor against the required one. */
+export type VerdictKind = "pass" | "close" | "fail";
+
+/** A factor within this fraction above the required one is "close" (the issue's 10 %). */
+export const CLOSE_BAND = 0.1;
+
+/**
+ * pass when n ≥ (1 + CLOSE_BAND)·n_req, close when n_req ≤ n < (1 + CLOSE_BAND)·n_req, fail when n < n_req.
+ * @param n safety factor reached
+ * @param required safety factor required
+ */
+export function verdictFor(n: number, required: number): VerdictKind {
+  if (n < required) return "fail";
+  if (n < required * (1 + CLOSE_BAND)) return "close";
+  return "pass";
+}
+
+/** The stress the criterion rates against, and its name. */
+const REFERENCE: Readonly<Record<Criterion, { key: keyof Material; symbol: string }>> = {
+  "von-mises": { key: "yield", symbol: "Sy" },
+  tresca: { key: "yield", symbol: "Sy" },
+  "max-principal": { key: "ultimateTension", symbol: "Sut" },
+  "mohr-coulomb": { key: "ultimateTension", symbol: "Sut" },
+  "modified-mohr": { key: "ultimateTension", symbol: "Sut" },
+};
+
+/** One row of the criteria panel. */
+export type CriterionResult =
+  | {
+      criterion: Criterion;
+      available: true;
+      /** equivalent stress S/n in the bench unit: the uniaxial tensile stress the criterion rates equal */
+      equivalent: number;
+      /** which strength it is compared with (Sy or Sut) */
+      reference: string;
+      n: number;
+      /** required factor / n (≤ 1 is acceptable) */
+      utilisation: number;
+      verdict: VerdictKind;
+    }
+  | { criterion: Criterion; available: false; reason: string };
+
+/** The strengths a core Material needs, from the bench's choice (all MPa). */
+export function materialForCore(m: MaterialChoice): Material {
+  const out: Material = {};
+  if (m.yield !== null) out.yield = m.yield;
+  if (m.ultimateTension !== null) out.ultimateTension = m.ultimateTension;
+  if (m.ultimateCompression !== null) out.ultimateCompression = m.ultimateCompression;
+  return out;
+}
+
+/** The tensor in another unit, component by component (core's convertStress). */
+export function tensorIn(s: StressTensor, from: StressUnit, to: StressUnit): StressTensor {
+  if (from === to) return s;
+  const c = (v: number) => convertStress(v, from, to);
+  return { xx: c(s.xx), yy: c(s.yy), zz: c(s.zz), xy: c(s.xy), yz: c(s.yz), zx: c(s.zx) };
+}
+
+/**
+ * Every criterion's result for a state: n from core's safetyFactor on the tensor in MPa against
+ * strengths in MPa; a criterion whose strength is missing says which one.
+ */
+export function criteriaResults(
+  tensor: StressTensor,
+  unit: StressUnit,
+  material: MaterialChoice,
+  required: number,
+): CriterionResult[] {
+  const mpa = tensorIn(tensor, unit, "MPa");
+  const m = materialForCore(material);
+  return CRITERIA.map((criterion): CriterionResult => {
+    const ref = REFERENCE[criterion];
+    const needs: (keyof Material)[] =
+      criterion === "von-mises" || criterion === "tresca"
+        ? ["yield"]
+        : criterion === "max-principal"
+          ? ["ultimateTension"]
+          : ["ultimateTension", "ultimateCompression"];
+    const missing = needs.filter((k) => m[k] === undefined);
+    if (missing.length > 0) {
+      const names = {
+        yield: "yield strength Sy",
+        ultimateTension: "tensile strength Sut",
+        ultimateCompression: "compressive strength Suc",
+      };
+      return {
+        criterion,
+        available: false,
+        reason: `needs the ${missing.map((k) => names[k]).join(" and ")}`,
+      };
+    }
+    const n = safetyFactor(mpa, criterion, m);
+    const strength = m[ref.key] as number;
+    return {
+      criterion,
+      available: true,
+      equivalent: convertStress(strength / n, "MPa", unit),
+      reference: ref.symbol,
+      n,
+      utilisation: required / n,
+      verdict: verdictFor(n, required),
+    };
+  });
+}
+
+/** Principal stresses, maximum shear and equivalent stresses of the state (bench unit). */
+export function stateSummary(tensor: StressTensor) {
+  const principal = principalStresses(tensor);
+  return {
+    principal,
+    tauMax: maxShear(tensor),
+    vonMises: vonMises(tensor),
+    tresca: tresca(tensor),
+    circles: mohrCircles(tensor).circles as [MohrCircle, MohrCircle, MohrCircle],
+  };
+}
+
+/** A face of the rotated element as a point on the Mohr diagram. */
+export type FacePoint = { face: "x′" | "y′" | "z′"; normal: number; shear: number };
+
+/** The rotated components σ′ = RσRᵀ and the three faces' (σn, τn) from core. */
+export function rotatedView(tensor: StressTensor, rotation: Mat3) {
+  const rotated = rotateTensor(tensor, rotation);
+  const faces = (["x′", "y′", "z′"] as const).map((face, i): FacePoint => {
+    const t = tractionOnPlane(tensor, rotation[i]);
+    return { face, normal: t.normal, shear: t.shear };
+  });
+  return { rotated, faces };
+}
+
+/** The rotation written both ways (axis–angle and the chosen Euler sequence), plus θ about z if that is all it is. */
+export function rotationDescription(rotation: Mat3, sequence: EulerSequence) {
+  return {
+    axisAngle: axisAngleFromRotation(rotation),
+    euler: eulerFromRotation(sequence, rotation),
+    aboutZ: angleAboutZ(rotation, 1e-9),
+  };
+}
+
+/** True when the state is plane stress in x–y (σz = τyz = τzx = 0), the case the in-plane Mohr circle draws. */
+export function isPlaneInXY(s: StressTensor): boolean {
+  return s.zz === 0 && s.yz === 0 && s.zx === 0;
+}
+
+/** The in-plane circle of a plane state (core's planeStress). */
+export function inPlaneCircle(s: StressTensor) {
+  return planeStress(s.xx, s.yy, s.xy);
+}
+
+/** Traction on the plane of interest. */
+export function planeTraction(tensor: StressTensor, normal: Vec3) {
+  const len = Math.hypot(normal[0], normal[1], normal[2]);
+  const unitNormal: Vec3 = [normal[0] / len, normal[1] / len, normal[2] / len];
+  return { unitNormal, ...tractionOnPlane(tensor, unitNormal) };
+}
+
+/** Relative size under which a principal stress counts as zero, for "is this plane stress?" */
+export const PLANE_STATE_REL = 1e-9;
+
+/**
+ * For the σA–σB envelope plot: the two non-zero principal stresses when one principal stress is
+ * zero (a plane-stress state in any plane), else null.
+ */
+export function planePrincipals(values: readonly [number, number, number]): [number, number] | null {
+  const big = Math.max(Math.abs(values[0]), Math.abs(values[2]), Number.MIN_VALUE);
+  const zero = values.findIndex((v) => Math.abs(v) <= PLANE_STATE_REL * big);
+  if (zero < 0) return null;
+  const rest = values.filter((_, i) => i !== zero);
+  return [rest[0], rest[1]];
+}
+
+/** The envelope polygons (MPa) of the chosen criteria that the material supports. */
+export function envelopes(criteria: readonly Criterion[], material: MaterialChoice) {
+  const m = materialForCore(material);
+  const out: { criterion: Criterion; points: [number, number][] }[] = [];
+  for (const criterion of criteria) {
+    try {
+      out.push({ criterion, points: envelopeInPlane(criterion, m, 720) });
+    } catch {
+      // A missing strength: the criteria table already says which one; nothing to draw.
+    }
+  }
+  return out;
+}
+
+/** The safety-factor ray of a plane state to one envelope (MPa), or null. */
+export function envelopeRay(sA: number, sB: number, criterion: Criterion, material: MaterialChoice) {
+  try {
+    return envelopeHit(sA, sB, criterion, materialForCore(material));
+  } catch {
+    return null;
+  }
+}
+
+/** The governing (smallest) safety factor among available criteria. */
+export function governing(results: readonly CriterionResult[]) {
+  let best: Extract<CriterionResult, { available: true }> | null = null;
+  for (const r of results) if (r.available && (best === null || r.n < best.n)) best = r;
+  return best;
+}
+
+/** Convenience: criteria of a whole bench state. */
+export function criteriaOf(state: BenchState) {
+  return criteriaResults(state.tensor, state.unit, state.material, state.requiredFactor);
+}

@@ -5,6 +5,7 @@ import { initDevMailMessage } from "./dev-mail-message";
 import { initInvitation } from "./invitation";
 import { initMembership } from "./membership";
 import { initPasswordResetToken } from "./password-reset-token";
+import { initProjectModels } from "./project-models";
 import { initSession } from "./session";
 import { initShareLink } from "./share-link";
 import { initUser } from "./user";
@@ -22,6 +23,7 @@ export function initModels(sequelize: Sequelize) {
     Invitation: initInvitation(sequelize),
     ShareLink: initShareLink(sequelize),
     DevMailMessage: initDevMailMessage(sequelize),
+    ...initProjectModels(sequelize),
   };
   associateAccountModels();
   return models;

@@ -1,0 +1,124 @@
+import { z } from "zod";
+import { CRITERION_LABELS, criterionSchema, requirementSchema, type CriterionName } from "./projects";
+
+/**
+ * The comparison: every load case and combination at every location, evaluated against the
+ * location's material and the project's required factors, with the governing row named.
+ * The server computes it with core (evaluateState, combineLoadCases, findGoverning); these
+ * schemas carry it. Stresses in Pa. A factor of null means the state never reaches the
+ * criterion's surface (an infinite factor, which JSON cannot carry). Imports only zod.
+ */
+
+export const verdictSchema = z.enum(["pass", "close", "fail"]);
+export type VerdictName = z.infer<typeof verdictSchema>;
+
+export const comparisonCheckSchema = z.discriminatedUnion("status", [
+  z.object({
+    status: z.literal("evaluated"),
+    criterion: criterionSchema,
+    requiredFactor: z.number(),
+    /** null: infinite (the state never reaches the surface). */
+    factor: z.number().nullable(),
+    utilisation: z.number(),
+    verdict: verdictSchema,
+  }),
+  z.object({
+    status: z.literal("not-evaluated"),
+    criterion: criterionSchema,
+    requiredFactor: z.number(),
+    /** Strengths the material lacks for this criterion. */
+    missing: z.array(z.string()),
+  }),
+]);
+export type ComparisonCheck = z.infer<typeof comparisonCheckSchema>;
+
+export const comparisonRowSchema = z.object({
+  /** "case:<id>:<locationId>" or "combination:<id>:<locationId>". */
+  rowId: z.string(),
+  kind: z.enum(["load-case", "combination"]),
+  caseId: z.uuid(),
+  caseName: z.string(),
+  category: z.string(),
+  locationId: z.uuid(),
+  locationName: z.string(),
+  /** The case's version and the state's revision (load cases only), for opening in the bench. */
+  caseVersion: z.int(),
+  stateRevision: z.int().nullable(),
+  material: z.object({
+    label: z.string(),
+    kind: z.enum(["published", "workspace", "none"]),
+    note: z.string(),
+  }),
+  componentsPa: z.object({
+    xx: z.number(),
+    yy: z.number(),
+    zz: z.number(),
+    xy: z.number(),
+    yz: z.number(),
+    zx: z.number(),
+  }),
+  principalPa: z.tuple([z.number(), z.number(), z.number()]),
+  vonMisesPa: z.number(),
+  trescaPa: z.number(),
+  maxShearPa: z.number(),
+  checks: z.array(comparisonCheckSchema),
+});
+export type ComparisonRowView = z.infer<typeof comparisonRowSchema>;
+
+export const governingSchema = z.object({
+  criterion: criterionSchema,
+  rowId: z.string(),
+  caseName: z.string(),
+  locationName: z.string(),
+  factor: z.number().nullable(),
+  requiredFactor: z.number(),
+  utilisation: z.number(),
+  verdict: verdictSchema,
+});
+export type GoverningView = z.infer<typeof governingSchema>;
+
+export const comparisonSchema = z.object({
+  projectId: z.uuid(),
+  requirements: z.array(requirementSchema),
+  rows: z.array(comparisonRowSchema),
+  /** Per criterion, over every row. */
+  governing: z.array(governingSchema),
+  /** Per location, per criterion. */
+  governingByLocation: z.array(
+    z.object({ locationId: z.uuid(), locationName: z.string(), governing: z.array(governingSchema) }),
+  ),
+  /** "governs: Hydrostatic test at head junction, von Mises, SF 1.34 against 1.5 required", or null with no rows. */
+  summary: z.string().nullable(),
+  /** Case × location pairs with no row, and why. */
+  skipped: z.array(z.object({ caseName: z.string(), locationName: z.string(), reason: z.string() })),
+  cautions: z.array(z.string()),
+});
+export type Comparison = z.infer<typeof comparisonSchema>;
+
+/** A safety factor as the summary writes it: two decimals, "∞" for none. */
+export function formatFactor(factor: number | null): string {
+  return factor === null ? "∞" : factor.toFixed(2);
+}
+
+/** The governing check in one line, as a calculation sheet states it. */
+export function governingSentence(
+  g: Pick<GoverningView, "criterion" | "caseName" | "locationName" | "factor" | "requiredFactor">,
+): string {
+  const label = CRITERION_LABELS[g.criterion as CriterionName];
+  return `${g.caseName} at ${g.locationName}, ${label}, SF ${formatFactor(g.factor)} against ${g.requiredFactor} required`;
+}
+
+/**
+ * The summary line: the governing check with the highest utilisation over every criterion
+ * (ties: the order of `governing`), or null when nothing could be evaluated.
+ */
+export function governingSummary(governing: readonly GoverningView[]): string | null {
+  let top: GoverningView | null = null;
+  for (const g of governing) if (!top || g.utilisation > top.utilisation) top = g;
+  return top ? `governs: ${governingSentence(top)}` : null;
+}
+
+export const comparisonParamsSchema = z.object({
+  workspaceId: z.uuid({ error: "must be a workspace id (UUID)" }),
+  projectId: z.uuid({ error: "must be a project id (UUID)" }),
+});

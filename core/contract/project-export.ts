@@ -1,0 +1,197 @@
+import { z } from "zod";
+import { componentsSchema, stateSourceSchema } from "./load-cases";
+import { finiteNumber, stressUnitSchema } from "./materials";
+import { requirementSchema, unitSystemSchema } from "./projects";
+
+/**
+ * The project export file (documented in docs/project-export.md). Its own versioned schema:
+ * `format` names it, `schemaVersion` says which layout; a reader refuses versions it does
+ * not know rather than guess. Records point at each other by `key` (any string unique in
+ * its list), never by database id, so a file can be imported into any workspace.
+ * Stresses and strengths are in Pa exactly as stored, with the unit they were entered in.
+ * Imports only zod.
+ */
+
+export const PROJECT_EXPORT_FORMAT = "sigmacube.project";
+export const PROJECT_EXPORT_SCHEMA_VERSION = 1;
+
+const key = z.string({ error: "must be a key (text)" }).min(1, "must not be empty").max(100);
+const text = (max: number) => z.string().max(max, `At most ${max} characters.`);
+const positiveOrNull = finiteNumber()
+  .refine((v) => v > 0, { message: "must be positive" })
+  .nullable();
+
+const exportMaterialRefSchema = z.discriminatedUnion(
+  "kind",
+  [
+    z.object({ kind: z.literal("published"), id: z.string().min(1).max(40) }),
+    z.object({ kind: z.literal("library"), key }),
+  ],
+  { error: 'must be { kind: "published", id } or { kind: "library", key }' },
+);
+
+const exportMaterialSchema = z.object({
+  key,
+  name: text(120).min(1, "Name the material."),
+  unit: stressUnitSchema,
+  yieldPa: positiveOrNull,
+  ultimateTensionPa: positiveOrNull,
+  ultimateCompressionPa: positiveOrNull,
+  elasticModulusPa: positiveOrNull,
+  poissonRatio: finiteNumber()
+    .refine((v) => v >= 0 && v < 0.5, { message: "must be at least 0 and below 0.5" })
+    .nullable(),
+  reference: text(500),
+  note: text(2000),
+});
+
+const exportStateSchema = z.object({
+  location: key,
+  unit: stressUnitSchema,
+  componentsPa: componentsSchema,
+  source: stateSourceSchema,
+  note: text(2000),
+});
+
+const baseSchema = z.object({
+  format: z.literal(PROJECT_EXPORT_FORMAT, { error: `must be "${PROJECT_EXPORT_FORMAT}"` }),
+  schemaVersion: z.literal(PROJECT_EXPORT_SCHEMA_VERSION, {
+    error: `must be ${PROJECT_EXPORT_SCHEMA_VERSION} (the only version this Sigmacube reads)`,
+  }),
+  exportedAt: z.iso.datetime({ error: "must be an ISO date-time" }),
+  project: z.object({
+    name: text(150).trim().min(1, "Name the project."),
+    description: text(4000),
+    unitSystem: unitSystemSchema,
+    requirements: z.array(requirementSchema).min(1, "Check at least one criterion."),
+    defaultMaterial: exportMaterialRefSchema.nullable(),
+  }),
+  materials: z.array(exportMaterialSchema).max(500),
+  locations: z
+    .array(
+      z.object({
+        key,
+        name: text(120).trim().min(1, "Name the location."),
+        note: text(2000),
+        material: exportMaterialRefSchema.nullable(),
+      }),
+    )
+    .max(1000),
+  loadCases: z
+    .array(
+      z.object({
+        key,
+        name: text(150).trim().min(1, "Name the load case."),
+        category: text(40),
+        description: text(4000),
+        states: z.array(exportStateSchema).max(1000),
+      }),
+    )
+    .max(1000),
+  combinations: z
+    .array(
+      z.object({
+        name: text(150).trim().min(1, "Name the combination."),
+        description: text(4000),
+        terms: z
+          .array(
+            z.object({ loadCase: key, factor: finiteNumber().refine((v) => v !== 0, "must not be zero") }),
+          )
+          .min(1, "Add at least one load case with its factor."),
+      }),
+    )
+    .max(500),
+});
+
+type Issue = { path: (string | number)[]; message: string };
+
+/** Keys unique within their list and every reference pointing at something in the file. */
+function crossReferenceIssues(
+  file: z.infer<typeof baseSchema>,
+  publishedIds: ReadonlySet<string> | null,
+): Issue[] {
+  const issues: Issue[] = [];
+  const keysOf = (list: { key: string }[], name: string) => {
+    const keys = new Set<string>();
+    list.forEach((item, i) => {
+      if (keys.has(item.key))
+        issues.push({ path: [name, i, "key"], message: `the key "${item.key}" is used twice` });
+      keys.add(item.key);
+    });
+    return keys;
+  };
+  const materials = keysOf(file.materials, "materials");
+  const locations = keysOf(file.locations, "locations");
+  const cases = keysOf(file.loadCases, "loadCases");
+  const checkRef = (ref: z.infer<typeof exportMaterialRefSchema> | null, path: (string | number)[]) => {
+    if (!ref) return;
+    if (ref.kind === "library" && !materials.has(ref.key)) {
+      issues.push({ path, message: `names the material "${ref.key}", which is not in materials` });
+    }
+    if (ref.kind === "published" && publishedIds && !publishedIds.has(ref.id)) {
+      issues.push({
+        path,
+        message: `names the built-in material "${ref.id}", which this Sigmacube does not have`,
+      });
+    }
+  };
+  checkRef(file.project.defaultMaterial, ["project", "defaultMaterial"]);
+  file.locations.forEach((l, i) => checkRef(l.material, ["locations", i, "material"]));
+  file.loadCases.forEach((c, i) => {
+    const seen = new Set<string>();
+    c.states.forEach((s, j) => {
+      if (!locations.has(s.location)) {
+        issues.push({
+          path: ["loadCases", i, "states", j, "location"],
+          message: `names the location "${s.location}", which is not in locations`,
+        });
+      }
+      if (seen.has(s.location)) {
+        issues.push({
+          path: ["loadCases", i, "states", j, "location"],
+          message: `a second state at "${s.location}"`,
+        });
+      }
+      seen.add(s.location);
+    });
+  });
+  file.combinations.forEach((c, i) =>
+    c.terms.forEach((t, j) => {
+      if (!cases.has(t.loadCase)) {
+        issues.push({
+          path: ["combinations", i, "terms", j, "loadCase"],
+          message: `names the load case "${t.loadCase}", which is not in loadCases`,
+        });
+      }
+    }),
+  );
+  const seenCriteria = new Set<string>();
+  file.project.requirements.forEach((r, i) => {
+    if (seenCriteria.has(r.criterion))
+      issues.push({
+        path: ["project", "requirements", i, "criterion"],
+        message: `${r.criterion} is listed twice`,
+      });
+    seenCriteria.add(r.criterion);
+  });
+  return issues;
+}
+
+/**
+ * The schema of an export file. `publishedIds` (the built-in material ids) lets the
+ * server also refuse references to built-in grades it does not have.
+ */
+export function projectExportSchemaWith(publishedIds: ReadonlySet<string> | null) {
+  return baseSchema.superRefine((file, ctx) => {
+    for (const issue of crossReferenceIssues(file, publishedIds)) ctx.addIssue({ code: "custom", ...issue });
+  });
+}
+
+/** The export file schema without the check against the built-in list. */
+export const projectExportSchema = projectExportSchemaWith(null);
+export type ProjectExport = z.infer<typeof baseSchema>;
+
+export const importResponseSchema = z.object({
+  project: z.object({ id: z.uuid(), name: z.string() }),
+  counts: z.object({ materials: z.int(), locations: z.int(), loadCases: z.int(), combinations: z.int() }),
+});

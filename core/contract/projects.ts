@@ -1,0 +1,167 @@
+import { z } from "zod";
+import { materialRefSchema, versionSchema } from "./materials";
+
+/**
+ * Projects and their locations (the named points of a structure that every load case is
+ * checked at). Shared by the API and the web: imports only zod.
+ */
+
+/** The yield and fracture criteria (the same list as core's CRITERIA). */
+export const CRITERION_NAMES = [
+  "von-mises",
+  "tresca",
+  "max-principal",
+  "mohr-coulomb",
+  "modified-mohr",
+] as const;
+export const criterionSchema = z.enum(CRITERION_NAMES, {
+  error: "must be one of von-mises, tresca, max-principal, mohr-coulomb, modified-mohr",
+});
+export type CriterionName = z.infer<typeof criterionSchema>;
+
+/** How each criterion is written in a sentence. */
+export const CRITERION_LABELS: Readonly<Record<CriterionName, string>> = {
+  "von-mises": "von Mises",
+  tresca: "Tresca",
+  "max-principal": "maximum principal",
+  "mohr-coulomb": "Mohr–Coulomb",
+  "modified-mohr": "modified Mohr",
+};
+
+/** A criterion to check and the safety factor the project requires with it. */
+export const requirementSchema = z.object({
+  criterion: criterionSchema,
+  requiredFactor: z
+    .number({ error: "must be a number" })
+    .refine((v) => Number.isFinite(v) && v > 0, { message: "must be a positive finite number" }),
+});
+export type Requirement = z.infer<typeof requirementSchema>;
+
+const requirementsSchema = z
+  .array(requirementSchema)
+  .min(1, "Check at least one criterion.")
+  .max(CRITERION_NAMES.length)
+  .superRefine((list, ctx) => {
+    const seen = new Set<string>();
+    list.forEach((r, i) => {
+      if (seen.has(r.criterion)) {
+        ctx.addIssue({ code: "custom", path: [i, "criterion"], message: `${r.criterion} is listed twice` });
+      }
+      seen.add(r.criterion);
+    });
+  });
+
+/** What a new project checks when nobody says otherwise (common practice for a ductile steel check). */
+export const DEFAULT_REQUIREMENTS: Requirement[] = [
+  { criterion: "von-mises", requiredFactor: 1.5 },
+  { criterion: "tresca", requiredFactor: 1.5 },
+];
+
+export const unitSystemSchema = z.enum(["SI", "US"], { error: "must be SI or US" });
+export type UnitSystem = z.infer<typeof unitSystemSchema>;
+
+const projectName = z
+  .string({ error: "Name the project." })
+  .trim()
+  .min(1, "Name the project.")
+  .max(150, "A project name has at most 150 characters.");
+const description = z.string().trim().max(4000, "At most 4000 characters.");
+
+export const createProjectBodySchema = z.object({
+  name: projectName,
+  description: description.default(""),
+  unitSystem: unitSystemSchema.default("SI"),
+  requirements: requirementsSchema.default(DEFAULT_REQUIREMENTS),
+  defaultMaterial: materialRefSchema.nullable().default(null),
+});
+export type CreateProjectBody = z.infer<typeof createProjectBodySchema>;
+
+export const updateProjectBodySchema = z
+  .object({
+    version: versionSchema,
+    name: projectName,
+    description,
+    unitSystem: unitSystemSchema,
+    requirements: requirementsSchema,
+    defaultMaterial: materialRefSchema.nullable(),
+  })
+  .partial()
+  .required({ version: true });
+export type UpdateProjectBody = z.infer<typeof updateProjectBodySchema>;
+
+/** Someone named on a record (null when their account was deleted). */
+export const personRefSchema = z.object({ id: z.uuid(), name: z.string() }).nullable();
+
+export const projectSchema = z.object({
+  id: z.uuid(),
+  workspaceId: z.uuid(),
+  name: z.string(),
+  description: z.string(),
+  unitSystem: unitSystemSchema,
+  requirements: z.array(requirementSchema),
+  defaultMaterial: materialRefSchema.nullable(),
+  version: z.int(),
+  /** Counts for the project list. */
+  counts: z.object({ locations: z.int(), loadCases: z.int(), combinations: z.int() }),
+  createdAt: z.iso.datetime(),
+  updatedAt: z.iso.datetime(),
+  createdBy: personRefSchema,
+  updatedBy: personRefSchema,
+});
+export type Project = z.infer<typeof projectSchema>;
+export const projectResponseSchema = z.object({ project: projectSchema });
+export const projectListSchema = z.object({ projects: z.array(projectSchema) });
+export type ProjectList = z.infer<typeof projectListSchema>;
+
+export const projectParamsSchema = z.object({
+  workspaceId: z.uuid({ error: "must be a workspace id (UUID)" }),
+  projectId: z.uuid({ error: "must be a project id (UUID)" }),
+});
+
+const locationName = z
+  .string({ error: "Name the location." })
+  .trim()
+  .min(1, "Name the location.")
+  .max(120, "A location name has at most 120 characters.");
+
+export const createLocationBodySchema = z.object({
+  name: locationName,
+  note: z.string().trim().max(2000, "At most 2000 characters.").default(""),
+  /** Overrides the project's default material here; null uses the default. */
+  material: materialRefSchema.nullable().default(null),
+});
+export type CreateLocationBody = z.infer<typeof createLocationBodySchema>;
+
+export const updateLocationBodySchema = z
+  .object({
+    version: versionSchema,
+    name: locationName,
+    note: z.string().trim().max(2000, "At most 2000 characters."),
+    material: materialRefSchema.nullable(),
+  })
+  .partial()
+  .required({ version: true });
+export type UpdateLocationBody = z.infer<typeof updateLocationBodySchema>;
+
+export const locationSchema = z.object({
+  id: z.uuid(),
+  projectId: z.uuid(),
+  name: z.string(),
+  note: z.string(),
+  material: materialRefSchema.nullable(),
+  position: z.int(),
+  version: z.int(),
+  createdAt: z.iso.datetime(),
+  updatedAt: z.iso.datetime(),
+});
+export type Location = z.infer<typeof locationSchema>;
+export const locationResponseSchema = z.object({ location: locationSchema });
+export const locationListSchema = z.object({ locations: z.array(locationSchema) });
+
+export const locationParamsSchema = projectParamsSchema.extend({
+  locationId: z.uuid({ error: "must be a location id (UUID)" }),
+});
+
+/** The body of a 409: the version the server holds now, so the client can reload or keep its copy. */
+export const conflictDetailsSchema = z.object({ currentVersion: z.int(), current: z.unknown() });
+export type ConflictDetails = z.infer<typeof conflictDetailsSchema>;

@@ -1,0 +1,27 @@
+import type { Sequelize } from "sequelize";
+import { initAuditEvent } from "./audit-event";
+import { initCombination } from "./combination";
+import { initCombinationTerm } from "./combination-term";
+import { initLoadCase } from "./load-case";
+import { initLocation } from "./location";
+import { initMaterial } from "./material";
+import { initProject } from "./project";
+import { initStressState } from "./stress-state";
+
+/**
+ * Registers the project models (materials, projects, locations, load cases, stress states,
+ * combinations and their terms, the audit trail). Queries join them explicitly by id, so no
+ * associations are declared.
+ */
+export function initProjectModels(sequelize: Sequelize) {
+  return {
+    Material: initMaterial(sequelize),
+    Project: initProject(sequelize),
+    Location: initLocation(sequelize),
+    LoadCase: initLoadCase(sequelize),
+    StressState: initStressState(sequelize),
+    Combination: initCombination(sequelize),
+    CombinationTerm: initCombinationTerm(sequelize),
+    AuditEvent: initAuditEvent(sequelize),
+  };
+}

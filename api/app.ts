@@ -4,7 +4,9 @@ import type { AppContext } from "./context";
 import { errors } from "./errors";
 import { errorHandler } from "./middleware/error-handler";
 import { requestLogging } from "./middleware/request-logging";
-import { healthRoutes } from "./routes/health";
+import { sessionMiddleware } from "./auth/session-middleware";
+import { mountRoutes } from "./openapi/mount";
+import { buildRouteTable } from "./openapi/route-table";
 
 /**
  * Builds the Express app without listening: the API under /api and, when `webDist` is
@@ -19,7 +21,15 @@ export function createApp(context: AppContext): Express {
 
   const api = express.Router();
   api.use(express.json({ limit: "1mb" }));
-  api.use(healthRoutes(context));
+  api.use(sessionMiddleware(context.auth));
+  // Every /api route is registered in the route table (api/openapi/route-table.ts).
+  api.use(
+    mountRoutes(buildRouteTable(context), {
+      rateLimits: context.rateLimits,
+      sequelize: context.sequelize,
+      origin: () => context.publicOrigin,
+    }),
+  );
   api.use((req) => {
     throw errors.routeNotFound(req.method, req.originalUrl.split("?")[0]);
   });

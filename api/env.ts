@@ -46,3 +46,17 @@ export function parseEnv(raw: Record<string, string | undefined>): Env {
 export function publicOrigin(env: Env, listeningPort: number): string {
   return env.PUBLIC_ORIGIN?.replace(/\/$/, "") ?? `http://${env.HOST}:${listeningPort}`;
 }
+
+/**
+ * Whether the session cookie carries `Secure`: always in production and whenever the
+ * public origin is https; not in plain-http development and tests, where a Secure cookie
+ * would never come back.
+ */
+export function sessionCookieSecure(env: Env): boolean {
+  return env.NODE_ENV === "production" || env.PUBLIC_ORIGIN?.startsWith("https:") === true;
+}
+
+/** Whether mail only goes to the fake server and the /dev/mailbox page may exist (never in production). */
+export function devMailboxEnabled(env: Env): boolean {
+  return !env.SMTP_URL && env.NODE_ENV !== "production";
+}

@@ -27,6 +27,24 @@ export const errors = {
   routeNotFound: (method: string, path: string) =>
     new HttpError(404, "route_not_found", `There is no API route ${method} ${path}.`),
   conflict: (message: string, details?: unknown) => new HttpError(409, "conflict", message, details),
+  /** Send with a `Retry-After: seconds` header (the rate limiter sets it). */
+  tooManyRequests: (retryAfterSeconds: number) =>
+    new HttpError(
+      429,
+      "rate_limited",
+      `Too many attempts; try again in ${retryAfterSeconds < 120 ? `${retryAfterSeconds} seconds` : `${Math.ceil(retryAfterSeconds / 60)} minutes`}.`,
+      { retryAfterSeconds },
+    ),
+  /** A conflict with a stable id of its own (e.g. "last_owner", "invitation_expired") that pages switch on. */
+  conflictWithId: (id: string, message: string) => new HttpError(409, id, message),
+  invalidCredentials: () =>
+    new HttpError(401, "invalid_credentials", "That e-mail address and password do not match an account."),
+  mailNotSent: (what: string) =>
+    new HttpError(
+      502,
+      "mail_not_sent",
+      `${what} was saved, but the mail could not be sent; try sending it again.`,
+    ),
   payloadTooLarge: (limit: string) =>
     new HttpError(413, "payload_too_large", `The request body is larger than ${limit}.`),
   databaseUnavailable: () =>

@@ -3,7 +3,7 @@ import { createServer, type Server } from "node:http";
 import { createSequelize } from "../db/sequelize";
 import { initModels } from "../db/models";
 import { createApp } from "./app";
-import type { AppContext } from "./context";
+import { buildAppContext, type AppContext } from "./context";
 import { publicOrigin, type Env } from "./env";
 import { createLogger } from "./logger";
 import { appVersion } from "./version";
@@ -18,17 +18,35 @@ export type RunningServer = {
 };
 
 /** Opens the database pool, builds the app and listens on env.HOST:env.PORT (0 = any free port). */
-export async function startServer(env: Env, options: { webDist: string | null }): Promise<RunningServer> {
+export async function startServer(
+  env: Env,
+  options: { webDist: string | null; rateLimits?: Partial<AppContext["rateLimits"]> },
+): Promise<RunningServer> {
   const logger = createLogger(env);
   const sequelize = createSequelize(env.DATABASE_URL);
   initModels(sequelize);
-  const context: AppContext = { env, sequelize, logger, version: appVersion, webDist: options.webDist };
+  const context = buildAppContext({
+    env,
+    sequelize,
+    logger,
+    version: appVersion,
+    webDist: options.webDist,
+    rateLimits: options.rateLimits,
+  });
+  if (context.mailer.fake) {
+    // No SMTP_URL: mail goes to the in-process fake server (see api/mail/fake-smtp-server.ts).
+    await context.mailer.start();
+    if (env.NODE_ENV === "production") {
+      logger.warn("SMTP_URL is not set: mail is caught by the fake server and nobody receives it");
+    }
+  }
   const server = createServer(createApp(context));
   await new Promise<void>((resolve, reject) => {
     server.once("error", reject);
     server.listen(env.PORT, env.HOST, () => resolve());
   });
   const port = (server.address() as AddressInfo).port;
+  context.publicOrigin = publicOrigin(env, port);
   let closing: Promise<void> | null = null;
   return {
     url: publicOrigin(env, port),
@@ -41,6 +59,7 @@ export async function startServer(env: Env, options: { webDist: string | null })
           server.close(() => resolve());
           server.closeIdleConnections();
         });
+        await context.mailer.close();
         await sequelize.close();
       })();
       return closing;

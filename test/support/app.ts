@@ -1,32 +1,64 @@
 import { inject } from "vitest";
 import { createApp } from "../../api/app";
-import type { AppContext } from "../../api/context";
+import { randomUUID } from "node:crypto";
+import { buildAppContext } from "../../api/context";
 import { parseEnv } from "../../api/env";
 import { createLogger } from "../../api/logger";
 import { appVersion } from "../../api/version";
 import { initModels } from "../../db/models";
 import { createSequelize } from "../../db/sequelize";
 import { webDist } from "../../scripts/web-build";
+import type { RateLimitSettings } from "../../api/middleware/rate-limit";
+
+/** The origin test apps believe they are served from; send it as `Origin` on state-changing requests. */
+export const TEST_ORIGIN = "http://sigmacube.test";
+
+/**
+ * Limits high enough that no ordinary test meets them, with a prefix of this app's own so
+ * counters from other test files (same database) never add up. The rate-limit test passes small ones.
+ */
+const relaxedLimits = (): Partial<RateLimitSettings> => ({
+  signIn: { limit: 10_000, windowMs: 60_000 },
+  signUp: { limit: 10_000, windowMs: 60_000 },
+  forgotPassword: { limit: 10_000, windowMs: 60_000 },
+  prefix: `test-${randomUUID()}:`,
+});
 
 /**
  * The real Express app over the run's test database (or `databaseUrl`), not listening:
  * hand `app` to supertest. Call `close()` in afterAll.
  */
-export function buildTestApp(options: { databaseUrl?: string; webDist?: string | null } = {}) {
+export function buildTestApp(
+  options: {
+    databaseUrl?: string;
+    webDist?: string | null;
+    rateLimits?: Partial<RateLimitSettings>;
+    nodeEnv?: "test" | "production" | "development";
+  } = {},
+) {
   const env = parseEnv({
-    NODE_ENV: "test",
+    NODE_ENV: options.nodeEnv ?? "test",
     LOG_LEVEL: "silent",
+    PUBLIC_ORIGIN: TEST_ORIGIN,
     PORT: "0",
     DATABASE_URL: options.databaseUrl ?? inject("databaseUrl"),
   });
   const sequelize = createSequelize(env.DATABASE_URL, { acquireTimeoutMs: 1_500 });
   initModels(sequelize);
-  const context: AppContext = {
+  const context = buildAppContext({
     env,
     sequelize,
     logger: createLogger(env),
     version: appVersion,
     webDist: options.webDist === undefined ? webDist : options.webDist,
+    rateLimits: { ...relaxedLimits(), ...options.rateLimits },
+  });
+  return {
+    app: createApp(context),
+    context,
+    close: async () => {
+      await context.mailer.close();
+      await sequelize.close();
+    },
   };
-  return { app: createApp(context), context, close: () => sequelize.close() };
 }

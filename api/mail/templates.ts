@@ -1,0 +1,86 @@
+import type { OutgoingMail } from "./mailer";
+
+/** The product's name as every mail shows it. */
+const PRODUCT = "Sigmacube";
+
+const escapeHtml = (text: string) =>
+  text.replace(
+    /[&<>"']/g,
+    (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!,
+  );
+
+/**
+ * Lays out one message in both parts: a greeting, paragraphs, one link as a button (and
+ * spelled out, for mail readers that hide buttons), and a closing note.
+ */
+function layout(options: {
+  to: string;
+  subject: string;
+  greeting: string;
+  paragraphs: string[];
+  action: { label: string; url: string };
+  footnote: string;
+}): OutgoingMail {
+  const { greeting, paragraphs, action, footnote } = options;
+  const text = [
+    greeting,
+    "",
+    ...paragraphs.flatMap((p) => [p, ""]),
+    `${action.label}: ${action.url}`,
+    "",
+    footnote,
+    "",
+    `— ${PRODUCT}`,
+  ].join("\n");
+  const html = `<!doctype html>
+<html lang="en"><body style="margin:0;background:#f5f1e8;font-family:'Source Sans 3',system-ui,sans-serif;color:#2a2c30">
+<table role="presentation" width="100%" cellpadding="0" cellspacing="0"><tr><td align="center" style="padding:24px">
+<table role="presentation" width="560" cellpadding="0" cellspacing="0" style="background:#fcfcfa;border:1px solid #d8d1c1">
+<tr><td style="padding:16px 24px;border-bottom:1px solid #d8d1c1;font-size:20px;font-weight:600">Sigma<span style="color:#1d5a55">cube</span></td></tr>
+<tr><td style="padding:24px;font-size:16px;line-height:1.5">
+<p>${escapeHtml(greeting)}</p>
+${paragraphs.map((p) => `<p>${escapeHtml(p)}</p>`).join("\n")}
+<p style="margin:24px 0"><a href="${escapeHtml(action.url)}" style="background:#1d5a55;color:#fcfcfa;padding:10px 18px;text-decoration:none;font-weight:600">${escapeHtml(action.label)}</a></p>
+<p style="font-size:14px;color:#5b5e66">Or paste this address into your browser:<br><a href="${escapeHtml(action.url)}" style="color:#1d5a55;word-break:break-all">${escapeHtml(action.url)}</a></p>
+<p style="font-size:14px;color:#5b5e66">${escapeHtml(footnote)}</p>
+</td></tr></table></td></tr></table></body></html>`;
+  return { to: options.to, subject: options.subject, text, html };
+}
+
+/** The password-reset mail: a single-use link that expires in an hour. */
+export function passwordResetMail(options: { to: string; name: string; url: string }): OutgoingMail {
+  return layout({
+    to: options.to,
+    subject: `${PRODUCT}: reset your password`,
+    greeting: `Hello ${options.name},`,
+    paragraphs: [
+      `Someone (hopefully you) asked to reset the password of your ${PRODUCT} account.`,
+      "The link below works once and expires in one hour. Setting a new password signs you out everywhere else.",
+    ],
+    action: { label: "Choose a new password", url: options.url },
+    footnote: "If you did not ask for this, ignore this mail: your password stays as it is.",
+  });
+}
+
+/** The invitation mail: who invites, into which workspace, with which role. */
+export function invitationMail(options: {
+  to: string;
+  inviterName: string;
+  workspaceName: string;
+  role: string;
+  url: string;
+  expiresAt: Date;
+}): OutgoingMail {
+  const expires = options.expiresAt.toISOString().slice(0, 10);
+  return layout({
+    to: options.to,
+    subject: `${options.inviterName} invited you to ${options.workspaceName} on ${PRODUCT}`,
+    greeting: "Hello,",
+    paragraphs: [
+      `${options.inviterName} invited you to join the workspace "${options.workspaceName}" on ${PRODUCT} as ${options.role}.`,
+      `${PRODUCT} is where the team checks stress states and keeps the calculation record. Follow the link to sign in or create an account with this address; you join the workspace straight after.`,
+    ],
+    action: { label: `Join ${options.workspaceName}`, url: options.url },
+    footnote: `The invitation expires on ${expires} (UTC). If you were not expecting it, ignore this mail.`,
+  });
+}

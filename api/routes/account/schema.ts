@@ -1,0 +1,2 @@
+export { changePasswordBodySchema, updateAccountBodySchema } from "../../../core/contract/account";
+export { signedInResponseSchema as accountResponseSchema } from "../../../core/contract/auth";

@@ -1,0 +1,39 @@
+import type { Invitation, InvitationPreview, InvitationState } from "../../../core/contract/invitations";
+import type { Invitation as InvitationRow } from "../../../db/models/invitation";
+
+/** An invitation's state, derived from its timestamps at `now`. */
+export function invitationState(invitation: InvitationRow, now = new Date()): InvitationState {
+  if (invitation.acceptedAt) return "accepted";
+  if (invitation.revokedAt) return "revoked";
+  if (invitation.expiresAt.getTime() <= now.getTime()) return "expired";
+  return "pending";
+}
+
+/** What the owners' list shows (never the token or its hash). */
+export function presentInvitation(invitation: InvitationRow): Invitation {
+  return {
+    id: invitation.id,
+    email: invitation.email,
+    role: invitation.role,
+    state: invitationState(invitation),
+    invitedByName: invitation.inviter?.name ?? null,
+    createdAt: invitation.createdAt.toISOString(),
+    expiresAt: invitation.expiresAt.toISOString(),
+    lastSentAt: invitation.lastSentAt.toISOString(),
+    sendCount: invitation.sendCount,
+    acceptedAt: invitation.acceptedAt?.toISOString() ?? null,
+    revokedAt: invitation.revokedAt?.toISOString() ?? null,
+  };
+}
+
+/** What the holder of the link sees before accepting. */
+export function presentInvitationPreview(invitation: InvitationRow): InvitationPreview {
+  return {
+    workspaceName: invitation.workspace?.name ?? "",
+    email: invitation.email,
+    role: invitation.role,
+    invitedByName: invitation.inviter?.name ?? null,
+    state: invitationState(invitation),
+    expiresAt: invitation.expiresAt.toISOString(),
+  };
+}

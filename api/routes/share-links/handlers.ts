@@ -1,5 +1,6 @@
 import type { z } from "zod";
 import type { createShareLinkBodySchema } from "../../../core/contract/share-links";
+import { Membership } from "../../../db/models/membership";
 import { ShareLink } from "../../../db/models/share-link";
 import { User } from "../../../db/models/user";
 import { Workspace } from "../../../db/models/workspace";
@@ -93,6 +94,12 @@ export function joinShareLinkHandler(context: AppContext): RouteHandler<TokenPar
       // Locked so the use limit holds when several people join at the same moment.
       const link = await ShareLink.findByPk(found.id, { transaction, lock: transaction.LOCK.UPDATE });
       if (!link) throw errors.notFound("This share link");
+      // A member opening any of the workspace's links is simply sent on, whatever the link's state.
+      const existing = await Membership.findOne({
+        where: { workspaceId: link.workspaceId, userId: user.id },
+        transaction,
+      });
+      if (existing) return { membership: existing, alreadyMember: true };
       const state = shareLinkState(link);
       if (state !== "active") throw errors.conflictWithId(`share_link_${state}`, UNUSABLE[state]);
       const joined = await addMember(

@@ -1,12 +1,17 @@
-import { NavLink, Outlet } from "react-router-dom";
+import { NavLink, Outlet, useMatch } from "react-router-dom";
 import { Caution } from "../components/Caution";
 import { LogoMark } from "../components/LogoMark";
 import { ServerStatus } from "../features/system-status/components/ServerStatus";
 
-const navigation = [{ to: "/", label: "Overview", end: true }];
+const navigation = [
+  { to: "/", label: "Overview", end: true },
+  { to: "/bench", label: "Bench", end: false },
+];
 
 /** Header with the mark and navigation, the page, and a footer with the caution and server state. */
 export function Layout() {
+  // The bench is a working screen: full width and tighter margins so its panels fit 1280×800.
+  const wide = useMatch("/bench") !== null;
   return (
     <div className="flex min-h-screen flex-col">
       <a
@@ -43,7 +48,10 @@ export function Layout() {
           </nav>
         </div>
       </header>
-      <main id="main" className="mx-auto w-full max-w-6xl flex-1 px-6 py-8">
+      <main
+        id="main"
+        className={`mx-auto w-full flex-1 ${wide ? "max-w-[1600px] px-3 pb-2 pt-1.5" : "max-w-6xl px-6 py-8"}`}
+      >
         <Outlet />
       </main>
       <footer className="border-t border-rule bg-panel">

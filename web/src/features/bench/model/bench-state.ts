@@ -6,6 +6,7 @@ import {
   type StressUnit,
   type Vec3,
 } from "../../../../../core";
+import { EXAMPLE_STATES } from "./examples";
 
 /** How the stress is typed in. */
 export type InputForm = "grid" | "six" | "plane";
@@ -61,11 +62,10 @@ export type BenchState = {
 /** Largest number of undo steps kept. */
 export const HISTORY_LIMIT = 100;
 
-/** The state a fresh bench opens with: the CT-7 mid-shell membrane state at design pressure. */
+/** The state a fresh bench opens with: the CT-7 head-to-shell junction, outer surface, at design pressure. */
 export function initialBenchState(): BenchState {
   return {
-    // Thin-wall membrane formulas, r = 600 mm, t = 8 mm, p = 0.9 MPa: σθ = pr/t, σx = pr/(2t), σr ≈ −p/2 at mid-wall.
-    tensor: { xx: (0.9 * 600) / 8, yy: (0.9 * 600) / (2 * 8), zz: -0.9 / 2, xy: 0, yz: 0, zx: 0 },
+    tensor: { ...EXAMPLE_STATES.find((e) => e.id === "junction-design")!.tensor },
     unit: "MPa",
     rotation: IDENTITY_ROTATION,
     rotationView: "axis-angle",

@@ -1,0 +1,67 @@
+import { useEffect } from "react";
+import { useUrlSync } from "../hooks/use-url-sync";
+import { useBenchStore } from "../model/store";
+import { CriteriaPanel } from "./CriteriaPanel";
+import { ElementPanel } from "./ElementPanel";
+import { EnvelopePlot } from "./EnvelopePlot";
+import { MohrPanel } from "./MohrPanel";
+import { PrincipalPanel } from "./PrincipalPanel";
+import { ShareBar } from "./ShareBar";
+import { StressInputPanel } from "./StressInputPanel";
+
+/**
+ * The bench: the state the engineer has, the element they turn, the diagram that explains it and
+ * the verdict that matters, linked through one store. Reads and writes its state in the URL.
+ */
+export function BenchPage() {
+  useUrlSync();
+  const act = useBenchStore((s) => s.act);
+
+  // Ctrl+Z / Ctrl+Shift+Z (or Ctrl+Y) undo and redo stress edits, except while typing in a field.
+  useEffect(() => {
+    function onKey(event: KeyboardEvent) {
+      const target = event.target as HTMLElement | null;
+      if (
+        target &&
+        (target.tagName === "INPUT" || target.tagName === "TEXTAREA" || target.tagName === "SELECT")
+      )
+        return;
+      if (!(event.ctrlKey || event.metaKey)) return;
+      const key = event.key.toLowerCase();
+      if (key === "z" && !event.shiftKey) act.undo();
+      else if ((key === "z" && event.shiftKey) || key === "y") act.redo();
+      else return;
+      event.preventDefault();
+    }
+    window.addEventListener("keydown", onKey);
+    return () => window.removeEventListener("keydown", onKey);
+  }, [act]);
+
+  return (
+    <div className="flex flex-col gap-1.5">
+      <div className="flex flex-wrap items-center justify-between gap-x-4 gap-y-1">
+        <h1 className="text-base font-semibold tracking-tight">
+          Bench{" "}
+          <span className="text-[13px] font-normal text-graphite-soft">
+            — an unsaved stress state; tension positive, shear as tensor components
+          </span>
+        </h1>
+        <ShareBar />
+      </div>
+      <div className="grid items-start gap-2 md:grid-cols-[17rem_minmax(0,1fr)] xl:grid-cols-[17.5rem_minmax(0,1fr)_minmax(0,1fr)]">
+        <div className="flex min-w-0 flex-col gap-2">
+          <StressInputPanel />
+          <PrincipalPanel />
+        </div>
+        <div className="flex min-w-0 flex-col gap-2">
+          <ElementPanel />
+          <EnvelopePlot />
+        </div>
+        <div className="flex min-w-0 flex-col gap-2 md:col-span-2 md:grid md:grid-cols-2 xl:col-span-1 xl:flex">
+          <MohrPanel />
+          <CriteriaPanel />
+        </div>
+      </div>
+    </div>
+  );
+}

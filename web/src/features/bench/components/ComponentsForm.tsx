@@ -1,0 +1,56 @@
+import { NumberField } from "../../../components/NumberField";
+import type { Component } from "../../../../../core";
+import { editable } from "../model/format";
+import { useBenchStore } from "../model/store";
+
+const SIX: readonly { c: Component; label: string }[] = [
+  { c: "xx", label: "σx" },
+  { c: "yy", label: "σy" },
+  { c: "zz", label: "σz" },
+  { c: "xy", label: "τxy" },
+  { c: "yz", label: "τyz" },
+  { c: "zx", label: "τzx" },
+];
+
+/**
+ * The six-component form, or the plane-stress form (σx, σy, τxy) which also sets σz = τyz = τzx = 0.
+ */
+export function ComponentsForm({ plane }: { plane: boolean }) {
+  const tensor = useBenchStore((s) => s.tensor);
+  const unit = useBenchStore((s) => s.unit);
+  const act = useBenchStore((s) => s.act);
+  const fields = plane ? SIX.filter((f) => f.c === "xx" || f.c === "yy" || f.c === "xy") : SIX;
+  const outOfPlane = tensor.zz !== 0 || tensor.yz !== 0 || tensor.zx !== 0;
+  return (
+    <div>
+      <div className="grid grid-cols-3 gap-x-2 gap-y-1.5">
+        {fields.map(({ c, label }) => (
+          <NumberField
+            key={c}
+            label={`${label} (${unit})`}
+            value={tensor[c]}
+            format={editable}
+            onCommit={(v) => act.setComponent(c, v ?? 0)}
+          />
+        ))}
+      </div>
+      {plane && (
+        <p className="mt-1.5 text-[12px] text-graphite-soft">
+          Plane stress: σz = τyz = τzx = 0.
+          {outOfPlane && (
+            <>
+              {" "}
+              <button
+                type="button"
+                className="text-ink underline"
+                onClick={() => act.setTensor({ ...tensor, zz: 0, yz: 0, zx: 0 })}
+              >
+                Set the out-of-plane components to zero
+              </button>
+            </>
+          )}
+        </p>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,178 @@
+import { useId } from "react";
+import { Caution } from "../../../components/Caution";
+import { NumberField } from "../../../components/NumberField";
+import { Panel } from "../../../components/Panel";
+import { Quantity } from "../../../components/Quantity";
+import { Verdict } from "../../../components/Verdict";
+import { FROM_MEMORY_NOTE, PUBLISHED_MATERIALS, convertStress, publishedMaterial } from "../../../../../core";
+import { useCriteria } from "../hooks/use-derived";
+import { CLOSE_BAND, CRITERION_LABEL, governing } from "../model/derive";
+import { decimalsFor, editable, factor, fixed } from "../model/format";
+import { useBenchStore } from "../model/store";
+
+/** Panel 5: the verdict that matters — every criterion against the material and the required factor. */
+export function CriteriaPanel() {
+  const unit = useBenchStore((s) => s.unit);
+  const material = useBenchStore((s) => s.material);
+  const required = useBenchStore((s) => s.requiredFactor);
+  const act = useBenchStore((s) => s.act);
+  const results = useCriteria();
+  const preset = material.presetId ? publishedMaterial(material.presetId) : null;
+  const gov = governing(results);
+  const selectId = useId();
+  const noteId = useId();
+  const shown = (mpa: number | null) => (mpa === null ? null : convertStress(mpa, "MPa", unit));
+  const d = decimalsFor(
+    Math.max(
+      ...results.map((r) => (r.available && Number.isFinite(r.equivalent) ? Math.abs(r.equivalent) : 0)),
+    ),
+  );
+  return (
+    <Panel
+      id="criteria"
+      index="6"
+      title="Criteria"
+      subtitle={`against the material, ${unit}`}
+      bodyClassName="flex flex-col gap-2 px-3 py-2"
+    >
+      <div className="flex items-center gap-1.5 text-[13px]">
+        <label htmlFor={selectId} className="shrink-0 text-[12px] text-graphite-soft">
+          Material
+        </label>
+        <select
+          id={selectId}
+          value={material.presetId ?? ""}
+          aria-describedby={noteId}
+          onChange={(e) => e.target.value && act.choosePublishedMaterial(e.target.value)}
+          className="min-w-0 flex-1 rounded-sm border border-rule bg-white px-1 py-0.5"
+        >
+          <option value="">Typed in (custom strengths)</option>
+          <optgroup label="Published minimum values">
+            {PUBLISHED_MATERIALS.map((m) => (
+              <option key={m.id} value={m.id}>
+                {m.standard} {m.name}
+              </option>
+            ))}
+          </optgroup>
+        </select>
+        <span className="shrink-0 text-[12px] text-graphite-soft" aria-hidden="true">
+          required n
+        </span>
+        <NumberField
+          label="required safety factor n"
+          hideLabel
+          value={required}
+          format={(v) => String(v)}
+          min={1}
+          className="w-12 shrink-0"
+          onCommit={(v) => v !== null && act.setRequiredFactor(v)}
+        />
+      </div>
+      <div className="grid grid-cols-3 gap-1.5 text-[13px]">
+        {(
+          [
+            ["yield", "Sy", "yield strength Sy"],
+            ["ultimateTension", "Sut", "tensile strength Sut"],
+            ["ultimateCompression", "Suc", "compressive strength Suc"],
+          ] as const
+        ).map(([key, short, long]) => (
+          <div key={key} className="flex items-center gap-1">
+            <span className="text-[12px] text-graphite-soft" aria-hidden="true">
+              {short}
+            </span>
+            <NumberField
+              label={long}
+              hideLabel
+              value={shown(material[key])}
+              format={editable}
+              unit={unit}
+              className="min-w-0 flex-1"
+              onCommit={(v) => act.setStrength(key, v)}
+            />
+          </div>
+        ))}
+      </div>
+      <p id={noteId} className="text-[12px] leading-4 text-graphite-soft">
+        {preset ? (
+          <>
+            <span title={`Suc ${preset.compressionBasis}`}>
+              {preset.standard} {preset.name}, {preset.scope}.
+            </span>{" "}
+            <span className="text-close">Values {FROM_MEMORY_NOTE}.</span>
+          </>
+        ) : (
+          "Strengths as typed (Sy yield, Sut tensile, Suc compressive). A criterion that needs a blank one says so."
+        )}
+      </p>
+      <table className="w-full text-[13px]" data-testid="criteria-table">
+        <thead>
+          <tr className="border-b border-rule text-[12px] text-graphite-soft">
+            <th scope="col" className="py-0.5 text-left font-normal">
+              criterion
+            </th>
+            <th scope="col" className="text-right font-normal">
+              σ<sub>eq</sub> = S/n
+            </th>
+            <th scope="col" className="text-right font-normal">
+              n
+            </th>
+            <th scope="col" className="text-right font-normal">
+              utilisation
+            </th>
+            <th scope="col" className="pl-3 text-left font-normal">
+              verdict
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {results.map((r) => (
+            <tr
+              key={r.criterion}
+              className={`border-b border-rule/60 ${gov?.criterion === r.criterion ? "bg-paper/60" : ""}`}
+              data-testid={`criterion-${r.criterion}`}
+            >
+              <th scope="row" className="py-[2px] text-left font-normal">
+                {CRITERION_LABEL[r.criterion]}
+                {gov?.criterion === r.criterion && (
+                  <span className="ml-1 text-[11px] text-graphite-soft">governs</span>
+                )}
+              </th>
+              {r.available ? (
+                <>
+                  <td className="text-right">
+                    <Quantity value={fixed(r.equivalent, d)} unit={unit} />
+                    <span className="ml-1 text-[11px] text-graphite-faint">vs {r.reference}</span>
+                  </td>
+                  <td className="num text-right" data-testid="n">
+                    {factor(r.n)}
+                  </td>
+                  <td className="num text-right">
+                    {Number.isFinite(r.n) ? `${(r.utilisation * 100).toFixed(0)} %` : "0 %"}
+                  </td>
+                  <td className="pl-3">
+                    <Verdict state={r.verdict} />
+                  </td>
+                </>
+              ) : (
+                <td colSpan={4} className="text-[12px] text-graphite-soft">
+                  — {r.reason}
+                </td>
+              )}
+            </tr>
+          ))}
+        </tbody>
+      </table>
+      <p
+        className="text-[12px] leading-4 text-graphite-soft"
+        title="n is the factor the whole state may grow by before the criterion is reached; utilisation = required n ÷ n."
+      >
+        <span className="text-pass">✓ passes</span> n ≥{" "}
+        <span className="num">{factor(required * (1 + CLOSE_BAND))}</span> ·{" "}
+        <span className="text-close">≈ close</span> within {(CLOSE_BAND * 100).toFixed(0)} % above the
+        required <span className="num">{factor(required)}</span> · <span className="text-fail">✗ fails</span>{" "}
+        below it
+      </p>
+      <Caution className="!text-[12px] leading-4" />
+    </Panel>
+  );
+}

@@ -1,0 +1,205 @@
+import { axisBottom, axisLeft, line, scaleLinear, select } from "d3";
+import { useEffect, useMemo, useRef } from "react";
+import { Panel } from "../../../components/Panel";
+import { CRITERIA, convertStress, type Criterion } from "../../../../../core";
+import { useEnvelopes, useSummary } from "../hooks/use-derived";
+import { CRITERION_LABEL, envelopeRay, planePrincipals } from "../model/derive";
+import { factor, fixed, decimalsFor } from "../model/format";
+import { useBenchStore } from "../model/store";
+
+const W = 300;
+const H = 270;
+const M = { left: 46, right: 10, top: 10, bottom: 34 };
+
+/** Stroke style per criterion: distinguished by dash pattern as well as shade, never by colour alone. */
+const STYLE: Readonly<Record<Criterion, { dash: string; className: string }>> = {
+  "von-mises": { dash: "", className: "stroke-ink" },
+  tresca: { dash: "6 3", className: "stroke-graphite" },
+  "max-principal": { dash: "2 3", className: "stroke-graphite-soft" },
+  "mohr-coulomb": { dash: "8 3 2 3", className: "stroke-close" },
+  "modified-mohr": { dash: "1 2", className: "stroke-fail" },
+};
+
+/** Panel 6: the failure envelopes in the σA–σB plane for plane stress, with the state and its safety-factor ray. */
+export function EnvelopePlot() {
+  const unit = useBenchStore((s) => s.unit);
+  const chosen = useBenchStore((s) => s.envelopeCriteria);
+  const material = useBenchStore((s) => s.material);
+  const act = useBenchStore((s) => s.act);
+  const summary = useSummary();
+  const curves = useEnvelopes();
+  const ab = planePrincipals(summary.principal.values);
+  const toUnit = (mpa: number) => convertStress(mpa, "MPa", unit);
+  const stateMpa = ab && ([convertStress(ab[0], unit, "MPa"), convertStress(ab[1], unit, "MPa")] as const);
+  const first = curves[0]?.criterion;
+  const ray = stateMpa && first ? envelopeRay(stateMpa[0], stateMpa[1], first, material) : null;
+
+  const extent = useMemo(() => {
+    let m = 0;
+    for (const c of curves) for (const [a, b] of c.points) m = Math.max(m, Math.abs(a), Math.abs(b));
+    if (stateMpa) m = Math.max(m, Math.abs(stateMpa[0]), Math.abs(stateMpa[1]));
+    return toUnit(m > 0 ? m * 1.08 : 1);
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [curves, stateMpa?.[0], stateMpa?.[1], unit]);
+  const size = Math.min(W - M.left - M.right, H - M.top - M.bottom);
+  const x = useMemo(
+    () =>
+      scaleLinear()
+        .domain([-extent, extent])
+        .range([M.left, M.left + size]),
+    [extent, size],
+  );
+  const y = useMemo(
+    () =>
+      scaleLinear()
+        .domain([-extent, extent])
+        .range([M.top + size, M.top]),
+    [extent, size],
+  );
+  const xAxis = useRef<SVGGElement>(null);
+  const yAxis = useRef<SVGGElement>(null);
+  useEffect(() => {
+    if (xAxis.current) select(xAxis.current).call(axisBottom(x).ticks(5).tickSizeOuter(0));
+    if (yAxis.current) select(yAxis.current).call(axisLeft(y).ticks(5).tickSizeOuter(0));
+  }, [x, y]);
+  const path = line<[number, number]>()
+    .x((p) => x(toUnit(p[0])))
+    .y((p) => y(toUnit(p[1])));
+  const d = decimalsFor(extent);
+
+  return (
+    <Panel
+      id="envelope"
+      index="5"
+      title="Failure envelopes"
+      subtitle={`σA–σB, plane stress, ${unit}`}
+      bodyClassName="flex gap-2 px-2 py-1.5"
+    >
+      <svg
+        viewBox={`0 0 ${W} ${H}`}
+        className="block h-auto w-[56%] min-w-0 shrink-0"
+        role="img"
+        aria-labelledby="envelope-title"
+        data-testid="envelope-svg"
+      >
+        <title id="envelope-title">
+          {ab
+            ? `Failure envelopes of ${curves.map((c) => CRITERION_LABEL[c.criterion]).join(", ")} with the state (${fixed(ab[0], d)}, ${fixed(ab[1], d)}) ${unit}`
+            : "Failure envelopes; the current state is triaxial and is not shown"}
+        </title>
+        <rect
+          x={M.left}
+          y={M.top}
+          width={size}
+          height={size}
+          fill="url(#mohr-grid)"
+          className="stroke-rule"
+        />
+        <line x1={x(-extent)} x2={x(extent)} y1={y(0)} y2={y(0)} className="stroke-graphite-faint" />
+        <line x1={x(0)} x2={x(0)} y1={y(-extent)} y2={y(extent)} className="stroke-graphite-faint" />
+        {curves.map((c) => (
+          <path
+            key={c.criterion}
+            d={`${path(c.points) ?? ""}Z`}
+            fill="none"
+            strokeWidth={1.4}
+            strokeDasharray={STYLE[c.criterion].dash}
+            className={STYLE[c.criterion].className}
+          />
+        ))}
+        {ab && ray && (
+          <line
+            x1={x(0)}
+            y1={y(0)}
+            x2={x(toUnit(ray.point[0]))}
+            y2={y(toUnit(ray.point[1]))}
+            className="stroke-graphite-soft"
+            strokeDasharray="3 2"
+            strokeWidth={1}
+          />
+        )}
+        {ab && ray && (
+          <circle
+            cx={x(toUnit(ray.point[0]))}
+            cy={y(toUnit(ray.point[1]))}
+            r={3}
+            className="fill-panel stroke-graphite"
+          />
+        )}
+        {ab && (
+          <circle
+            cx={x(ab[0])}
+            cy={y(ab[1])}
+            r={4.5}
+            className="fill-tension stroke-panel"
+            strokeWidth={1.5}
+            data-testid="envelope-state"
+          />
+        )}
+        <g
+          ref={xAxis}
+          transform={`translate(0 ${M.top + size})`}
+          className="font-mono text-[10px] text-graphite-soft"
+          aria-hidden="true"
+        />
+        <g
+          ref={yAxis}
+          transform={`translate(${M.left} 0)`}
+          className="font-mono text-[10px] text-graphite-soft"
+          aria-hidden="true"
+        />
+        <text x={M.left + size} y={H - 4} textAnchor="end" className="fill-graphite text-[11px]">
+          σA, {unit}
+        </text>
+        <text
+          transform={`translate(11 ${M.top + size / 2}) rotate(-90)`}
+          textAnchor="middle"
+          className="fill-graphite text-[11px]"
+        >
+          σB, {unit}
+        </text>
+      </svg>
+      <div className="min-w-0 flex-1 space-y-1 text-[12px] leading-4">
+        <fieldset>
+          <legend className="mb-0.5 text-graphite-soft">Draw</legend>
+          {CRITERIA.map((c) => (
+            <label key={c} className="flex items-center gap-1.5">
+              <input type="checkbox" checked={chosen.includes(c)} onChange={() => act.toggleEnvelope(c)} />
+              <svg width="22" height="6" aria-hidden="true">
+                <line
+                  x1="0"
+                  x2="22"
+                  y1="3"
+                  y2="3"
+                  strokeWidth={1.6}
+                  strokeDasharray={STYLE[c].dash}
+                  className={STYLE[c].className}
+                />
+              </svg>
+              {CRITERION_LABEL[c]}
+            </label>
+          ))}
+        </fieldset>
+        {ab ? (
+          <p className="text-graphite-soft" data-testid="envelope-ray">
+            State (σA, σB) = (<span className="num">{fixed(ab[0], d)}</span>,{" "}
+            <span className="num">{fixed(ab[1], d)}</span>) {unit}.{" "}
+            {ray && first ? (
+              <>
+                The dashed ray meets the {CRITERION_LABEL[first]} envelope at n ={" "}
+                <span className="num text-graphite">{factor(ray.n)}</span> times the state.
+              </>
+            ) : (
+              "No envelope drawn for this state."
+            )}
+          </p>
+        ) : (
+          <p className="text-graphite-soft">
+            The state is triaxial (no principal stress is zero): this plot applies to plane stress; the table
+            still holds.
+          </p>
+        )}
+      </div>
+    </Panel>
+  );
+}

@@ -1,0 +1,416 @@
+/**
+ * Mohr's diagram in SVG, drawn with d3 scales and axes. Two pictures:
+ * - 3D: the three circles with the admissible region between them shaded and a marker for each face
+ *   of the turned element at (σn, τn), τn the magnitude of the face's shear (upper half only);
+ * - plane: the in-plane circle with the x′ and y′ face points, τx′y′ plotted positive downward so
+ *   the x′ point turns the same way as the element; dragging it (or arrow keys on it) turns the element.
+ * It draws and dispatches; every value comes from core through the store's derived results.
+ */
+import { axisBottom, axisLeft, scaleLinear, select } from "d3";
+import {
+  useEffect,
+  useMemo,
+  useRef,
+  useState,
+  type KeyboardEvent,
+  type PointerEvent,
+  type WheelEvent,
+} from "react";
+import type { MohrCircle, PlaneStressResult } from "../../../../../core";
+import { markCommit, markMoveStart } from "../hooks/perf-marks";
+import {
+  beginMohrDrag,
+  endMohrDrag,
+  moveMohrDrag,
+  mohrDragTheta,
+  MOHR_IDLE,
+  type MohrDragState,
+} from "../interaction/mohr-drag";
+import { zoomAt, type ZoomView } from "../interaction/zoom";
+import type { FacePoint } from "../model/derive";
+import { decimalsFor, fixed } from "../model/format";
+
+const W = 480;
+const H = 256;
+const M = { left: 50, right: 14, top: 14, bottom: 36 };
+const PW = W - M.left - M.right;
+const PH = H - M.top - M.bottom;
+
+export type MohrDiagramProps = {
+  unit: string;
+  mode: "3d" | "plane";
+  circles: readonly [MohrCircle, MohrCircle, MohrCircle];
+  principal: readonly [number, number, number];
+  faces: readonly FacePoint[];
+  /** plane mode: the in-plane circle, the rotated x′ components and θ (null when not a turn about z) */
+  plane: { circle: PlaneStressResult; sx: number; sy: number; txy: number; theta: number | null } | null;
+  onTheta: (theta: number) => void;
+  zoom: ZoomView;
+  onZoom: (view: ZoomView) => void;
+};
+
+/** Equal-aspect scales fitted to the data (circles must stay circles), then zoomed. */
+function useScales(xMin: number, xMax: number, yMin: number, yMax: number, zoom: ZoomView, tauDown: boolean) {
+  return useMemo(() => {
+    const spanX = Math.max(xMax - xMin, 1e-12);
+    const spanY = Math.max(yMax - yMin, 1e-12);
+    const perUnit = Math.min(PW / spanX, PH / spanY) * (zoom?.k ?? 1);
+    const cx = zoom?.cx ?? (xMin + xMax) / 2;
+    const cy = zoom?.cy ?? (yMin + yMax) / 2;
+    const halfX = PW / 2 / perUnit;
+    const halfY = PH / 2 / perUnit;
+    const x = scaleLinear()
+      .domain([cx - halfX, cx + halfX])
+      .range([M.left, M.left + PW]);
+    const y = scaleLinear()
+      .domain([cy - halfY, cy + halfY])
+      .range(tauDown ? [M.top, M.top + PH] : [M.top + PH, M.top]);
+    return { x, y, perUnit, fitCentre: [(xMin + xMax) / 2, (yMin + yMax) / 2] as const };
+  }, [xMin, xMax, yMin, yMax, zoom, tauDown]);
+}
+
+/** Path of the upper half of a circle (3D picture, τn ≥ 0). */
+function halfDisk(c: MohrCircle, x: (v: number) => number, y: (v: number) => number): string {
+  const r = Math.abs(x(c.center + c.radius) - x(c.center));
+  const left = x(c.center - c.radius);
+  const right = x(c.center + c.radius);
+  const base = y(0);
+  return `M${left},${base} A${r},${r} 0 0 1 ${right},${base} Z`;
+}
+
+/** A symbol with a real subscript inside SVG text (Unicode subscript letters fall back to other fonts). */
+function SvgSym({ base, sub }: { base: string; sub: string }) {
+  return (
+    <>
+      {base}
+      <tspan dy={3} fontSize="0.75em">
+        {sub}
+      </tspan>
+      <tspan dy={-3}> </tspan>
+    </>
+  );
+}
+
+export function MohrDiagram(props: MohrDiagramProps) {
+  const { unit, mode, circles, principal, faces, plane, onTheta, zoom, onZoom } = props;
+  const svg = useRef<SVGSVGElement>(null);
+  const xAxis = useRef<SVGGElement>(null);
+  const yAxis = useRef<SVGGElement>(null);
+  const [hover, setHover] = useState<{ sigma: number; tau: number } | null>(null);
+  const drag = useRef<MohrDragState>(MOHR_IDLE);
+  const [s1, s2, s3] = principal;
+  const tauDown = mode === "plane";
+
+  // Fitted extent: all circles, the origin, and a margin.
+  const big = Math.max(Math.abs(s1), Math.abs(s3), circles[0].radius, 1e-9);
+  const pad = 0.08 * big;
+  const ext =
+    mode === "plane" && plane
+      ? {
+          x0: Math.min(plane.circle.s2, 0) - pad,
+          x1: Math.max(plane.circle.s1, 0) + pad,
+          y0: -plane.circle.radius - pad,
+          y1: plane.circle.radius + pad,
+        }
+      : {
+          x0: Math.min(s3, 0) - pad,
+          x1: Math.max(s1, 0) + pad,
+          y0: -0.12 * big,
+          y1: circles[0].radius + pad,
+        };
+  const { x, y, fitCentre } = useScales(ext.x0, ext.x1, ext.y0, ext.y1, zoom, tauDown);
+  const d = decimalsFor(big);
+
+  useEffect(() => {
+    if (xAxis.current) select(xAxis.current).call(axisBottom(x).ticks(7).tickSizeOuter(0));
+    if (yAxis.current) select(yAxis.current).call(axisLeft(y).ticks(6).tickSizeOuter(0));
+  }, [x, y]);
+
+  // Commit mark for the benchmark's Mohr-drag variant.
+  useEffect(() => markCommit(), [plane?.theta]);
+
+  function toData(clientX: number, clientY: number): { sigma: number; tau: number } {
+    const el = svg.current!;
+    const pt = el.createSVGPoint();
+    pt.x = clientX;
+    pt.y = clientY;
+    const local = pt.matrixTransform(el.getScreenCTM()!.inverse());
+    return { sigma: x.invert(local.x), tau: y.invert(local.y) };
+  }
+
+  function onPointerMove(event: PointerEvent<SVGSVGElement>) {
+    const p = toData(event.clientX, event.clientY);
+    setHover(p);
+    if (drag.current.dragging) {
+      markMoveStart();
+      drag.current = moveMohrDrag(drag.current, p);
+      const theta = mohrDragTheta(drag.current);
+      if (theta !== null) onTheta(theta);
+    }
+  }
+
+  function onPointDown(event: PointerEvent<SVGCircleElement>) {
+    if (!plane || event.button !== 0) return;
+    event.stopPropagation();
+    svg.current!.setPointerCapture(event.pointerId);
+    drag.current = beginMohrDrag(toData(event.clientX, event.clientY), plane.theta ?? 0, plane.circle.center);
+  }
+
+  function onPointerUp(event: PointerEvent<SVGSVGElement>) {
+    if (drag.current.dragging) {
+      drag.current = endMohrDrag();
+      svg.current!.releasePointerCapture(event.pointerId);
+    }
+  }
+
+  function onWheel(event: WheelEvent<SVGSVGElement>) {
+    const p = toData(event.clientX, event.clientY);
+    onZoom(zoomAt(zoom, event.deltaY < 0 ? 1.15 : 1 / 1.15, [p.sigma, p.tau], fitCentre));
+  }
+
+  function onPointKey(event: KeyboardEvent<SVGCircleElement>) {
+    if (!plane) return;
+    const step = event.shiftKey ? 15 : event.altKey ? 0.1 : 1;
+    const theta = plane.theta ?? 0;
+    // Up/right = counter-clockwise on the circle = the element turns counter-clockwise.
+    if (event.key === "ArrowRight" || event.key === "ArrowUp") onTheta(theta + step);
+    else if (event.key === "ArrowLeft" || event.key === "ArrowDown") onTheta(theta - step);
+    else return;
+    event.preventDefault();
+  }
+
+  const X = (v: number) => x(v);
+  const Y = (v: number) => y(v);
+  const clip = "mohr-clip";
+
+  return (
+    <figure className="relative m-0">
+      <svg
+        ref={svg}
+        viewBox={`0 0 ${W} ${H}`}
+        className="block h-auto w-full touch-none select-none"
+        role="group"
+        aria-label={
+          mode === "plane"
+            ? "In-plane Mohr circle with the x′ and y′ face points"
+            : "Mohr's three circles with the faces of the turned element"
+        }
+        onPointerMove={onPointerMove}
+        onPointerUp={onPointerUp}
+        onPointerLeave={() => setHover(null)}
+        onWheel={onWheel}
+        data-testid="mohr-svg"
+      >
+        <defs>
+          <pattern id="mohr-grid" width="16" height="16" patternUnits="userSpaceOnUse">
+            <path d="M16 0H0V16" fill="none" stroke="rgb(29 90 85 / 0.07)" strokeWidth="1" />
+          </pattern>
+          <clipPath id={clip}>
+            <rect x={M.left} y={M.top} width={PW} height={PH} />
+          </clipPath>
+        </defs>
+        <rect x={M.left} y={M.top} width={PW} height={PH} fill="url(#mohr-grid)" />
+        <g clipPath={`url(#${clip})`}>
+          <line
+            x1={M.left}
+            x2={M.left + PW}
+            y1={Y(0)}
+            y2={Y(0)}
+            className="stroke-graphite-faint"
+            strokeWidth={1}
+          />
+          <line
+            x1={X(0)}
+            x2={X(0)}
+            y1={M.top}
+            y2={M.top + PH}
+            className="stroke-graphite-faint"
+            strokeWidth={1}
+          />
+          {mode === "3d" ? (
+            <g data-testid="mohr-3d">
+              <path d={halfDisk(circles[0], X, Y)} className="fill-ink-wash stroke-ink" strokeWidth={1.5} />
+              <path d={halfDisk(circles[1], X, Y)} className="fill-panel stroke-ink" strokeWidth={1.1} />
+              <path d={halfDisk(circles[2], X, Y)} className="fill-panel stroke-ink" strokeWidth={1.1} />
+              <line
+                x1={X(circles[0].center)}
+                x2={X(circles[0].center)}
+                y1={Y(0)}
+                y2={Y(circles[0].radius)}
+                className="stroke-graphite-soft"
+                strokeDasharray="3 3"
+              />
+              {faces.map((f) => (
+                <g key={f.face} data-testid={`mohr-face-${f.face}`} data-sigma={f.normal} data-tau={f.shear}>
+                  <circle
+                    cx={X(f.normal)}
+                    cy={Y(f.shear)}
+                    r={5}
+                    className="fill-panel stroke-graphite"
+                    strokeWidth={1.6}
+                  >
+                    <title>{`${f.face} face: σn = ${fixed(f.normal, d)} ${unit}, τn = ${fixed(f.shear, d)} ${unit}`}</title>
+                  </circle>
+                  <text
+                    x={X(f.normal) + 7}
+                    y={Y(f.shear) - 6}
+                    className="fill-graphite font-mono text-[12px]"
+                  >
+                    {f.face}
+                  </text>
+                </g>
+              ))}
+            </g>
+          ) : (
+            plane && (
+              <g data-testid="mohr-plane">
+                <circle
+                  cx={X(plane.circle.center)}
+                  cy={Y(0)}
+                  r={Math.abs(x(plane.circle.center + plane.circle.radius) - x(plane.circle.center))}
+                  className="fill-ink-wash stroke-ink"
+                  strokeWidth={1.5}
+                  fillOpacity={0.5}
+                />
+                {plane.theta !== null && (
+                  <>
+                    <line
+                      x1={X(plane.sx)}
+                      y1={Y(plane.txy)}
+                      x2={X(plane.sy)}
+                      y2={Y(-plane.txy)}
+                      className="stroke-ink"
+                      strokeWidth={1.2}
+                    />
+                    <g data-testid="mohr-point-y′">
+                      <circle
+                        cx={X(plane.sy)}
+                        cy={Y(-plane.txy)}
+                        r={5}
+                        className="fill-panel stroke-graphite"
+                        strokeWidth={1.6}
+                      >
+                        <title>{`y′ face: σy′ = ${fixed(plane.sy, d)} ${unit}, −τx′y′ = ${fixed(-plane.txy, d)} ${unit}`}</title>
+                      </circle>
+                      <text
+                        x={X(plane.sy) + 8}
+                        y={Y(-plane.txy) + 4}
+                        className="fill-graphite font-mono text-[12px]"
+                      >
+                        y′
+                      </text>
+                    </g>
+                    <g data-testid="mohr-point-x′" data-sigma={plane.sx} data-tau={plane.txy}>
+                      <circle
+                        cx={X(plane.sx)}
+                        cy={Y(plane.txy)}
+                        r={7}
+                        tabIndex={0}
+                        role="slider"
+                        aria-label="x′ face point: drag round the circle, or use the arrow keys, to turn the element about z"
+                        aria-valuemin={-180}
+                        aria-valuemax={180}
+                        aria-valuenow={Number(plane.theta.toFixed(2))}
+                        aria-valuetext={`θ = ${plane.theta.toFixed(2)}°`}
+                        onPointerDown={onPointDown}
+                        onKeyDown={onPointKey}
+                        className="cursor-grab fill-ink stroke-panel outline-none focus-visible:stroke-tension"
+                        strokeWidth={2}
+                      >
+                        <title>{`x′ face: σx′ = ${fixed(plane.sx, d)} ${unit}, τx′y′ = ${fixed(plane.txy, d)} ${unit}`}</title>
+                      </circle>
+                      <text
+                        x={X(plane.sx) + 9}
+                        y={Y(plane.txy) - 7}
+                        className="fill-ink font-mono text-[12px] font-semibold"
+                      >
+                        x′
+                      </text>
+                    </g>
+                  </>
+                )}
+              </g>
+            )
+          )}
+          {/* Principal stresses and τmax marked on the axes. */}
+          {(mode === "3d"
+            ? ([s1, s2, s3] as const)
+            : plane
+              ? ([plane.circle.s1, plane.circle.s2] as const)
+              : []
+          ).map((v, k) => (
+            <g key={k}>
+              <circle cx={X(v)} cy={Y(0)} r={2.5} className="fill-graphite" />
+              <text
+                x={X(v)}
+                y={Y(0) + (mode === "plane" ? -6 : 14)}
+                textAnchor="middle"
+                className="fill-graphite font-mono text-[12px]"
+              >
+                <SvgSym base="σ" sub={String(k + 1)} />
+              </text>
+            </g>
+          ))}
+          {mode === "3d" && (
+            <text
+              x={X(circles[0].center) + 4}
+              y={Y(circles[0].radius) - 5}
+              className="fill-graphite font-mono text-[12px]"
+            >
+              <SvgSym base="τ" sub="max" />= {fixed(circles[0].radius, d)}
+            </text>
+          )}
+          {mode === "plane" && plane && (
+            <text
+              x={X(plane.circle.center) + 4}
+              y={Y(-plane.circle.radius) - 5}
+              className="fill-graphite font-mono text-[12px]"
+            >
+              <SvgSym base="τ" sub="max, in-plane" />= {fixed(plane.circle.radius, d)}
+            </text>
+          )}
+        </g>
+        <g
+          ref={xAxis}
+          transform={`translate(0 ${M.top + PH})`}
+          className="font-mono text-[11px] text-graphite-soft"
+          aria-hidden="true"
+        />
+        <g
+          ref={yAxis}
+          transform={`translate(${M.left} 0)`}
+          className="font-mono text-[11px] text-graphite-soft"
+          aria-hidden="true"
+        />
+        <text x={M.left + PW} y={H - 6} textAnchor="end" className="fill-graphite text-[12px]">
+          <SvgSym base="σ" sub="n" />, {unit} (tension +)
+        </text>
+        <text
+          transform={`translate(13 ${M.top + PH / 2}) rotate(-90)`}
+          textAnchor="middle"
+          className="fill-graphite text-[12px]"
+        >
+          {mode === "plane" ? (
+            <>
+              <SvgSym base="τ" sub="x′y′" />, {unit} — positive downward ↓
+            </>
+          ) : (
+            <>
+              <SvgSym base="τ" sub="n" />, {unit} (magnitude)
+            </>
+          )}
+        </text>
+        {hover && (
+          <text
+            x={M.left + 6}
+            y={M.top + 14}
+            className="fill-graphite-soft font-mono text-[11px]"
+            data-testid="mohr-hover"
+          >
+            σ = {fixed(hover.sigma, d)}, τ = {fixed(hover.tau, d)} {unit}
+          </text>
+        )}
+      </svg>
+    </figure>
+  );
+}

@@ -1,0 +1,79 @@
+import { Panel } from "../../../components/Panel";
+import { Quantity, stressTone } from "../../../components/Quantity";
+import { Sym } from "../../../components/Sym";
+import { useSummary } from "../hooks/use-derived";
+import { decimalsFor, fixed } from "../model/format";
+import { useBenchStore } from "../model/store";
+
+/** Panel: what core computes of the state itself, independent of the element's frame. */
+export function PrincipalPanel() {
+  const unit = useBenchStore((s) => s.unit);
+  const { principal, tauMax, vonMises } = useSummary();
+  const [s1, s2, s3] = principal.values;
+  const d = decimalsFor(Math.max(Math.abs(s1), Math.abs(s3)));
+  const rows = [
+    { sym: <Sym base="σ" sub="1" />, label: "sigma 1", value: s1, dir: principal.directions[0] },
+    { sym: <Sym base="σ" sub="2" />, label: "sigma 2", value: s2, dir: principal.directions[1] },
+    { sym: <Sym base="σ" sub="3" />, label: "sigma 3", value: s3, dir: principal.directions[2] },
+  ];
+  return (
+    <Panel
+      id="principal"
+      index="2"
+      title="Principal stresses"
+      subtitle={`${unit}; directions in x y z`}
+      bodyClassName="px-3 py-2"
+    >
+      <table className="w-full text-[13px]" data-testid="principal-table">
+        <thead>
+          <tr className="text-left text-[12px] text-graphite-soft">
+            <th scope="col" className="font-normal" />
+            <th scope="col" className="pr-2 text-right font-normal">
+              value
+            </th>
+            <th scope="col" className="text-right font-normal">
+              direction (x, y, z)
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {rows.map((r) => (
+            <tr key={r.label} className="border-t border-rule/60" data-testid={r.label}>
+              <th scope="row" className="py-0.5 text-left font-normal">
+                {r.sym}
+              </th>
+              <td className="pr-2 text-right">
+                <Quantity
+                  value={fixed(r.value, d)}
+                  unit={unit}
+                  tone={stressTone(r.value, Math.max(Math.abs(s1), Math.abs(s3)))}
+                />
+              </td>
+              <td className="num text-right text-[12px] text-graphite-soft">
+                {r.dir.map((v) => fixed(v, 3)).join("  ")}
+              </td>
+            </tr>
+          ))}
+          <tr className="border-t border-rule">
+            <th scope="row" className="py-0.5 text-left font-normal">
+              <Sym base="τ" sub="max" />
+            </th>
+            <td className="pr-2 text-right" data-testid="tau-max">
+              <Quantity value={fixed(tauMax, d)} unit={unit} />
+            </td>
+            <td className="text-right text-[12px] text-graphite-soft">(σ₁ − σ₃)/2</td>
+          </tr>
+          <tr className="border-t border-rule/60">
+            <th scope="row" className="py-0.5 text-left font-normal">
+              <Sym base="σ" sub="vM" />
+            </th>
+            <td className="pr-2 text-right" data-testid="von-mises">
+              <Quantity value={fixed(vonMises, d)} unit={unit} />
+            </td>
+            <td className="text-right text-[12px] text-graphite-soft">von Mises, √(3 J₂)</td>
+          </tr>
+        </tbody>
+      </table>
+    </Panel>
+  );
+}

@@ -8,6 +8,7 @@ import { invitationRoutes } from "../routes/invitations";
 import { mailboxRoutes } from "../routes/mailbox";
 import { memberRoutes } from "../routes/members";
 import { openApiRoutes } from "../routes/openapi";
+import { projectAreaRoutes } from "../routes/projects/area";
 import { shareLinkRoutes } from "../routes/share-links";
 import { workspaceRoutes } from "../routes/workspaces";
 import { defineRoute, type AnyRoute } from "./registry";
@@ -39,6 +40,7 @@ export function buildRouteTable(context: AppContext): AnyRoute[] {
     ...memberRoutes(context),
     ...invitationRoutes(context),
     ...shareLinkRoutes(context),
+    ...projectAreaRoutes(context),
     ...(devMailboxEnabled(context.env) ? mailboxRoutes() : []),
   ];
   routes.push(...openApiRoutes(context, () => routes));

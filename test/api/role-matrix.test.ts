@@ -15,6 +15,7 @@ import {
   type RoleFixture,
   type RoleFixtureFactory,
 } from "../support/role-fixture";
+import { projectAreaRows } from "../support/project-area-matrix";
 
 /**
  * The role matrix: every API route × every kind of caller → the expected status.
@@ -194,6 +195,8 @@ const table: Record<string, Row> = {
     ok: 200,
     request: async () => ({ path: `/api/dev/mailbox/${await someMailId()}` }),
   },
+
+  ...projectAreaRows,
 };
 
 /** What `who` means for one caller. */
@@ -238,7 +241,7 @@ describe("the role matrix covers every route", () => {
 });
 
 describe.each(Object.entries(table))("%s", (key, row) => {
-  const method = key.split(" ")[0].toLowerCase() as "get" | "post" | "patch" | "delete";
+  const method = key.split(" ")[0].toLowerCase() as "get" | "post" | "patch" | "put" | "delete";
   it.each(ACTORS.map((actor) => [actor, expectedStatus(row, actor)] as const))(
     "when %s calls it, then the status is %i",
     async (actor, expected) => {

@@ -1,0 +1,238 @@
+import type { Transaction } from "sequelize";
+import type { CreateLoadCaseBody, PutStateBody, UpdateLoadCaseBody } from "../../../core/contract/load-cases";
+import { LoadCase } from "../../../db/models/load-case";
+import { Location } from "../../../db/models/location";
+import { StressState } from "../../../db/models/stress-state";
+import { currentMembership, currentUser } from "../../auth/guards";
+import type { AppContext } from "../../context";
+import { errors } from "../../errors";
+import type { RouteHandler } from "../../openapi/registry";
+import { changedFields, recordAudit } from "../audit/record";
+import { peopleById } from "../projects/people";
+import { findProject } from "../projects/scope";
+import { assertVersion } from "../projects/versioning";
+import { loadCaseAuditFields, presentLoadCases } from "./presenter";
+import { assertProjectLocations, presentState, removeState, saveStateRevision } from "./states";
+
+type NoInput = Record<string, never>;
+type ProjectParams = { workspaceId: string; projectId: string };
+type CaseParams = ProjectParams & { loadCaseId: string };
+type StateParams = CaseParams & { locationId: string };
+
+/** The live load case, or 404; with a transaction it is locked FOR UPDATE (versions are compared under the lock). */
+async function findLoadCase(projectId: string, loadCaseId: string, transaction?: Transaction) {
+  const c = await LoadCase.findOne({
+    where: { id: loadCaseId, projectId, deletedAt: null },
+    transaction,
+    lock: transaction ? transaction.LOCK.UPDATE : undefined,
+  });
+  if (!c) throw errors.notFound("This load case");
+  return c;
+}
+
+async function locationNames(ids: string[], transaction?: Transaction) {
+  if (ids.length === 0) return new Map<string, string>();
+  const rows = await Location.findAll({ attributes: ["id", "name"], where: { id: ids }, transaction });
+  return new Map(rows.map((l) => [l.id, l.name]));
+}
+
+async function presentOne(c: LoadCase, transaction?: Transaction) {
+  return (await presentLoadCases([c], transaction))[0];
+}
+
+export const listLoadCasesHandler: RouteHandler<ProjectParams, NoInput, NoInput> = async (_req, res) => {
+  const { workspace } = currentMembership(res);
+  const project = await findProject(workspace.id, res.locals.input.params.projectId);
+  const cases = await LoadCase.findAll({
+    where: { projectId: project.id, deletedAt: null },
+    order: [
+      ["position", "ASC"],
+      ["createdAt", "ASC"],
+    ],
+  });
+  res.set("Cache-Control", "no-store").json({ loadCases: await presentLoadCases(cases) });
+};
+
+export const getLoadCaseHandler: RouteHandler<CaseParams, NoInput, NoInput> = async (_req, res) => {
+  const { workspace } = currentMembership(res);
+  const project = await findProject(workspace.id, res.locals.input.params.projectId);
+  const c = await findLoadCase(project.id, res.locals.input.params.loadCaseId);
+  res.set("Cache-Control", "no-store").json({ loadCase: await presentOne(c) });
+};
+
+export function createLoadCaseHandler(
+  context: AppContext,
+): RouteHandler<ProjectParams, NoInput, CreateLoadCaseBody> {
+  return async (_req, res) => {
+    const user = currentUser(res);
+    const { workspace } = currentMembership(res);
+    const body = res.locals.input.body;
+    const created = await context.sequelize.transaction(async (transaction) => {
+      const project = await findProject(workspace.id, res.locals.input.params.projectId, {
+        transaction,
+        lock: true,
+      });
+      const locationIds = body.states.map((s) => s.locationId);
+      await assertProjectLocations(
+        project.id,
+        locationIds,
+        body.states.map((_, i) => `states.${i}.locationId`),
+        transaction,
+      );
+      const last = (await LoadCase.max("position", { where: { projectId: project.id }, transaction })) as
+        number | null;
+      const c = await LoadCase.create(
+        {
+          projectId: project.id,
+          name: body.name,
+          category: body.category,
+          description: body.description,
+          position: (last ?? -1) + 1,
+          createdBy: user.id,
+          updatedBy: user.id,
+        },
+        { transaction },
+      );
+      await recordAudit(transaction, user, {
+        workspaceId: workspace.id,
+        projectId: project.id,
+        entityType: "load-case",
+        entityId: c.id,
+        action: "create",
+        summary: `created the load case "${c.name}" in "${project.name}"`,
+        changes: { after: loadCaseAuditFields(c) },
+      });
+      const names = await locationNames(locationIds, transaction);
+      for (const state of body.states) {
+        await saveStateRevision(transaction, user, c.id, state, {
+          workspaceId: workspace.id,
+          projectId: project.id,
+          caseName: c.name,
+          locationName: names.get(state.locationId),
+        });
+      }
+      return presentOne(c, transaction);
+    });
+    res.status(201).json({ loadCase: created });
+  };
+}
+
+export function updateLoadCaseHandler(
+  context: AppContext,
+): RouteHandler<CaseParams, NoInput, UpdateLoadCaseBody> {
+  return async (_req, res) => {
+    const user = currentUser(res);
+    const { workspace } = currentMembership(res);
+    const { version, states = [], removeStates = [], ...fields } = res.locals.input.body;
+    const updated = await context.sequelize.transaction(async (transaction) => {
+      const project = await findProject(workspace.id, res.locals.input.params.projectId, { transaction });
+      const c = await findLoadCase(project.id, res.locals.input.params.loadCaseId, transaction);
+      const current = await presentOne(c, transaction);
+      assertVersion(c, version, `The load case "${c.name}"`, () => current);
+      const ids = [...states.map((s) => s.locationId), ...removeStates];
+      await assertProjectLocations(
+        project.id,
+        ids,
+        [
+          ...states.map((_, i) => `states.${i}.locationId`),
+          ...removeStates.map((_, i) => `removeStates.${i}`),
+        ],
+        transaction,
+      );
+      const before = loadCaseAuditFields(c);
+      await c.update({ ...fields, version: c.version + 1, updatedBy: user.id }, { transaction });
+      const changes = changedFields(before, loadCaseAuditFields(c));
+      if (Object.keys(changes).length > 0) {
+        await recordAudit(transaction, user, {
+          workspaceId: workspace.id,
+          projectId: project.id,
+          entityType: "load-case",
+          entityId: c.id,
+          action: "update",
+          summary: `changed the load case "${c.name}" in "${project.name}"`,
+          changes,
+        });
+      }
+      const names = await locationNames(ids, transaction);
+      const scope = (locationId: string) => ({
+        workspaceId: workspace.id,
+        projectId: project.id,
+        caseName: c.name,
+        locationName: names.get(locationId),
+      });
+      for (const state of states)
+        await saveStateRevision(transaction, user, c.id, state, scope(state.locationId));
+      for (const locationId of removeStates)
+        await removeState(transaction, user, c.id, locationId, scope(locationId));
+      return presentOne(c, transaction);
+    });
+    res.json({ loadCase: updated });
+  };
+}
+
+/** Saves one location's state (the bench's "save back"): a new revision, the case's version raised. */
+export function putStateHandler(context: AppContext): RouteHandler<StateParams, NoInput, PutStateBody> {
+  return async (_req, res) => {
+    const user = currentUser(res);
+    const { workspace } = currentMembership(res);
+    const { version, ...state } = res.locals.input.body;
+    const { projectId, loadCaseId, locationId } = res.locals.input.params;
+    const updated = await context.sequelize.transaction(async (transaction) => {
+      const project = await findProject(workspace.id, projectId, { transaction });
+      const c = await findLoadCase(project.id, loadCaseId, transaction);
+      const current = await presentOne(c, transaction);
+      assertVersion(c, version, `The load case "${c.name}"`, () => current);
+      await assertProjectLocations(project.id, [locationId], ["params.locationId"], transaction);
+      const names = await locationNames([locationId], transaction);
+      await c.update({ version: c.version + 1, updatedBy: user.id }, { transaction });
+      await saveStateRevision(
+        transaction,
+        user,
+        c.id,
+        { locationId, ...state },
+        {
+          workspaceId: workspace.id,
+          projectId: project.id,
+          caseName: c.name,
+          locationName: names.get(locationId),
+        },
+      );
+      return presentOne(c, transaction);
+    });
+    res.json({ loadCase: updated });
+  };
+}
+
+export const stateHistoryHandler: RouteHandler<StateParams, NoInput, NoInput> = async (_req, res) => {
+  const { workspace } = currentMembership(res);
+  const { projectId, loadCaseId, locationId } = res.locals.input.params;
+  const project = await findProject(workspace.id, projectId);
+  const c = await findLoadCase(project.id, loadCaseId);
+  const rows = await StressState.findAll({
+    where: { loadCaseId: c.id, locationId },
+    order: [["revision", "DESC"]],
+  });
+  const people = await peopleById(rows.map((r) => r.createdBy));
+  res.set("Cache-Control", "no-store").json({ revisions: rows.map((r) => presentState(r, people)) });
+};
+
+export function deleteLoadCaseHandler(context: AppContext): RouteHandler<CaseParams, NoInput, NoInput> {
+  return async (_req, res) => {
+    const user = currentUser(res);
+    const { workspace } = currentMembership(res);
+    await context.sequelize.transaction(async (transaction) => {
+      const project = await findProject(workspace.id, res.locals.input.params.projectId, { transaction });
+      const c = await findLoadCase(project.id, res.locals.input.params.loadCaseId, transaction);
+      await c.update({ deletedAt: new Date(), deletedBy: user.id }, { transaction });
+      await recordAudit(transaction, user, {
+        workspaceId: workspace.id,
+        projectId: project.id,
+        entityType: "load-case",
+        entityId: c.id,
+        action: "delete",
+        summary: `moved the load case "${c.name}" of "${project.name}" to the trash`,
+      });
+    });
+    res.status(204).end();
+  };
+}

@@ -1,0 +1,149 @@
+import type { Transaction } from "sequelize";
+import type { CreateLocationBody, UpdateLocationBody } from "../../../core/contract/projects";
+import { Location } from "../../../db/models/location";
+import { currentMembership, currentUser } from "../../auth/guards";
+import type { AppContext } from "../../context";
+import { errors } from "../../errors";
+import type { RouteHandler } from "../../openapi/registry";
+import { changedFields, recordAudit } from "../audit/record";
+import { assertMaterialRef, columnsFromRef } from "../materials/resolve";
+import { findProject } from "../projects/scope";
+import { assertVersion } from "../projects/versioning";
+import { locationAuditFields, presentLocation } from "./presenter";
+
+type NoInput = Record<string, never>;
+type ProjectParams = { workspaceId: string; projectId: string };
+type LocationParams = ProjectParams & { locationId: string };
+
+async function findLocation(projectId: string, locationId: string, transaction?: Transaction) {
+  const l = await Location.findOne({
+    where: { id: locationId, projectId, deletedAt: null },
+    transaction,
+    lock: transaction ? transaction.LOCK.UPDATE : undefined,
+  });
+  if (!l) throw errors.notFound("This location");
+  return l;
+}
+
+export const listLocationsHandler: RouteHandler<ProjectParams, NoInput, NoInput> = async (_req, res) => {
+  const { workspace } = currentMembership(res);
+  const project = await findProject(workspace.id, res.locals.input.params.projectId);
+  const rows = await Location.findAll({
+    where: { projectId: project.id, deletedAt: null },
+    order: [
+      ["position", "ASC"],
+      ["createdAt", "ASC"],
+    ],
+  });
+  res.set("Cache-Control", "no-store").json({ locations: rows.map(presentLocation) });
+};
+
+export const getLocationHandler: RouteHandler<LocationParams, NoInput, NoInput> = async (_req, res) => {
+  const { workspace } = currentMembership(res);
+  const { projectId, locationId } = res.locals.input.params;
+  const project = await findProject(workspace.id, projectId);
+  res
+    .set("Cache-Control", "no-store")
+    .json({ location: presentLocation(await findLocation(project.id, locationId)) });
+};
+
+export function createLocationHandler(
+  context: AppContext,
+): RouteHandler<ProjectParams, NoInput, CreateLocationBody> {
+  return async (_req, res) => {
+    const user = currentUser(res);
+    const { workspace } = currentMembership(res);
+    const body = res.locals.input.body;
+    const location = await context.sequelize.transaction(async (transaction) => {
+      const project = await findProject(workspace.id, res.locals.input.params.projectId, {
+        transaction,
+        lock: true,
+      });
+      await assertMaterialRef(workspace.id, body.material, "material", transaction);
+      const last = (await Location.max("position", { where: { projectId: project.id }, transaction })) as
+        number | null;
+      const columns = columnsFromRef(body.material);
+      const created = await Location.create(
+        {
+          projectId: project.id,
+          name: body.name,
+          note: body.note,
+          materialId: columns.materialId,
+          publishedMaterial: columns.publishedMaterial,
+          position: (last ?? -1) + 1,
+          createdBy: user.id,
+          updatedBy: user.id,
+        },
+        { transaction },
+      );
+      await recordAudit(transaction, user, {
+        workspaceId: workspace.id,
+        projectId: project.id,
+        entityType: "location",
+        entityId: created.id,
+        action: "create",
+        summary: `added the location "${created.name}" to "${project.name}"`,
+        changes: { after: locationAuditFields(created) },
+      });
+      return created;
+    });
+    res.status(201).json({ location: presentLocation(location) });
+  };
+}
+
+export function updateLocationHandler(
+  context: AppContext,
+): RouteHandler<LocationParams, NoInput, UpdateLocationBody> {
+  return async (_req, res) => {
+    const user = currentUser(res);
+    const { workspace } = currentMembership(res);
+    const { version, material, ...body } = res.locals.input.body;
+    const location = await context.sequelize.transaction(async (transaction) => {
+      const project = await findProject(workspace.id, res.locals.input.params.projectId, { transaction });
+      const l = await findLocation(project.id, res.locals.input.params.locationId, transaction);
+      assertVersion(l, version, `The location "${l.name}"`, () => presentLocation(l));
+      await assertMaterialRef(workspace.id, material, "material", transaction);
+      const before = locationAuditFields(l);
+      const columns =
+        material === undefined
+          ? {}
+          : {
+              materialId: columnsFromRef(material).materialId,
+              publishedMaterial: columnsFromRef(material).publishedMaterial,
+            };
+      await l.update({ ...body, ...columns, version: l.version + 1, updatedBy: user.id }, { transaction });
+      await recordAudit(transaction, user, {
+        workspaceId: workspace.id,
+        projectId: project.id,
+        entityType: "location",
+        entityId: l.id,
+        action: "update",
+        summary: `changed the location "${l.name}" in "${project.name}"`,
+        changes: changedFields(before, locationAuditFields(l)),
+      });
+      return l;
+    });
+    res.json({ location: presentLocation(location) });
+  };
+}
+
+export function deleteLocationHandler(context: AppContext): RouteHandler<LocationParams, NoInput, NoInput> {
+  return async (_req, res) => {
+    const user = currentUser(res);
+    const { workspace } = currentMembership(res);
+    await context.sequelize.transaction(async (transaction) => {
+      const project = await findProject(workspace.id, res.locals.input.params.projectId, { transaction });
+      const l = await findLocation(project.id, res.locals.input.params.locationId, transaction);
+      await l.update({ deletedAt: new Date(), deletedBy: user.id }, { transaction });
+      await recordAudit(transaction, user, {
+        workspaceId: workspace.id,
+        projectId: project.id,
+        entityType: "location",
+        entityId: l.id,
+        action: "delete",
+        summary: `moved the location "${l.name}" of "${project.name}" to the trash`,
+      });
+    });
+    res.status(204).end();
+  };
+}

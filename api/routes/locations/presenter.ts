@@ -1,0 +1,23 @@
+import type { Location as LocationView } from "../../../core/contract/projects";
+import type { Location } from "../../../db/models/location";
+import { refFromColumns } from "../materials/resolve";
+
+/** A location as the API sends it. */
+export function presentLocation(l: Location): LocationView {
+  return {
+    id: l.id,
+    projectId: l.projectId,
+    name: l.name,
+    note: l.note,
+    material: refFromColumns(l.materialId, l.publishedMaterial),
+    position: l.position,
+    version: l.version,
+    createdAt: l.createdAt.toISOString(),
+    updatedAt: l.updatedAt.toISOString(),
+  };
+}
+
+/** The fields the audit trail compares for a location. */
+export function locationAuditFields(l: Location) {
+  return { name: l.name, note: l.note, material: refFromColumns(l.materialId, l.publishedMaterial) };
+}

@@ -1,0 +1,8 @@
+export {
+  createLocationBodySchema,
+  locationListSchema,
+  locationParamsSchema,
+  locationResponseSchema,
+  projectParamsSchema,
+  updateLocationBodySchema,
+} from "../../../core/contract/projects";

@@ -1,0 +1,19 @@
+import type { AppContext } from "../../context";
+import type { AnyRoute } from "../../openapi/registry";
+import { loadCaseRoutes } from "../load-cases";
+import { locationRoutes } from "../locations";
+import { materialRoutes } from "../materials";
+import { projectRoutes } from "./index";
+
+/**
+ * Every route of the project area (projects, locations, load cases, combinations, materials,
+ * comparison, audit, trash, import/export), added to the route table in one line.
+ */
+export function projectAreaRoutes(context: AppContext): AnyRoute[] {
+  return [
+    ...materialRoutes(context),
+    ...projectRoutes(context),
+    ...locationRoutes(context),
+    ...loadCaseRoutes(context),
+  ];
+}

@@ -1,0 +1,40 @@
+import type { Project as ProjectView, Requirement } from "../../../core/contract/projects";
+import type { Project } from "../../../db/models/project";
+import { refFromColumns } from "../materials/resolve";
+import { personOf, type PersonRef } from "./people";
+
+export type ProjectCounts = { locations: number; loadCases: number; combinations: number };
+
+/** A project as the API sends it. */
+export function presentProject(
+  p: Project,
+  counts: ProjectCounts,
+  people: Map<string, PersonRef>,
+): ProjectView {
+  return {
+    id: p.id,
+    workspaceId: p.workspaceId,
+    name: p.name,
+    description: p.description,
+    unitSystem: p.unitSystem,
+    requirements: p.requirements as Requirement[],
+    defaultMaterial: refFromColumns(p.defaultMaterialId, p.defaultPublishedMaterial),
+    version: p.version,
+    counts,
+    createdAt: p.createdAt.toISOString(),
+    updatedAt: p.updatedAt.toISOString(),
+    createdBy: personOf(people, p.createdBy),
+    updatedBy: personOf(people, p.updatedBy),
+  };
+}
+
+/** The fields the audit trail compares for a project. */
+export function projectAuditFields(p: Project) {
+  return {
+    name: p.name,
+    description: p.description,
+    unitSystem: p.unitSystem,
+    requirements: p.requirements,
+    defaultMaterial: refFromColumns(p.defaultMaterialId, p.defaultPublishedMaterial),
+  };
+}

@@ -1,0 +1,8 @@
+export {
+  createProjectBodySchema,
+  projectListSchema,
+  projectParamsSchema,
+  projectResponseSchema,
+  updateProjectBodySchema,
+} from "../../../core/contract/projects";
+export { workspaceIdParamsSchema } from "../../../core/contract/workspaces";

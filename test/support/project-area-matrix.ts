@@ -1,0 +1,219 @@
+import type { Role } from "../../core/contract/workspaces";
+import { LoadCase } from "../../db/models/load-case";
+import { Location } from "../../db/models/location";
+import { Material } from "../../db/models/material";
+import { Project } from "../../db/models/project";
+import { StressState } from "../../db/models/stress-state";
+import type { Actor, RoleFixture } from "./role-fixture";
+
+/**
+ * The role-matrix rows of the project area (projects, locations, load cases, materials, …),
+ * spread into the table of test/api/role-matrix.test.ts. Each row's request builds what it
+ * acts on in the fixture's fresh workspace, straight in the database.
+ */
+type Row = {
+  who: "public" | "signed-in" | Role;
+  ok: number;
+  except?: Partial<Record<Actor, number>>;
+  request: (f: RoleFixture) => Promise<{ path: string; body?: Record<string, unknown> }>;
+};
+
+type World = {
+  projectId: string;
+  locationId: string;
+  loadCaseId: string;
+  materialId: string;
+};
+
+const worlds = new WeakMap<RoleFixture, Promise<World>>();
+
+/** A project with one location, one load case with a state there, and a library material. */
+export function projectWorld(f: RoleFixture): Promise<World> {
+  if (!worlds.has(f)) {
+    worlds.set(
+      f,
+      (async () => {
+        const material = await Material.create({
+          workspaceId: f.workspaceId,
+          name: "Matrix steel",
+          unit: "MPa",
+          yieldPa: 300e6,
+        });
+        const project = await Project.create({
+          workspaceId: f.workspaceId,
+          name: "Matrix project",
+          requirements: [{ criterion: "von-mises", requiredFactor: 1.5 }],
+          defaultMaterialId: material.id,
+        });
+        const location = await Location.create({ projectId: project.id, name: "weld toe" });
+        const loadCase = await LoadCase.create({ projectId: project.id, name: "Lift" });
+        await StressState.create({
+          loadCaseId: loadCase.id,
+          locationId: location.id,
+          revision: 1,
+          xxPa: 100e6,
+          yyPa: 0,
+          zzPa: 0,
+          xyPa: 0,
+          yzPa: 0,
+          zxPa: 0,
+          unit: "MPa",
+          source: "typed",
+        });
+        return {
+          projectId: project.id,
+          locationId: location.id,
+          loadCaseId: loadCase.id,
+          materialId: material.id,
+        };
+      })(),
+    );
+  }
+  return worlds.get(f)!;
+}
+
+const ws = (f: RoleFixture, rest = "") => `/api/workspaces/${f.workspaceId}${rest}`;
+const inProject = async (f: RoleFixture, rest = "") =>
+  ws(f, `/projects/${(await projectWorld(f)).projectId}${rest}`);
+const mpaState = { unit: "MPa", components: { xx: 50, yy: 10, zz: 0, xy: 5, yz: 0, zx: 0 } };
+
+export const projectAreaRows: Record<string, Row> = {
+  "GET /api/workspaces/{workspaceId}/materials": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: ws(f, "/materials") }),
+  },
+  "POST /api/workspaces/{workspaceId}/materials": {
+    who: "editor",
+    ok: 201,
+    request: async (f) => ({ path: ws(f, "/materials"), body: { name: "New steel", yield: 250 } }),
+  },
+  "GET /api/workspaces/{workspaceId}/materials/{materialId}": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: ws(f, `/materials/${(await projectWorld(f)).materialId}`) }),
+  },
+  "PATCH /api/workspaces/{workspaceId}/materials/{materialId}": {
+    who: "editor",
+    ok: 200,
+    request: async (f) => ({
+      path: ws(f, `/materials/${(await projectWorld(f)).materialId}`),
+      body: { version: 1, yield: 310 },
+    }),
+  },
+  "DELETE /api/workspaces/{workspaceId}/materials/{materialId}": {
+    who: "editor",
+    ok: 204,
+    request: async (f) => ({ path: ws(f, `/materials/${(await projectWorld(f)).materialId}`) }),
+  },
+
+  "GET /api/workspaces/{workspaceId}/projects": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: ws(f, "/projects") }),
+  },
+  "POST /api/workspaces/{workspaceId}/projects": {
+    who: "editor",
+    ok: 201,
+    request: async (f) => ({ path: ws(f, "/projects"), body: { name: "Made in matrix" } }),
+  },
+  "GET /api/workspaces/{workspaceId}/projects/{projectId}": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: await inProject(f) }),
+  },
+  "PATCH /api/workspaces/{workspaceId}/projects/{projectId}": {
+    who: "editor",
+    ok: 200,
+    request: async (f) => ({ path: await inProject(f), body: { version: 1, name: "Renamed" } }),
+  },
+  "DELETE /api/workspaces/{workspaceId}/projects/{projectId}": {
+    who: "editor",
+    ok: 204,
+    request: async (f) => ({ path: await inProject(f) }),
+  },
+
+  "GET /api/workspaces/{workspaceId}/projects/{projectId}/locations": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: await inProject(f, "/locations") }),
+  },
+  "POST /api/workspaces/{workspaceId}/projects/{projectId}/locations": {
+    who: "editor",
+    ok: 201,
+    request: async (f) => ({ path: await inProject(f, "/locations"), body: { name: "lug eye" } }),
+  },
+  "GET /api/workspaces/{workspaceId}/projects/{projectId}/locations/{locationId}": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: await inProject(f, `/locations/${(await projectWorld(f)).locationId}`) }),
+  },
+  "PATCH /api/workspaces/{workspaceId}/projects/{projectId}/locations/{locationId}": {
+    who: "editor",
+    ok: 200,
+    request: async (f) => ({
+      path: await inProject(f, `/locations/${(await projectWorld(f)).locationId}`),
+      body: { version: 1, note: "checked" },
+    }),
+  },
+  "DELETE /api/workspaces/{workspaceId}/projects/{projectId}/locations/{locationId}": {
+    who: "editor",
+    ok: 204,
+    request: async (f) => ({ path: await inProject(f, `/locations/${(await projectWorld(f)).locationId}`) }),
+  },
+
+  "GET /api/workspaces/{workspaceId}/projects/{projectId}/load-cases": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: await inProject(f, "/load-cases") }),
+  },
+  "POST /api/workspaces/{workspaceId}/projects/{projectId}/load-cases": {
+    who: "editor",
+    ok: 201,
+    request: async (f) => ({
+      path: await inProject(f, "/load-cases"),
+      body: {
+        name: "Tilted lift",
+        states: [{ locationId: (await projectWorld(f)).locationId, stress: mpaState }],
+      },
+    }),
+  },
+  "GET /api/workspaces/{workspaceId}/projects/{projectId}/load-cases/{loadCaseId}": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: await inProject(f, `/load-cases/${(await projectWorld(f)).loadCaseId}`) }),
+  },
+  "PATCH /api/workspaces/{workspaceId}/projects/{projectId}/load-cases/{loadCaseId}": {
+    who: "editor",
+    ok: 200,
+    request: async (f) => ({
+      path: await inProject(f, `/load-cases/${(await projectWorld(f)).loadCaseId}`),
+      body: { version: 1, category: "lifting" },
+    }),
+  },
+  "DELETE /api/workspaces/{workspaceId}/projects/{projectId}/load-cases/{loadCaseId}": {
+    who: "editor",
+    ok: 204,
+    request: async (f) => ({ path: await inProject(f, `/load-cases/${(await projectWorld(f)).loadCaseId}`) }),
+  },
+  "PUT /api/workspaces/{workspaceId}/projects/{projectId}/load-cases/{loadCaseId}/states/{locationId}": {
+    who: "editor",
+    ok: 200,
+    request: async (f) => {
+      const w = await projectWorld(f);
+      return {
+        path: await inProject(f, `/load-cases/${w.loadCaseId}/states/${w.locationId}`),
+        body: { version: 1, stress: mpaState },
+      };
+    },
+  },
+  "GET /api/workspaces/{workspaceId}/projects/{projectId}/load-cases/{loadCaseId}/states/{locationId}/revisions":
+    {
+      who: "viewer",
+      ok: 200,
+      request: async (f) => {
+        const w = await projectWorld(f);
+        return { path: await inProject(f, `/load-cases/${w.loadCaseId}/states/${w.locationId}/revisions`) };
+      },
+    },
+};

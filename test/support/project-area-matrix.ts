@@ -1,4 +1,6 @@
 import type { Role } from "../../core/contract/workspaces";
+import { Combination } from "../../db/models/combination";
+import { CombinationTerm } from "../../db/models/combination-term";
 import { LoadCase } from "../../db/models/load-case";
 import { Location } from "../../db/models/location";
 import { Material } from "../../db/models/material";
@@ -23,6 +25,7 @@ type World = {
   locationId: string;
   loadCaseId: string;
   materialId: string;
+  combinationId: string;
 };
 
 const worlds = new WeakMap<RoleFixture, Promise<World>>();
@@ -60,11 +63,19 @@ export function projectWorld(f: RoleFixture): Promise<World> {
           unit: "MPa",
           source: "typed",
         });
+        const combination = await Combination.create({ projectId: project.id, name: "1.5 × lift" });
+        await CombinationTerm.create({
+          combinationId: combination.id,
+          loadCaseId: loadCase.id,
+          factor: 1.5,
+          position: 0,
+        });
         return {
           projectId: project.id,
           locationId: location.id,
           loadCaseId: loadCase.id,
           materialId: material.id,
+          combinationId: combination.id,
         };
       })(),
     );
@@ -216,4 +227,52 @@ export const projectAreaRows: Record<string, Row> = {
         return { path: await inProject(f, `/load-cases/${w.loadCaseId}/states/${w.locationId}/revisions`) };
       },
     },
+
+  "GET /api/workspaces/{workspaceId}/projects/{projectId}/combinations": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: await inProject(f, "/combinations") }),
+  },
+  "POST /api/workspaces/{workspaceId}/projects/{projectId}/combinations": {
+    who: "editor",
+    ok: 201,
+    request: async (f) => ({
+      path: await inProject(f, "/combinations"),
+      body: { name: "2 × lift", terms: [{ loadCaseId: (await projectWorld(f)).loadCaseId, factor: 2 }] },
+    }),
+  },
+  "GET /api/workspaces/{workspaceId}/projects/{projectId}/combinations/{combinationId}": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({
+      path: await inProject(f, `/combinations/${(await projectWorld(f)).combinationId}`),
+    }),
+  },
+  "GET /api/workspaces/{workspaceId}/projects/{projectId}/combinations/{combinationId}/results": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({
+      path: await inProject(f, `/combinations/${(await projectWorld(f)).combinationId}/results`),
+    }),
+  },
+  "PATCH /api/workspaces/{workspaceId}/projects/{projectId}/combinations/{combinationId}": {
+    who: "editor",
+    ok: 200,
+    request: async (f) => ({
+      path: await inProject(f, `/combinations/${(await projectWorld(f)).combinationId}`),
+      body: { version: 1, name: "Renamed" },
+    }),
+  },
+  "DELETE /api/workspaces/{workspaceId}/projects/{projectId}/combinations/{combinationId}": {
+    who: "editor",
+    ok: 204,
+    request: async (f) => ({
+      path: await inProject(f, `/combinations/${(await projectWorld(f)).combinationId}`),
+    }),
+  },
+  "GET /api/workspaces/{workspaceId}/projects/{projectId}/comparison": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: await inProject(f, "/comparison") }),
+  },
 };

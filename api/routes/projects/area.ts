@@ -1,5 +1,7 @@
 import type { AppContext } from "../../context";
 import type { AnyRoute } from "../../openapi/registry";
+import { combinationRoutes } from "../combinations";
+import { comparisonRoutes } from "../comparison";
 import { loadCaseRoutes } from "../load-cases";
 import { locationRoutes } from "../locations";
 import { materialRoutes } from "../materials";
@@ -15,5 +17,7 @@ export function projectAreaRoutes(context: AppContext): AnyRoute[] {
     ...projectRoutes(context),
     ...locationRoutes(context),
     ...loadCaseRoutes(context),
+    ...combinationRoutes(context),
+    ...comparisonRoutes(),
   ];
 }

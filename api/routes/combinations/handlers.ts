@@ -1,0 +1,226 @@
+import type { Transaction } from "sequelize";
+import {
+  SUPERPOSITION_CAUTION,
+  type CreateCombinationBody,
+  type UpdateCombinationBody,
+} from "../../../core/contract/combinations";
+import { Combination } from "../../../db/models/combination";
+import { CombinationTerm } from "../../../db/models/combination-term";
+import { LoadCase } from "../../../db/models/load-case";
+import { Location } from "../../../db/models/location";
+import { currentMembership, currentUser } from "../../auth/guards";
+import type { AppContext } from "../../context";
+import { errors } from "../../errors";
+import type { RouteHandler } from "../../openapi/registry";
+import { changedFields, recordAudit } from "../audit/record";
+import { currentStatesOf } from "../load-cases/states";
+import { peopleById } from "../projects/people";
+import { findProject } from "../projects/scope";
+import { assertVersion } from "../projects/versioning";
+import { combinationFormula, presentCombination } from "./presenter";
+import { stateIndex, superposeAt } from "./superpose";
+import { termsOf } from "./terms";
+
+type NoInput = Record<string, never>;
+type ProjectParams = { workspaceId: string; projectId: string };
+type CombinationParams = ProjectParams & { combinationId: string };
+type TermInput = { loadCaseId: string; factor: number };
+
+async function findCombination(projectId: string, combinationId: string, transaction?: Transaction) {
+  const c = await Combination.findOne({
+    where: { id: combinationId, projectId, deletedAt: null },
+    transaction,
+    lock: transaction ? transaction.LOCK.UPDATE : undefined,
+  });
+  if (!c) throw errors.notFound("This combination");
+  return c;
+}
+
+/** Refuses (400 naming `terms.i.loadCaseId`) cases that are not live cases of the project. */
+async function assertProjectCases(projectId: string, terms: TermInput[], transaction: Transaction) {
+  const found = await LoadCase.findAll({
+    attributes: ["id"],
+    where: { id: terms.map((t) => t.loadCaseId), projectId, deletedAt: null },
+    transaction,
+  });
+  const known = new Set(found.map((c) => c.id));
+  const problems = terms
+    .map((t, i) =>
+      known.has(t.loadCaseId)
+        ? null
+        : { path: `terms.${i}.loadCaseId`, message: "is not a load case of this project" },
+    )
+    .filter((p) => p !== null);
+  if (problems.length) throw errors.invalidInput(problems);
+}
+
+async function writeTerms(combinationId: string, terms: TermInput[], transaction: Transaction) {
+  await CombinationTerm.destroy({ where: { combinationId }, transaction });
+  await CombinationTerm.bulkCreate(
+    terms.map((t, position) => ({ combinationId, loadCaseId: t.loadCaseId, factor: t.factor, position })),
+    { transaction },
+  );
+}
+
+async function present(c: Combination, transaction?: Transaction) {
+  const terms = (await termsOf([c], transaction)).get(c.id)!;
+  return presentCombination(c, terms, await peopleById([c.updatedBy, c.createdBy]));
+}
+
+export const listCombinationsHandler: RouteHandler<ProjectParams, NoInput, NoInput> = async (_req, res) => {
+  const { workspace } = currentMembership(res);
+  const project = await findProject(workspace.id, res.locals.input.params.projectId);
+  const rows = await Combination.findAll({
+    where: { projectId: project.id, deletedAt: null },
+    order: [
+      ["position", "ASC"],
+      ["createdAt", "ASC"],
+    ],
+  });
+  const terms = await termsOf(rows);
+  const people = await peopleById(rows.flatMap((c) => [c.updatedBy, c.createdBy]));
+  res
+    .set("Cache-Control", "no-store")
+    .json({ combinations: rows.map((c) => presentCombination(c, terms.get(c.id)!, people)) });
+};
+
+export const getCombinationHandler: RouteHandler<CombinationParams, NoInput, NoInput> = async (_req, res) => {
+  const { workspace } = currentMembership(res);
+  const project = await findProject(workspace.id, res.locals.input.params.projectId);
+  const c = await findCombination(project.id, res.locals.input.params.combinationId);
+  res.set("Cache-Control", "no-store").json({ combination: await present(c) });
+};
+
+/** The superposed state of the combination at every live location of the project. */
+export const combinationResultsHandler: RouteHandler<CombinationParams, NoInput, NoInput> = async (
+  _req,
+  res,
+) => {
+  const { workspace } = currentMembership(res);
+  const project = await findProject(workspace.id, res.locals.input.params.projectId);
+  const c = await findCombination(project.id, res.locals.input.params.combinationId);
+  const terms = (await termsOf([c])).get(c.id)!;
+  const locations = await Location.findAll({
+    where: { projectId: project.id, deletedAt: null },
+    order: [["position", "ASC"]],
+  });
+  const states = stateIndex(await currentStatesOf(terms.map((t) => t.loadCaseId)));
+  const results = locations.map((l) => {
+    const s = superposeAt(terms, l.id, states);
+    return s.status === "combined"
+      ? { status: "combined" as const, locationId: l.id, locationName: l.name, componentsPa: s.tensorPa }
+      : {
+          status: "incomplete" as const,
+          locationId: l.id,
+          locationName: l.name,
+          missingCases: s.missingCases,
+        };
+  });
+  res.set("Cache-Control", "no-store").json({
+    combination: presentCombination(c, terms, await peopleById([c.updatedBy, c.createdBy])),
+    results,
+    caution: SUPERPOSITION_CAUTION,
+  });
+};
+
+export function createCombinationHandler(
+  context: AppContext,
+): RouteHandler<ProjectParams, NoInput, CreateCombinationBody> {
+  return async (_req, res) => {
+    const user = currentUser(res);
+    const { workspace } = currentMembership(res);
+    const body = res.locals.input.body;
+    const created = await context.sequelize.transaction(async (transaction) => {
+      const project = await findProject(workspace.id, res.locals.input.params.projectId, {
+        transaction,
+        lock: true,
+      });
+      await assertProjectCases(project.id, body.terms, transaction);
+      const last = (await Combination.max("position", { where: { projectId: project.id }, transaction })) as
+        number | null;
+      const c = await Combination.create(
+        {
+          projectId: project.id,
+          name: body.name,
+          description: body.description,
+          position: (last ?? -1) + 1,
+          createdBy: user.id,
+          updatedBy: user.id,
+        },
+        { transaction },
+      );
+      await writeTerms(c.id, body.terms, transaction);
+      const view = await present(c, transaction);
+      await recordAudit(transaction, user, {
+        workspaceId: workspace.id,
+        projectId: project.id,
+        entityType: "combination",
+        entityId: c.id,
+        action: "create",
+        summary: `created the combination "${c.name}" = ${combinationFormula(view.terms)}`,
+        changes: { after: { name: c.name, description: c.description, terms: body.terms } },
+      });
+      return view;
+    });
+    res.status(201).json({ combination: created });
+  };
+}
+
+export function updateCombinationHandler(
+  context: AppContext,
+): RouteHandler<CombinationParams, NoInput, UpdateCombinationBody> {
+  return async (_req, res) => {
+    const user = currentUser(res);
+    const { workspace } = currentMembership(res);
+    const { version, terms, ...fields } = res.locals.input.body;
+    const updated = await context.sequelize.transaction(async (transaction) => {
+      const project = await findProject(workspace.id, res.locals.input.params.projectId, { transaction });
+      const c = await findCombination(project.id, res.locals.input.params.combinationId, transaction);
+      const current = await present(c, transaction);
+      assertVersion(c, version, `The combination "${c.name}"`, () => current);
+      if (terms) await assertProjectCases(project.id, terms, transaction);
+      const before = {
+        name: c.name,
+        description: c.description,
+        terms: current.terms.map(({ loadCaseId, factor }) => ({ loadCaseId, factor })),
+      };
+      await c.update({ ...fields, version: c.version + 1, updatedBy: user.id }, { transaction });
+      if (terms) await writeTerms(c.id, terms, transaction);
+      const view = await present(c, transaction);
+      await recordAudit(transaction, user, {
+        workspaceId: workspace.id,
+        projectId: project.id,
+        entityType: "combination",
+        entityId: c.id,
+        action: "update",
+        summary: `changed the combination "${c.name}" (now ${combinationFormula(view.terms)})`,
+        changes: changedFields(before, { name: c.name, description: c.description, terms }),
+      });
+      return view;
+    });
+    res.json({ combination: updated });
+  };
+}
+
+export function deleteCombinationHandler(
+  context: AppContext,
+): RouteHandler<CombinationParams, NoInput, NoInput> {
+  return async (_req, res) => {
+    const user = currentUser(res);
+    const { workspace } = currentMembership(res);
+    await context.sequelize.transaction(async (transaction) => {
+      const project = await findProject(workspace.id, res.locals.input.params.projectId, { transaction });
+      const c = await findCombination(project.id, res.locals.input.params.combinationId, transaction);
+      await c.update({ deletedAt: new Date(), deletedBy: user.id }, { transaction });
+      await recordAudit(transaction, user, {
+        workspaceId: workspace.id,
+        projectId: project.id,
+        entityType: "combination",
+        entityId: c.id,
+        action: "delete",
+        summary: `moved the combination "${c.name}" of "${project.name}" to the trash`,
+      });
+    });
+    res.status(204).end();
+  };
+}

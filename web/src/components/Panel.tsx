@@ -28,7 +28,7 @@ export function Panel({
       aria-labelledby={`${id}-title`}
       className={`flex min-w-0 flex-col rounded-sm border border-rule bg-panel ${className}`}
     >
-      <header className="flex min-h-[2.1rem] items-center gap-2 border-b border-rule px-3 py-1">
+      <header className="flex min-h-[2rem] items-center gap-2 border-b border-rule px-3 py-1">
         {index && <span className="num text-xs text-graphite-faint">{index}</span>}
         <h2 id={`${id}-title`} className="whitespace-nowrap text-[15px] font-semibold text-graphite">
           {title}

@@ -13,14 +13,25 @@ export function Quantity({
   value: string;
   unit?: ReactNode;
   className?: string;
-  /** colour the number by sign meaning: tension warm, compression cool */
+  /** mark the number by sign meaning with a coloured bar: tension warm, compression cool */
   tone?: "tension" | "compression";
 }) {
-  const colour = tone === "tension" ? "text-tension" : tone === "compression" ? "text-compression" : "";
+  // The sign meaning is a coloured bar beside the number (graphics need 3:1 contrast, small text 4.5:1),
+  // so the digits stay graphite and readable; the sign itself says the same in words.
+  const bar =
+    tone === "tension"
+      ? "border-tension"
+      : tone === "compression"
+        ? "border-compression"
+        : "border-transparent";
   return (
     <span className={`whitespace-nowrap ${className}`}>
-      <span className={`num ${colour}`}>{value}</span>
-      {unit !== undefined && <span className="unit ml-1 text-[0.85em]">{unit}</span>}
+      <span className={`num border-r-[3px] pr-1 ${tone ? bar : "border-transparent"}`} data-tone={tone}>
+        {value}
+      </span>
+      {unit !== undefined && (
+        <span className={`unit text-[0.85em] ${unit === "°" ? "" : "ml-1"}`}>{unit}</span>
+      )}
     </span>
   );
 }

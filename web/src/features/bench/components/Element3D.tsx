@@ -173,6 +173,8 @@ function CameraBasis({ basisRef }: { basisRef: RefObject<ViewBasis> }) {
   return null;
 }
 
+const LABEL_STYLE = { pointerEvents: "none" } as const;
+
 function Label({
   position,
   text,
@@ -183,7 +185,7 @@ function Label({
   className: string;
 }) {
   return (
-    <Html position={position} center zIndexRange={[10, 0]} style={{ pointerEvents: "none" }}>
+    <Html position={position} center zIndexRange={[10, 0]} style={LABEL_STYLE}>
       <span className={`font-mono text-[13px] ${className}`}>{text}</span>
     </Html>
   );

@@ -9,6 +9,11 @@ import { RotationControls } from "./RotationControls";
 // three.js and react-three-fiber are large: the element loads as its own chunk.
 const Element3D = lazy(() => import("./Element3D"));
 
+/** A small colour key mark beside its words. */
+function Swatch({ className }: { className: string }) {
+  return <span aria-hidden="true" className={`inline-block h-[3px] w-3 align-middle ${className}`} />;
+}
+
 /** Panel 3: the element the engineer turns, its frame and the components in that frame. */
 export function ElementPanel() {
   const unit = useBenchStore((s) => s.unit);
@@ -40,10 +45,9 @@ export function ElementPanel() {
           </Suspense>
         </div>
         <p className="text-[11px] leading-4 text-graphite-soft">
-          Arrows on the x′ y′ z′ faces: <span className="text-tension">outward = tension</span>,{" "}
-          <span className="text-compression">inward = compression</span>,{" "}
-          <span className="text-ink">along the face = shear</span> (length by magnitude). Keys: arrows 5°,
-          Shift 15°, Alt 1°.
+          Arrows on the x′ y′ z′ faces, length by size: <Swatch className="bg-tension" /> out = tension,{" "}
+          <Swatch className="bg-compression" /> in = compression, <Swatch className="bg-ink" /> along = shear.
+          Focus the element for keys: arrows 5°, Shift 15°, Alt 1°.
         </p>
       </div>
       <div className="min-w-0 space-y-2">

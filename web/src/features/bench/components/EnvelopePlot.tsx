@@ -77,7 +77,7 @@ export function EnvelopePlot() {
     >
       <svg
         viewBox={`0 0 ${W} ${H}`}
-        className="block h-auto w-[56%] min-w-0 shrink-0"
+        className="block h-auto w-[56%] max-w-[300px] min-w-0 shrink-0"
         role="img"
         aria-labelledby="envelope-title"
         data-testid="envelope-svg"

@@ -31,7 +31,7 @@ import type { FacePoint } from "../model/derive";
 import { decimalsFor, fixed } from "../model/format";
 
 const W = 480;
-const H = 256;
+const H = 246;
 const M = { left: 50, right: 14, top: 14, bottom: 36 };
 const PW = W - M.left - M.right;
 const PH = H - M.top - M.bottom;
@@ -363,7 +363,7 @@ export function MohrDiagram(props: MohrDiagramProps) {
           {mode === "plane" && plane && (
             <text
               x={X(plane.circle.center) + 4}
-              y={Y(-plane.circle.radius) - 5}
+              y={Y(-plane.circle.radius) + 16}
               className="fill-graphite font-mono text-[12px]"
             >
               <SvgSym base="τ" sub="max, in-plane" />= {fixed(plane.circle.radius, d)}

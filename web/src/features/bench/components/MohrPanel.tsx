@@ -72,9 +72,9 @@ export function MohrPanel() {
         {planeMode ? (
           <>
             <p className="flex-1" data-testid="shear-convention">
-              Shear convention: τx′y′ &gt; 0 acts in +y′ on the +x′ face and is plotted{" "}
-              <strong className="font-semibold">downward</strong>, so the x′ point goes round the circle the
-              same way the element turns, by twice the angle (2θ).
+              Shear convention: τx′y′ &gt; 0 acts in +y′ on the +x′ face, plotted{" "}
+              <strong className="font-semibold">downward</strong>: the x′ point turns the same way as the
+              element, by 2θ.
               {rot.aboutZ === null &&
                 " The element is now tilted out of x–y: drag or type θ to turn it about z from the original axes."}
             </p>

@@ -1,7 +1,10 @@
 import { NavLink, Outlet, useMatch } from "react-router-dom";
 import { Caution } from "../components/Caution";
 import { LogoMark } from "../components/LogoMark";
+import { UserMenu } from "../features/auth/components/UserMenu";
+import { MailboxLink } from "../features/mailbox/components/MailboxPage";
 import { ServerStatus } from "../features/system-status/components/ServerStatus";
+import { useSession } from "../lib/session";
 
 const navigation = [
   { to: "/", label: "Overview", end: true },
@@ -12,6 +15,8 @@ const navigation = [
 export function Layout() {
   // The bench is a working screen: full width and tighter margins so its panels fit 1280×800.
   const wide = useMatch("/bench") !== null;
+  const signedIn = Boolean(useSession().data?.user);
+  const links = signedIn ? [...navigation, { to: "/workspaces", label: "Workspaces", end: false }] : navigation;
   return (
     <div className="flex min-h-screen flex-col">
       <a
@@ -33,7 +38,7 @@ export function Layout() {
             </span>
           </NavLink>
           <nav aria-label="Main" className="flex gap-1">
-            {navigation.map((item) => (
+            {links.map((item) => (
               <NavLink
                 key={item.to}
                 to={item.to}
@@ -46,6 +51,10 @@ export function Layout() {
               </NavLink>
             ))}
           </nav>
+          <div className="ml-auto flex items-center gap-5">
+            <MailboxLink />
+            <UserMenu />
+          </div>
         </div>
       </header>
       <main

@@ -1,8 +1,21 @@
 import { Suspense, lazy } from "react";
-import { createBrowserRouter } from "react-router-dom";
+import { createBrowserRouter, Navigate } from "react-router-dom";
+import { AccountPage } from "../features/account/components/AccountPage";
+import { ForgotPasswordPage } from "../features/auth/components/ForgotPasswordPage";
+import { ResetPasswordPage } from "../features/auth/components/ResetPasswordPage";
+import { SignInPage } from "../features/auth/components/SignInPage";
+import { SignUpPage } from "../features/auth/components/SignUpPage";
 import { HomePage } from "../features/home/components/HomePage";
+import { MailboxPage } from "../features/mailbox/components/MailboxPage";
+import { InvitationsSection } from "../features/workspaces/components/InvitationsSection";
+import { AcceptInvitationPage, JoinShareLinkPage } from "../features/workspaces/components/JoinPages";
+import { MembersSection } from "../features/workspaces/components/MembersSection";
+import { ShareLinksSection } from "../features/workspaces/components/ShareLinksSection";
+import { WorkspacePage } from "../features/workspaces/components/WorkspacePage";
+import { NewWorkspacePage, WorkspacesPage } from "../features/workspaces/components/WorkspacesPage";
 import { Layout } from "./layout";
 import { NotFoundPage } from "./not-found";
+import { RequireSession } from "./require-session";
 
 // The bench (d3, and three.js inside it) loads as its own chunks, so other pages stay light.
 const BenchPage = lazy(() =>
@@ -21,6 +34,33 @@ export const router = createBrowserRouter([
             <BenchPage />
           </Suspense>
         ),
+      },
+      // Accounts (open to everyone; invitation and share-link pages handle signed-out visitors themselves).
+      { path: "sign-in", element: <SignInPage /> },
+      { path: "sign-up", element: <SignUpPage /> },
+      { path: "forgot-password", element: <ForgotPasswordPage /> },
+      { path: "reset-password/:token", element: <ResetPasswordPage /> },
+      { path: "invitations/:token", element: <AcceptInvitationPage /> },
+      { path: "join/:token", element: <JoinShareLinkPage /> },
+      { path: "dev/mailbox/:messageId?", element: <MailboxPage /> },
+      {
+        // Signed-in only: a signed-out visitor is sent to sign-in and brought back to the same address.
+        element: <RequireSession />,
+        children: [
+          { path: "account", element: <AccountPage /> },
+          { path: "workspaces", element: <WorkspacesPage /> },
+          { path: "workspaces/new", element: <NewWorkspacePage /> },
+          {
+            path: "workspaces/:workspaceId",
+            element: <WorkspacePage />,
+            children: [
+              { index: true, element: <Navigate to="members" replace /> },
+              { path: "members", element: <MembersSection /> },
+              { path: "invitations", element: <InvitationsSection /> },
+              { path: "share-links", element: <ShareLinksSection /> },
+            ],
+          },
+        ],
       },
       { path: "*", element: <NotFoundPage /> },
     ],

@@ -1,0 +1,13 @@
+import { useMutation, useQueryClient } from "@tanstack/react-query";
+import { apiSend } from "../../../lib/api-client";
+
+export const revokeInvitation = (v: { workspaceId: string; invitationId: string }) =>
+  apiSend("DELETE", `/workspaces/${v.workspaceId}/invitations/${v.invitationId}`, undefined, null);
+
+export function useRevokeInvitation(workspaceId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: revokeInvitation,
+    onSettled: () => queryClient.invalidateQueries({ queryKey: ["workspaces", workspaceId, "invitations"] }),
+  });
+}

@@ -16,7 +16,12 @@ export const PROJECT_EXPORT_FORMAT = "sigmacube.project";
 export const PROJECT_EXPORT_SCHEMA_VERSION = 1;
 
 const key = z.string({ error: "must be a key (text)" }).min(1, "must not be empty").max(100);
-const text = (max: number) => z.string().max(max, `At most ${max} characters.`);
+// PostgreSQL text cannot hold U+0000; refuse it here with the field named rather than fail on insert.
+const text = (max: number) =>
+  z
+    .string({ error: "must be text" })
+    .max(max, `At most ${max} characters.`)
+    .refine((v) => !v.includes("\u0000"), { message: "must not contain the NUL character" });
 const positiveOrNull = finiteNumber()
   .refine((v) => v > 0, { message: "must be positive" })
   .nullable();

@@ -165,3 +165,65 @@ export const locationParamsSchema = projectParamsSchema.extend({
 /** The body of a 409: the version the server holds now, so the client can reload or keep its copy. */
 export const conflictDetailsSchema = z.object({ currentVersion: z.int(), current: z.unknown() });
 export type ConflictDetails = z.infer<typeof conflictDetailsSchema>;
+
+/** What the audit trail records. */
+export const AUDIT_ENTITY_TYPES = [
+  "project",
+  "location",
+  "load-case",
+  "stress-state",
+  "combination",
+  "material",
+] as const;
+
+export const auditQuerySchema = z.object({
+  projectId: z.uuid({ error: "must be a project id (UUID)" }).optional(),
+  entityId: z.uuid({ error: "must be an id (UUID)" }).optional(),
+  /** Events older than this id (paging backwards). */
+  before: z.coerce.number({ error: "must be an event id" }).int().positive().optional(),
+  limit: z.coerce.number({ error: "must be a whole number" }).int().min(1).max(500).default(100),
+});
+export type AuditQuery = z.infer<typeof auditQuerySchema>;
+
+export const auditEventSchema = z.object({
+  id: z.string(),
+  at: z.iso.datetime(),
+  actor: z.object({ id: z.uuid().nullable(), name: z.string() }),
+  projectId: z.uuid().nullable(),
+  entityType: z.enum(AUDIT_ENTITY_TYPES),
+  entityId: z.uuid(),
+  action: z.enum(["create", "update", "delete", "restore", "import", "purge"]),
+  summary: z.string(),
+  changes: z.record(z.string(), z.unknown()).nullable(),
+});
+export type AuditEventView = z.infer<typeof auditEventSchema>;
+export const auditListSchema = z.object({
+  events: z.array(auditEventSchema),
+  nextBefore: z.string().nullable(),
+});
+
+/** How long a deleted record can be restored. */
+export const TRASH_RETENTION_DAYS = 30;
+export const TRASH_KINDS = ["project", "location", "load-case", "combination", "material"] as const;
+export const trashKindSchema = z.enum(TRASH_KINDS, { error: `must be one of ${TRASH_KINDS.join(", ")}` });
+export type TrashKind = z.infer<typeof trashKindSchema>;
+
+export const trashItemSchema = z.object({
+  kind: trashKindSchema,
+  id: z.uuid(),
+  name: z.string(),
+  /** The project it belongs to (null for projects and materials). */
+  project: z.object({ id: z.uuid(), name: z.string(), inTrash: z.boolean() }).nullable(),
+  deletedAt: z.iso.datetime(),
+  deletedBy: personRefSchema,
+  /** When it is deleted for good. */
+  purgeAt: z.iso.datetime(),
+});
+export type TrashItem = z.infer<typeof trashItemSchema>;
+export const trashListSchema = z.object({ items: z.array(trashItemSchema), retentionDays: z.int() });
+
+export const trashItemParamsSchema = z.object({
+  workspaceId: z.uuid({ error: "must be a workspace id (UUID)" }),
+  kind: trashKindSchema,
+  itemId: z.uuid({ error: "must be an id (UUID)" }),
+});

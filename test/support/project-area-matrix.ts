@@ -275,4 +275,64 @@ export const projectAreaRows: Record<string, Row> = {
     ok: 200,
     request: async (f) => ({ path: await inProject(f, "/comparison") }),
   },
+
+  "GET /api/workspaces/{workspaceId}/audit": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: ws(f, "/audit") }),
+  },
+  "GET /api/workspaces/{workspaceId}/trash": {
+    who: "editor",
+    ok: 200,
+    request: async (f) => ({ path: ws(f, "/trash") }),
+  },
+  "POST /api/workspaces/{workspaceId}/trash/{kind}/{itemId}/restore": {
+    who: "editor",
+    ok: 204,
+    request: async (f) => ({ path: ws(f, `/trash/load-case/${await trashedCase(f)}/restore`) }),
+  },
+  "DELETE /api/workspaces/{workspaceId}/trash/{kind}/{itemId}": {
+    who: "owner",
+    ok: 204,
+    request: async (f) => ({ path: ws(f, `/trash/load-case/${await trashedCase(f)}`) }),
+  },
+  "GET /api/workspaces/{workspaceId}/projects/{projectId}/export": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: await inProject(f, "/export") }),
+  },
+  "POST /api/workspaces/{workspaceId}/project-imports": {
+    who: "editor",
+    ok: 201,
+    request: async (f) => ({
+      path: ws(f, "/project-imports"),
+      body: {
+        format: "sigmacube.project",
+        schemaVersion: 1,
+        exportedAt: new Date().toISOString(),
+        project: {
+          name: "Imported in matrix",
+          description: "",
+          unitSystem: "SI",
+          requirements: [{ criterion: "tresca", requiredFactor: 1.5 }],
+          defaultMaterial: null,
+        },
+        materials: [],
+        locations: [],
+        loadCases: [],
+        combinations: [],
+      },
+    }),
+  },
 };
+
+/** A load case of the fixture's project, already in the trash. */
+async function trashedCase(f: RoleFixture): Promise<string> {
+  const w = await projectWorld(f);
+  const c = await LoadCase.create({
+    projectId: w.projectId,
+    name: "Deleted by mistake",
+    deletedAt: new Date(),
+  });
+  return c.id;
+}

@@ -1,10 +1,13 @@
 import type { AppContext } from "../../context";
 import type { AnyRoute } from "../../openapi/registry";
+import { auditRoutes } from "../audit";
 import { combinationRoutes } from "../combinations";
 import { comparisonRoutes } from "../comparison";
 import { loadCaseRoutes } from "../load-cases";
 import { locationRoutes } from "../locations";
 import { materialRoutes } from "../materials";
+import { projectTransferRoutes } from "../project-transfer";
+import { trashRoutes } from "../trash";
 import { projectRoutes } from "./index";
 
 /**
@@ -19,5 +22,8 @@ export function projectAreaRoutes(context: AppContext): AnyRoute[] {
     ...loadCaseRoutes(context),
     ...combinationRoutes(context),
     ...comparisonRoutes(),
+    ...auditRoutes(),
+    ...trashRoutes(context),
+    ...projectTransferRoutes(context),
   ];
 }

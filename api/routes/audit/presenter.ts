@@ -1,0 +1,17 @@
+import type { AuditEventView } from "../../../core/contract/projects";
+import type { AuditEvent } from "../../../db/models/audit-event";
+
+/** An audit event as the API sends it. */
+export function presentAuditEvent(e: AuditEvent): AuditEventView {
+  return {
+    id: String(e.id),
+    at: e.createdAt.toISOString(),
+    actor: { id: e.actorId, name: e.actorName },
+    projectId: e.projectId,
+    entityType: e.entityType,
+    entityId: e.entityId,
+    action: e.action,
+    summary: e.summary,
+    changes: e.changes,
+  };
+}

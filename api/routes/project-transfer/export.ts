@@ -1,0 +1,105 @@
+import {
+  PROJECT_EXPORT_FORMAT,
+  PROJECT_EXPORT_SCHEMA_VERSION,
+  type ProjectExport,
+} from "../../../core/contract/project-export";
+import type { StressUnitName, MaterialRef } from "../../../core/contract/materials";
+import type { StateSource } from "../../../core/contract/load-cases";
+import type { Requirement } from "../../../core/contract/projects";
+import { Combination } from "../../../db/models/combination";
+import { LoadCase } from "../../../db/models/load-case";
+import { Location } from "../../../db/models/location";
+import type { Project } from "../../../db/models/project";
+import { termsOf } from "../combinations/terms";
+import { componentsPaOf, currentStatesOf } from "../load-cases/states";
+import { libraryOf, refFromColumns } from "../materials/resolve";
+
+/**
+ * The export file of a project: live locations, load cases with their current states
+ * (Pa as stored), combinations whose cases are all live, and the library materials the
+ * project refers to. Keys are short labels ("m1", "l1", "c1") made for the file.
+ */
+export async function exportProject(project: Project): Promise<ProjectExport> {
+  const order: [string, string][] = [
+    ["position", "ASC"],
+    ["createdAt", "ASC"],
+  ];
+  const [locations, cases, combinations, library] = await Promise.all([
+    Location.findAll({ where: { projectId: project.id, deletedAt: null }, order }),
+    LoadCase.findAll({ where: { projectId: project.id, deletedAt: null }, order }),
+    Combination.findAll({ where: { projectId: project.id, deletedAt: null }, order }),
+    libraryOf(project.workspaceId),
+  ]);
+  const materialKeys = new Map<string, string>();
+  const exportRef = (ref: MaterialRef | null): ProjectExport["project"]["defaultMaterial"] => {
+    if (!ref) return null;
+    if (ref.kind === "published") return { kind: "published", id: ref.id };
+    if (!library.has(ref.id)) return null; // a library material in the trash is not exported
+    if (!materialKeys.has(ref.id)) materialKeys.set(ref.id, `m${materialKeys.size + 1}`);
+    return { kind: "library", key: materialKeys.get(ref.id)! };
+  };
+  const defaultMaterial = exportRef(
+    refFromColumns(project.defaultMaterialId, project.defaultPublishedMaterial),
+  );
+  const locationKeys = new Map(locations.map((l, i) => [l.id, `l${i + 1}`]));
+  const caseKeys = new Map(cases.map((c, i) => [c.id, `c${i + 1}`]));
+  const states = await currentStatesOf(cases.map((c) => c.id));
+  const terms = await termsOf(combinations);
+
+  const exportedLocations = locations.map((l) => ({
+    key: locationKeys.get(l.id)!,
+    name: l.name,
+    note: l.note,
+    material: exportRef(refFromColumns(l.materialId, l.publishedMaterial)),
+  }));
+  return {
+    format: PROJECT_EXPORT_FORMAT,
+    schemaVersion: PROJECT_EXPORT_SCHEMA_VERSION,
+    exportedAt: new Date().toISOString(),
+    project: {
+      name: project.name,
+      description: project.description,
+      unitSystem: project.unitSystem,
+      requirements: project.requirements as Requirement[],
+      defaultMaterial,
+    },
+    materials: [...materialKeys].map(([id, key]) => {
+      const m = library.get(id)!;
+      return {
+        key,
+        name: m.name,
+        unit: m.unit as StressUnitName,
+        yieldPa: m.yieldPa,
+        ultimateTensionPa: m.ultimateTensionPa,
+        ultimateCompressionPa: m.ultimateCompressionPa,
+        elasticModulusPa: m.elasticModulusPa,
+        poissonRatio: m.poissonRatio,
+        reference: m.reference,
+        note: m.note,
+      };
+    }),
+    locations: exportedLocations,
+    loadCases: cases.map((c) => ({
+      key: caseKeys.get(c.id)!,
+      name: c.name,
+      category: c.category,
+      description: c.description,
+      states: states
+        .filter((s) => s.loadCaseId === c.id)
+        .map((s) => ({
+          location: locationKeys.get(s.locationId)!,
+          unit: s.unit as StressUnitName,
+          componentsPa: componentsPaOf(s),
+          source: s.source as StateSource,
+          note: s.note,
+        })),
+    })),
+    combinations: combinations
+      .filter((c) => terms.get(c.id)!.every((t) => caseKeys.has(t.loadCaseId)))
+      .map((c) => ({
+        name: c.name,
+        description: c.description,
+        terms: terms.get(c.id)!.map((t) => ({ loadCase: caseKeys.get(t.loadCaseId)!, factor: t.factor })),
+      })),
+  };
+}

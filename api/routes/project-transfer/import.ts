@@ -1,0 +1,148 @@
+import type { Transaction } from "sequelize";
+import type { User } from "lucia";
+import type { MaterialRef } from "../../../core/contract/materials";
+import type { ProjectExport } from "../../../core/contract/project-export";
+import { Combination } from "../../../db/models/combination";
+import { CombinationTerm } from "../../../db/models/combination-term";
+import { LoadCase } from "../../../db/models/load-case";
+import { Location } from "../../../db/models/location";
+import { Material } from "../../../db/models/material";
+import { Project } from "../../../db/models/project";
+import { StressState } from "../../../db/models/stress-state";
+import { recordAudit } from "../audit/record";
+import { columnsFromRef } from "../materials/resolve";
+
+/** What an import made. */
+export type ImportCounts = { materials: number; locations: number; loadCases: number; combinations: number };
+
+/**
+ * Writes a validated export file into `workspaceId` as a new project, all inside the caller's
+ * `transaction` (any failure leaves nothing behind). Library materials become new library
+ * entries of this workspace; states become revision 1 with their source kept.
+ */
+export async function importProject(
+  transaction: Transaction,
+  user: User,
+  workspaceId: string,
+  file: ProjectExport,
+): Promise<{ project: Project; counts: ImportCounts }> {
+  const materialIds = new Map<string, string>();
+  for (const m of file.materials) {
+    const { key, ...values } = m;
+    const created = await Material.create(
+      { ...values, workspaceId, createdBy: user.id, updatedBy: user.id },
+      { transaction },
+    );
+    materialIds.set(key, created.id);
+  }
+  const ref = (r: ProjectExport["project"]["defaultMaterial"]): MaterialRef | null =>
+    !r ? null : r.kind === "published" ? r : { kind: "workspace", id: materialIds.get(r.key)! };
+  const projectMaterial = columnsFromRef(ref(file.project.defaultMaterial));
+  const project = await Project.create(
+    {
+      workspaceId,
+      name: file.project.name,
+      description: file.project.description,
+      unitSystem: file.project.unitSystem,
+      requirements: file.project.requirements,
+      defaultMaterialId: projectMaterial.materialId,
+      defaultPublishedMaterial: projectMaterial.publishedMaterial,
+      createdBy: user.id,
+      updatedBy: user.id,
+    },
+    { transaction },
+  );
+  const locationIds = new Map<string, string>();
+  for (const [position, l] of file.locations.entries()) {
+    const columns = columnsFromRef(ref(l.material));
+    const created = await Location.create(
+      {
+        projectId: project.id,
+        name: l.name,
+        note: l.note,
+        ...columns,
+        position,
+        createdBy: user.id,
+        updatedBy: user.id,
+      },
+      { transaction },
+    );
+    locationIds.set(l.key, created.id);
+  }
+  const caseIds = new Map<string, string>();
+  for (const [position, c] of file.loadCases.entries()) {
+    const created = await LoadCase.create(
+      {
+        projectId: project.id,
+        name: c.name,
+        category: c.category,
+        description: c.description,
+        position,
+        createdBy: user.id,
+        updatedBy: user.id,
+      },
+      { transaction },
+    );
+    caseIds.set(c.key, created.id);
+    for (const s of c.states) {
+      const pa = s.componentsPa;
+      await StressState.create(
+        {
+          loadCaseId: created.id,
+          locationId: locationIds.get(s.location)!,
+          revision: 1,
+          isCurrent: true,
+          xxPa: pa.xx,
+          yyPa: pa.yy,
+          zzPa: pa.zz,
+          xyPa: pa.xy,
+          yzPa: pa.yz,
+          zxPa: pa.zx,
+          unit: s.unit,
+          source: s.source,
+          note: s.note,
+          createdBy: user.id,
+        },
+        { transaction },
+      );
+    }
+  }
+  for (const [position, c] of file.combinations.entries()) {
+    const created = await Combination.create(
+      {
+        projectId: project.id,
+        name: c.name,
+        description: c.description,
+        position,
+        createdBy: user.id,
+        updatedBy: user.id,
+      },
+      { transaction },
+    );
+    await CombinationTerm.bulkCreate(
+      c.terms.map((t, i) => ({
+        combinationId: created.id,
+        loadCaseId: caseIds.get(t.loadCase)!,
+        factor: t.factor,
+        position: i,
+      })),
+      { transaction },
+    );
+  }
+  const counts = {
+    materials: file.materials.length,
+    locations: file.locations.length,
+    loadCases: file.loadCases.length,
+    combinations: file.combinations.length,
+  };
+  await recordAudit(transaction, user, {
+    workspaceId,
+    projectId: project.id,
+    entityType: "project",
+    entityId: project.id,
+    action: "import",
+    summary: `imported the project "${project.name}" (${counts.locations} locations, ${counts.loadCases} load cases, ${counts.combinations} combinations, ${counts.materials} library materials)`,
+    changes: { exportedAt: file.exportedAt, schemaVersion: file.schemaVersion },
+  });
+  return { project, counts };
+}

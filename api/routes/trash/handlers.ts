@@ -1,0 +1,180 @@
+import { Op, type Transaction } from "sequelize";
+import {
+  TRASH_KINDS,
+  TRASH_RETENTION_DAYS,
+  type TrashItem,
+  type TrashKind,
+} from "../../../core/contract/projects";
+import { AuditEvent } from "../../../db/models/audit-event";
+import { Project } from "../../../db/models/project";
+import { currentMembership, currentUser } from "../../auth/guards";
+import type { AppContext } from "../../context";
+import { errors } from "../../errors";
+import type { RouteHandler } from "../../openapi/registry";
+import { recordAudit } from "../audit/record";
+import { peopleById, personOf } from "../projects/people";
+import { TRASH_MODELS, type TrashableRow } from "./kinds";
+
+type NoInput = Record<string, never>;
+type ItemParams = { workspaceId: string; kind: TrashKind; itemId: string };
+
+const DAY_MS = 86_400_000;
+const retentionCutoff = () => new Date(Date.now() - TRASH_RETENTION_DAYS * DAY_MS);
+
+/** Every project of the workspace (trashed or not), by id. */
+async function projectsOf(workspaceId: string, transaction?: Transaction) {
+  const rows = await Project.findAll({
+    attributes: ["id", "name", "deletedAt"],
+    where: { workspaceId },
+    transaction,
+  });
+  return new Map(rows.map((p) => [p.id, p]));
+}
+
+/** The deleted rows of one kind in the workspace; `where` narrows them further. */
+async function deletedRows(
+  kind: TrashKind,
+  workspaceId: string,
+  projectIds: string[],
+  where: Record<string, unknown>,
+  transaction?: Transaction,
+): Promise<TrashableRow[]> {
+  const spec = TRASH_MODELS[kind];
+  const scope = spec.scope === "workspace" ? { workspaceId } : { projectId: projectIds };
+  return spec.model.findAll({ where: { ...scope, ...where }, transaction });
+}
+
+/**
+ * Deletes for good what has been in the trash longer than the retention period (the
+ * database cascades take their states, terms and children), leaving a line in the trail.
+ */
+async function purgeExpired(workspaceId: string, transaction: Transaction) {
+  const projects = await projectsOf(workspaceId, transaction);
+  for (const kind of TRASH_KINDS) {
+    const expired = await deletedRows(
+      kind,
+      workspaceId,
+      [...projects.keys()],
+      { deletedAt: { [Op.lt]: retentionCutoff() } },
+      transaction,
+    );
+    for (const row of expired) {
+      await AuditEvent.create(
+        {
+          workspaceId,
+          projectId: kind === "project" ? row.id : (row.projectId ?? null),
+          entityType: TRASH_MODELS[kind].entity,
+          entityId: row.id,
+          action: "purge",
+          actorId: null,
+          actorName: "trash retention",
+          summary: `deleted the ${TRASH_MODELS[kind].label} "${row.name}" for good after ${TRASH_RETENTION_DAYS} days in the trash`,
+        },
+        { transaction },
+      );
+      await row.destroy({ transaction });
+    }
+  }
+}
+
+export function listTrashHandler(
+  context: AppContext,
+): RouteHandler<{ workspaceId: string }, NoInput, NoInput> {
+  return async (_req, res) => {
+    const { workspace } = currentMembership(res);
+    const items = await context.sequelize.transaction(async (transaction) => {
+      await purgeExpired(workspace.id, transaction);
+      const projects = await projectsOf(workspace.id, transaction);
+      const found: { kind: TrashKind; row: TrashableRow }[] = [];
+      for (const kind of TRASH_KINDS) {
+        const rows = await deletedRows(
+          kind,
+          workspace.id,
+          [...projects.keys()],
+          { deletedAt: { [Op.ne]: null } },
+          transaction,
+        );
+        found.push(...rows.map((row) => ({ kind, row })));
+      }
+      const people = await peopleById(found.map((f) => f.row.deletedBy));
+      return found
+        .map(({ kind, row }): TrashItem => {
+          const project = row.projectId ? projects.get(row.projectId) : undefined;
+          return {
+            kind,
+            id: row.id,
+            name: row.name,
+            project: project
+              ? { id: project.id, name: project.name, inTrash: project.deletedAt !== null }
+              : null,
+            deletedAt: row.deletedAt!.toISOString(),
+            deletedBy: personOf(people, row.deletedBy),
+            purgeAt: new Date(row.deletedAt!.getTime() + TRASH_RETENTION_DAYS * DAY_MS).toISOString(),
+          };
+        })
+        .sort((a, b) => b.deletedAt.localeCompare(a.deletedAt));
+    });
+    res.set("Cache-Control", "no-store").json({ items, retentionDays: TRASH_RETENTION_DAYS });
+  };
+}
+
+async function findTrashed(workspaceId: string, kind: TrashKind, itemId: string, transaction: Transaction) {
+  const projects = await projectsOf(workspaceId, transaction);
+  const [row] = await deletedRows(
+    kind,
+    workspaceId,
+    [...projects.keys()],
+    { id: itemId, deletedAt: { [Op.gte]: retentionCutoff() } },
+    transaction,
+  );
+  if (!row) throw errors.notFound(`This ${TRASH_MODELS[kind].label} in the trash`);
+  return { row, project: row.projectId ? projects.get(row.projectId)! : null };
+}
+
+export function restoreHandler(context: AppContext): RouteHandler<ItemParams, NoInput, NoInput> {
+  return async (_req, res) => {
+    const user = currentUser(res);
+    const { workspace } = currentMembership(res);
+    const { kind, itemId } = res.locals.input.params;
+    await context.sequelize.transaction(async (transaction) => {
+      const { row, project } = await findTrashed(workspace.id, kind, itemId, transaction);
+      if (project && project.deletedAt) {
+        throw errors.conflictWithId(
+          "project_in_trash",
+          `The project "${project.name}" is in the trash too; restore the project first.`,
+        );
+      }
+      await row.update({ deletedAt: null, deletedBy: null }, { transaction });
+      await recordAudit(transaction, user, {
+        workspaceId: workspace.id,
+        projectId: kind === "project" ? row.id : (row.projectId ?? null),
+        entityType: TRASH_MODELS[kind].entity,
+        entityId: row.id,
+        action: "restore",
+        summary: `restored the ${TRASH_MODELS[kind].label} "${row.name}" from the trash`,
+      });
+    });
+    res.status(204).end();
+  };
+}
+
+export function purgeHandler(context: AppContext): RouteHandler<ItemParams, NoInput, NoInput> {
+  return async (_req, res) => {
+    const user = currentUser(res);
+    const { workspace } = currentMembership(res);
+    const { kind, itemId } = res.locals.input.params;
+    await context.sequelize.transaction(async (transaction) => {
+      const { row } = await findTrashed(workspace.id, kind, itemId, transaction);
+      await recordAudit(transaction, user, {
+        workspaceId: workspace.id,
+        projectId: kind === "project" ? row.id : (row.projectId ?? null),
+        entityType: TRASH_MODELS[kind].entity,
+        entityId: row.id,
+        action: "purge",
+        summary: `deleted the ${TRASH_MODELS[kind].label} "${row.name}" for good`,
+      });
+      await row.destroy({ transaction });
+    });
+    res.status(204).end();
+  };
+}

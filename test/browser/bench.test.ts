@@ -139,6 +139,16 @@ describe("the bench in Chromium", () => {
     await page.keyboard.press("ArrowRight");
     await page.keyboard.press("Shift+ArrowRight");
     expect((await displayedAxisAngle(page)).angle).toBeCloseTo(25, 2);
+    // Typing an exact axis and angle (Enter in the last field applies it).
+    await typeCell(page, "axis x", "0");
+    await typeCell(page, "axis y", "0");
+    await typeCell(page, "axis z", "1");
+    await typeCell(page, "angle", "40");
+    const typed = await displayedAxisAngle(page);
+    expect(typed.angle).toBeCloseTo(40, 2);
+    expect(typed.axis).toEqual([0, 0, 1]);
+    const r = await readout(page);
+    expect(r.xx).toBeCloseTo(rotateTensor(STATE, rotationFromAxisAngle([0, 0, 1], 40)).xx, 9);
   });
 
   it("when the element snaps to the principal frame, then the readout is diagonal with σ1 σ2 σ3", async () => {
@@ -238,6 +248,21 @@ describe("the bench in Chromium", () => {
     expect(text).toMatch(/von Mises\s+[\d.]+ MPa\s+[\d.]+\s+\d+ %\s+(passes|close|FAILS)/);
     expect(text).toMatch(/licensed engineer/);
     expect(text).toMatch(/EN 10025-2 S235/);
+  });
+
+  it("when the start-up shaft state is checked against S235, then von Mises fails and says so in words and mark", async () => {
+    await page.getByRole("combobox", { name: "Start from" }).selectOption("shaft-startup");
+    await page.getByRole("combobox", { name: "Material" }).selectOption("s235");
+    const row = page.getByTestId("criterion-von-mises");
+    // τ = 16T/(πd³), σ = 32M/(πd³) − F/A with T = 1870 N·m, M = 420 N·m, d = 45 mm, F = 3 kN (demo scenario).
+    const tau = (16 * 850e3 * 2.2) / (Math.PI * 45 ** 3);
+    const sigma = (32 * 420e3) / (Math.PI * 45 ** 3) - 3e3 / ((Math.PI * 45 ** 2) / 4);
+    const n = 235 / Math.sqrt(sigma * sigma + 3 * tau * tau);
+    expect(n).toBeLessThan(1.5);
+    expect(num(await row.getByTestId("n").innerText())).toBeCloseTo(n, 2);
+    expect(await row.innerText()).toMatch(/✗\s*fails/);
+    expect(await page.getByText("screening and checking tool").first().isVisible()).toBe(true);
+    await page.screenshot({ path: path.join(screenshotDir, "bench-fails.png") });
   });
 
   it("when the window is 1280×800, then the four main panels sit inside it without scrolling", async () => {

@@ -1,4 +1,4 @@
-import { useState } from "react";
+import { useRef, useState } from "react";
 import { NumberField } from "../../../components/NumberField";
 import { ToolButton } from "../../../components/ToolButton";
 import type { Vec3 } from "../../../../../core";
@@ -6,7 +6,7 @@ import { useRotationDescription } from "../hooks/use-derived";
 import { EULER_SEQUENCES, type EulerSequence } from "../model/bench-state";
 import { useBenchStore } from "../model/store";
 
-const fmt = (v: number) => Number(v.toFixed(4)).toString();
+const fmt = (v: number) => Number(v.toFixed(3)).toString();
 
 /**
  * Snapping buttons and exact angles. Typed values describe the element's frame measured from the
@@ -17,20 +17,26 @@ export function RotationControls() {
   const sequence = useBenchStore((s) => s.eulerSequence);
   const act = useBenchStore((s) => s.act);
   const rot = useRotationDescription();
-  // Drafts for the typed description; re-seeded from the live rotation whenever the view changes.
-  const [axis, setAxis] = useState<Vec3 | null>(null);
-  const [angle, setAngle] = useState<number | null>(null);
-  const [euler, setEuler] = useState<Vec3 | null>(null);
-  const shownAxis = axis ?? rot.axisAngle.axis;
-  const shownAngle = angle ?? rot.axisAngle.angleDeg;
-  const shownEuler = euler ?? rot.euler;
+  // Drafts of the typed description, in a ref as well as state: Enter in a field commits the draft
+  // and submits the form in the same tick, so apply() must see the value committed just before it.
+  type Drafts = { axis: Vec3 | null; angle: number | null; euler: Vec3 | null };
+  const empty: Drafts = { axis: null, angle: null, euler: null };
+  const [drafts, setDrafts] = useState<Drafts>(empty);
+  const latest = useRef<Drafts>(empty);
+  const draft = (patch: Partial<Drafts>) => {
+    latest.current = { ...latest.current, ...patch };
+    setDrafts(latest.current);
+  };
+  const shownAxis = drafts.axis ?? rot.axisAngle.axis;
+  const shownAngle = drafts.angle ?? rot.axisAngle.angleDeg;
+  const shownEuler = drafts.euler ?? rot.euler;
 
   function apply() {
-    if (view === "axis-angle") act.setAxisAngle(shownAxis, shownAngle);
-    else act.setEuler(sequence, shownEuler);
-    setAxis(null);
-    setAngle(null);
-    setEuler(null);
+    const d = latest.current;
+    if (view === "axis-angle")
+      act.setAxisAngle(d.axis ?? rot.axisAngle.axis, d.angle ?? rot.axisAngle.angleDeg);
+    else act.setEuler(sequence, d.euler ?? rot.euler);
+    draft({ axis: null, angle: null, euler: null });
   }
 
   return (
@@ -74,7 +80,7 @@ export function RotationControls() {
         )}
       </div>
       <form
-        className="flex items-end gap-1"
+        className={`grid items-end gap-1 ${view === "axis-angle" ? "grid-cols-[1fr_1fr_1fr_1.35fr_auto]" : "grid-cols-[1fr_1fr_1fr_auto]"}`}
         onSubmit={(e) => {
           e.preventDefault();
           apply();
@@ -88,11 +94,12 @@ export function RotationControls() {
                 label={label}
                 value={shownAxis[k]}
                 format={fmt}
-                className="w-14"
+                className="min-w-0"
+                inputClassName="!px-1 !text-[12px]"
                 onCommit={(v) => {
                   const next: [number, number, number] = [...shownAxis];
                   next[k] = v ?? 0;
-                  setAxis(next);
+                  draft({ axis: next });
                 }}
               />
             ))}
@@ -101,8 +108,8 @@ export function RotationControls() {
               value={shownAngle}
               format={fmt}
               unit="°"
-              className="w-20"
-              onCommit={(v) => setAngle(v ?? 0)}
+              className="min-w-0"
+              onCommit={(v) => draft({ angle: v ?? 0 })}
             />
           </>
         ) : (
@@ -113,11 +120,11 @@ export function RotationControls() {
               value={shownEuler[k]}
               format={fmt}
               unit="°"
-              className="w-[4.6rem]"
+              className="min-w-0"
               onCommit={(v) => {
                 const next: [number, number, number] = [...shownEuler];
                 next[k] = v ?? 0;
-                setEuler(next);
+                draft({ euler: next });
               }}
             />
           ))

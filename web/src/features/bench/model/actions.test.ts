@@ -144,3 +144,33 @@ describe("bench actions", () => {
     expect(shaft.xy).toBeCloseTo(47.51, 2);
   });
 });
+
+describe("bench store and typed rotations", () => {
+  it("when actions are called through the store, then they apply the same pure functions to its state", async () => {
+    const { createBenchStore } = await import("./store");
+    const store = createBenchStore(base());
+    store.getState().act.setComponent("xy", 12);
+    expect(store.getState().tensor.xy).toBe(12);
+    store.getState().act.changeUnit("kPa", "convert");
+    expect(store.getState().tensor.xy).toBeCloseTo(12000, 9);
+    store.getState().act.undo();
+    expect(store.getState().unit).toBe("MPa");
+    store.getState().act.snapToPrincipal();
+    const r = rotateTensor(store.getState().tensor, store.getState().rotation);
+    expect(Math.abs(r.xy) + Math.abs(r.yz) + Math.abs(r.zx)).toBeLessThan(1e-10);
+  });
+
+  it("when Euler angles are typed, then the frame is core's rotationFromEuler and reads back the same angles", async () => {
+    const { rotationFromEuler } = await import("../../../../../core");
+    const { rotationDescription } = await import("./derive");
+    const s = act.setEuler(base(), "ZXZ", [30, 40, -20]);
+    expect(maxDiff(s.rotation, rotationFromEuler("ZXZ", [30, 40, -20]))).toBeLessThan(1e-14);
+    const back = rotationDescription(s.rotation, "ZXZ").euler;
+    expect(back[0]).toBeCloseTo(30, 10);
+    expect(back[1]).toBeCloseTo(40, 10);
+    expect(back[2]).toBeCloseTo(-20, 10);
+    const a = act.setAxisAngle(base(), [0, 0, 2], 35);
+    expect(rotationDescription(a.rotation, "ZYX").aboutZ).toBeCloseTo(35, 12);
+    expect(act.setAxisAngle(base(), [0, 0, 0], 35)).toEqual(base());
+  });
+});

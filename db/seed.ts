@@ -1,13 +1,14 @@
 import type { Sequelize } from "sequelize";
 import { AppSetting } from "./models/app-setting";
 import { seedDemoAccounts } from "./seed-accounts";
+import { seedDemoProjects } from "./seed-projects";
 
 /**
  * Version of the demo seed. Each capability that adds demo content (accounts, projects,
  * load cases) adds a step below and raises this number; a database seeded by an older
  * version gets the new steps on the next start.
  */
-export const DEMO_SEED_VERSION = 2;
+export const DEMO_SEED_VERSION = 3;
 const SEED_KEY = "demo_seed";
 
 type SeedRecord = { version: number; seededAt: string };
@@ -29,6 +30,8 @@ export async function seedDemo(
     log(`demo seed: applying version ${DEMO_SEED_VERSION} (was ${done})`);
     // Version 2: the demo team and their workspace; the passwords are printed only now.
     if (done < 2) await seedDemoAccounts(transaction, log);
+    // Version 3: the CT-7 projects, their load cases, states, combination and a library material.
+    if (done < 3) await seedDemoProjects(transaction, log);
 
     const value: SeedRecord = { version: DEMO_SEED_VERSION, seededAt: new Date().toISOString() };
     await AppSetting.upsert({ key: SEED_KEY, value }, { transaction });

@@ -1,0 +1,79 @@
+import { afterAll, describe, expect, inject, it } from "vitest";
+import { comparisonSchema } from "../../core/contract/comparison";
+import { ensureDatabase } from "../../db/ensure-database";
+import { migrate } from "../../db/migrate";
+import { seedDemo } from "../../db/seed";
+import { buildTestApp } from "../support/app";
+import { browserAgent } from "../support/accounts";
+
+describe("the demo seed's projects step", () => {
+  const adminUrl = inject("adminUrl");
+  const databaseUrl = adminUrl.replace(/\/postgres$/, "/sigmacube_seed_projects");
+  let closeApp: () => Promise<void> = async () => {};
+  afterAll(() => closeApp());
+
+  it("when the demo is seeded, then the CT-7 projects are there, the hydrostatic test governs at the junction and fails 1.5, and the rest pass", async () => {
+    await ensureDatabase(adminUrl, "sigmacube_seed_projects");
+    const { app, context, close } = buildTestApp({ databaseUrl, webDist: null });
+    closeApp = close;
+    await migrate(context.sequelize);
+    const lines: string[] = [];
+    await seedDemo(context.sequelize, (l) => lines.push(l));
+    const line = lines.find((l) => l.includes("ines.okafor-lund@quillon.example"))!;
+    const agent = browserAgent(app);
+    await agent
+      .post("/api/auth/sign-in")
+      .send({ email: "ines.okafor-lund@quillon.example", password: line.trim().split(/\s+/).pop() })
+      .expect(200);
+    const [workspace] = (await agent.get("/api/workspaces").expect(200)).body.workspaces;
+    const { projects } = (await agent.get(`/api/workspaces/${workspace.id}/projects`).expect(200)).body;
+    expect(projects.map((p: { name: string }) => p.name)).toEqual([
+      "CT-7 agitator shaft",
+      "CT-7 lifting lug",
+      "CT-7 nozzle N2 (FE points)",
+      "CT-7 shell and heads",
+    ]);
+    const compare = async (name: string) => {
+      const p = projects.find((x: { name: string }) => x.name === name);
+      return comparisonSchema.parse(
+        (await agent.get(`/api/workspaces/${workspace.id}/projects/${p.id}/comparison`).expect(200)).body,
+      );
+    };
+
+    const shell = await compare("CT-7 shell and heads");
+    expect(shell.rows).toHaveLength(8);
+    // Hand check of the governing row: σx = pr/2t + 133p = 43.875 + 155.61 = 199.49 MPa at 1.17 MPa,
+    // σθ = pr/t = 87.75 MPa, σ3 = 0; Tresca n = 260 / 199.49 = 1.30 (< 1.5 required).
+    expect(shell.summary).toBe(
+      "governs: Hydrostatic test at head-to-shell junction, Tresca, SF 1.30 against 1.5 required",
+    );
+    const failing = shell.rows.filter((r) =>
+      r.checks.some((c) => c.status === "evaluated" && c.verdict === "fail"),
+    );
+    expect(failing.map((r) => `${r.caseName} @ ${r.locationName}`)).toEqual([
+      "Hydrostatic test @ head-to-shell junction",
+    ]);
+    // Mid-shell design: σvm = (√3/2)·pr/t = 58.46 MPa (thin-wall membrane, common practice).
+    const design = shell.rows.find((r) => r.caseName === "Design" && r.locationName === "mid-shell")!;
+    expect(design.vonMisesPa / 1e6).toBeCloseTo((Math.sqrt(3) / 2) * 67.5, 6);
+
+    const shaft = await compare("CT-7 agitator shaft");
+    // Steady running: σ = 32·420e3/(π·45³) + 4·3000/(π·45²) = 46.95 + 1.89 MPa, τ = 16·850e3/(π·45³) = 47.51 MPa.
+    const steady = shaft.rows.find((r) => r.caseName === "Steady running")!;
+    expect(steady.componentsPa.xx / 1e6).toBeCloseTo(48.83, 2);
+    expect(steady.componentsPa.xy / 1e6).toBeCloseTo(47.51, 2);
+    expect(shaft.governing.every((g) => g.verdict !== "fail")).toBe(true);
+
+    const lug = await compare("CT-7 lifting lug");
+    expect(lug.rows.some((r) => r.kind === "combination")).toBe(true);
+    expect(lug.cautions.join(" ")).toMatch(/superposition/);
+    // Rosette: σx = E/(1−ν²)(εx + νεy) = 210000/0.91 × 393e-6 = 90.69 MPa (rectangular rosette equations).
+    const proof = lug.rows.find((r) => r.caseName === "Proof load (rosette)")!;
+    expect(proof.componentsPa.xx / 1e6).toBeCloseTo(90.69, 2);
+    // The proof-factored tilted lift at the weld toe comes close to 1.8 without failing.
+    expect(lug.governing.map((g) => g.verdict)).toEqual(["close", "close"]);
+
+    const nozzle = await compare("CT-7 nozzle N2 (FE points)");
+    expect(nozzle.rows).toEqual([]);
+  });
+});

@@ -4,9 +4,10 @@
  * faces, and turns pointer and key input into dispatches through the pure trackball/keyboard
  * reducers. It computes no mechanics: σ′ comes from the store's derived readout (core.rotateTensor).
  */
-import { Edges, Html, OrbitControls } from "@react-three/drei";
+import { Edges, OrbitControls } from "@react-three/drei";
 import { Canvas, useFrame, useThree } from "@react-three/fiber";
 import {
+  useEffect,
   useLayoutEffect,
   useMemo,
   useRef,
@@ -15,7 +16,7 @@ import {
   type ReactElement,
   type RefObject,
 } from "react";
-import { Matrix4, Quaternion, Vector3 } from "three";
+import { CanvasTexture, Matrix4, Quaternion, SRGBColorSpace, Vector3 } from "three";
 import type { Mat3, StressTensor } from "../../../../../core";
 import { useRotated } from "../hooks/use-derived";
 import { markCommit, markMoveStart } from "../hooks/perf-marks";
@@ -173,21 +174,41 @@ function CameraBasis({ basisRef }: { basisRef: RefObject<ViewBasis> }) {
   return null;
 }
 
-const LABEL_STYLE = { pointerEvents: "none" } as const;
-
+/**
+ * A text label as a sprite with a canvas texture (always facing the camera). Drawn in the page's
+ * mono face; kept inside the WebGL scene so it costs no extra React roots or DOM layout per frame.
+ */
 function Label({
   position,
   text,
-  className,
+  colour,
+  bold = false,
 }: {
   position: [number, number, number];
   text: string;
-  className: string;
+  colour: string;
+  bold?: boolean;
 }) {
+  const texture = useMemo(() => {
+    const canvas = document.createElement("canvas");
+    const px = 64;
+    canvas.width = px * 2;
+    canvas.height = px;
+    const ctx = canvas.getContext("2d")!;
+    ctx.font = `${bold ? 600 : 400} ${px * 0.72}px "JetBrains Mono", ui-monospace, monospace`;
+    ctx.fillStyle = colour;
+    ctx.textAlign = "center";
+    ctx.textBaseline = "middle";
+    ctx.fillText(text, px, px / 2);
+    const t = new CanvasTexture(canvas);
+    t.colorSpace = SRGBColorSpace;
+    return t;
+  }, [text, colour, bold]);
+  useEffect(() => () => texture.dispose(), [texture]);
   return (
-    <Html position={position} center zIndexRange={[10, 0]} style={LABEL_STYLE}>
-      <span className={`font-mono text-[13px] ${className}`}>{text}</span>
-    </Html>
+    <sprite position={position} scale={[0.5, 0.25, 1]}>
+      <spriteMaterial map={texture} transparent depthTest={false} />
+    </sprite>
   );
 }
 
@@ -289,7 +310,7 @@ export default function Element3D() {
               <Label
                 position={[end[0] * 1.06, end[1] * 1.06, end[2] * 1.06]}
                 text={name}
-                className="text-graphite-faint"
+                colour={COLOURS.axis}
               />
             </group>
           );
@@ -311,7 +332,8 @@ export default function Element3D() {
                 key={name}
                 position={[p[0] - o[0], p[1] - o[1], p[2] - o[2]]}
                 text={name}
-                className="font-semibold text-ink"
+                colour={COLOURS.edge}
+                bold
               />
             );
           })}
@@ -324,7 +346,7 @@ export default function Element3D() {
               <Edges color="#9a6410" />
             </mesh>
             <Arrow from={new Vector3(0, 0, 0)} dir={new Vector3(0, 0, 1)} length={1.35} colour="#9a6410" />
-            <Label position={[0, 0, 1.5]} text="n" className="text-close" />
+            <Label position={[0, 0, 1.5]} text="n" colour="#9a6410" bold />
           </group>
         )}
       </Canvas>

@@ -7,7 +7,7 @@ import { combineLoadCases } from "./combine";
 import { evaluateState, type CheckRequirement } from "./evaluate";
 import { findGoverning, type ComparisonRow } from "./governing";
 import { missingStrengths } from "./requirements";
-import { CLOSE_BAND, utilisation, verdictFor } from "./verdict";
+import { CLOSE_BAND, utilisation, verdictFor, verdictForFactor } from "./verdict";
 
 const tensor = (xx: number, yy: number, zz: number, xy: number, yz: number, zx: number): StressTensor => ({
   xx,
@@ -142,13 +142,21 @@ describe("evaluateState", () => {
 });
 
 describe("verdicts (common practice, no source: a check passes when n ≥ n_required)", () => {
-  it("when the utilisation crosses 1 − CLOSE_BAND and 1, then the verdict turns close and then fail", () => {
+  it("when the utilisation crosses 1/(1 + CLOSE_BAND) and 1, then the verdict turns close and then fail", () => {
     expect(CLOSE_BAND).toBe(0.1);
     expect(verdictFor(0)).toBe("pass");
-    expect(verdictFor(0.9)).toBe("pass");
-    expect(verdictFor(0.9000001)).toBe("close");
+    expect(verdictFor(0.909)).toBe("pass");
+    expect(verdictFor(0.9091)).toBe("close");
     expect(verdictFor(1)).toBe("close");
     expect(verdictFor(1.0000001)).toBe("fail");
+  });
+
+  it("when the factor is below, at, just under 10 % above and 10 % above the required one, then fail, close, close, pass", () => {
+    expect(verdictForFactor(1.49, 1.5)).toBe("fail");
+    expect(verdictForFactor(1.5, 1.5)).toBe("close");
+    expect(verdictForFactor(1.64, 1.5)).toBe("close");
+    expect(verdictForFactor(1.65, 1.5)).toBe("pass");
+    expect(verdictForFactor(Infinity, 1.5)).toBe("pass");
   });
 
   it("when the factor found equals the factor required, then the utilisation is exactly 1", () => {

@@ -3,7 +3,7 @@ import { principalValues } from "../eigen/principal";
 import { vonMises } from "../tensor/invariants";
 import type { StressTensor } from "../tensor/types";
 import { missingStrengths } from "./requirements";
-import { utilisation, verdictFor, type Verdict } from "./verdict";
+import { utilisation, verdictForFactor, type Verdict } from "./verdict";
 
 /** A criterion to check and the safety factor the design must reach with it. */
 export type CheckRequirement = { criterion: Criterion; requiredFactor: number };
@@ -63,7 +63,7 @@ export function evaluateState(
       requiredFactor: req.requiredFactor,
       factor,
       utilisation: u,
-      verdict: verdictFor(u),
+      verdict: verdictForFactor(factor, req.requiredFactor),
     };
   });
   return {

@@ -1,12 +1,15 @@
 /**
  * Verdict of one check. A utilisation u = n_required / n compares the safety factor n found
- * with the one required: u ≤ 1 passes. "close" flags a passing check within `CLOSE_BAND` of the
- * limit, so an engineer looks twice before relying on it.
+ * with the one required: u ≤ 1 passes. "close" flags a passing check whose factor is less than
+ * `CLOSE_BAND` (10 %) above the required one, so an engineer looks twice before relying on it.
  */
 export type Verdict = "pass" | "close" | "fail";
 
-/** A passing check with utilisation above 1 − CLOSE_BAND (i.e. within 10 % of the limit) is "close". */
+/** A passing check is "close" when n_required ≤ n < (1 + CLOSE_BAND)·n_required. */
 export const CLOSE_BAND = 0.1;
+
+/** The utilisation above which a passing check is "close": u > 1/(1 + CLOSE_BAND) ≈ 0.909. */
+const CLOSE_UTILISATION = 1 / (1 + CLOSE_BAND);
 
 /**
  * Utilisation of a check: how much of the allowed margin the state uses.
@@ -25,12 +28,27 @@ export function utilisation(factor: number, requiredFactor: number): number {
 
 /**
  * The verdict for a utilisation.
- * @param u utilisation (dimensionless, ≥ 0)
- * @returns "fail" above 1, "close" in (1 − CLOSE_BAND, 1], "pass" otherwise
+ * @param u utilisation n_required / n (dimensionless, ≥ 0)
+ * @returns "fail" above 1 (n < n_required), "close" in (1/(1 + CLOSE_BAND), 1] (n less than 10 %
+ *   above n_required), "pass" otherwise
  */
 export function verdictFor(u: number): Verdict {
   if (Number.isNaN(u)) throw new RangeError("utilisation must be a number, got NaN");
   if (u > 1) return "fail";
-  if (u > 1 - CLOSE_BAND) return "close";
+  if (u > CLOSE_UTILISATION) return "close";
+  return "pass";
+}
+
+/**
+ * The verdict for a safety factor against the one required (same rule as {@link verdictFor}).
+ * @param factor safety factor found (dimensionless, > 0; Infinity for a state that never fails)
+ * @param requiredFactor safety factor required (dimensionless, > 0)
+ */
+export function verdictForFactor(factor: number, requiredFactor: number): Verdict {
+  utilisation(factor, requiredFactor); // the same argument checks
+  // Compared on the factors themselves, so 1.65 against 1.5 is exactly at the band edge (pass)
+  // instead of falling on either side of it by a rounding of 1.5/1.65.
+  if (factor < requiredFactor) return "fail";
+  if (factor < requiredFactor * (1 + CLOSE_BAND)) return "close";
   return "pass";
 }

@@ -46,8 +46,7 @@ export function verdictFor(u: number): Verdict {
  */
 export function verdictForFactor(factor: number, requiredFactor: number): Verdict {
   utilisation(factor, requiredFactor); // the same argument checks
-  // Compared on the factors themselves, so 1.65 against 1.5 is exactly at the band edge (pass)
-  // instead of falling on either side of it by a rounding of 1.5/1.65.
+  // Compared on the factors themselves, as the UI states the rule ("less than 10 % above").
   if (factor < requiredFactor) return "fail";
   if (factor < requiredFactor * (1 + CLOSE_BAND)) return "close";
   return "pass";

@@ -16,7 +16,9 @@ export function Layout() {
   // The bench is a working screen: full width and tighter margins so its panels fit 1280×800.
   const wide = useMatch("/bench") !== null;
   const signedIn = Boolean(useSession().data?.user);
-  const links = signedIn ? [...navigation, { to: "/workspaces", label: "Workspaces", end: false }] : navigation;
+  const links = signedIn
+    ? [...navigation, { to: "/workspaces", label: "Workspaces", end: false }]
+    : navigation;
   return (
     <div className="flex min-h-screen flex-col">
       <a

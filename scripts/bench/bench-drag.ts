@@ -106,10 +106,15 @@ export async function run(): Promise<void> {
       const moves = await page.evaluate(() =>
         performance.getEntriesByName("bench:move").map((e) => e.duration),
       );
-      const longTasks = await page.evaluate(
-        (t0) => window.__longTasks.filter((t) => t.start >= t0).map((t) => t.duration),
+      const longTaskEntries = await page.evaluate(
+        (t0) =>
+          window.__longTasks
+            .filter((t) => t.start >= t0)
+            .map((t) => ({ at: t.start - t0, duration: t.duration })),
         startedAt,
       );
+      const longTasks = longTaskEntries.map((t) => t.duration);
+      const dragEnded = await page.evaluate((t0) => performance.now() - t0, startedAt);
       const sorted = [...moves].sort((a, b) => a - b);
       const median = percentile(sorted, 50);
       const p95 = percentile(sorted, 95);
@@ -136,6 +141,12 @@ export async function run(): Promise<void> {
         `${(bench.gzip / 1024).toFixed(1)} kB gzip (${(bench.raw / 1024).toFixed(0)} kB raw)`,
       );
       console.log(`  bench scripts: ${bench.files.join(" · ")}`);
+      if (longTaskEntries.length > 0) {
+        console.log(
+          `  long tasks at (ms after the drag began; it ended at ${dragEnded.toFixed(0)} ms): ` +
+            longTaskEntries.map((t) => `${t.at.toFixed(0)} (${t.duration.toFixed(0)} ms)`).join(", "),
+        );
+      }
     }
     await context.close();
   } finally {

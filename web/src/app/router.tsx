@@ -10,6 +10,7 @@ import { MailboxPage } from "../features/mailbox/components/MailboxPage";
 import { InvitationsSection } from "../features/workspaces/components/InvitationsSection";
 import { AcceptInvitationPage, JoinShareLinkPage } from "../features/workspaces/components/JoinPages";
 import { MembersSection } from "../features/workspaces/components/MembersSection";
+import { SettingsSection } from "../features/workspaces/components/SettingsSection";
 import { ShareLinksSection } from "../features/workspaces/components/ShareLinksSection";
 import { WorkspacePage } from "../features/workspaces/components/WorkspacePage";
 import { NewWorkspacePage, WorkspacesPage } from "../features/workspaces/components/WorkspacesPage";
@@ -58,6 +59,7 @@ export const router = createBrowserRouter([
               { path: "members", element: <MembersSection /> },
               { path: "invitations", element: <InvitationsSection /> },
               { path: "share-links", element: <ShareLinksSection /> },
+              { path: "settings", element: <SettingsSection /> },
             ],
           },
         ],

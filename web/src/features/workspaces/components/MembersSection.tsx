@@ -7,7 +7,6 @@ import {
   type Workspace,
 } from "../../../../../core/contract/workspaces";
 import { FormMessage, quietButton } from "../../../lib/forms";
-import { useDeleteWorkspace } from "../api/delete-workspace";
 import { useLeaveWorkspace } from "../api/leave-workspace";
 import { useMembers } from "../api/list-members";
 import { useRemoveMember } from "../api/remove-member";
@@ -22,7 +21,6 @@ export function MembersSection() {
   const update = useUpdateMember(workspace.id);
   const remove = useRemoveMember(workspace.id);
   const leave = useLeaveWorkspace();
-  const del = useDeleteWorkspace();
   const navigate = useNavigate();
   const isOwner = roleAtLeast(workspace.role, "owner");
   return (
@@ -30,7 +28,7 @@ export function MembersSection() {
       <h2 id="members-heading" className="text-lg font-semibold">
         Members
       </h2>
-      <FormMessage error={update.error ?? remove.error ?? leave.error ?? del.error ?? members.error} />
+      <FormMessage error={update.error ?? remove.error ?? leave.error ?? members.error} />
       <table className="w-full border-collapse rounded border border-rule bg-panel text-left">
         <thead className="border-b border-rule text-sm text-graphite-soft">
           <tr>
@@ -114,23 +112,6 @@ export function MembersSection() {
           </div>
         ))}
       </dl>
-      {isOwner && (
-        <div className="border-t border-rule pt-4">
-          <button
-            type="button"
-            className="rounded border border-fail px-3 py-1.5 text-sm text-fail hover:bg-fail-wash"
-            onClick={() => {
-              const typed = window.prompt(
-                `Deleting removes every project and record in it. Type the workspace's name (${workspace.name}) to confirm.`,
-              );
-              if (typed === workspace.name)
-                del.mutate(workspace.id, { onSuccess: () => navigate("/workspaces") });
-            }}
-          >
-            Delete this workspace…
-          </button>
-        </div>
-      )}
     </section>
   );
 }

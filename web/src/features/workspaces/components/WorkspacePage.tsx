@@ -29,6 +29,7 @@ export function WorkspacePage() {
     { to: "members", label: "Members", show: true },
     { to: "invitations", label: "Invitations", show: roleAtLeast(w.role, "owner") },
     { to: "share-links", label: "Share links", show: roleAtLeast(w.role, "editor") },
+    { to: "settings", label: "Settings", show: roleAtLeast(w.role, "owner") },
   ].filter((t) => t.show);
   return (
     <div className="space-y-6">

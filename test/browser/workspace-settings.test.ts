@@ -1,11 +1,25 @@
 import path from "node:path";
 import { AxeBuilder } from "@axe-core/playwright";
-import type { Browser } from "playwright-core";
+import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { RunningServer } from "../../api/server";
 import { uniqueEmail } from "../support/accounts";
 import { launchChromium, screenshotDir } from "../support/browser";
 import { startTestServer } from "../support/server";
+
+/** Signs a new user up in `page` and creates a workspace; leaves the page on its members tab. */
+async function signUpWithWorkspace(page: Page, origin: string, name: string, workspaceName: string) {
+  await page.goto(`${origin}/sign-up`, { waitUntil: "networkidle" });
+  await page.getByLabel("Your name").fill(name);
+  await page.getByLabel("E-mail address").fill(uniqueEmail(name.split(" ")[0].toLowerCase()));
+  await page.getByLabel("Password").fill("agitator shaft 45");
+  await page.getByRole("button", { name: "Create account" }).click();
+  await page.waitForURL(`${origin}/workspaces`);
+  await page.getByRole("link", { name: "New workspace" }).click();
+  await page.getByLabel("Workspace name").fill(workspaceName);
+  await page.getByRole("button", { name: "Create workspace" }).click();
+  await page.waitForURL(/\/members$/);
+}
 
 describe("workspace settings in Chromium", () => {
   let server: RunningServer;
@@ -24,16 +38,7 @@ describe("workspace settings in Chromium", () => {
   it("when the owner renames the workspace and then deletes it by typing its name, then both take effect", async () => {
     const page = await (await browser.newContext({ viewport: { width: 1280, height: 800 } })).newPage();
     page.setDefaultTimeout(10_000);
-    await page.goto(`${server.url}/sign-up`, { waitUntil: "networkidle" });
-    await page.getByLabel("Your name").fill("Teo Valdric");
-    await page.getByLabel("E-mail address").fill(uniqueEmail("teo"));
-    await page.getByLabel("Password").fill("agitator shaft 45");
-    await page.getByRole("button", { name: "Create account" }).click();
-    await page.waitForURL(`${server.url}/workspaces`);
-    await page.getByRole("link", { name: "New workspace" }).click();
-    await page.getByLabel("Workspace name").fill("Quillon scratch");
-    await page.getByRole("button", { name: "Create workspace" }).click();
-    await page.waitForURL(/\/members$/);
+    await signUpWithWorkspace(page, server.url, "Teo Valdric", "Quillon scratch");
 
     await page.getByRole("navigation", { name: "Workspace" }).getByRole("link", { name: "Settings" }).click();
     const rename = page.getByLabel("Workspace name");
@@ -57,5 +62,21 @@ describe("workspace settings in Chromium", () => {
     await remove.click();
     await page.waitForURL(`${server.url}/workspaces`);
     await page.getByText("You are not in any workspace yet").waitFor();
+  });
+
+  it("when a share link asks for zero uses, then the shared schema's message stands beside the field and nothing is sent", async () => {
+    const page = await (await browser.newContext({ viewport: { width: 1280, height: 800 } })).newPage();
+    page.setDefaultTimeout(10_000);
+    await signUpWithWorkspace(page, server.url, "Mira Castellan", "Quillon links");
+    await page
+      .getByRole("navigation", { name: "Workspace" })
+      .getByRole("link", { name: "Share links" })
+      .click();
+    const posts: string[] = [];
+    page.on("request", (r) => r.method() === "POST" && posts.push(r.url()));
+    await page.getByLabel("Use limit (empty: none)").fill("0");
+    await page.getByRole("button", { name: /Create (share )?link/i }).click();
+    await page.locator("#link-maxUses-error").getByText("Allow at least 1 use").waitFor();
+    expect(posts).toEqual([]);
   });
 });

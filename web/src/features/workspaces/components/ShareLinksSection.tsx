@@ -2,6 +2,7 @@ import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { useOutletContext } from "react-router-dom";
 import {
+  createShareLinkBodySchema,
   SHARE_LINK_MAX_DAYS,
   SHARE_LINK_ROLES,
   type ShareLinkRole,
@@ -34,19 +35,25 @@ export function ShareLinksSection() {
   const form = useForm<FormValues>({
     defaultValues: { role: "viewer", label: "", expiresInDays: "7", maxUses: "" },
   });
-  // The server validates with the shared schema; its field errors are shown beside each field.
-  const serverErrors = fieldErrorsOf(create.error);
-  const onSubmit = form.handleSubmit((v) =>
-    create.mutate({
-      workspaceId: workspace.id,
-      body: {
-        role: v.role,
-        label: v.label || undefined,
-        expiresInDays: Number(v.expiresInDays),
-        maxUses: v.maxUses.trim() === "" ? null : Number(v.maxUses),
-      },
-    }),
-  );
+  // The inputs hold text; the body is checked with the same shared schema the server uses,
+  // here before sending and there again, and either side's field errors appear beside the field.
+  const [clientErrors, setClientErrors] = useState<Record<string, string>>({});
+  const serverErrors = { ...fieldErrorsOf(create.error), ...clientErrors };
+  const onSubmit = form.handleSubmit((v) => {
+    const body = {
+      role: v.role,
+      label: v.label || undefined,
+      expiresInDays: v.expiresInDays.trim() === "" ? Number.NaN : Number(v.expiresInDays),
+      maxUses: v.maxUses.trim() === "" ? null : Number(v.maxUses),
+    };
+    const checked = createShareLinkBodySchema.safeParse(body);
+    if (!checked.success) {
+      setClientErrors(Object.fromEntries(checked.error.issues.map((i) => [String(i.path[0]), i.message])));
+      return;
+    }
+    setClientErrors({});
+    create.mutate({ workspaceId: workspace.id, body });
+  });
   const fieldError = (name: string) =>
     serverErrors[name] && (
       <p id={`link-${name}-error`} className="text-sm text-fail">

@@ -5,8 +5,11 @@ import { ForgotPasswordPage } from "../features/auth/components/ForgotPasswordPa
 import { ResetPasswordPage } from "../features/auth/components/ResetPasswordPage";
 import { SignInPage } from "../features/auth/components/SignInPage";
 import { SignUpPage } from "../features/auth/components/SignUpPage";
+import { ComparisonPage } from "../features/comparison/components/ComparisonPage";
 import { HomePage } from "../features/home/components/HomePage";
 import { MailboxPage } from "../features/mailbox/components/MailboxPage";
+import { ProjectPage } from "../features/projects/components/ProjectPage";
+import { ProjectsSection } from "../features/projects/components/ProjectsSection";
 import { InvitationsSection } from "../features/workspaces/components/InvitationsSection";
 import { AcceptInvitationPage, JoinShareLinkPage } from "../features/workspaces/components/JoinPages";
 import { MembersSection } from "../features/workspaces/components/MembersSection";
@@ -51,11 +54,14 @@ export const router = createBrowserRouter([
           { path: "account", element: <AccountPage /> },
           { path: "workspaces", element: <WorkspacesPage /> },
           { path: "workspaces/new", element: <NewWorkspacePage /> },
+          { path: "workspaces/:workspaceId/projects/:projectId", element: <ProjectPage /> },
+          { path: "workspaces/:workspaceId/projects/:projectId/comparison", element: <ComparisonPage /> },
           {
             path: "workspaces/:workspaceId",
             element: <WorkspacePage />,
             children: [
               { index: true, element: <Navigate to="members" replace /> },
+              { path: "projects", element: <ProjectsSection /> },
               { path: "members", element: <MembersSection /> },
               { path: "invitations", element: <InvitationsSection /> },
               { path: "share-links", element: <ShareLinksSection /> },

@@ -26,6 +26,7 @@ export function WorkspacePage() {
   }
   const w = workspace.data;
   const tabs = [
+    { to: "projects", label: "Projects", show: true },
     { to: "members", label: "Members", show: true },
     { to: "invitations", label: "Invitations", show: roleAtLeast(w.role, "owner") },
     { to: "share-links", label: "Share links", show: roleAtLeast(w.role, "editor") },

@@ -1,0 +1,154 @@
+import { useState } from "react";
+import { Link, useParams } from "react-router-dom";
+import { governingSentence } from "../../../../../core/contract/comparison";
+import { CRITERION_LABELS, type CriterionName } from "../../../../../core/contract/projects";
+import { Caution } from "../../../components/Caution";
+import { Panel } from "../../../components/Panel";
+import { Verdict } from "../../../components/Verdict";
+import { ToolButton } from "../../../components/ToolButton";
+import { downloadText, toCsv } from "../../../lib/csv";
+import { FormMessage } from "../../../lib/forms";
+import { useComparedProject, useComparedWorkspace, useComparison } from "../api/get-comparison";
+import { comparisonTable } from "../model/rows";
+import { ComparisonTable } from "./ComparisonTable";
+import { UtilisationChart } from "./UtilisationChart";
+
+/** `/workspaces/:workspaceId/projects/:projectId/comparison`: which case governs, and by how much. */
+export function ComparisonPage() {
+  const { workspaceId = "", projectId = "" } = useParams();
+  const workspace = useComparedWorkspace(workspaceId);
+  const project = useComparedProject(workspaceId, projectId);
+  const comparison = useComparison(workspaceId, projectId);
+  const [chartCriterion, setChartCriterion] = useState<CriterionName | null>(null);
+
+  if (comparison.isPending || project.isPending)
+    return <p className="text-graphite-soft">Computing the comparison…</p>;
+  if (comparison.error || project.error) return <FormMessage error={comparison.error ?? project.error} />;
+  const c = comparison.data;
+  const p = project.data;
+  const unit = p.unitSystem === "US" ? "ksi" : "MPa";
+  const criterion = chartCriterion ?? c.requirements[0]?.criterion ?? "von-mises";
+  const top = c.governing.reduce<(typeof c.governing)[number] | null>(
+    (a, g) => (!a || g.utilisation > a.utilisation ? g : a),
+    null,
+  );
+
+  return (
+    <div className="space-y-5">
+      <header className="flex flex-wrap items-end justify-between gap-4 border-b border-rule pb-4">
+        <div>
+          <p className="text-sm text-graphite-soft">
+            <Link
+              to={`/workspaces/${workspaceId}/projects`}
+              className="text-ink underline-offset-2 hover:underline"
+            >
+              {workspace.data?.name ?? "Workspace"}
+            </Link>{" "}
+            /{" "}
+            <Link
+              to={`/workspaces/${workspaceId}/projects/${projectId}`}
+              className="text-ink underline-offset-2 hover:underline"
+            >
+              {p.name}
+            </Link>
+          </p>
+          <h1 className="text-3xl font-semibold tracking-tight">Comparison</h1>
+          <p className="mt-1 text-graphite-soft">
+            Every load case and combination at every location, against{" "}
+            {c.requirements.map((r) => `${CRITERION_LABELS[r.criterion]} n ≥ ${r.requiredFactor}`).join(", ")}
+            .
+          </p>
+        </div>
+        <ToolButton onClick={() => downloadText(`${p.name} comparison.csv`, toCsv(comparisonTable(c, unit)))}>
+          Export CSV
+        </ToolButton>
+      </header>
+
+      <section aria-label="Governing case" className="rounded-sm border border-rule bg-panel px-4 py-3">
+        {top ? (
+          <p className="flex flex-wrap items-center gap-3 text-lg">
+            <Verdict state={top.verdict} />
+            <strong data-testid="governing-summary">{c.summary}</strong>
+          </p>
+        ) : (
+          <p className="text-graphite-soft">
+            Nothing could be evaluated yet: enter states and choose a material with the strengths the criteria
+            need.
+          </p>
+        )}
+        {c.governing.length > 1 && (
+          <ul className="mt-2 space-y-0.5 text-[14px] text-graphite-soft">
+            {c.governing.map((g) => (
+              <li key={g.criterion}>
+                <Verdict state={g.verdict} /> {CRITERION_LABELS[g.criterion]}: {governingSentence(g)}
+              </li>
+            ))}
+          </ul>
+        )}
+        <div className="mt-2 space-y-0.5">
+          {c.cautions.map((text) => (
+            <p key={text} className="text-[13px] text-graphite-soft">
+              <span aria-hidden="true">⚠ </span>
+              {text}
+            </p>
+          ))}
+        </div>
+      </section>
+
+      <Panel
+        id="comparison-table"
+        index="1"
+        title="Cases × locations"
+        subtitle={`principal stresses σ₁ ≥ σ₂ ≥ σ₃ in ${unit}; SF against the required factor`}
+      >
+        <ComparisonTable comparison={c} unit={unit} workspaceId={workspaceId} />
+        {c.skipped.length > 0 && (
+          <p className="border-t border-rule px-3 py-2 text-[13px] text-graphite-soft">
+            Not compared:{" "}
+            {c.skipped.map((s) => `${s.caseName} at ${s.locationName} (${s.reason})`).join("; ")}.
+          </p>
+        )}
+      </Panel>
+
+      <Panel
+        id="utilisation"
+        index="2"
+        title="Utilisation per case"
+        subtitle="u = required factor / safety factor; the allowable is u = 1"
+        tools={c.requirements.map((r) => (
+          <ToolButton
+            key={r.criterion}
+            pressed={criterion === r.criterion}
+            onClick={() => setChartCriterion(r.criterion)}
+          >
+            {CRITERION_LABELS[r.criterion]}
+          </ToolButton>
+        ))}
+      >
+        <UtilisationChart comparison={c} criterion={criterion} />
+      </Panel>
+
+      {c.governingByLocation.length > 0 && (
+        <Panel id="by-location" index="3" title="Governing case per location">
+          <ul className="divide-y divide-rule text-[14px]">
+            {c.governingByLocation.map((l) => (
+              <li key={l.locationId} className="px-3 py-2">
+                <span className="font-semibold">{l.locationName}</span>:{" "}
+                {l.governing.length === 0
+                  ? "nothing evaluated"
+                  : l.governing.map((g) => (
+                      <span key={g.criterion} className="mr-4 inline-flex items-center gap-1.5">
+                        {CRITERION_LABELS[g.criterion]} — {g.caseName}, SF{" "}
+                        <span className="num">{g.factor === null ? "∞" : g.factor.toFixed(2)}</span>
+                        <Verdict state={g.verdict} />
+                      </span>
+                    ))}
+              </li>
+            ))}
+          </ul>
+        </Panel>
+      )}
+      <Caution />
+    </div>
+  );
+}

@@ -1,0 +1,35 @@
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import {
+  combinationListSchema,
+  combinationResponseSchema,
+  type CreateCombinationBody,
+} from "../../../../../core/contract/combinations";
+import { apiGet, apiSend } from "../../../lib/api-client";
+import { projectKeys, projectPath } from "./keys";
+
+export const useCombinations = (workspaceId: string, projectId: string) =>
+  useQuery({
+    queryKey: [...projectKeys.project(workspaceId, projectId), "combinations"],
+    queryFn: () =>
+      apiGet(`${projectPath(workspaceId, projectId)}/combinations`, combinationListSchema).then(
+        (r) => r.combinations,
+      ),
+  });
+
+export function useCombinationMutations(workspaceId: string, projectId: string) {
+  const queryClient = useQueryClient();
+  const base = `${projectPath(workspaceId, projectId)}/combinations`;
+  const onSettled = () =>
+    queryClient.invalidateQueries({ queryKey: projectKeys.project(workspaceId, projectId) });
+  return {
+    create: useMutation({
+      mutationFn: (body: Omit<CreateCombinationBody, "description"> & { description?: string }) =>
+        apiSend("POST", base, body, combinationResponseSchema),
+      onSettled,
+    }),
+    remove: useMutation({
+      mutationFn: (id: string) => apiSend("DELETE", `${base}/${id}`, undefined, null),
+      onSettled,
+    }),
+  };
+}

@@ -1,0 +1,24 @@
+import { useMutation, useQuery, useQueryClient } from "@tanstack/react-query";
+import {
+  materialListSchema,
+  materialResponseSchema,
+  type MaterialInput,
+} from "../../../../../core/contract/materials";
+import { apiGet, apiSend } from "../../../lib/api-client";
+import { projectKeys } from "./keys";
+
+/** The library and the built-in list of published grades. */
+export const useMaterials = (workspaceId: string) =>
+  useQuery({
+    queryKey: projectKeys.materials(workspaceId),
+    queryFn: () => apiGet(`/workspaces/${workspaceId}/materials`, materialListSchema),
+  });
+
+export function useCreateMaterial(workspaceId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (body: Partial<MaterialInput> & { name: string }) =>
+      apiSend("POST", `/workspaces/${workspaceId}/materials`, body, materialResponseSchema),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: ["project-area", workspaceId] }),
+  });
+}

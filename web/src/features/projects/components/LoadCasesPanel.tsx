@@ -1,0 +1,253 @@
+import { useState, type FormEvent } from "react";
+import { Link } from "react-router-dom";
+import { LOAD_CASE_CATEGORY_SUGGESTIONS, type LoadCase } from "../../../../../core/contract/load-cases";
+import type { StressUnitName } from "../../../../../core/contract/materials";
+import type { Location } from "../../../../../core/contract/projects";
+import { ApiError, fieldErrorsOf } from "../../../lib/api-client";
+import { FormMessage, primaryButton } from "../../../lib/forms";
+import { Panel } from "../../../components/Panel";
+import { Quantity, stressTone } from "../../../components/Quantity";
+import { ToolButton } from "../../../components/ToolButton";
+import { useLoadCaseMutations } from "../api/load-cases";
+import { benchLinkForState } from "../../../lib/bench-link";
+import { formatStress } from "../model/units";
+import { StateForm } from "./StateForm";
+
+const SHOWN = [
+  ["xx", "σxx"],
+  ["yy", "σyy"],
+  ["zz", "σzz"],
+  ["xy", "τxy"],
+  ["yz", "τyz"],
+  ["zx", "τzx"],
+] as const;
+
+/** Load cases × locations: each cell is the saved state (non-zero components), with its source and revision. */
+export function LoadCasesPanel({
+  workspaceId,
+  projectId,
+  cases,
+  locations,
+  unit,
+  canEdit,
+}: {
+  workspaceId: string;
+  projectId: string;
+  cases: LoadCase[];
+  locations: Location[];
+  unit: StressUnitName;
+  canEdit: boolean;
+}) {
+  const m = useLoadCaseMutations(workspaceId, projectId);
+  const [editing, setEditing] = useState<{ caseId: string; locationId: string } | null>(null);
+  const [name, setName] = useState("");
+  const [category, setCategory] = useState("");
+
+  const add = (e: FormEvent) => {
+    e.preventDefault();
+    m.create.mutate({ name, category }, { onSuccess: () => (setName(""), setCategory("")) });
+  };
+  const editingCase = editing && cases.find((c) => c.id === editing.caseId);
+  const editingState = editingCase?.states.find((s) => s.locationId === editing?.locationId);
+  const conflict = m.saveState.error instanceof ApiError && m.saveState.error.status === 409;
+
+  return (
+    <Panel
+      id="load-cases"
+      index="3"
+      title="Load cases"
+      subtitle={`stress state at each location, in ${unit}; tension positive`}
+    >
+      <div className="overflow-x-auto">
+        <table className="w-full border-collapse text-[14px]">
+          <thead>
+            <tr className="border-b border-rule text-left text-[13px] text-graphite-soft">
+              <th scope="col" className="px-3 py-1.5 font-semibold">
+                Case
+              </th>
+              {locations.map((l) => (
+                <th key={l.id} scope="col" className="px-3 py-1.5 font-semibold">
+                  {l.name}
+                </th>
+              ))}
+              {canEdit && (
+                <th scope="col" className="sr-only">
+                  Actions
+                </th>
+              )}
+            </tr>
+          </thead>
+          <tbody>
+            {cases.length === 0 && (
+              <tr>
+                <td className="px-3 py-3 text-graphite-soft" colSpan={locations.length + 2}>
+                  No load cases yet.
+                </td>
+              </tr>
+            )}
+            {cases.map((c) => (
+              <tr key={c.id} className="border-b border-rule align-top">
+                <th scope="row" className="px-3 py-2 text-left">
+                  <span className="font-semibold">{c.name}</span>
+                  {c.category && (
+                    <span className="ml-2 rounded-sm bg-paper-deep px-1 text-[12px] text-graphite-soft">
+                      {c.category}
+                    </span>
+                  )}
+                  <div className="text-[12px] font-normal text-graphite-faint">version {c.version}</div>
+                </th>
+                {locations.map((l) => {
+                  const s = c.states.find((x) => x.locationId === l.id);
+                  return (
+                    <td key={l.id} className="px-3 py-2">
+                      {s ? (
+                        <div className="space-y-0.5">
+                          <div className="flex flex-wrap gap-x-3">
+                            {SHOWN.filter(([k]) => s.componentsPa[k] !== 0).map(([k, label]) => (
+                              <span key={k}>
+                                <span className="text-[12px] text-graphite-soft">{label} </span>
+                                <Quantity
+                                  value={formatStress(s.componentsPa[k], unit)}
+                                  tone={stressTone(s.componentsPa[k])}
+                                />
+                              </span>
+                            ))}
+                            {SHOWN.every(([k]) => s.componentsPa[k] === 0) && (
+                              <span className="text-graphite-soft">zero state</span>
+                            )}
+                          </div>
+                          <div className="flex flex-wrap items-center gap-2 text-[12px] text-graphite-faint">
+                            <span>
+                              {s.source} · rev. {s.revision}
+                            </span>
+                            <Link
+                              className="text-ink underline-offset-2 hover:underline"
+                              to={benchLinkForState(
+                                { workspaceId, projectId, loadCaseId: c.id, locationId: l.id },
+                                s.components,
+                                s.unit,
+                              )}
+                            >
+                              Open in bench
+                            </Link>
+                            {canEdit && (
+                              <ToolButton
+                                aria-label={`Edit ${c.name} at ${l.name}`}
+                                onClick={() => (
+                                  m.saveState.reset(),
+                                  setEditing({ caseId: c.id, locationId: l.id })
+                                )}
+                              >
+                                Edit
+                              </ToolButton>
+                            )}
+                          </div>
+                        </div>
+                      ) : canEdit ? (
+                        <ToolButton
+                          aria-label={`Enter ${c.name} at ${l.name}`}
+                          onClick={() => (
+                            m.saveState.reset(),
+                            setEditing({ caseId: c.id, locationId: l.id })
+                          )}
+                        >
+                          Enter state
+                        </ToolButton>
+                      ) : (
+                        <span className="text-graphite-faint">—</span>
+                      )}
+                    </td>
+                  );
+                })}
+                {canEdit && (
+                  <td className="px-3 py-2 text-right">
+                    <ToolButton
+                      aria-label={`Delete load case ${c.name}`}
+                      onClick={() => m.remove.mutate(c.id)}
+                    >
+                      Delete
+                    </ToolButton>
+                  </td>
+                )}
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </div>
+      {editing && editingCase && (
+        <div className="border-t border-rule p-3">
+          <p className="mb-2 text-sm font-semibold">
+            {editingCase.name} at {locations.find((l) => l.id === editing.locationId)?.name}
+          </p>
+          {conflict && (
+            <FormMessage>
+              Someone saved this load case meanwhile (now version{" "}
+              {
+                (m.saveState.error as ApiError & { details: { currentVersion: number } }).details
+                  .currentVersion
+              }
+              ). The table shows their values; save again to put yours over them.
+            </FormMessage>
+          )}
+          <StateForm
+            key={`${editing.caseId}:${editing.locationId}`}
+            idPrefix="state"
+            initial={editingState}
+            defaultUnit={unit}
+            pending={m.saveState.isPending}
+            error={conflict ? null : m.saveState.error}
+            onCancel={() => setEditing(null)}
+            onSave={(stress, source) =>
+              m.saveState.mutate(
+                {
+                  caseId: editingCase.id,
+                  locationId: editing.locationId,
+                  version: editingCase.version,
+                  stress,
+                  source,
+                },
+                { onSuccess: () => setEditing(null) },
+              )
+            }
+          />
+        </div>
+      )}
+      {canEdit && (
+        <form onSubmit={add} noValidate className="flex flex-wrap items-start gap-2 border-t border-rule p-3">
+          <label className="sr-only" htmlFor="new-case">
+            New load case name
+          </label>
+          <input
+            id="new-case"
+            placeholder="e.g. Hydrostatic test"
+            value={name}
+            onChange={(e) => setName(e.target.value)}
+            className="min-w-52 flex-1 rounded-sm border border-rule-strong bg-panel px-2 py-1"
+          />
+          <label className="sr-only" htmlFor="new-case-category">
+            Category
+          </label>
+          <input
+            id="new-case-category"
+            list="case-categories"
+            placeholder="category"
+            value={category}
+            onChange={(e) => setCategory(e.target.value)}
+            className="w-36 rounded-sm border border-rule-strong bg-panel px-2 py-1"
+          />
+          <datalist id="case-categories">
+            {LOAD_CASE_CATEGORY_SUGGESTIONS.map((s) => (
+              <option key={s} value={s} />
+            ))}
+          </datalist>
+          <button type="submit" className={primaryButton} disabled={m.create.isPending}>
+            Add load case
+          </button>
+          <div className="basis-full">
+            <FormMessage>{fieldErrorsOf(m.create.error).name}</FormMessage>
+          </div>
+        </form>
+      )}
+    </Panel>
+  );
+}

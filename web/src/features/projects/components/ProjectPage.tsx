@@ -1,0 +1,102 @@
+import { Link, useParams } from "react-router-dom";
+import { Caution } from "../../../components/Caution";
+import { ApiError } from "../../../lib/api-client";
+import { FormMessage, quietButton } from "../../../lib/forms";
+import { useCombinations } from "../api/combinations";
+import { useLoadCases } from "../api/load-cases";
+import { useLocations } from "../api/locations";
+import { useProject } from "../api/projects";
+import { useWorkspaceRole } from "../api/workspace-role";
+import { displayUnit } from "../model/units";
+import { ActivityPanel } from "./ActivityPanel";
+import { CombinationsPanel } from "./CombinationsPanel";
+import { LoadCasesPanel } from "./LoadCasesPanel";
+import { LocationsPanel } from "./LocationsPanel";
+import { MaterialsPanel } from "./MaterialsPanel";
+import { RequirementsPanel } from "./RequirementsPanel";
+
+/** `/workspaces/:workspaceId/projects/:projectId`: a project's inputs, in the order a check is set up. */
+export function ProjectPage() {
+  const { workspaceId = "", projectId = "" } = useParams();
+  const role = useWorkspaceRole(workspaceId);
+  const project = useProject(workspaceId, projectId);
+  const locations = useLocations(workspaceId, projectId);
+  const cases = useLoadCases(workspaceId, projectId);
+  const combinations = useCombinations(workspaceId, projectId);
+
+  if (project.isPending || role.isPending) return <p className="text-graphite-soft">Loading…</p>;
+  if (project.error) {
+    if (project.error instanceof ApiError && [400, 404].includes(project.error.status)) {
+      return (
+        <p className="py-12 text-center text-graphite-soft">
+          No project here for you: it does not exist, is in the trash, or you are not a member.
+        </p>
+      );
+    }
+    return <FormMessage error={project.error} />;
+  }
+  const p = project.data;
+  const unit = displayUnit(p.unitSystem);
+  const canEdit = role.canEdit;
+  return (
+    <div className="space-y-5">
+      <header className="flex flex-wrap items-end justify-between gap-4 border-b border-rule pb-4">
+        <div>
+          <p className="text-sm text-graphite-soft">
+            <Link
+              to={`/workspaces/${workspaceId}/projects`}
+              className="text-ink underline-offset-2 hover:underline"
+            >
+              {role.data?.name ?? "Workspace"}
+            </Link>{" "}
+            / project
+          </p>
+          <h1 className="text-3xl font-semibold tracking-tight">{p.name}</h1>
+          {p.description && <p className="mt-1 max-w-3xl text-graphite-soft">{p.description}</p>}
+          {!canEdit && (
+            <p className="mt-1 text-sm text-graphite-soft">
+              You are a {role.role} here: you can read everything but not change inputs.
+            </p>
+          )}
+        </div>
+        <div className="flex gap-2">
+          <Link to={`/workspaces/${workspaceId}/projects/${projectId}/comparison`} className={quietButton}>
+            Comparison
+          </Link>
+          <a
+            href={`/api/workspaces/${workspaceId}/projects/${projectId}/export`}
+            download
+            className={quietButton}
+          >
+            Export JSON
+          </a>
+        </div>
+      </header>
+      <RequirementsPanel key={p.version} project={p} canEdit={canEdit} />
+      <LocationsPanel
+        workspaceId={workspaceId}
+        projectId={projectId}
+        locations={locations.data ?? []}
+        canEdit={canEdit}
+      />
+      <LoadCasesPanel
+        workspaceId={workspaceId}
+        projectId={projectId}
+        cases={cases.data ?? []}
+        locations={locations.data ?? []}
+        unit={unit}
+        canEdit={canEdit}
+      />
+      <CombinationsPanel
+        workspaceId={workspaceId}
+        projectId={projectId}
+        combinations={combinations.data ?? []}
+        cases={cases.data ?? []}
+        canEdit={canEdit}
+      />
+      <MaterialsPanel workspaceId={workspaceId} unit={unit} canEdit={canEdit} />
+      <ActivityPanel workspaceId={workspaceId} projectId={projectId} index="6" />
+      <Caution />
+    </div>
+  );
+}

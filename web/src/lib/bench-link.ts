@@ -1,0 +1,44 @@
+import type { Components } from "../../../core/contract/load-cases";
+import type { StressUnitName } from "../../../core/contract/materials";
+
+/** Which saved state the bench edits: a load case's state at one location. */
+export type BenchSource = { workspaceId: string; projectId: string; loadCaseId: string; locationId: string };
+
+const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
+
+function stateParams(q: URLSearchParams, components: Components, unit: StressUnitName) {
+  const c = components;
+  q.set("s", [c.xx, c.yy, c.zz, c.xy, c.yz, c.zx].map((v) => Number(v.toPrecision(15))).join(","));
+  q.set("u", unit);
+}
+
+const tidy = (q: URLSearchParams) => q.toString().replace(/%2F/g, "/").replace(/%2C/g, ",");
+
+/**
+ * The bench address for a saved state: `source` names workspace/project/case/location (the
+ * bench loads the saved revision and its version from it and saves back to it); `s` and `u`
+ * carry the same numbers in the bench's own URL encoding so the bench shows them at once.
+ */
+export function benchLinkForState(source: BenchSource, components: Components, unit: StressUnitName): string {
+  const q = new URLSearchParams();
+  q.set("source", [source.workspaceId, source.projectId, source.loadCaseId, source.locationId].join("/"));
+  stateParams(q, components, unit);
+  return `/bench?${tidy(q)}`;
+}
+
+/** The bench address for a state that is not saved anywhere (e.g. a combination's superposed state): view only. */
+export function benchLinkForValues(components: Components, unit: StressUnitName): string {
+  const q = new URLSearchParams();
+  stateParams(q, components, unit);
+  return `/bench?${tidy(q)}`;
+}
+
+/** Reads `source=workspace/project/case/location` from a query string; null when absent or malformed. */
+export function parseBenchSource(search: string): BenchSource | null {
+  const raw = new URLSearchParams(search).get("source");
+  if (!raw) return null;
+  const parts = raw.split("/");
+  if (parts.length !== 4 || !parts.every((p) => UUID.test(p))) return null;
+  const [workspaceId, projectId, loadCaseId, locationId] = parts;
+  return { workspaceId, projectId, loadCaseId, locationId };
+}

@@ -6,6 +6,7 @@ import { ElementPanel } from "./ElementPanel";
 import { EnvelopePlot } from "./EnvelopePlot";
 import { MohrPanel } from "./MohrPanel";
 import { PrincipalPanel } from "./PrincipalPanel";
+import { SavedStateBar } from "./SavedStateBar";
 import { ShareBar } from "./ShareBar";
 import { StressInputPanel } from "./StressInputPanel";
 
@@ -48,6 +49,7 @@ export function BenchPage() {
         </h1>
         <ShareBar />
       </div>
+      <SavedStateBar />
       <div className="grid items-start gap-2 md:grid-cols-[17rem_minmax(0,1fr)] xl:grid-cols-[17.5rem_minmax(0,1fr)_minmax(0,1fr)]">
         <div className="flex min-w-0 flex-col gap-2">
           <StressInputPanel />

@@ -14,9 +14,11 @@ export function useUrlSync() {
     const shared = decodeBenchState(window.location.search);
     if (Object.keys(shared).length > 0) useBenchStore.getState().act.applyShared(shared);
     let timer: number | undefined;
+    // A bench opened from a project keeps its `source` (workspace/project/case/location) in the address.
+    const source = new URLSearchParams(window.location.search).get("source");
     const write = () => {
       const query = encodeBenchState(useBenchStore.getState());
-      const url = `${window.location.pathname}?${query}${window.location.hash}`;
+      const url = `${window.location.pathname}?${source ? `source=${source}&` : ""}${query}${window.location.hash}`;
       window.history.replaceState(window.history.state, "", url);
     };
     write();

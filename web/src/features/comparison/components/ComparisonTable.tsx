@@ -92,19 +92,24 @@ export function ComparisonTable({
       helper.accessor("locationId", {
         header: "Location",
         filterFn: "equalsString",
-        cell: (info) => info.row.original.locationName,
+        cell: (info) => (
+          <div>
+            {info.row.original.locationName}
+            <div className="text-[12px] text-graphite-soft">{info.row.original.material.label}</div>
+          </div>
+        ),
         sortingFn: (a, b) => a.original.locationName.localeCompare(b.original.locationName),
-      }),
-      helper.accessor((r) => r.material.label, {
-        id: "material",
-        header: "Material",
-        cell: (i) => <span className="text-[13px]">{i.getValue()}</span>,
       }),
       ...([0, 1, 2] as const).map((k) =>
         helper.accessor((r) => r.principalPa[k], {
           id: `s${k + 1}`,
           header: `σ${["₁", "₂", "₃"][k]}`,
-          cell: (i) => <Quantity value={stress(i.getValue(), unit)} tone={stressTone(i.getValue())} />,
+          cell: (i) => (
+            <Quantity
+              value={stress(i.getValue(), unit)}
+              tone={stressTone(i.getValue(), Math.max(...i.row.original.principalPa.map(Math.abs)))}
+            />
+          ),
           meta: { numeric: true },
         }),
       ),

@@ -99,7 +99,7 @@ export function UtilisationChart({
       <text x={x(1) + 3} y={12} className="fill-fail text-[11px] font-semibold">
         allowable (u = 1)
       </text>
-      <text x={labelWidth} y={height - 10} textAnchor="end" className="fill-graphite-soft text-[11px]">
+      <text x={labelWidth - 24} y={height - 10} textAnchor="end" className="fill-graphite-soft text-[11px]">
         u = n_req / n
       </text>
     </svg>

@@ -19,8 +19,7 @@ export const useCombinations = (workspaceId: string, projectId: string) =>
 export function useCombinationMutations(workspaceId: string, projectId: string) {
   const queryClient = useQueryClient();
   const base = `${projectPath(workspaceId, projectId)}/combinations`;
-  const onSettled = () =>
-    queryClient.invalidateQueries({ queryKey: projectKeys.project(workspaceId, projectId) });
+  const onSettled = () => queryClient.invalidateQueries({ queryKey: ["project-area", workspaceId] });
   return {
     create: useMutation({
       mutationFn: (body: Omit<CreateCombinationBody, "description"> & { description?: string }) =>

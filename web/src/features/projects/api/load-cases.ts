@@ -27,8 +27,7 @@ export type StressBody = {
 export function useLoadCaseMutations(workspaceId: string, projectId: string) {
   const queryClient = useQueryClient();
   const base = `${projectPath(workspaceId, projectId)}/load-cases`;
-  const onSettled = () =>
-    queryClient.invalidateQueries({ queryKey: projectKeys.project(workspaceId, projectId) });
+  const onSettled = () => queryClient.invalidateQueries({ queryKey: ["project-area", workspaceId] });
   return {
     create: useMutation({
       mutationFn: (body: { name: string; category: string; description?: string }) =>

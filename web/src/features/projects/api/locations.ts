@@ -19,8 +19,7 @@ export const useLocations = (workspaceId: string, projectId: string) =>
 export function useLocationMutations(workspaceId: string, projectId: string) {
   const queryClient = useQueryClient();
   const base = `${projectPath(workspaceId, projectId)}/locations`;
-  const onSettled = () =>
-    queryClient.invalidateQueries({ queryKey: projectKeys.project(workspaceId, projectId) });
+  const onSettled = () => queryClient.invalidateQueries({ queryKey: ["project-area", workspaceId] });
   return {
     create: useMutation({
       mutationFn: (body: Partial<CreateLocationBody> & { name: string }) =>

@@ -41,7 +41,7 @@ export function useUpdateProject(workspaceId: string, projectId: string) {
       apiSend("PATCH", projectPath(workspaceId, projectId), body, projectResponseSchema).then(
         (r) => r.project,
       ),
-    onSettled: () => queryClient.invalidateQueries({ queryKey: projectKeys.project(workspaceId, projectId) }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: ["project-area", workspaceId] }),
   });
 }
 

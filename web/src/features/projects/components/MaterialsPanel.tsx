@@ -58,10 +58,16 @@ export function MaterialsPanel({
             <tr key={m.id} className="border-b border-rule">
               <td className="px-3 py-1.5 font-semibold">{m.name}</td>
               <td className="px-3 py-1.5 text-right">
-                <Quantity value={formatStress(m.yieldPa, unit)} unit={unit} />
+                <Quantity
+                  value={formatStress(m.yieldPa, unit)}
+                  unit={m.yieldPa === null ? undefined : unit}
+                />
               </td>
               <td className="px-3 py-1.5 text-right">
-                <Quantity value={formatStress(m.ultimateTensionPa, unit)} unit={unit} />
+                <Quantity
+                  value={formatStress(m.ultimateTensionPa, unit)}
+                  unit={m.ultimateTensionPa === null ? undefined : unit}
+                />
               </td>
               <td className="px-3 py-1.5 text-graphite-soft">{m.reference || "library, no reference"}</td>
             </tr>
@@ -72,10 +78,16 @@ export function MaterialsPanel({
                 {m.name} <span className="text-graphite-soft">({m.standard})</span>
               </td>
               <td className="px-3 py-1.5 text-right">
-                <Quantity value={formatStress(m.yieldPa, unit)} unit={unit} />
+                <Quantity
+                  value={formatStress(m.yieldPa, unit)}
+                  unit={m.yieldPa === null ? undefined : unit}
+                />
               </td>
               <td className="px-3 py-1.5 text-right">
-                <Quantity value={formatStress(m.ultimateTensionPa, unit)} unit={unit} />
+                <Quantity
+                  value={formatStress(m.ultimateTensionPa, unit)}
+                  unit={m.ultimateTensionPa === null ? undefined : unit}
+                />
               </td>
               <td className="px-3 py-1.5 text-graphite-soft">published minimum, {m.scope}</td>
             </tr>

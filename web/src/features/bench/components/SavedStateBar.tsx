@@ -1,0 +1,270 @@
+import { useMutation, useQuery } from "@tanstack/react-query";
+import { useEffect, useMemo, useRef, useState } from "react";
+import { Link } from "react-router-dom";
+import { z } from "zod";
+import { convertStress } from "../../../../../core";
+import { loadCaseResponseSchema, type LoadCase } from "../../../../../core/contract/load-cases";
+import {
+  materialListSchema,
+  type MaterialList,
+  type MaterialRef,
+} from "../../../../../core/contract/materials";
+import { locationResponseSchema, projectResponseSchema } from "../../../../../core/contract/projects";
+import { roleAtLeast, workspaceSchema } from "../../../../../core/contract/workspaces";
+import { ToolButton } from "../../../components/ToolButton";
+import { ApiError, apiGet, apiSend } from "../../../lib/api-client";
+import { parseBenchSource, type BenchSource } from "../../../lib/bench-link";
+import { FormMessage } from "../../../lib/forms";
+import { useBenchStore } from "../model/store";
+import type { BenchState } from "../model/bench-state";
+
+const workspaceResponse = z.object({ workspace: workspaceSchema });
+const KEYS = ["xx", "yy", "zz", "xy", "yz", "zx"] as const;
+
+/** The saved state at the source's location, as bench fields (tensor in the unit it was entered in). */
+function benchFieldsOf(loadCase: LoadCase, locationId: string): Pick<BenchState, "tensor" | "unit"> | null {
+  const s = loadCase.states.find((x) => x.locationId === locationId);
+  return s ? { tensor: { ...s.components }, unit: s.unit } : null;
+}
+
+/** A copy's basis: the case version it started from, and the values and revision saved at it. */
+type Basis = { version: number; saved: Pick<BenchState, "tensor" | "unit">; revision: number };
+
+function basisOf(loadCase: LoadCase, locationId: string): Basis | null {
+  const saved = benchFieldsOf(loadCase, locationId);
+  const state = loadCase.states.find((s) => s.locationId === locationId);
+  return saved && state ? { version: loadCase.version, saved, revision: state.revision } : null;
+}
+
+/** The bench's material for a project material reference (strengths in MPa, as the bench keeps them). */
+function materialFieldsOf(
+  ref: MaterialRef | null,
+  list: MaterialList | undefined,
+): BenchState["material"] | null {
+  if (!ref || !list) return null;
+  const mpa = (pa: number | null) => (pa === null ? null : convertStress(pa, "Pa", "MPa"));
+  if (ref.kind === "published") {
+    const m = list.published.find((p) => p.id === ref.id);
+    return m
+      ? {
+          presetId: m.id,
+          yield: mpa(m.yieldPa),
+          ultimateTension: mpa(m.ultimateTensionPa),
+          ultimateCompression: mpa(m.ultimateCompressionPa),
+        }
+      : null;
+  }
+  const m = list.materials.find((x) => x.id === ref.id);
+  return m
+    ? {
+        presetId: null,
+        yield: mpa(m.yieldPa),
+        ultimateTension: mpa(m.ultimateTensionPa),
+        ultimateCompression: mpa(m.ultimateCompressionPa),
+      }
+    : null;
+}
+
+/** Whether the bench's tensor differs from the saved one (compared in Pa, to 1e-9 relative). */
+function differs(a: Pick<BenchState, "tensor" | "unit">, b: Pick<BenchState, "tensor" | "unit">): boolean {
+  const pa = (x: Pick<BenchState, "tensor" | "unit">) =>
+    KEYS.map((k) => convertStress(x.tensor[k], x.unit, "Pa"));
+  const [pa1, pa2] = [pa(a), pa(b)];
+  const scale = Math.max(1, ...pa1.map(Math.abs), ...pa2.map(Math.abs));
+  return pa1.some((v, i) => Math.abs(v - pa2[i]) > 1e-9 * scale);
+}
+
+/**
+ * When the bench was opened from a project (`?source=workspace/project/case/location`): loads
+ * the saved state, says where it comes from, and lets editors save edits back as a new
+ * revision over the version they started from. A 409 shows who won and offers to reload
+ * their values or keep this copy and save over the newer version. Reviewers and viewers see it
+ * read-only. Renders nothing for a plain bench.
+ */
+export function SavedStateBar() {
+  const [source] = useState<BenchSource | null>(() => parseBenchSource(window.location.search));
+  if (!source) return null;
+  return <SavedState source={source} />;
+}
+
+function SavedState({ source }: { source: BenchSource }) {
+  const base = `/workspaces/${source.workspaceId}/projects/${source.projectId}`;
+  const act = useBenchStore((s) => s.act);
+  const tensor = useBenchStore((s) => s.tensor);
+  const unit = useBenchStore((s) => s.unit);
+  const workspace = useQuery({
+    queryKey: ["bench-source", source, "workspace"],
+    queryFn: () => apiGet(`/workspaces/${source.workspaceId}`, workspaceResponse).then((r) => r.workspace),
+    retry: false,
+  });
+  const project = useQuery({
+    queryKey: ["bench-source", source, "project"],
+    queryFn: () => apiGet(base, projectResponseSchema).then((r) => r.project),
+    retry: false,
+  });
+  const location = useQuery({
+    queryKey: ["bench-source", source, "location"],
+    queryFn: () =>
+      apiGet(`${base}/locations/${source.locationId}`, locationResponseSchema).then((r) => r.location),
+    retry: false,
+  });
+  const materials = useQuery({
+    queryKey: ["bench-source", source, "materials"],
+    queryFn: () => apiGet(`/workspaces/${source.workspaceId}/materials`, materialListSchema),
+  });
+  const loadCase = useQuery({
+    queryKey: ["bench-source", source, "case"],
+    queryFn: () =>
+      apiGet(`${base}/load-cases/${source.loadCaseId}`, loadCaseResponseSchema).then((r) => r.loadCase),
+    retry: false,
+    // Fetched fresh on every opening: a cached copy would hand the bench an old version to save over.
+    gcTime: 0,
+  });
+  // The version this copy is based on, and the values saved at it: first as loaded, then as saved or reloaded here.
+  const loadedBasis = useMemo(
+    () => (loadCase.data ? basisOf(loadCase.data, source.locationId) : null),
+    [loadCase.data, source.locationId],
+  );
+  const [laterBasis, setBasis] = useState<Basis | null>(null);
+  const basis = laterBasis ?? loadedBasis;
+  const [conflict, setConflict] = useState<{ currentVersion: number; current: LoadCase } | null>(null);
+  const [savedNote, setSavedNote] = useState<string | null>(null);
+  const applied = useRef(false);
+
+  // Puts the saved values into the bench's store once they arrive.
+  useEffect(() => {
+    if (!loadedBasis || applied.current) return;
+    applied.current = true;
+    act.applyShared(loadedBasis.saved);
+  }, [loadedBasis, act]);
+
+  // The check the project makes: its first required factor and the location's (or project's) material.
+  useEffect(() => {
+    if (!project.data || !location.data || !materials.data) return;
+    const material = materialFieldsOf(location.data.material ?? project.data.defaultMaterial, materials.data);
+    const required = project.data.requirements[0]?.requiredFactor;
+    act.applyShared({
+      ...(material ? { material } : {}),
+      ...(required ? { requiredFactor: required } : {}),
+    });
+  }, [project.data, location.data, materials.data, act]);
+
+  const save = useMutation({
+    mutationFn: (version: number) =>
+      apiSend(
+        "PUT",
+        `${base}/load-cases/${source.loadCaseId}/states/${source.locationId}`,
+        { version, stress: { unit, components: tensor }, source: "typed", note: "edited in the bench" },
+        loadCaseResponseSchema,
+      ).then((r) => r.loadCase),
+    onSuccess: (saved) => {
+      const next = basisOf(saved, source.locationId)!;
+      setBasis(next);
+      const revision = next.revision;
+      setConflict(null);
+      setSavedNote(`Saved as revision ${revision} (load case version ${saved.version}).`);
+    },
+    onError: (error) => {
+      if (error instanceof ApiError && error.status === 409) {
+        const details = error.details as { currentVersion: number; current: unknown };
+        setConflict({
+          currentVersion: details.currentVersion,
+          current: loadCaseResponseSchema.shape.loadCase.parse(details.current),
+        });
+      }
+    },
+  });
+
+  const failed = [workspace, project, location, loadCase].find((q) => q.error);
+  if (failed) {
+    return (
+      <FormMessage>
+        This saved state cannot be opened:{" "}
+        {failed.error instanceof Error ? failed.error.message : "unknown error"}
+      </FormMessage>
+    );
+  }
+  if (!workspace.data || !project.data || !location.data || !loadCase.data || !basis) {
+    return <p className="text-[13px] text-graphite-soft">Loading the saved state…</p>;
+  }
+  const canEdit = roleAtLeast(workspace.data.role, "editor");
+  const changed = differs({ tensor, unit }, basis.saved);
+
+  return (
+    <section
+      aria-label="Saved state"
+      className="flex flex-wrap items-center gap-x-3 gap-y-1 rounded-sm border border-ink/40 bg-ink-wash px-3 py-1.5 text-[13px]"
+    >
+      <span>
+        Saved state: <strong>{loadCase.data.name}</strong> at <strong>{location.data.name}</strong> in{" "}
+        <Link
+          to={`/workspaces/${source.workspaceId}/projects/${source.projectId}`}
+          className="text-ink underline-offset-2 hover:underline"
+        >
+          {project.data.name}
+        </Link>{" "}
+        · revision <span className="num">{basis.revision}</span> · case version{" "}
+        <span className="num">{basis.version}</span>
+      </span>
+      <Link
+        to={`/workspaces/${source.workspaceId}/projects/${source.projectId}/comparison`}
+        className="text-ink underline-offset-2 hover:underline"
+      >
+        Comparison
+      </Link>
+      {canEdit ? (
+        <>
+          <span className="text-graphite-soft">{changed ? "edited here, not saved" : "unchanged"}</span>
+          <ToolButton
+            onClick={() => (setSavedNote(null), save.mutate(basis.version))}
+            disabled={!changed || save.isPending || !!conflict}
+          >
+            Save to project
+          </ToolButton>
+        </>
+      ) : (
+        <span className="text-graphite-soft">
+          View only: as {workspace.data.role} you can explore this state but not save it.
+        </span>
+      )}
+      {savedNote && !changed && <span className="text-pass">✓ {savedNote}</span>}
+      {conflict && (
+        <div
+          role="alert"
+          className="basis-full space-y-1 rounded-sm border border-fail bg-fail-wash px-2 py-1.5 text-fail"
+        >
+          <p>
+            ✗ Someone saved this load case while you were editing (it is now version {conflict.currentVersion}
+            ). Nothing was overwritten.
+          </p>
+          <div className="flex gap-2">
+            <ToolButton
+              onClick={() => {
+                const fields = benchFieldsOf(conflict.current, source.locationId);
+                if (fields) act.applyShared(fields);
+                const revision =
+                  conflict.current.states.find((s) => s.locationId === source.locationId)?.revision ??
+                  basis.revision;
+                if (fields) setBasis({ version: conflict.currentVersion, saved: fields, revision });
+                setConflict(null);
+              }}
+            >
+              Reload their values
+            </ToolButton>
+            <ToolButton
+              onClick={() => {
+                setConflict(null);
+                save.mutate(conflict.currentVersion);
+              }}
+            >
+              Keep my copy and save over version {conflict.currentVersion}
+            </ToolButton>
+          </div>
+        </div>
+      )}
+      {save.error && !conflict && !(save.error instanceof ApiError && save.error.status === 409) && (
+        <FormMessage error={save.error} />
+      )}
+    </section>
+  );
+}

@@ -12,7 +12,7 @@ import {
   transformPlaneStress,
   type StressTensor,
 } from "../../core";
-import { launchChromium, screenshotDir } from "../support/browser";
+import { launchChromium, screenshotDir, signUpInContext, type BrowserAccount } from "../support/browser";
 import { startTestServer } from "../support/server";
 
 /** Reads σ′ from the readout's data attributes (full precision) as a tensor. */
@@ -47,12 +47,18 @@ describe("the bench in Chromium", () => {
   let closeBrowser: () => Promise<void>;
   let context: BrowserContext;
   let page: Page;
+  let colleague: BrowserAccount;
   const errors: string[] = [];
 
   beforeAll(async () => {
     server = await startTestServer();
     ({ browser, close: closeBrowser } = await launchChromium());
     context = await browser.newContext({ viewport: { width: 1280, height: 800 } });
+    // The bench is for signed-in users; a colleague account stands by for the shared-link test.
+    await signUpInContext(context, server.url, "Teo Valdric");
+    const colleagueContext = await browser.newContext();
+    colleague = await signUpInContext(colleagueContext, server.url, "Ines Okafor-Lund");
+    await colleagueContext.close();
     await context.grantPermissions(["clipboard-read", "clipboard-write"], { origin: server.url });
     page = await context.newPage();
     page.on("pageerror", (error) => errors.push(error.message));
@@ -230,9 +236,15 @@ describe("the bench in Chromium", () => {
       material: await p.getByRole("combobox", { name: "Material" }).inputValue(),
     });
     const sent = await sheet(page);
+    // A colleague who is signed out opens the link: sign-in comes first, then exactly that state.
     const fresh = await browser.newContext({ viewport: { width: 1280, height: 800 } });
     const other = await fresh.newPage();
     await other.goto(link, { waitUntil: "networkidle" });
+    await other.waitForURL(/\/sign-in\?next=/);
+    await other.getByLabel("E-mail address").fill(colleague.email);
+    await other.getByLabel("Password").fill(colleague.password);
+    await other.getByRole("button", { name: "Sign in" }).click();
+    await other.waitForURL(link);
     await other.getByTestId("rotated-readout").waitFor();
     expect(await sheet(other)).toEqual(sent);
     expect(sent.material).toBe("s235");

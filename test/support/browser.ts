@@ -1,5 +1,6 @@
 import path from "node:path";
-import { chromium, type Browser } from "playwright-core";
+import { randomUUID } from "node:crypto";
+import { chromium, type Browser, type BrowserContext } from "playwright-core";
 
 /** Debian's Chromium; playwright-core never downloads a browser of its own. */
 export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
@@ -28,3 +29,30 @@ export async function launchChromium(): Promise<{ browser: Browser; close: () =>
 
 /** Where browser tests leave their screenshots (git-ignored). */
 export const screenshotDir = path.resolve("test-results", "screenshots");
+
+/** A person who signs up through {@link signUpInContext}. */
+export type BrowserAccount = { name: string; email: string; password: string };
+
+/**
+ * Signs a new account up through the API from inside `context`, so the context holds the
+ * session cookie (Playwright's request context shares the browser context's cookies).
+ * The Origin header is the app's own, as the CSRF check requires.
+ */
+export async function signUpInContext(
+  context: BrowserContext,
+  origin: string,
+  name = "Teo Valdric",
+): Promise<BrowserAccount> {
+  const account = {
+    name,
+    email: `${name.split(" ")[0].toLowerCase()}-${randomUUID().slice(0, 8)}@example.test`,
+    password: "rotated element 30",
+  };
+  const response = await context.request.post(`${origin}/api/auth/sign-up`, {
+    data: account,
+    headers: { Origin: origin },
+  });
+  if (response.status() !== 201)
+    throw new Error(`sign-up failed: ${response.status()} ${await response.text()}`);
+  return account;
+}

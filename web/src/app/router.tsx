@@ -34,9 +34,11 @@ export const router = createBrowserRouter([
       {
         path: "bench",
         element: (
-          <Suspense fallback={<p className="text-graphite-soft">Opening the bench…</p>}>
-            <BenchPage />
-          </Suspense>
+          <RequireSession>
+            <Suspense fallback={<p className="text-graphite-soft">Opening the bench…</p>}>
+              <BenchPage />
+            </Suspense>
+          </RequireSession>
         ),
       },
       // Accounts (open to everyone; invitation and share-link pages handle signed-out visitors themselves).

@@ -4,9 +4,15 @@ import { NumberField } from "../../../components/NumberField";
 import { Panel } from "../../../components/Panel";
 import { Quantity } from "../../../components/Quantity";
 import { Verdict } from "../../../components/Verdict";
-import { FROM_MEMORY_NOTE, PUBLISHED_MATERIALS, convertStress, publishedMaterial } from "../../../../../core";
+import {
+  CLOSE_BAND,
+  FROM_MEMORY_NOTE,
+  PUBLISHED_MATERIALS,
+  convertStress,
+  publishedMaterial,
+} from "../../../../../core";
 import { useCriteria } from "../hooks/use-derived";
-import { CLOSE_BAND, CRITERION_LABEL, governing } from "../model/derive";
+import { CRITERION_LABEL, governing } from "../model/derive";
 import { decimalsFor, editable, factor, fixed } from "../model/format";
 import { useBenchStore } from "../model/store";
 

@@ -26,6 +26,8 @@ import {
   type StressTensor,
   type StressUnit,
   type Vec3,
+  type Verdict,
+  verdictForFactor,
 } from "../../../../../core";
 import type { BenchState, EulerSequence, MaterialChoice } from "./bench-state";
 
@@ -38,22 +40,8 @@ export const CRITERION_LABEL: Readonly<Record<Criterion, string>> = {
   "modified-mohr": "Modified Mohr",
 };
 
-/** A verdict: the safety factor against the required one. */
-export type VerdictKind = "pass" | "close" | "fail";
-
-/** A factor within this fraction above the required one is "close" (the 10 %). */
-export const CLOSE_BAND = 0.1;
-
-/**
- * pass when n ≥ (1 + CLOSE_BAND)·n_req, close when n_req ≤ n < (1 + CLOSE_BAND)·n_req, fail when n < n_req.
- * @param n safety factor reached
- * @param required safety factor required
- */
-export function verdictFor(n: number, required: number): VerdictKind {
-  if (n < required) return "fail";
-  if (n < required * (1 + CLOSE_BAND)) return "close";
-  return "pass";
-}
+/** A verdict: the safety factor against the required one (core's rule, shared with the comparison). */
+export type VerdictKind = Verdict;
 
 /** The stress the criterion rates against, and its name. */
 const REFERENCE: Readonly<Record<Criterion, { key: keyof Material; symbol: string }>> = {
@@ -138,7 +126,7 @@ export function criteriaResults(
       reference: ref.symbol,
       n,
       utilisation: required / n,
-      verdict: verdictFor(n, required),
+      verdict: verdictForFactor(n, required),
     };
   });
 }

@@ -1,10 +1,10 @@
 import { describe, expect, it } from "vitest";
-import { rotateTensor } from "../../../../../core";
+import { rotateTensor, verdictForFactor as verdictFor } from "../../../../../core";
 import * as act from "./actions";
 import { initialBenchState } from "./bench-state";
 import { decodeBenchState, encodeBenchState } from "./url-state";
 import { resultsAsText } from "./results-text";
-import { criteriaOf, planePrincipals, verdictFor } from "./derive";
+import { criteriaOf, planePrincipals } from "./derive";
 
 describe("bench state in the URL and as text", () => {
   it("when a state is encoded and decoded, then tensor, unit, rotation, material and criteria come back and the readout is the same to 1e-12", () => {

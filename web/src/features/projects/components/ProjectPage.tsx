@@ -1,5 +1,4 @@
 import { Link, useParams } from "react-router-dom";
-import { Caution } from "../../../components/Caution";
 import { ApiError } from "../../../lib/api-client";
 import { FormMessage, quietButton } from "../../../lib/forms";
 import { useCombinations } from "../api/combinations";
@@ -96,7 +95,6 @@ export function ProjectPage() {
       />
       <MaterialsPanel workspaceId={workspaceId} unit={unit} canEdit={canEdit} />
       <ActivityPanel workspaceId={workspaceId} projectId={projectId} index="6" />
-      <Caution />
     </div>
   );
 }

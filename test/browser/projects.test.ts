@@ -206,6 +206,15 @@ describe("projects in Chromium: from an empty project to the governing case, and
     }
     expect(await page.getByRole("button", { name: /^Edit / }).count()).toBe(0);
     expect(await page.getByRole("link", { name: "Open in bench" }).count()).toBe(6);
+    // The checker's record: every revision of the state the bench saved, newest first.
+    await page
+      .getByRole("button", { name: "Revisions of Hydrostatic test at head-to-shell junction" })
+      .click();
+    const revisions = page.getByRole("table", {
+      name: "Revisions of Hydrostatic test at head-to-shell junction",
+    });
+    await expect.poll(() => revisions.locator("tbody tr").count()).toBe(4);
+    expect(await revisions.locator("tbody tr").first().innerText()).toMatch(/Teo Valdric\s+typed/);
     await shot(page, "viewer");
     await page.getByRole("link", { name: "Open in bench" }).first().click();
     await page.getByText("View only: as viewer you can explore this state but not save it.").waitFor();

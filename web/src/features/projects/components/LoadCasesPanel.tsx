@@ -12,6 +12,7 @@ import { useLoadCaseMutations } from "../api/load-cases";
 import { benchLinkForState } from "../../../lib/bench-link";
 import { formatStress } from "../model/units";
 import { StateForm } from "./StateForm";
+import { StateHistory } from "./StateHistory";
 
 const SHOWN = [
   ["xx", "σxx"],
@@ -40,6 +41,7 @@ export function LoadCasesPanel({
 }) {
   const m = useLoadCaseMutations(workspaceId, projectId);
   const [editing, setEditing] = useState<{ caseId: string; locationId: string } | null>(null);
+  const [history, setHistory] = useState<{ caseId: string; locationId: string } | null>(null);
   const [name, setName] = useState("");
   const [category, setCategory] = useState("");
 
@@ -130,6 +132,21 @@ export function LoadCasesPanel({
                             >
                               Open in bench
                             </Link>
+                            {s.revision > 1 && (
+                              <ToolButton
+                                aria-label={`Revisions of ${c.name} at ${l.name}`}
+                                pressed={history?.caseId === c.id && history.locationId === l.id}
+                                onClick={() =>
+                                  setHistory(
+                                    history?.caseId === c.id && history.locationId === l.id
+                                      ? null
+                                      : { caseId: c.id, locationId: l.id },
+                                  )
+                                }
+                              >
+                                History
+                              </ToolButton>
+                            )}
                             {canEdit && (
                               <ToolButton
                                 aria-label={`Edit ${c.name} at ${l.name}`}
@@ -174,6 +191,16 @@ export function LoadCasesPanel({
           </tbody>
         </table>
       </div>
+      {history && cases.some((c) => c.id === history.caseId) && (
+        <StateHistory
+          workspaceId={workspaceId}
+          projectId={projectId}
+          loadCaseId={history.caseId}
+          locationId={history.locationId}
+          unit={unit}
+          title={`${cases.find((c) => c.id === history.caseId)!.name} at ${locations.find((l) => l.id === history.locationId)?.name ?? "a location"}`}
+        />
+      )}
       {editing && editingCase && (
         <div className="border-t border-rule p-3">
           <p className="mb-2 text-sm font-semibold">

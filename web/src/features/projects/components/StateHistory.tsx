@@ -1,0 +1,58 @@
+import type { StressUnitName } from "../../../../../core/contract/materials";
+import { Quantity } from "../../../components/Quantity";
+import { useStateHistory } from "../api/state-history";
+import { formatStress } from "../model/units";
+
+const KEYS = ["xx", "yy", "zz", "xy", "yz", "zx"] as const;
+
+/** The revisions of one saved state, newest first: what a checker reads to see what changed and who changed it. */
+export function StateHistory(props: {
+  workspaceId: string;
+  projectId: string;
+  loadCaseId: string;
+  locationId: string;
+  unit: StressUnitName;
+  title: string;
+}) {
+  const history = useStateHistory(props.workspaceId, props.projectId, props.loadCaseId, props.locationId);
+  return (
+    <div className="border-t border-rule p-3">
+      <p className="mb-1 text-sm font-semibold">Revisions of {props.title}</p>
+      {history.isPending && <p className="text-graphite-soft">Loading…</p>}
+      <table className="text-[13px]" aria-label={`Revisions of ${props.title}`}>
+        <thead>
+          <tr className="text-left text-graphite-soft">
+            <th className="pr-3">rev.</th>
+            <th className="pr-3">saved</th>
+            <th className="pr-3">by</th>
+            <th className="pr-3">source</th>
+            {KEYS.map((k) => (
+              <th key={k} className="pr-3 text-right">
+                {k[0] === k[1] ? `σ${k}` : `τ${k}`}
+              </th>
+            ))}
+            <th className="pr-3">note</th>
+          </tr>
+        </thead>
+        <tbody>
+          {history.data?.map((r) => (
+            <tr key={r.id} className="border-t border-rule">
+              <td className="num pr-3">{r.revision}</td>
+              <td className="num pr-3">{new Date(r.savedAt).toLocaleString()}</td>
+              <td className="pr-3">{r.savedBy?.name ?? "—"}</td>
+              <td className="pr-3">
+                {r.source} ({r.unit})
+              </td>
+              {KEYS.map((k) => (
+                <td key={k} className="pr-3 text-right">
+                  <Quantity value={formatStress(r.componentsPa[k], props.unit)} />
+                </td>
+              ))}
+              <td className="pr-3 text-graphite-soft">{r.note}</td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

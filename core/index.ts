@@ -78,4 +78,4 @@ export type { ComparisonRow, Governing } from "./checks/governing";
 export { findGoverning } from "./checks/governing";
 export { missingStrengths } from "./checks/requirements";
 export type { Verdict } from "./checks/verdict";
-export { CLOSE_BAND, utilisation, verdictFor, verdictForFactor } from "./checks/verdict";
+export { CLOSE_BAND, CLOSE_UTILISATION, utilisation, verdictForFactor } from "./checks/verdict";

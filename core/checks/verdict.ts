@@ -8,8 +8,11 @@ export type Verdict = "pass" | "close" | "fail";
 /** A passing check is "close" when n_required ≤ n < (1 + CLOSE_BAND)·n_required. */
 export const CLOSE_BAND = 0.1;
 
-/** The utilisation above which a passing check is "close": u > 1/(1 + CLOSE_BAND) ≈ 0.909. */
-const CLOSE_UTILISATION = 1 / (1 + CLOSE_BAND);
+/**
+ * The utilisation at which a passing check turns "close": u = 1/(1 + CLOSE_BAND) ≈ 0.909, the
+ * same edge as n = (1 + CLOSE_BAND)·n_required (for drawing the band on utilisation charts).
+ */
+export const CLOSE_UTILISATION = 1 / (1 + CLOSE_BAND);
 
 /**
  * Utilisation of a check: how much of the allowed margin the state uses.
@@ -27,20 +30,8 @@ export function utilisation(factor: number, requiredFactor: number): number {
 }
 
 /**
- * The verdict for a utilisation.
- * @param u utilisation n_required / n (dimensionless, ≥ 0)
- * @returns "fail" above 1 (n < n_required), "close" in (1/(1 + CLOSE_BAND), 1] (n less than 10 %
- *   above n_required), "pass" otherwise
- */
-export function verdictFor(u: number): Verdict {
-  if (Number.isNaN(u)) throw new RangeError("utilisation must be a number, got NaN");
-  if (u > 1) return "fail";
-  if (u > CLOSE_UTILISATION) return "close";
-  return "pass";
-}
-
-/**
- * The verdict for a safety factor against the one required (same rule as {@link verdictFor}).
+ * The verdict for a safety factor against the one required: "fail" when n < n_required,
+ * "close" when n is less than CLOSE_BAND (10 %) above it, "pass" otherwise.
  * @param factor safety factor found (dimensionless, > 0; Infinity for a state that never fails)
  * @param requiredFactor safety factor required (dimensionless, > 0)
  */

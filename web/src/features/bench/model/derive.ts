@@ -27,6 +27,8 @@ import {
   type StressUnit,
   type Vec3,
   type Verdict,
+  missingStrengths,
+  utilisation,
   verdictForFactor,
 } from "../../../../../core";
 import type { BenchState, EulerSequence, MaterialChoice } from "./bench-state";
@@ -98,13 +100,7 @@ export function criteriaResults(
   const m = materialForCore(material);
   return CRITERIA.map((criterion): CriterionResult => {
     const ref = REFERENCE[criterion];
-    const needs: (keyof Material)[] =
-      criterion === "von-mises" || criterion === "tresca"
-        ? ["yield"]
-        : criterion === "max-principal"
-          ? ["ultimateTension"]
-          : ["ultimateTension", "ultimateCompression"];
-    const missing = needs.filter((k) => m[k] === undefined);
+    const missing = missingStrengths(criterion, m);
     if (missing.length > 0) {
       const names = {
         yield: "yield strength Sy",
@@ -125,7 +121,7 @@ export function criteriaResults(
       equivalent: convertStress(strength / n, "MPa", unit),
       reference: ref.symbol,
       n,
-      utilisation: required / n,
+      utilisation: utilisation(n, required),
       verdict: verdictForFactor(n, required),
     };
   });

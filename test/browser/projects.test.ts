@@ -109,6 +109,11 @@ describe("projects in Chromium: from an empty project to the governing case, and
         await page.getByRole("button", { name: `Edit ${name} at ${location}` }).waitFor();
       }
     }
+    await page.getByRole("button", { name: "Rename load case Operating" }).click();
+    const rename = page.getByRole("form", { name: "Rename load case Operating" });
+    await rename.getByLabel("name").fill("Normal operating");
+    await rename.getByRole("button", { name: "Save" }).click();
+    await page.getByRole("rowheader", { name: /^Normal operating/ }).waitFor();
     await shot(page, "project-page");
 
     await page.getByRole("link", { name: "Comparison" }).click();

@@ -61,6 +61,13 @@ export function useLoadCaseMutations(workspaceId: string, projectId: string) {
         ),
       onSettled,
     }),
+    update: useMutation({
+      mutationFn: (v: {
+        id: string;
+        body: { version: number; name?: string; category?: string; description?: string };
+      }) => apiSend("PATCH", `${base}/${v.id}`, v.body, loadCaseResponseSchema),
+      onSettled,
+    }),
     remove: useMutation({
       mutationFn: (id: string) => apiSend("DELETE", `${base}/${id}`, undefined, null),
       onSettled,

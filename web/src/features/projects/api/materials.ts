@@ -22,3 +22,12 @@ export function useCreateMaterial(workspaceId: string) {
     onSettled: () => queryClient.invalidateQueries({ queryKey: ["project-area", workspaceId] }),
   });
 }
+
+export function useDeleteMaterial(workspaceId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (id: string) =>
+      apiSend("DELETE", `/workspaces/${workspaceId}/materials/${id}`, undefined, null),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: ["project-area", workspaceId] }),
+  });
+}

@@ -12,6 +12,7 @@ import { useLoadCaseMutations } from "../api/load-cases";
 import { benchLinkForState } from "../../../lib/bench-link";
 import { formatStress } from "../model/units";
 import { StateForm } from "./StateForm";
+import { RenameForm } from "./RenameForm";
 import { StateHistory } from "./StateHistory";
 
 const SHOWN = [
@@ -42,6 +43,7 @@ export function LoadCasesPanel({
   const m = useLoadCaseMutations(workspaceId, projectId);
   const [editing, setEditing] = useState<{ caseId: string; locationId: string } | null>(null);
   const [history, setHistory] = useState<{ caseId: string; locationId: string } | null>(null);
+  const [renaming, setRenaming] = useState<string | null>(null);
   const [name, setName] = useState("");
   const [category, setCategory] = useState("");
 
@@ -97,6 +99,44 @@ export function LoadCasesPanel({
                     </span>
                   )}
                   <div className="text-[12px] font-normal text-graphite-faint">version {c.version}</div>
+                  {c.description && (
+                    <div className="max-w-56 text-[12px] font-normal text-graphite-soft">{c.description}</div>
+                  )}
+                  {canEdit && renaming !== c.id && (
+                    <ToolButton
+                      aria-label={`Rename load case ${c.name}`}
+                      onClick={() => (m.update.reset(), setRenaming(c.id))}
+                    >
+                      Rename
+                    </ToolButton>
+                  )}
+                  {renaming === c.id && (
+                    <RenameForm
+                      label={`Rename load case ${c.name}`}
+                      fields={[
+                        { key: "name", label: "name", value: c.name },
+                        { key: "category", label: "category", value: c.category, list: "case-categories" },
+                        { key: "description", label: "description", value: c.description },
+                      ]}
+                      pending={m.update.isPending}
+                      error={m.update.error}
+                      onCancel={() => setRenaming(null)}
+                      onSave={(v) =>
+                        m.update.mutate(
+                          {
+                            id: c.id,
+                            body: {
+                              version: c.version,
+                              name: v.name,
+                              category: v.category,
+                              description: v.description,
+                            },
+                          },
+                          { onSuccess: () => setRenaming(null) },
+                        )
+                      }
+                    />
+                  )}
                 </th>
                 {locations.map((l) => {
                   const s = c.states.find((x) => x.locationId === l.id);

@@ -7,6 +7,7 @@ import { ToolButton } from "../../../components/ToolButton";
 import { useLocationMutations } from "../api/locations";
 import { useMaterials } from "../api/materials";
 import { MaterialPicker, materialName } from "./MaterialPicker";
+import { RenameForm } from "./RenameForm";
 
 /** The named points of the structure, each optionally with its own material. */
 export function LocationsPanel({
@@ -23,6 +24,7 @@ export function LocationsPanel({
   const { create, update, remove } = useLocationMutations(workspaceId, projectId);
   const materials = useMaterials(workspaceId);
   const [name, setName] = useState("");
+  const [renaming, setRenaming] = useState<string | null>(null);
   const submit = (e: FormEvent) => {
     e.preventDefault();
     create.mutate({ name }, { onSuccess: () => setName("") });
@@ -38,7 +40,37 @@ export function LocationsPanel({
         {locations.length === 0 && <li className="p-3 text-graphite-soft">No locations yet.</li>}
         {locations.map((l) => (
           <li key={l.id} className="flex flex-wrap items-center gap-3 px-3 py-2">
-            <span className="font-semibold">{l.name}</span>
+            {renaming === l.id ? (
+              <RenameForm
+                label={`Rename location ${l.name}`}
+                fields={[
+                  { key: "name", label: "name", value: l.name },
+                  { key: "note", label: "note", value: l.note },
+                ]}
+                pending={update.isPending}
+                error={update.error}
+                onCancel={() => setRenaming(null)}
+                onSave={(v) =>
+                  update.mutate(
+                    { id: l.id, body: { version: l.version, name: v.name, note: v.note } },
+                    { onSuccess: () => setRenaming(null) },
+                  )
+                }
+              />
+            ) : (
+              <span>
+                <span className="font-semibold">{l.name}</span>
+                {l.note && <span className="ml-2 text-[13px] text-graphite-soft">{l.note}</span>}
+              </span>
+            )}
+            {canEdit && renaming !== l.id && (
+              <ToolButton
+                aria-label={`Rename location ${l.name}`}
+                onClick={() => (update.reset(), setRenaming(l.id))}
+              >
+                Rename
+              </ToolButton>
+            )}
             {canEdit ? (
               <MaterialPicker
                 id={`material-${l.id}`}

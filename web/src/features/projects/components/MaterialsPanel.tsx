@@ -5,7 +5,8 @@ import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { Quantity } from "../../../components/Quantity";
-import { useCreateMaterial, useMaterials } from "../api/materials";
+import { useCreateMaterial, useDeleteMaterial, useMaterials } from "../api/materials";
+import { ToolButton } from "../../../components/ToolButton";
 import { formatStress } from "../model/units";
 
 /** The workspace's material library and the built-in published list (read-only, with its standard). */
@@ -20,6 +21,7 @@ export function MaterialsPanel({
 }) {
   const list = useMaterials(workspaceId);
   const create = useCreateMaterial(workspaceId);
+  const remove = useDeleteMaterial(workspaceId);
   const [form, setForm] = useState({
     name: "",
     unit: unit as StressUnitName,
@@ -69,7 +71,18 @@ export function MaterialsPanel({
                   unit={m.ultimateTensionPa === null ? undefined : unit}
                 />
               </td>
-              <td className="px-3 py-1.5 text-graphite-soft">{m.reference || "library, no reference"}</td>
+              <td className="px-3 py-1.5 text-graphite-soft">
+                {m.reference || "library, no reference"}
+                {canEdit && (
+                  <ToolButton
+                    className="ml-2"
+                    aria-label={`Delete material ${m.name}`}
+                    onClick={() => remove.mutate(m.id)}
+                  >
+                    Delete
+                  </ToolButton>
+                )}
+              </td>
             </tr>
           ))}
           {list.data?.published.map((m) => (

@@ -6,7 +6,7 @@ import {
   type Project,
   type Requirement,
 } from "../../../../../core/contract/projects";
-import { ApiError } from "../../../lib/api-client";
+import { ApiError, fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { useMaterials } from "../api/materials";
@@ -21,11 +21,15 @@ export function RequirementsPanel({ project, canEdit }: { project: Project; canE
   const [draft, setDraft] = useState<Record<CriterionName, string>>(() => toDraft(project.requirements));
   const [material, setMaterial] = useState(project.defaultMaterial);
   const [unitSystem, setUnitSystem] = useState(project.unitSystem);
+  const [name, setName] = useState(project.name);
+  const [description, setDescription] = useState(project.description);
 
   const start = () => {
     setDraft(toDraft(project.requirements));
     setMaterial(project.defaultMaterial);
     setUnitSystem(project.unitSystem);
+    setName(project.name);
+    setDescription(project.description);
     update.reset();
     setEditing(true);
   };
@@ -37,7 +41,7 @@ export function RequirementsPanel({ project, canEdit }: { project: Project; canE
       }),
     );
     update.mutate(
-      { version: project.version, requirements, defaultMaterial: material, unitSystem },
+      { version: project.version, name, description, requirements, defaultMaterial: material, unitSystem },
       { onSuccess: () => setEditing(false) },
     );
   };
@@ -81,6 +85,24 @@ export function RequirementsPanel({ project, canEdit }: { project: Project; canE
           </>
         ) : (
           <div className="space-y-3">
+            <div className="grid gap-2 sm:grid-cols-[1fr_2fr]">
+              <label className="text-[13px] text-graphite-soft">
+                Project name
+                <input
+                  value={name}
+                  onChange={(e) => setName(e.target.value)}
+                  className="mt-0.5 w-full rounded-sm border border-rule-strong bg-panel px-2 py-1 text-[15px] text-graphite"
+                />
+              </label>
+              <label className="text-[13px] text-graphite-soft">
+                Description
+                <input
+                  value={description}
+                  onChange={(e) => setDescription(e.target.value)}
+                  className="mt-0.5 w-full rounded-sm border border-rule-strong bg-panel px-2 py-1 text-[15px] text-graphite"
+                />
+              </label>
+            </div>
             <fieldset className="grid grid-cols-1 gap-2 sm:grid-cols-3">
               <legend className="mb-1 text-sm font-semibold">
                 Required safety factor (leave empty to skip a criterion)
@@ -124,7 +146,11 @@ export function RequirementsPanel({ project, canEdit }: { project: Project; canE
                 Someone changed this project meanwhile. Cancel and look again before saving.
               </FormMessage>
             ) : (
-              <FormMessage error={update.error} />
+              <FormMessage>
+                {Object.entries(fieldErrorsOf(update.error))
+                  .map(([path, message]) => `${path}: ${message}`)
+                  .join("; ") || (update.error instanceof Error ? update.error.message : null)}
+              </FormMessage>
             )}
             <div className="flex gap-2">
               <button type="button" className={primaryButton} onClick={save} disabled={update.isPending}>

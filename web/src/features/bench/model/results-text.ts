@@ -2,7 +2,8 @@
  * "Copy results as text": a plain, aligned block an engineer can paste into a report. Every value
  * here comes from the same derived results the screen shows.
  */
-import { FROM_MEMORY_NOTE, publishedMaterial, type StressTensor } from "../../../../../core";
+import { publishedMaterial, type StressTensor } from "../../../../../core";
+import { RESULTS_CAUTION } from "../../../../../core/contract/cautions";
 import type { BenchState } from "./bench-state";
 import { CRITERION_LABEL, criteriaOf, rotatedView, rotationDescription, stateSummary } from "./derive";
 import { decimalsFor, factor, fixed } from "./format";
@@ -68,12 +69,7 @@ export function resultsAsText(state: BenchState, link?: string): string {
       `${CRITERION_LABEL[r.criterion].padEnd(20)}${pad(f(r.equivalent), 12)} ${u.padEnd(5)}${pad(factor(r.n), 8)}${pad(`${(r.utilisation * 100).toFixed(0)} %`, 13)}  ${VERDICT_WORD[r.verdict]}`,
     );
   }
-  out.push(
-    "",
-    "Caution: a screening and checking tool. Linear-elastic material and small strains assumed; the",
-    "governing design code and a licensed engineer decide whether a design is acceptable.",
-  );
-  if (preset) out.push(`Material values ${FROM_MEMORY_NOTE}.`);
+  out.push("", `Caution: ${RESULTS_CAUTION}`);
   if (link) out.push(`Link: ${link}`);
   return out.join("\n");
 }

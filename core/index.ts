@@ -79,3 +79,33 @@ export { findGoverning } from "./checks/governing";
 export { missingStrengths } from "./checks/requirements";
 export type { Verdict } from "./checks/verdict";
 export { CLOSE_BAND, CLOSE_UTILISATION, utilisation, verdictForFactor } from "./checks/verdict";
+
+export type {
+  ThinWallForm,
+  ThinWallRadial,
+  ThinWallOptions,
+  ThinWallStresses,
+} from "./calculators/thin-wall";
+export { thinCylinder, thinSphere } from "./calculators/thin-wall";
+export type {
+  Strain,
+  PlaneStrain,
+  GaugeReading,
+  PrincipalStrains,
+  ElasticConstants,
+  StressFromStrain,
+} from "./calculators/rosette";
+export {
+  MICROSTRAIN,
+  strain,
+  microstrain,
+  toMicrostrain,
+  rectangularRosette,
+  deltaRosette,
+  threeGaugeRosette,
+  transformStrain,
+  principalStrains,
+  stressFromStrain,
+} from "./calculators/rosette";
+export type { ShaftLoads, ShaftSurfaceStress } from "./calculators/shaft";
+export { solidShaftStress } from "./calculators/shaft";

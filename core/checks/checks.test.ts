@@ -1,6 +1,5 @@
 import { eigs } from "mathjs";
 import { describe, expect, it } from "vitest";
-import { safetyFactor } from "../criteria/safety-factor";
 import { seededRandom } from "../testing/fixtures";
 import type { StressTensor } from "../tensor/types";
 import { combineLoadCases } from "./combine";
@@ -119,9 +118,11 @@ describe("evaluateState", () => {
     const [vm, tr, mc] = result.checks;
     expect(vm).toMatchObject({ criterion: "von-mises", requiredFactor: 1.5 });
     if (!("factor" in vm) || !("factor" in tr)) throw new Error("von Mises and Tresca must be evaluated");
-    expect(vm.factor).toBeCloseTo(safetyFactor(s, "von-mises", { yield: 355 }), 14);
-    expect(vm.utilisation).toBeCloseTo(1.5 / vm.factor, 14);
-    expect(tr.factor).toBeCloseTo(355 / result.tresca, 12);
+    // Plane stress σx = 120, σy = 40, τxy = 30: σA,B = 80 ± √(40² + 30²) = 130, 30 (Mohr's circle,
+    // common practice, no source); with σ3 = 0, σvm = √(130² − 130·30 + 30²) = √13 900 and Tresca = 130.
+    expect(vm.factor).toBeCloseTo(355 / Math.sqrt(13_900), 12);
+    expect(vm.utilisation).toBeCloseTo((1.5 * Math.sqrt(13_900)) / 355, 12);
+    expect(tr.factor).toBeCloseTo(355 / 130, 12);
     expect(mc).toEqual({
       criterion: "mohr-coulomb",
       requiredFactor: 2,

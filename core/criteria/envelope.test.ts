@@ -2,19 +2,19 @@ import { describe, expect, it } from "vitest";
 import { envelopeHit, envelopeInPlane } from "./envelope";
 
 describe("failure envelopes in the σA–σB plane", () => {
-  it("when the criterion is von Mises, then every point satisfies σA² − σAσB + σB² = Sy² (the distortion-energy ellipse; Shigley's Mechanical Engineering Design, eq. 5-13)", () => {
+  it("when the criterion is von Mises, then every point satisfies σA² − σAσB + σB² = Sy² (the distortion-energy ellipse; Shigley's Mechanical Engineering Design, eq. 5-13 — equation number recalled from memory, edition not checked)", () => {
     const pts = envelopeInPlane("von-mises", { yield: 355 });
     expect(pts).toHaveLength(720);
     for (const [a, b] of pts) expect(Math.sqrt(a * a - a * b + b * b)).toBeCloseTo(355, 9);
   });
 
-  it("when the criterion is Tresca, then every point has max(|σA|, |σB|, |σA − σB|) = Sy (the maximum-shear hexagon; Shigley, §5-4)", () => {
+  it("when the criterion is Tresca, then every point has max(|σA|, |σB|, |σA − σB|) = Sy (the maximum-shear hexagon; Shigley, §5-4 — recalled from memory)", () => {
     for (const [a, b] of envelopeInPlane("tresca", { yield: 250 })) {
       expect(Math.max(Math.abs(a), Math.abs(b), Math.abs(a - b))).toBeCloseTo(250, 9);
     }
   });
 
-  it("when the criterion is Mohr–Coulomb with St = 200, Sc = 750, then the fourth-quadrant points satisfy σA/St − σB/Sc = 1 and the corners are on the axes (Shigley, eq. 5-26)", () => {
+  it("when the criterion is Mohr–Coulomb with St = 200, Sc = 750, then the fourth-quadrant points satisfy σA/St − σB/Sc = 1 and the corners are on the axes (Shigley, eq. 5-26 — recalled from memory)", () => {
     const pts = envelopeInPlane("mohr-coulomb", { ultimateTension: 200, ultimateCompression: 750 }, 720);
     const fourth = pts.filter(([a, b]) => a > 0 && b < 0);
     expect(fourth.length).toBeGreaterThan(100);

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { principalStresses } from "../eigen/principal";
+import { eigs } from "mathjs";
 import { mohrCircles } from "./mohr";
 import { planeStress, transformPlaneStress } from "./plane-stress";
 
@@ -42,14 +42,21 @@ describe("planeStress and transformPlaneStress (handbook formulas, common practi
 });
 
 describe("mohrCircles", () => {
-  it("when principal stresses are σ1 ≥ σ2 ≥ σ3, then circles are (σ1,σ3), (σ1,σ2), (σ2,σ3) with the outer radius τmax", () => {
+  it("when principal stresses are σ1 ≥ σ2 ≥ σ3, then circles are (σ1,σ3), (σ1,σ2), (σ2,σ3) with the outer radius τmax (principal stresses from mathjs, an independent solver)", () => {
     const s = { xx: 50, yy: 40, zz: 20, xy: 20, yz: 20, zx: -30 };
-    const [s1, s2, s3] = principalStresses(s).values;
+    const eig = eigs([
+      [s.xx, s.xy, s.zx],
+      [s.xy, s.yy, s.yz],
+      [s.zx, s.yz, s.zz],
+    ]).values as number[];
+    const [s1, s2, s3] = eig.slice().sort((a, b) => b - a);
     const { circles } = mohrCircles(s);
     expect(circles[0].center).toBeCloseTo((s1 + s3) / 2, 12);
     expect(circles[0].radius).toBeCloseTo((s1 - s3) / 2, 12);
     expect(circles[1].radius).toBeCloseTo((s1 - s2) / 2, 12);
+    expect(circles[1].center).toBeCloseTo((s1 + s2) / 2, 12);
     expect(circles[2].center).toBeCloseTo((s2 + s3) / 2, 12);
+    expect(circles[2].radius).toBeCloseTo((s2 - s3) / 2, 12);
     expect(circles[0].radius).toBeCloseTo(circles[1].radius + circles[2].radius, 12);
   });
 });

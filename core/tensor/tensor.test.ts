@@ -1,4 +1,5 @@
 import fc from "fast-check";
+import { eigs } from "mathjs";
 import { describe, expect, it } from "vitest";
 import { dot, cross } from "../testing/fixtures";
 import { invariants, lodeAngle, maxShear, octahedral, triaxiality, tresca, vonMises } from "./invariants";
@@ -85,6 +86,16 @@ describe("invariants and equivalent stresses (handbook formulas, common practice
     expect(v.i3).toBe(50 * (40 * 20 - 400) - 20 * (20 * 20 - 20 * -30) + -30 * (20 * 20 - 40 * -30));
     expect(v.j2).toBeCloseTo(v.i1 ** 2 / 3 - v.i2, 10);
     expect(v.j3).toBeCloseTo((2 * v.i1 ** 3) / 27 - (v.i1 * v.i2) / 3 + v.i3, 8);
+    // The same invariants from the principal stresses found by mathjs (an independent eigen solver):
+    // I1 = λ1 + λ2 + λ3, I2 = λ1λ2 + λ2λ3 + λ3λ1, I3 = λ1λ2λ3.
+    const [l1, l2, l3] = eigs([
+      [S.xx, S.xy, S.zx],
+      [S.xy, S.yy, S.yz],
+      [S.zx, S.yz, S.zz],
+    ]).values as number[];
+    expect(v.i1).toBeCloseTo(l1 + l2 + l3, 9);
+    expect(v.i2).toBeCloseTo(l1 * l2 + l2 * l3 + l3 * l1, 8);
+    expect(v.i3).toBeCloseTo(l1 * l2 * l3, 6);
   });
 
   it("when the state is pure shear τ, then von Mises = √3τ, Tresca = 2τ, τmax = τ, Lode angle 30°, triaxiality 0", () => {

@@ -51,6 +51,12 @@ describe("combineLoadCases (superposition; common practice, no source: linear el
     expect(combined.zx).toBeCloseTo(0.3, 12);
   });
 
+  it("when factors and stresses are too large to add, then the overflow is refused, not returned as Infinity", () => {
+    expect(() => combineLoadCases([{ factor: 1e10, tensor: tensor(1e300, 0, 0, 0, 0, 0) }])).toThrow(
+      "the combined xx component overflows (Infinity); check the factors and stresses",
+    );
+  });
+
   it("when no case is given, then the combination is the zero state", () => {
     expect(combineLoadCases([])).toEqual(tensor(0, 0, 0, 0, 0, 0));
   });

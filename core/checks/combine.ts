@@ -10,7 +10,8 @@ export type CombinationTerm = { factor: number; tensor: StressTensor };
  * combination.
  * @param terms factors (dimensionless) and tensors (all in one stress unit)
  * @returns the combined tensor in the same unit; the zero tensor for no terms
- * @throws TypeError/RangeError for a non-finite factor or component
+ * @throws TypeError/RangeError for a non-finite factor or component, or when the sum itself
+ *   overflows to ±Infinity (factors and stresses too large to combine)
  */
 export function combineLoadCases(terms: readonly CombinationTerm[]): StressTensor {
   const out: StressTensor = { xx: 0, yy: 0, zz: 0, xy: 0, yz: 0, zx: 0 };
@@ -19,5 +20,12 @@ export function combineLoadCases(terms: readonly CombinationTerm[]): StressTenso
     assertTensor(term.tensor, `terms[${i}].tensor`);
     for (const c of COMPONENTS) out[c] += term.factor * term.tensor[c];
   });
+  for (const c of COMPONENTS) {
+    if (!Number.isFinite(out[c])) {
+      throw new RangeError(
+        `the combined ${c} component overflows (${out[c]}); check the factors and stresses`,
+      );
+    }
+  }
   return out;
 }

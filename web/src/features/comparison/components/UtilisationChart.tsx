@@ -1,5 +1,5 @@
 import { scaleBand, scaleLinear } from "d3";
-import { CLOSE_BAND } from "../../../../../core";
+import { CLOSE_UTILISATION } from "../../../../../core";
 import type { Comparison } from "../../../../../core/contract/comparison";
 import { CRITERION_LABELS, type CriterionName } from "../../../../../core/contract/projects";
 import { checkOf } from "../model/rows";
@@ -9,7 +9,7 @@ const VERDICT_MARK = { pass: "✓", close: "≈", fail: "✗" } as const;
 
 /**
  * Utilisation u = n_required / n of every row for one criterion, as horizontal bars, with the
- * allowable line at u = 1 and the "close" band edge at 1 − CLOSE_BAND. d3 supplies the scales;
+ * allowable line at u = 1 and the "close" band edge at CLOSE_UTILISATION (n 10 % above the required factor). d3 supplies the scales;
  * React draws. Every bar carries its value and verdict mark, so colour is never the only cue.
  */
 export function UtilisationChart({
@@ -87,8 +87,8 @@ export function UtilisationChart({
         </g>
       ))}
       <line
-        x1={x(1 - CLOSE_BAND)}
-        x2={x(1 - CLOSE_BAND)}
+        x1={x(CLOSE_UTILISATION)}
+        x2={x(CLOSE_UTILISATION)}
         y1={4}
         y2={height - 26}
         className="stroke-close"

@@ -2,11 +2,26 @@
  * Every reference case in ../shared/reference-cases/cases.json whose `calc` core covers, loaded at
  * test time. Each test title names the case's source, place in the source and status as the file
  * gives them ("common_practice" = a fact of the trade with no source; "memory" = recalled, not read).
+ * Strain-gauge, vessel and shaft cases run through core/calculators/; cases whose expected values core
+ * does not compute (UG-27 thickness, Lamé thick cylinders) are listed as skipped with the reason.
  */
 import { readFileSync } from "node:fs";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
 import { describe, expect, it } from "vitest";
+import {
+  deltaRosette,
+  microstrain,
+  principalStrains,
+  rectangularRosette,
+  stressFromStrain,
+  threeGaugeRosette,
+  toMicrostrain,
+  transformStrain,
+  type PlaneStrain,
+} from "./calculators/rosette";
+import { solidShaftStress } from "./calculators/shaft";
+import { thinCylinder, thinSphere, type ThinWallOptions } from "./calculators/thin-wall";
 import { safetyFactor, type Material } from "./criteria/safety-factor";
 import { principalStresses } from "./eigen/principal";
 import { planeStress, transformPlaneStress } from "./plane/plane-stress";
@@ -14,6 +29,7 @@ import { invariants, maxShear, octahedral, vonMises } from "./tensor/invariants"
 import { rotateTensor, rotationFromAxisAngle } from "./tensor/rotate";
 import { tractionOnPlane } from "./tensor/traction";
 import type { StressTensor, Vec3 } from "./tensor/types";
+import { degToRad } from "./units/angles";
 
 type Tol = { abs?: number; rel?: number };
 type Value = number | number[];
@@ -35,7 +51,7 @@ const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), ".."
 const casesFile = path.resolve(repoRoot, "../shared/reference-cases/cases.json");
 const cases = JSON.parse(readFileSync(casesFile, "utf8")) as Case[];
 
-/** calc kinds core computes, and those that belong to later work (strain gauges, vessels, shafts). */
+/** calc kinds core computes (the last four through core/calculators/). */
 const COVERED = [
   "plane_transform",
   "plane_principal",
@@ -43,9 +59,17 @@ const COVERED = [
   "traction",
   "failure",
   "fact",
+  "rosette",
+  "strain_transform",
+  "thin_vessel",
+  "shaft",
 ] as const;
-const NOT_COVERED = ["rosette", "strain_transform", "thin_vessel", "asme_ug27", "lame", "shaft"];
-/** Facts core can state; the others are facts about vessel and gauge formulas core does not have yet. */
+/** calc kinds whose expected values core does not compute, with the reason shown on the skipped test. */
+const NOT_COVERED: Record<string, string> = {
+  asme_ug27: "core has no ASME UG-27 minimum-thickness calculator",
+  lame: "core has no thick-walled (Lamé) cylinder calculator",
+};
+/** Facts core can state; the others are facts about formulas core does not have. */
 const FACTS_COVERED = [
   "pure_shear_yield",
   "uniaxial",
@@ -53,8 +77,12 @@ const FACTS_COVERED = [
   "equibiaxial",
   "invariance_rotation",
   "octahedral",
+  "thin_cyl_vm",
+  "rosette_invariance",
 ] as const;
-const FACTS_NOT_COVERED = ["thin_cyl_vm", "lame_thin_limit", "rosette_invariance"];
+const FACTS_NOT_COVERED: Record<string, string> = {
+  lame_thin_limit: "core has no thick-walled (Lamé) cylinder calculator",
+};
 
 const exercised = new Map<string, number>();
 const count = (key: string): void => void exercised.set(key, (exercised.get(key) ?? 0) + 1);
@@ -160,11 +188,130 @@ function actualsFor(c: Case): Actuals {
         sB: () => planeStress(num(c, "sx"), num(c, "sy"), num(c, "txy")).s2,
       };
     }
+    case "rosette":
+      return rosetteActuals(c);
+    case "strain_transform":
+      // the cases give micro-strain; core's strains are plain, so scale on the way in and out
+      return {
+        en: () =>
+          toMicrostrain(
+            transformStrain(
+              microstrain(num(c, "ex")),
+              microstrain(num(c, "ey")),
+              microstrain(num(c, "gxy")),
+              num(c, "theta_deg"),
+            ),
+          ),
+      };
+    case "thin_vessel":
+      return thinVesselActuals(c);
+    case "shaft":
+      return shaftActuals(c);
     case "fact":
       return factActuals(c);
     default:
       throw new Error(`calc ${c.calc} is not covered`);
   }
+}
+
+const sameAngles = (a: readonly number[], b: readonly number[]): boolean =>
+  a.length === b.length && a.every((x, i) => x === b[i]);
+
+/** The strain field of a rosette case: gauge readings (micro-strain) reduced by core, or given ex, ey, gxy. */
+function rosetteField(c: Case): PlaneStrain {
+  const readings = c.inputs.strains_ue;
+  if (readings === undefined) {
+    return { ex: microstrain(num(c, "ex")), ey: microstrain(num(c, "ey")), gxy: microstrain(num(c, "gxy")) };
+  }
+  const angles = c.inputs.angles_deg as number[];
+  const g = (readings as number[]).map(microstrain);
+  if (g.length !== 3 || angles.length !== 3) throw new Error(`case ${c.id}: a rosette has three gauges`);
+  if (sameAngles(angles, [0, 45, 90])) return rectangularRosette(g[0], g[1], g[2]);
+  if (sameAngles(angles, [0, 60, 120])) return deltaRosette(g[0], g[1], g[2]);
+  return threeGaugeRosette([
+    { angle: angles[0], strain: g[0] },
+    { angle: angles[1], strain: g[1] },
+    { angle: angles[2], strain: g[2] },
+  ]);
+}
+
+function rosetteActuals(c: Case): Actuals {
+  // Strains in the cases are micro-strain (µε, µrad for γ); E is in the stress unit the case expects.
+  const f = () => rosetteField(c);
+  const p = () => principalStrains(f());
+  const s = () => stressFromStrain(f(), { E: num(c, "E"), nu: num(c, "nu") });
+  return {
+    ex: () => toMicrostrain(f().ex),
+    ey: () => toMicrostrain(f().ey),
+    gxy: () => toMicrostrain(f().gxy),
+    e1: () => toMicrostrain(p().e1),
+    e2: () => toMicrostrain(p().e2),
+    theta_e1_deg: () => p().thetaE1,
+    // tan 2θp = γxy/(εx − εy); tan has period 180°, so it is the same at ε1 and ε2
+    tan_2theta_p: () => Math.tan(degToRad(2 * p().thetaE1)),
+    // σy = E(εy + νεx)/(1 − ν²) with +εx: the source's printed "(0.33)(−0.000770)" is a sign typo
+    // its own number (−7.53 MPa) does not carry
+    sx: () => s().sx,
+    sy: () => s().sy,
+    txy: () => s().txy,
+    s1: () => s().s1,
+    s2: () => s().s2,
+    G: () => s().G,
+  };
+}
+
+function thinVesselActuals(c: Case): Actuals {
+  const shape = c.inputs.shape;
+  const calculator = shape === "cylinder" ? thinCylinder : shape === "sphere" ? thinSphere : undefined;
+  // `mean_diameter_form`: σt = p(dᵢ + t)/(2t); otherwise σθ = p·r/t with the inside radius.
+  // `radial`: σr = −p at the inner surface; otherwise the membrane value 0.
+  const options: ThinWallOptions = {
+    form: c.inputs.mean_diameter_form === true ? "mean-diameter" : "inside-radius",
+    radial: c.inputs.radial === true ? "inner-surface" : "membrane",
+  };
+  const insideRadius = () => (has(c, "r") ? num(c, "r") : num(c, "d_i") / 2);
+  const v = () => {
+    if (!calculator) throw new Error(`case ${c.id}: unknown shape ${String(shape)}`);
+    return calculator(num(c, "p"), insideRadius(), num(c, "t"), options);
+  };
+  // Every membrane stress is proportional to p, so an allowable pressure is p times a factor.
+  const vonMisesFactor = (strength: number) => safetyFactor(v().tensor, "von-mises", { yield: strength });
+  return {
+    hoop: () => v().hoop,
+    axial: () => v().axial,
+    tau_max_inplane: () => planeStress(v().tensor.xx, v().tensor.yy, v().tensor.xy).tauMaxInPlane,
+    // allowable by the largest normal stress against σallow, as the sources do
+    p_allow: () => (num(c, "p") * num(c, "sigma_allow")) / Math.max(v().hoop, v().axial),
+    vm_per_unit_p: () => vonMises(v().tensor) / num(c, "p"),
+    p_yield_DE: () => num(c, "p") * vonMisesFactor(num(c, "Sy")),
+    // burst estimated by the same distortion-energy rule with the ultimate strength
+    p_burst_DE: () => num(c, "p") * vonMisesFactor(num(c, "Su")),
+    n_DE: () => vonMisesFactor(num(c, "Sy")),
+  };
+}
+
+function shaftActuals(c: Case): Actuals {
+  if (c.inputs.point !== "max_bending" || c.inputs.V !== undefined) {
+    throw new Error(
+      `case ${c.id}: core's shaft calculator gives the point of maximum bending, without transverse shear`,
+    );
+  }
+  const s = () =>
+    solidShaftStress(num(c, "d"), {
+      bendingMoment: num(c, "M"),
+      torque: num(c, "T"),
+      axialForce: has(c, "P") ? num(c, "P") : 0,
+    });
+  const p = () => planeStress(s().tensor.xx, s().tensor.yy, s().tensor.xy);
+  return {
+    sigma: () => s().sigma,
+    tau: () => s().tau,
+    s1: () => p().s1,
+    s2: () => p().s2,
+    tau_max_inplane: () => p().tauMaxInPlane,
+    sigma_vm: () => vonMises(s().tensor),
+    n_DE: () => safetyFactor(s().tensor, "von-mises", { yield: num(c, "Sy") }),
+  };
 }
 
 function factActuals(c: Case): Actuals {
@@ -206,6 +353,30 @@ function factActuals(c: Case): Actuals {
     case "octahedral": {
       const s = () => tensorOf(c.inputs.tensor);
       return { tau_oct_over_vm: () => octahedral(s()).shear / vonMises(s()) };
+    }
+    case "thin_cyl_vm": {
+      const v = () => thinCylinder(num(c, "p"), num(c, "r"), num(c, "t"));
+      return {
+        hoop_over_axial: () => v().hoop / v().axial,
+        vm_over_hoop: () => vonMises(v().tensor) / v().hoop,
+      };
+    }
+    case "rosette_invariance": {
+      // Read the field with gauges at 0/45/90 and 0/60/120, reduce each rosette, compare principal strains.
+      const f = (): PlaneStrain => ({
+        ex: microstrain(num(c, "ex")),
+        ey: microstrain(num(c, "ey")),
+        gxy: microstrain(num(c, "gxy")),
+      });
+      const gauge = (theta: number) => transformStrain(f().ex, f().ey, f().gxy, theta);
+      const rect = () => principalStrains(rectangularRosette(gauge(0), gauge(45), gauge(90)));
+      const delta = () => principalStrains(deltaRosette(gauge(0), gauge(60), gauge(120)));
+      return {
+        e1_rect: () => toMicrostrain(rect().e1),
+        e2_rect: () => toMicrostrain(rect().e2),
+        e1_delta: () => toMicrostrain(delta().e1),
+        e2_delta: () => toMicrostrain(delta().e2),
+      };
     }
     default:
       throw new Error(`fact ${String(which)} is not covered`);
@@ -270,9 +441,11 @@ describe(`reference cases from ${path.relative(repoRoot, casesFile)}`, () => {
   it("when the file is loaded, then every case has a known calc kind and every fact a known `which`", () => {
     expect(cases.length).toBeGreaterThan(0);
     for (const c of cases) {
-      expect([...COVERED, ...NOT_COVERED], `case ${c.id}`).toContain(c.calc);
+      expect([...COVERED, ...Object.keys(NOT_COVERED)], `case ${c.id}`).toContain(c.calc);
       if (c.calc === "fact")
-        expect([...FACTS_COVERED, ...FACTS_NOT_COVERED], `case ${c.id}`).toContain(c.inputs.which);
+        expect([...FACTS_COVERED, ...Object.keys(FACTS_NOT_COVERED)], `case ${c.id}`).toContain(
+          c.inputs.which,
+        );
     }
   });
 
@@ -290,6 +463,11 @@ describe(`reference cases from ${path.relative(repoRoot, casesFile)}`, () => {
       count(c.calc);
       if (c.calc === "fact") count(`fact:${String(c.inputs.which)}`);
     });
+  }
+
+  for (const c of cases.filter((x) => !isCovered(x))) {
+    const why = c.calc === "fact" ? FACTS_NOT_COVERED[String(c.inputs.which)] : NOT_COVERED[c.calc];
+    it.skip(`${title(c)} — skipped: ${why ?? "not covered"}`, () => {});
   }
 
   it("when every case above has run, then each covered calc kind and fact was exercised and all its cases passed", () => {

@@ -135,10 +135,10 @@ describe("bench actions", () => {
     expect(act.setRequiredFactor(s, 0.5).requiredFactor).toBe(s.requiredFactor);
   });
 
-  it("when the mid-shell design example is loaded, then σθ = pr/t = 67.5 MPa and σx = pr/2t = 33.75 MPa (thin-wall cylinder, any strength-of-materials text)", () => {
+  it("when the mid-shell design example is loaded, then σx = pr/2t = 33.75 MPa (x axial) and σθ = pr/t = 67.5 MPa (y hoop) (thin-wall cylinder, any strength-of-materials text)", () => {
     const s = act.loadExample(base(), "shell-design");
-    expect(s.tensor.xx).toBeCloseTo(67.5, 12);
-    expect(s.tensor.yy).toBeCloseTo(33.75, 12);
+    expect(s.tensor.xx).toBeCloseTo(33.75, 12);
+    expect(s.tensor.yy).toBeCloseTo(67.5, 12);
     const shaft = EXAMPLE_STATES.find((e) => e.id === "shaft-steady")!.tensor;
     // τ = 16T/(πd³) = 16·850e3/(π·45³) ≈ 47.51 MPa (torsion of a solid round shaft).
     expect(shaft.xy).toBeCloseTo(47.51, 2);

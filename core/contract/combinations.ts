@@ -9,13 +9,21 @@ import { personRefSchema, projectParamsSchema } from "./projects";
  * small displacements; every place that shows a combination says so. Imports only zod.
  */
 
+/** The largest load-case factor accepted in a combination (real ones are a few units at most). */
+export const MAX_COMBINATION_FACTOR = 1e6;
+
 /** The sentence shown wherever a combination is shown. */
 export const SUPERPOSITION_CAUTION =
   "Combinations add load-case stresses by superposition, which assumes linear-elastic material and small displacements.";
 
 export const combinationTermInputSchema = z.object({
   loadCaseId: z.uuid({ error: "must be a load-case id (UUID)" }),
-  factor: finiteNumber().refine((v) => v !== 0, { message: "must not be zero (leave the case out instead)" }),
+  factor: finiteNumber()
+    .refine((v) => v !== 0, { message: "must not be zero (leave the case out instead)" })
+    // With stresses bounded too, a combination of 50 terms can never overflow.
+    .refine((v) => Math.abs(v) <= MAX_COMBINATION_FACTOR, {
+      message: `must be at most ${MAX_COMBINATION_FACTOR} in magnitude`,
+    }),
 });
 
 const termsSchema = z

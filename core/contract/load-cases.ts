@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { finiteNumber, stressUnitSchema, versionSchema } from "./materials";
+import { stressUnitSchema, stressValue, versionSchema } from "./materials";
 import { personRefSchema, projectParamsSchema } from "./projects";
 
 /**
@@ -29,12 +29,12 @@ const COMPONENT_KEYS = ["xx", "yy", "zz", "xy", "yz", "zx"] as const;
 
 /** Six tensor components (σxy is the tensor shear, not an engineering strain). */
 export const componentsSchema = z.object({
-  xx: finiteNumber(),
-  yy: finiteNumber(),
-  zz: finiteNumber(),
-  xy: finiteNumber(),
-  yz: finiteNumber(),
-  zx: finiteNumber(),
+  xx: stressValue(),
+  yy: stressValue(),
+  zz: stressValue(),
+  xy: stressValue(),
+  yz: stressValue(),
+  zx: stressValue(),
 });
 export type Components = z.infer<typeof componentsSchema>;
 
@@ -42,7 +42,7 @@ export type Components = z.infer<typeof componentsSchema>;
 export const MATRIX_SYMMETRY_TOLERANCE = 1e-6;
 
 const matrixSchema = z
-  .array(z.array(finiteNumber()).length(3, "each row has 3 numbers"), {
+  .array(z.array(stressValue()).length(3, "each row has 3 numbers"), {
     error: "must be 3 rows of 3 numbers",
   })
   .length(3, "must have 3 rows")

@@ -17,7 +17,20 @@ export type StressUnitName = z.infer<typeof stressUnitSchema>;
 export const finiteNumber = (what = "a number") =>
   z.number({ error: `must be ${what}` }).refine(Number.isFinite, { message: `must be a finite number` });
 
-const positiveStrength = finiteNumber("a positive number")
+/**
+ * The largest stress magnitude accepted, in the unit it is entered in. No real stress is near
+ * it (1e12 GPa); it exists so that converting to Pa, superposing and squaring (von Mises) can
+ * never overflow to Infinity, which would otherwise be stored or fail a later evaluation.
+ */
+export const MAX_STRESS_MAGNITUDE = 1e12;
+
+/** A finite stress (or strength, or modulus) no larger in magnitude than {@link MAX_STRESS_MAGNITUDE}. */
+export const stressValue = (what = "a number") =>
+  finiteNumber(what).refine((v) => Math.abs(v) <= MAX_STRESS_MAGNITUDE, {
+    message: `must be at most ${MAX_STRESS_MAGNITUDE.toExponential()} in magnitude (in the unit given)`,
+  });
+
+const positiveStrength = stressValue("a positive number")
   .refine((v) => v > 0, { message: "must be positive (a compressive strength is given as a magnitude)" })
   .nullable();
 

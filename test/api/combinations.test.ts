@@ -85,6 +85,14 @@ describe("combinations", () => {
       .send({ name: "x", terms: [{ loadCaseId: cases.Dead, factor: 0 }] });
     expect(zero.status).toBe(400);
     expect(zero.body.error.details[0].path).toBe("terms.0.factor");
+    const huge = await team.editor.agent
+      .post(combos())
+      .send({ name: "x", terms: [{ loadCaseId: cases.Dead, factor: 1e10 }] });
+    expect(huge.status).toBe(400);
+    expect(huge.body.error.details[0]).toMatchObject({
+      path: "terms.0.factor",
+      message: "must be at most 1000000 in magnitude",
+    });
     const twice = await team.editor.agent.post(combos()).send({
       name: "x",
       terms: [

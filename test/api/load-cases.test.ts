@@ -103,6 +103,24 @@ describe("load cases: create, read, update, delete per role", () => {
     expect(asymmetric.body.error.details[0].path).toBe("states.0.stress.matrix.0.1");
     expect(asymmetric.body.error.details[0].message).toMatch(/not symmetric/);
 
+    // Finite in GPa but Infinity once converted to Pa: refused at the boundary, never stored.
+    const overflowing = await team.editor.agent.post(casesPath()).send({
+      name: "Bad",
+      states: [
+        {
+          locationId: shell,
+          stress: { unit: "GPa", components: { xx: 1e300, yy: 0, zz: 0, xy: 0, yz: 0, zx: 0 } },
+        },
+      ],
+    });
+    expect(overflowing.status).toBe(400);
+    expect(overflowing.body.error.details[0]).toMatchObject({
+      path: "states.0.stress.components.xx",
+      message: "must be at most 1e+12 in magnitude (in the unit given)",
+    });
+    const comparison = await team.editor.agent.get(wsPath(team, `/projects/${projectId}/comparison`));
+    expect(comparison.status).toBe(200);
+
     const notHere = await team.editor.agent.post(casesPath()).send({
       name: "Bad",
       states: [{ locationId: "00000000-0000-4000-8000-000000000000", stress: mpa(1, 1) }],

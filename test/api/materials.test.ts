@@ -53,6 +53,12 @@ describe("materials", () => {
       "poissonRatio",
       "yield",
     ]);
+    // A strength that is finite as typed but would be Infinity in Pa is refused, not stored as null.
+    const huge = await team.editor.agent
+      .post(wsPath(team, "/materials"))
+      .send({ name: "Huge", unit: "GPa", yield: 1e300 });
+    expect(huge.status).toBe(400);
+    expect(huge.body.error.details[0].path).toBe("yield");
   });
 
   it("when an editor changes a material with a stale version, then 409; with the right one the value changes and deletion hides it", async () => {

@@ -1,5 +1,5 @@
 import { z } from "zod";
-import { componentsSchema } from "./load-cases";
+import { componentsOutSchema } from "./load-cases";
 import { finiteNumber, versionSchema } from "./materials";
 import { personRefSchema, projectParamsSchema } from "./projects";
 
@@ -89,7 +89,7 @@ export const combinationResultSchema = z.discriminatedUnion("status", [
     status: z.literal("combined"),
     locationId: z.uuid(),
     locationName: z.string(),
-    componentsPa: componentsSchema,
+    componentsPa: componentsOutSchema,
   }),
   z.object({
     status: z.literal("incomplete"),

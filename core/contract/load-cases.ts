@@ -38,6 +38,16 @@ export const componentsSchema = z.object({
 });
 export type Components = z.infer<typeof componentsSchema>;
 
+/** Six components as the server sends them (already checked when they came in; not bounded again). */
+export const componentsOutSchema = z.object({
+  xx: z.number(),
+  yy: z.number(),
+  zz: z.number(),
+  xy: z.number(),
+  yz: z.number(),
+  zx: z.number(),
+});
+
 /** Relative symmetry tolerance of a 3×3 matrix, as a fraction of its largest entry (as core's parser). */
 export const MATRIX_SYMMETRY_TOLERANCE = 1e-6;
 
@@ -164,9 +174,9 @@ export const stressStateSchema = z.object({
   revision: z.int(),
   unit: stressUnitSchema,
   /** In `unit`. */
-  components: componentsSchema,
+  components: componentsOutSchema,
   /** As stored, in Pa. */
-  componentsPa: componentsSchema,
+  componentsPa: componentsOutSchema,
   source: stateSourceSchema,
   note: z.string(),
   savedAt: z.iso.datetime(),

@@ -24,6 +24,18 @@ export const finiteNumber = (what = "a number") =>
  */
 export const MAX_STRESS_MAGNITUDE = 1e12;
 
+/**
+ * The same bound for values already in Pa (exports): the largest accepted value in any unit,
+ * converted (1 ksi ≈ 6.9e6 Pa), is below it, so whatever was stored can be exported and imported.
+ */
+export const MAX_STRESS_PA = MAX_STRESS_MAGNITUDE * 1e7;
+
+/** A finite value in Pa no larger in magnitude than {@link MAX_STRESS_PA}. */
+export const stressPaValue = (what = "a number") =>
+  finiteNumber(what).refine((v) => Math.abs(v) <= MAX_STRESS_PA, {
+    message: `must be at most ${MAX_STRESS_PA.toExponential()} Pa in magnitude`,
+  });
+
 /** A finite stress (or strength, or modulus) no larger in magnitude than {@link MAX_STRESS_MAGNITUDE}. */
 export const stressValue = (what = "a number") =>
   finiteNumber(what).refine((v) => Math.abs(v) <= MAX_STRESS_MAGNITUDE, {

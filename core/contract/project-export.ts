@@ -1,6 +1,7 @@
 import { z } from "zod";
-import { componentsSchema, stateSourceSchema } from "./load-cases";
-import { finiteNumber, stressUnitSchema } from "./materials";
+import { stateSourceSchema } from "./load-cases";
+import { finiteNumber, stressPaValue, stressUnitSchema } from "./materials";
+import { MAX_COMBINATION_FACTOR } from "./combinations";
 import { requirementSchema, unitSystemSchema } from "./projects";
 
 /**
@@ -22,9 +23,19 @@ const text = (max: number) =>
     .string({ error: "must be text" })
     .max(max, `At most ${max} characters.`)
     .refine((v) => !v.includes("\u0000"), { message: "must not contain the NUL character" });
-const positiveOrNull = finiteNumber()
+const positiveOrNull = stressPaValue()
   .refine((v) => v > 0, { message: "must be positive" })
   .nullable();
+
+/** Six components in Pa, bounded as everywhere else so that nothing overflows after import. */
+const componentsPaSchema = z.object({
+  xx: stressPaValue(),
+  yy: stressPaValue(),
+  zz: stressPaValue(),
+  xy: stressPaValue(),
+  yz: stressPaValue(),
+  zx: stressPaValue(),
+});
 
 const exportMaterialRefSchema = z.discriminatedUnion(
   "kind",
@@ -53,7 +64,7 @@ const exportMaterialSchema = z.object({
 const exportStateSchema = z.object({
   location: key,
   unit: stressUnitSchema,
-  componentsPa: componentsSchema,
+  componentsPa: componentsPaSchema,
   source: stateSourceSchema,
   note: text(2000),
 });
@@ -100,7 +111,15 @@ const baseSchema = z.object({
         description: text(4000),
         terms: z
           .array(
-            z.object({ loadCase: key, factor: finiteNumber().refine((v) => v !== 0, "must not be zero") }),
+            z.object({
+              loadCase: key,
+              factor: finiteNumber()
+                .refine((v) => v !== 0, "must not be zero")
+                .refine(
+                  (v) => Math.abs(v) <= MAX_COMBINATION_FACTOR,
+                  `must be at most ${MAX_COMBINATION_FACTOR} in magnitude`,
+                ),
+            }),
           )
           .min(1, "Add at least one load case with its factor."),
       }),

@@ -1,3 +1,4 @@
+import { RESULTS_CAUTION } from "../../../core/contract/cautions";
 import {
   evaluateState,
   findGoverning,
@@ -31,8 +32,8 @@ export type ComparisonInput = {
   combinations: { id: string; name: string; version: number; terms: StoredTerm[] }[];
 };
 
-/** The standing caution about published values and the tool's scope, beside the results. */
-export const RESULTS_CAUTION =
+/** The standing note about the strengths the factors are measured against. */
+export const STRENGTHS_CAUTION =
   "Safety factors are against the strengths shown; published minimum values must be verified against the material certificate.";
 
 function checkView(c: CriterionCheck): ComparisonCheck {
@@ -167,7 +168,7 @@ export function buildComparison(input: ComparisonInput): Comparison {
     locationName: l.name,
     governing: findGoverning(coreRows, l.id).map(view),
   }));
-  const cautions = [RESULTS_CAUTION];
+  const cautions = [RESULTS_CAUTION, STRENGTHS_CAUTION];
   if (input.combinations.length > 0) cautions.push(SUPERPOSITION_CAUTION);
   return {
     projectId: input.projectId,

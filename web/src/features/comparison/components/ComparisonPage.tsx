@@ -2,6 +2,7 @@ import { useState } from "react";
 import { Link, useParams } from "react-router-dom";
 import { governingSentence } from "../../../../../core/contract/comparison";
 import { CRITERION_LABELS, type CriterionName } from "../../../../../core/contract/projects";
+import { RESULTS_CAUTION } from "../../../../../core/contract/cautions";
 import { Caution } from "../../../components/Caution";
 import { Panel } from "../../../components/Panel";
 import { Verdict } from "../../../components/Verdict";
@@ -86,12 +87,15 @@ export function ComparisonPage() {
           </ul>
         )}
         <div className="mt-2 space-y-0.5">
-          {c.cautions.map((text) => (
-            <p key={text} className="text-[13px] text-graphite-soft">
-              <span aria-hidden="true">⚠ </span>
-              {text}
-            </p>
-          ))}
+          {/* The results caution itself stands at the foot of the page (<Caution />); the rest here. */}
+          {c.cautions
+            .filter((text) => text !== RESULTS_CAUTION)
+            .map((text) => (
+              <p key={text} className="text-[13px] text-graphite-soft">
+                <span aria-hidden="true">⚠ </span>
+                {text}
+              </p>
+            ))}
         </div>
       </section>
 

@@ -60,7 +60,7 @@ const comparison: Comparison = {
   governingByLocation: [],
   summary: "governs: Hydrostatic test at head junction, von Mises, SF 1.34 against 1.5 required",
   skipped: [],
-  cautions: [],
+  cautions: ["First caution for the test.", "Second caution for the test."],
 };
 
 describe("the comparison as a table", () => {
@@ -71,6 +71,13 @@ describe("the comparison as a table", () => {
     const csv = toCsv(table);
     expect(csv.split("\r\n")[1].startsWith("'=cmd|' /C calc'!A0,load-case,")).toBe(true);
     expect(csv).toContain(",-5,");
+  });
+
+  it("when exported, then the summary line and every caution follow the table, so a copy carries them", () => {
+    const table = comparisonTable(comparison, "MPa");
+    const tail = table.slice(-3).map((line) => line[0]);
+    expect(tail).toEqual([comparison.summary, ...comparison.cautions]);
+    expect(table[table.length - 4]).toEqual([]);
   });
 
   it("when the governing row is marked, then only it carries the criterion", () => {

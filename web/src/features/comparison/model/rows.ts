@@ -28,8 +28,9 @@ export const inUnit = (pa: number, unit: StressUnitName) => convertStress(pa, "P
 
 /**
  * The comparison as spreadsheet rows: one header, then one line per row with stresses in
- * `unit` and, per required criterion, the factor, utilisation and verdict. Names are left as
- * typed; lib/csv escapes anything a spreadsheet would read as a formula.
+ * `unit` and, per required criterion, the factor, utilisation and verdict; then the summary
+ * line and the cautions. Names are left as typed; lib/csv escapes anything a spreadsheet
+ * would read as a formula.
  */
 export function comparisonTable(comparison: Comparison, unit: StressUnitName): (string | number | null)[][] {
   const criteria = comparison.requirements.map((r) => r.criterion);
@@ -72,5 +73,12 @@ export function comparisonTable(comparison: Comparison, unit: StressUnitName): (
       return [check.factor ?? Infinity, check.requiredFactor, check.utilisation, check.verdict];
     }),
   ]);
-  return [header, ...lines];
+  // Below the table, as a calculation sheet would have it: what governs, then the cautions,
+  // so a copy that travels without the screen still carries them.
+  const footer = [
+    [],
+    [comparison.summary ?? "governs: nothing could be evaluated"],
+    ...comparison.cautions.map((c) => [c]),
+  ];
+  return [header, ...lines, ...footer];
 }

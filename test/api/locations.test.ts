@@ -47,12 +47,12 @@ describe("locations", () => {
     const path = `${base}/${list[0].id}`;
     const renamed = await team.editor.agent
       .patch(path)
-      .send({ version: list[0].version, name: "shell course 2" })
+      .send({ version: list[0].version, name: "shell ring 2" })
       .expect(200);
     expect(renamed.body.location.version).toBe(list[0].version + 1);
     const stale = await team.editor2.agent.patch(path).send({ version: list[0].version, name: "shell" });
     expect(stale.status).toBe(409);
-    expect((await team.editor.agent.get(path).expect(200)).body.location.name).toBe("shell course 2");
+    expect((await team.editor.agent.get(path).expect(200)).body.location.name).toBe("shell ring 2");
   });
 
   it("when a location names a library material of another workspace, then 400 names the field", async () => {

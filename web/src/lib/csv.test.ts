@@ -14,7 +14,7 @@ describe("csvCell", () => {
 
   it("when text is ordinary, then it is left alone; with a comma, quote or line break it is quoted (RFC 4180)", () => {
     expect(csvCell("Hydrostatic test")).toBe("Hydrostatic test");
-    expect(csvCell("shell, course 2")).toBe('"shell, course 2"');
+    expect(csvCell("shell, ring 2")).toBe('"shell, ring 2"');
     expect(csvCell('say "hi"')).toBe('"say ""hi"""');
     expect(csvCell("two\nlines")).toBe('"two\nlines"');
   });

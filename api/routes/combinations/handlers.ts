@@ -13,6 +13,7 @@ import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
 import { changedFields, recordAudit } from "../audit/record";
+import { moveToTrashHandler } from "../trash/move-to-trash";
 import { currentStatesOf } from "../load-cases/states";
 import { peopleById } from "../projects/people";
 import { findProject } from "../projects/scope";
@@ -202,25 +203,10 @@ export function updateCombinationHandler(
   };
 }
 
-export function deleteCombinationHandler(
-  context: AppContext,
-): RouteHandler<CombinationParams, NoInput, NoInput> {
-  return async (_req, res) => {
-    const user = currentUser(res);
-    const { workspace } = currentMembership(res);
-    await context.sequelize.transaction(async (transaction) => {
-      const project = await findProject(workspace.id, res.locals.input.params.projectId, { transaction });
-      const c = await findCombination(project.id, res.locals.input.params.combinationId, transaction);
-      await c.update({ deletedAt: new Date(), deletedBy: user.id }, { transaction });
-      await recordAudit(transaction, user, {
-        workspaceId: workspace.id,
-        projectId: project.id,
-        entityType: "combination",
-        entityId: c.id,
-        action: "delete",
-        summary: `moved the combination "${c.name}" of "${project.name}" to the trash`,
-      });
-    });
-    res.status(204).end();
-  };
-}
+/** `DELETE`: the combination goes to the trash. */
+export const deleteCombinationHandler = (context: AppContext) =>
+  moveToTrashHandler<CombinationParams>(context, {
+    entityType: "combination",
+    noun: "combination",
+    find: (projectId, params, transaction) => findCombination(projectId, params.combinationId, transaction),
+  });

@@ -8,6 +8,7 @@ import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
 import { changedFields, recordAudit } from "../audit/record";
+import { moveToTrashHandler } from "../trash/move-to-trash";
 import { peopleById } from "../projects/people";
 import { findProject } from "../projects/scope";
 import { assertVersion } from "../projects/versioning";
@@ -216,23 +217,10 @@ export const stateHistoryHandler: RouteHandler<StateParams, NoInput, NoInput> = 
   res.set("Cache-Control", "no-store").json({ revisions: rows.map((r) => presentState(r, people)) });
 };
 
-export function deleteLoadCaseHandler(context: AppContext): RouteHandler<CaseParams, NoInput, NoInput> {
-  return async (_req, res) => {
-    const user = currentUser(res);
-    const { workspace } = currentMembership(res);
-    await context.sequelize.transaction(async (transaction) => {
-      const project = await findProject(workspace.id, res.locals.input.params.projectId, { transaction });
-      const c = await findLoadCase(project.id, res.locals.input.params.loadCaseId, transaction);
-      await c.update({ deletedAt: new Date(), deletedBy: user.id }, { transaction });
-      await recordAudit(transaction, user, {
-        workspaceId: workspace.id,
-        projectId: project.id,
-        entityType: "load-case",
-        entityId: c.id,
-        action: "delete",
-        summary: `moved the load case "${c.name}" of "${project.name}" to the trash`,
-      });
-    });
-    res.status(204).end();
-  };
-}
+/** `DELETE`: the load case goes to the trash. */
+export const deleteLoadCaseHandler = (context: AppContext) =>
+  moveToTrashHandler<CaseParams>(context, {
+    entityType: "load-case",
+    noun: "load case",
+    find: (projectId, params, transaction) => findLoadCase(projectId, params.loadCaseId, transaction),
+  });

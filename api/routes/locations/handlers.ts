@@ -6,6 +6,7 @@ import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
 import { changedFields, recordAudit } from "../audit/record";
+import { moveToTrashHandler } from "../trash/move-to-trash";
 import { assertMaterialRef, columnsFromRef } from "../materials/resolve";
 import { findProject } from "../projects/scope";
 import { assertVersion } from "../projects/versioning";
@@ -127,23 +128,10 @@ export function updateLocationHandler(
   };
 }
 
-export function deleteLocationHandler(context: AppContext): RouteHandler<LocationParams, NoInput, NoInput> {
-  return async (_req, res) => {
-    const user = currentUser(res);
-    const { workspace } = currentMembership(res);
-    await context.sequelize.transaction(async (transaction) => {
-      const project = await findProject(workspace.id, res.locals.input.params.projectId, { transaction });
-      const l = await findLocation(project.id, res.locals.input.params.locationId, transaction);
-      await l.update({ deletedAt: new Date(), deletedBy: user.id }, { transaction });
-      await recordAudit(transaction, user, {
-        workspaceId: workspace.id,
-        projectId: project.id,
-        entityType: "location",
-        entityId: l.id,
-        action: "delete",
-        summary: `moved the location "${l.name}" of "${project.name}" to the trash`,
-      });
-    });
-    res.status(204).end();
-  };
-}
+/** `DELETE`: the location goes to the trash. */
+export const deleteLocationHandler = (context: AppContext) =>
+  moveToTrashHandler<LocationParams>(context, {
+    entityType: "location",
+    noun: "location",
+    find: (projectId, params, transaction) => findLocation(projectId, params.locationId, transaction),
+  });

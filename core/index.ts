@@ -109,3 +109,6 @@ export {
 } from "./calculators/rosette";
 export type { ShaftLoads, ShaftSurfaceStress } from "./calculators/shaft";
 export { solidShaftStress } from "./calculators/shaft";
+
+export type { EnvelopeProbe, EnvelopeProbeHit } from "./criteria/envelope-probe";
+export { probeEnvelopes } from "./criteria/envelope-probe";

@@ -54,9 +54,11 @@ describe("from sign-up to a shared workspace in Chromium", () => {
     await page.getByRole("link", { name: "New workspace" }).click();
     await page.getByLabel("Workspace name").fill("Quillon Engineering");
     await page.getByRole("button", { name: "Create workspace" }).click();
-    await page.waitForURL(/\/workspaces\/[0-9a-f-]{36}\/members$/);
+    // A new workspace opens on its (empty) projects; the members are one tab away.
+    await page.waitForURL(/\/workspaces\/[0-9a-f-]{36}\/projects$/);
     workspaceUrl = page.url();
     await page.getByRole("heading", { name: "Quillon Engineering" }).waitFor();
+    await page.getByRole("navigation", { name: "Workspace" }).getByRole("link", { name: "Members" }).click();
     await page.getByRole("cell", { name: /Mira Castellan \(you\)/ }).waitFor();
     expect(await seriousViolations(page)).toEqual([]);
     await shot(page, "workspace-members");
@@ -102,6 +104,7 @@ describe("from sign-up to a shared workspace in Chromium", () => {
     await page.getByRole("button", { name: "Accept and open the workspace" }).click();
     await page.waitForURL(workspaceUrl);
     await page.getByText("You are reviewer").waitFor();
+    await page.getByRole("navigation", { name: "Workspace" }).getByRole("link", { name: "Members" }).click();
     await page.getByRole("cell", { name: /Ines Okafor-Lund \(you\)/ }).waitFor();
     // A reviewer has no invitation or share-link tabs.
     expect(await page.getByRole("link", { name: "Invitations" }).count()).toBe(0);

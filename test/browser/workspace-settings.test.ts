@@ -7,7 +7,7 @@ import { uniqueEmail } from "../support/accounts";
 import { launchChromium, screenshotDir } from "../support/browser";
 import { startTestServer } from "../support/server";
 
-/** Signs a new user up in `page` and creates a workspace; leaves the page on its members tab. */
+/** Signs a new user up in `page` and creates a workspace; leaves the page on its projects tab. */
 async function signUpWithWorkspace(page: Page, origin: string, name: string, workspaceName: string) {
   await page.goto(`${origin}/sign-up`, { waitUntil: "networkidle" });
   await page.getByLabel("Your name").fill(name);
@@ -18,7 +18,7 @@ async function signUpWithWorkspace(page: Page, origin: string, name: string, wor
   await page.getByRole("link", { name: "New workspace" }).click();
   await page.getByLabel("Workspace name").fill(workspaceName);
   await page.getByRole("button", { name: "Create workspace" }).click();
-  await page.waitForURL(/\/members$/);
+  await page.waitForURL(/\/projects$/);
 }
 
 describe("workspace settings in Chromium", () => {

@@ -62,7 +62,8 @@ export const router = createBrowserRouter([
             path: "workspaces/:workspaceId",
             element: <WorkspacePage />,
             children: [
-              { index: true, element: <Navigate to="members" replace /> },
+              // A workspace opens on its projects: that is what its members come for.
+              { index: true, element: <Navigate to="projects" replace /> },
               { path: "projects", element: <ProjectsSection /> },
               { path: "members", element: <MembersSection /> },
               { path: "invitations", element: <InvitationsSection /> },

@@ -3,6 +3,7 @@ import {
   combinationListSchema,
   combinationResponseSchema,
   type CreateCombinationBody,
+  type UpdateCombinationBody,
 } from "../../../../../core/contract/combinations";
 import { apiGet, apiSend } from "../../../lib/api-client";
 import { projectKeys, projectPath } from "./keys";
@@ -24,6 +25,12 @@ export function useCombinationMutations(workspaceId: string, projectId: string) 
     create: useMutation({
       mutationFn: (body: Omit<CreateCombinationBody, "description"> & { description?: string }) =>
         apiSend("POST", base, body, combinationResponseSchema),
+      onSettled,
+    }),
+    /** Saves over the version the edit started from; a stale version gets 409 with the current record. */
+    update: useMutation({
+      mutationFn: ({ id, ...body }: UpdateCombinationBody & { id: string }) =>
+        apiSend("PATCH", `${base}/${id}`, body, combinationResponseSchema).then((r) => r.combination),
       onSettled,
     }),
     remove: useMutation({

@@ -6,6 +6,7 @@ import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { ToolButton } from "../../../components/ToolButton";
 import { useCombinationMutations } from "../api/combinations";
+import { CombinationEditor } from "./CombinationEditor";
 
 type DraftTerm = { loadCaseId: string; factor: string };
 
@@ -26,6 +27,7 @@ export function CombinationsPanel({
   const m = useCombinationMutations(workspaceId, projectId);
   const [name, setName] = useState("");
   const [terms, setTerms] = useState<DraftTerm[]>([{ loadCaseId: "", factor: "1.0" }]);
+  const [editingId, setEditingId] = useState<string | null>(null);
   const errors = fieldErrorsOf(m.create.error);
 
   const submit = (e: FormEvent) => {
@@ -61,14 +63,27 @@ export function CombinationsPanel({
                 </span>
               ))}
             </span>
-            {canEdit && (
-              <ToolButton
-                className="ml-auto"
-                aria-label={`Delete combination ${c.name}`}
-                onClick={() => m.remove.mutate(c.id)}
-              >
-                Delete
-              </ToolButton>
+            {c.description && (
+              <span className="basis-full text-[13px] text-graphite-soft">{c.description}</span>
+            )}
+            {canEdit && editingId !== c.id && (
+              <span className="ml-auto flex gap-2">
+                <ToolButton aria-label={`Edit combination ${c.name}`} onClick={() => setEditingId(c.id)}>
+                  Edit
+                </ToolButton>
+                <ToolButton aria-label={`Delete combination ${c.name}`} onClick={() => m.remove.mutate(c.id)}>
+                  Delete
+                </ToolButton>
+              </span>
+            )}
+            {canEdit && editingId === c.id && (
+              <CombinationEditor
+                workspaceId={workspaceId}
+                projectId={projectId}
+                combination={c}
+                cases={cases}
+                onDone={() => setEditingId(null)}
+              />
             )}
           </li>
         ))}

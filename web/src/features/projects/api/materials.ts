@@ -3,6 +3,7 @@ import {
   materialListSchema,
   materialResponseSchema,
   type MaterialInput,
+  type UpdateMaterialBody,
 } from "../../../../../core/contract/materials";
 import { apiGet, apiSend } from "../../../lib/api-client";
 import { projectKeys } from "./keys";
@@ -28,6 +29,18 @@ export function useDeleteMaterial(workspaceId: string) {
   return useMutation({
     mutationFn: (id: string) =>
       apiSend("DELETE", `/workspaces/${workspaceId}/materials/${id}`, undefined, null),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: ["project-area", workspaceId] }),
+  });
+}
+
+/** Saves a library material over the version the edit started from (409 when it moved on). */
+export function useUpdateMaterial(workspaceId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: ({ id, ...body }: UpdateMaterialBody & { id: string }) =>
+      apiSend("PATCH", `/workspaces/${workspaceId}/materials/${id}`, body, materialResponseSchema).then(
+        (r) => r.material,
+      ),
     onSettled: () => queryClient.invalidateQueries({ queryKey: ["project-area", workspaceId] }),
   });
 }

@@ -8,6 +8,7 @@ import { Quantity } from "../../../components/Quantity";
 import { useCreateMaterial, useDeleteMaterial, useMaterials } from "../api/materials";
 import { ToolButton } from "../../../components/ToolButton";
 import { formatStress } from "../model/units";
+import { MaterialEditor } from "./MaterialEditor";
 
 /** The workspace's material library and the built-in published list (read-only, with its standard). */
 export function MaterialsPanel({
@@ -22,6 +23,7 @@ export function MaterialsPanel({
   const list = useMaterials(workspaceId);
   const create = useCreateMaterial(workspaceId);
   const remove = useDeleteMaterial(workspaceId);
+  const [editingId, setEditingId] = useState<string | null>(null);
   const [form, setForm] = useState({
     name: "",
     unit: unit as StressUnitName,
@@ -56,35 +58,52 @@ export function MaterialsPanel({
           </tr>
         </thead>
         <tbody>
-          {list.data?.materials.map((m) => (
-            <tr key={m.id} className="border-b border-rule">
-              <td className="px-3 py-1.5 font-semibold">{m.name}</td>
-              <td className="px-3 py-1.5 text-right">
-                <Quantity
-                  value={formatStress(m.yieldPa, unit)}
-                  unit={m.yieldPa === null ? undefined : unit}
-                />
-              </td>
-              <td className="px-3 py-1.5 text-right">
-                <Quantity
-                  value={formatStress(m.ultimateTensionPa, unit)}
-                  unit={m.ultimateTensionPa === null ? undefined : unit}
-                />
-              </td>
-              <td className="px-3 py-1.5 text-graphite-soft">
-                {m.reference || "library, no reference"}
-                {canEdit && (
-                  <ToolButton
-                    className="ml-2"
-                    aria-label={`Delete material ${m.name}`}
-                    onClick={() => remove.mutate(m.id)}
-                  >
-                    Delete
-                  </ToolButton>
-                )}
-              </td>
-            </tr>
-          ))}
+          {list.data?.materials.map((m) =>
+            editingId === m.id ? (
+              <tr key={m.id} className="border-b border-rule">
+                <td colSpan={4}>
+                  <MaterialEditor workspaceId={workspaceId} material={m} onDone={() => setEditingId(null)} />
+                </td>
+              </tr>
+            ) : (
+              <tr key={m.id} className="border-b border-rule">
+                <td className="px-3 py-1.5 font-semibold">{m.name}</td>
+                <td className="px-3 py-1.5 text-right">
+                  <Quantity
+                    value={formatStress(m.yieldPa, unit)}
+                    unit={m.yieldPa === null ? undefined : unit}
+                  />
+                </td>
+                <td className="px-3 py-1.5 text-right">
+                  <Quantity
+                    value={formatStress(m.ultimateTensionPa, unit)}
+                    unit={m.ultimateTensionPa === null ? undefined : unit}
+                  />
+                </td>
+                <td className="px-3 py-1.5 text-graphite-soft">
+                  {m.reference || "library, no reference"}
+                  {canEdit && (
+                    <ToolButton
+                      className="ml-2"
+                      aria-label={`Edit material ${m.name}`}
+                      onClick={() => setEditingId(m.id)}
+                    >
+                      Edit
+                    </ToolButton>
+                  )}
+                  {canEdit && (
+                    <ToolButton
+                      className="ml-2"
+                      aria-label={`Delete material ${m.name}`}
+                      onClick={() => remove.mutate(m.id)}
+                    >
+                      Delete
+                    </ToolButton>
+                  )}
+                </td>
+              </tr>
+            ),
+          )}
           {list.data?.published.map((m) => (
             <tr key={m.id} className="border-b border-rule">
               <td className="px-3 py-1.5">

@@ -1,15 +1,10 @@
 import { Suspense, lazy } from "react";
 import { createBrowserRouter, Navigate } from "react-router-dom";
-import { AccountPage } from "../features/account/components/AccountPage";
 import { ForgotPasswordPage } from "../features/auth/components/ForgotPasswordPage";
 import { ResetPasswordPage } from "../features/auth/components/ResetPasswordPage";
 import { SignInPage } from "../features/auth/components/SignInPage";
 import { SignUpPage } from "../features/auth/components/SignUpPage";
-import { ComparisonPage } from "../features/comparison/components/ComparisonPage";
 import { HomePage } from "../features/home/components/HomePage";
-import { MailboxPage } from "../features/mailbox/components/MailboxPage";
-import { ProjectPage } from "../features/projects/components/ProjectPage";
-import { ProjectsSection } from "../features/projects/components/ProjectsSection";
 import { InvitationsSection } from "../features/workspaces/components/InvitationsSection";
 import { AcceptInvitationPage, JoinShareLinkPage } from "../features/workspaces/components/JoinPages";
 import { MembersSection } from "../features/workspaces/components/MembersSection";
@@ -21,7 +16,9 @@ import { Layout } from "./layout";
 import { NotFoundPage } from "./not-found";
 import { RequireSession } from "./require-session";
 
-// The bench (d3, and three.js inside it) loads as its own chunks, so other pages stay light.
+// Pages with heavy dependencies load as their own chunks, so the first page (often sign-in)
+// stays light: the bench (d3, and three.js inside it), projects and the comparison (d3, tables).
+// React Router's `lazy` loads the module before it renders the route.
 const BenchPage = lazy(() =>
   import("../features/bench/components/BenchPage").then((m) => ({ default: m.BenchPage })),
 );
@@ -48,23 +45,51 @@ export const router = createBrowserRouter([
       { path: "reset-password/:token", element: <ResetPasswordPage /> },
       { path: "invitations/:token", element: <AcceptInvitationPage /> },
       { path: "join/:token", element: <JoinShareLinkPage /> },
-      { path: "dev/mailbox/:messageId?", element: <MailboxPage /> },
+      {
+        path: "dev/mailbox/:messageId?",
+        lazy: () =>
+          import("../features/mailbox/components/MailboxPage").then((m) => ({ Component: m.MailboxPage })),
+      },
       {
         // Signed-in only: a signed-out visitor is sent to sign-in and brought back to the same address.
         element: <RequireSession />,
         children: [
-          { path: "account", element: <AccountPage /> },
+          {
+            path: "account",
+            lazy: () =>
+              import("../features/account/components/AccountPage").then((m) => ({
+                Component: m.AccountPage,
+              })),
+          },
           { path: "workspaces", element: <WorkspacesPage /> },
           { path: "workspaces/new", element: <NewWorkspacePage /> },
-          { path: "workspaces/:workspaceId/projects/:projectId", element: <ProjectPage /> },
-          { path: "workspaces/:workspaceId/projects/:projectId/comparison", element: <ComparisonPage /> },
+          {
+            path: "workspaces/:workspaceId/projects/:projectId",
+            lazy: () =>
+              import("../features/projects/components/ProjectPage").then((m) => ({
+                Component: m.ProjectPage,
+              })),
+          },
+          {
+            path: "workspaces/:workspaceId/projects/:projectId/comparison",
+            lazy: () =>
+              import("../features/comparison/components/ComparisonPage").then((m) => ({
+                Component: m.ComparisonPage,
+              })),
+          },
           {
             path: "workspaces/:workspaceId",
             element: <WorkspacePage />,
             children: [
               // A workspace opens on its projects: that is what its members come for.
               { index: true, element: <Navigate to="projects" replace /> },
-              { path: "projects", element: <ProjectsSection /> },
+              {
+                path: "projects",
+                lazy: () =>
+                  import("../features/projects/components/ProjectsSection").then((m) => ({
+                    Component: m.ProjectsSection,
+                  })),
+              },
               { path: "members", element: <MembersSection /> },
               { path: "invitations", element: <InvitationsSection /> },
               { path: "share-links", element: <ShareLinksSection /> },

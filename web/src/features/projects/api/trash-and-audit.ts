@@ -21,6 +21,16 @@ export function useRestore(workspaceId: string) {
   });
 }
 
+/** Deletes a trashed item for good (owners only; the API refuses anyone else). */
+export function usePurge(workspaceId: string) {
+  const queryClient = useQueryClient();
+  return useMutation({
+    mutationFn: (v: { kind: TrashKind; id: string }) =>
+      apiSend("DELETE", `/workspaces/${workspaceId}/trash/${v.kind}/${v.id}`, undefined, null),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: ["project-area", workspaceId] }),
+  });
+}
+
 /** The most recent audit events, for the workspace or one project. */
 export const useAudit = (workspaceId: string, projectId?: string) =>
   useQuery({

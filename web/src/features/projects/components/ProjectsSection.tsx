@@ -6,6 +6,7 @@ import { Panel } from "../../../components/Panel";
 import { ToolButton } from "../../../components/ToolButton";
 import { useCreateProject, useDeleteProject, useProjects } from "../api/projects";
 import { useImportProject, useRestore, useTrash } from "../api/trash-and-audit";
+import { PurgeButton } from "./PurgeButton";
 import { useWorkspaceRole } from "../api/workspace-role";
 import { ActivityPanel } from "./ActivityPanel";
 
@@ -86,7 +87,7 @@ export function ProjectsSection() {
           </form>
         )}
       </Panel>
-      {canEdit && <TrashPanel workspaceId={workspaceId} />}
+      {canEdit && <TrashPanel workspaceId={workspaceId} isOwner={role.role === "owner"} />}
       <ActivityPanel workspaceId={workspaceId} index="" />
     </div>
   );
@@ -135,7 +136,7 @@ function ImportButton({ workspaceId }: { workspaceId: string }) {
   );
 }
 
-function TrashPanel({ workspaceId }: { workspaceId: string }) {
+function TrashPanel({ workspaceId, isOwner }: { workspaceId: string; isOwner: boolean }) {
   const trash = useTrash(workspaceId, true);
   const restore = useRestore(workspaceId);
   if (!trash.data || trash.data.items.length === 0) return null;
@@ -162,6 +163,7 @@ function TrashPanel({ workspaceId }: { workspaceId: string }) {
             >
               Restore
             </button>
+            {isOwner && <PurgeButton workspaceId={workspaceId} item={item} />}
           </li>
         ))}
       </ul>

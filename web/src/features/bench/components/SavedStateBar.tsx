@@ -3,6 +3,7 @@ import { useEffect, useMemo, useRef, useState } from "react";
 import { Link } from "react-router-dom";
 import { z } from "zod";
 import { convertStress } from "../../../../../core";
+import { SUPERPOSITION_CAUTION } from "../../../../../core/contract/combinations";
 import { loadCaseResponseSchema, type LoadCase } from "../../../../../core/contract/load-cases";
 import {
   materialListSchema,
@@ -83,8 +84,30 @@ function differs(a: Pick<BenchState, "tensor" | "unit">, b: Pick<BenchState, "te
  */
 export function SavedStateBar() {
   const [source] = useState<BenchSource | null>(() => parseBenchSource(window.location.search));
+  // Read once on arrival: the bench rewrites its address, keeping only `source`.
+  const [combination] = useState(() => new URLSearchParams(window.location.search).get("combination"));
+  if (combination && !source) return <CombinationNote name={combination} />;
   if (!source) return null;
   return <SavedState source={source} />;
+}
+
+/** A combination's superposed state is not stored anywhere: it is shown view-only, with the superposition caution. */
+function CombinationNote({ name }: { name: string }) {
+  return (
+    <section
+      aria-label="Combination state"
+      className="space-y-0.5 rounded-sm border border-ink/40 bg-ink-wash px-3 py-1.5 text-[13px]"
+    >
+      <p>
+        Combination: <strong>{name}</strong> · view only (a superposed state is computed, not saved; edit its
+        load cases instead)
+      </p>
+      <p className="text-graphite-soft">
+        <span aria-hidden="true">⚠ </span>
+        {SUPERPOSITION_CAUTION}
+      </p>
+    </section>
+  );
 }
 
 function SavedState({ source }: { source: BenchSource }) {

@@ -178,7 +178,8 @@ export function ComparisonTable({
                   values,
                   unit,
                 )
-              : benchLinkForValues(values, unit);
+              : // `combination` names the superposed state, so the bench says it is view-only and a superposition.
+                `${benchLinkForValues(values, unit)}&combination=${encodeURIComponent(r.caseName)}`;
           return (
             <Link
               to={to}

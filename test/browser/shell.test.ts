@@ -38,6 +38,10 @@ describe("the app shell in Chromium", () => {
       .getByText(/database PostgreSQL/)
       .waitFor();
     expect(await page.title()).toBe("Sigmacube");
+    // Signed out, the page offers the way in; the sign-in link comes back to the bench.
+    expect(await page.getByRole("link", { name: "Sign in to the bench" }).getAttribute("href")).toBe(
+      "/sign-in?next=%2Fbench",
+    );
     expect(errors).toEqual([]);
     await page.screenshot({ path: path.join(screenshotDir, "shell-home.png"), fullPage: true });
   });

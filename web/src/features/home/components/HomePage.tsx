@@ -1,3 +1,6 @@
+import { Link } from "react-router-dom";
+import { useSession } from "../../../lib/session";
+
 /** The order an engineer thinks in, which is also the order of the bench. */
 const steps = [
   {
@@ -49,6 +52,7 @@ export function HomePage() {
             matter and check them against the right yield or fracture criterion — and for the checkers who
             sign that work off.
           </p>
+          <StartLinks />
         </div>
         <PrincipalSketch />
       </section>
@@ -86,6 +90,38 @@ export function HomePage() {
           ))}
         </dl>
       </section>
+    </div>
+  );
+}
+
+/** Where to go next: the bench and the workspaces when signed in, else sign-in or a new account. */
+function StartLinks() {
+  const session = useSession();
+  const signedIn = Boolean(session.data?.user);
+  const primary = "rounded bg-ink px-4 py-2 font-semibold text-panel hover:bg-ink-hover";
+  const secondary =
+    "rounded border border-rule-strong bg-panel px-4 py-2 font-semibold text-graphite hover:border-ink hover:text-ink";
+  return (
+    <div className="mt-7 flex flex-wrap gap-3">
+      {signedIn ? (
+        <>
+          <Link to="/bench" className={primary}>
+            Open the bench
+          </Link>
+          <Link to="/workspaces" className={secondary}>
+            Your workspaces
+          </Link>
+        </>
+      ) : (
+        <>
+          <Link to="/sign-up" className={primary}>
+            Create an account
+          </Link>
+          <Link to="/sign-in?next=%2Fbench" className={secondary}>
+            Sign in to the bench
+          </Link>
+        </>
+      )}
     </div>
   );
 }
@@ -141,16 +177,24 @@ function PrincipalSketch() {
           />
           <circle cx="57" cy="110" r="27" className="fill-panel stroke-ink" strokeWidth={1.2} />
           <circle cx="109" cy="110" r="25" className="fill-panel stroke-ink" strokeWidth={1.2} />
-          <g className="fill-graphite font-mono" fontSize={11}>
-            <text x="138" y="124">
+          {/* The principal stresses are read off below the circles, on leader lines from the axis. */}
+          <g className="stroke-graphite-faint" strokeWidth={0.8} strokeDasharray="2 2">
+            <line x1="134" y1="110" x2="134" y2="170" />
+            <line x1="84" y1="110" x2="84" y2="170" />
+            <line x1="30" y1="110" x2="30" y2="170" />
+          </g>
+          <g className="fill-graphite font-mono" fontSize={11} textAnchor="middle">
+            <text x="134" y="182">
               σ₁
             </text>
-            <text x="78" y="124">
+            <text x="84" y="182">
               σ₂
             </text>
-            <text x="22" y="124">
+            <text x="30" y="182">
               σ₃
             </text>
+          </g>
+          <g className="fill-graphite font-mono" fontSize={11}>
             <text x="145" y="104">
               σₙ
             </text>

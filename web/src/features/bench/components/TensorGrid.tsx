@@ -30,7 +30,13 @@ export function TensorGrid() {
     const text = event.clipboardData.getData("text/plain");
     if (!pasteLooksLikeTensor(text)) return;
     event.preventDefault();
+    // A focused cell shows its own draft, not the store: leave it first (an entry typed there and
+    // not yet committed lands before the paste), read the paste, then come back once React has
+    // drawn the new values, so the cell shows what was pasted and keyboard focus stays put.
+    const cell = event.target instanceof HTMLInputElement ? event.target : null;
+    cell?.blur();
     act.applyPaste(text);
+    if (cell) requestAnimationFrame(() => cell.focus());
   }
 
   return (

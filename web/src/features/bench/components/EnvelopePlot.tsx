@@ -1,9 +1,17 @@
 import { axisBottom, axisLeft, line, scaleLinear, select } from "d3";
-import { useEffect, useMemo, useRef } from "react";
+import {
+  useEffect,
+  useMemo,
+  useRef,
+  useState,
+  type FocusEvent,
+  type KeyboardEvent,
+  type PointerEvent,
+} from "react";
 import { Panel } from "../../../components/Panel";
 import { CRITERIA, convertStress, type Criterion } from "../../../../../core";
 import { useEnvelopes, useSummary } from "../hooks/use-derived";
-import { CRITERION_LABEL, envelopeRay, planePrincipals } from "../model/derive";
+import { CRITERION_LABEL, envelopeProbe, envelopeRay, planePrincipals } from "../model/derive";
 import { factor, fixed, decimalsFor } from "../model/format";
 import { useBenchStore } from "../model/store";
 
@@ -67,6 +75,46 @@ export function EnvelopePlot() {
     .y((p) => y(toUnit(p[1])));
   const d = decimalsFor(extent);
 
+  // The probed point (bench unit): under the pointer, or moved with the arrow keys while the plot has focus.
+  const svg = useRef<SVGSVGElement>(null);
+  const [probe, setProbe] = useState<[number, number] | null>(null);
+  const drawn = curves.map((c) => c.criterion);
+  const reading = probe && envelopeProbe(probe[0], probe[1], unit, drawn, material);
+  const clampToPlot = (v: number) => Math.max(-extent, Math.min(extent, v));
+
+  function onPointerMove(event: PointerEvent<SVGSVGElement>) {
+    const el = svg.current!;
+    const pt = el.createSVGPoint();
+    pt.x = event.clientX;
+    pt.y = event.clientY;
+    const local = pt.matrixTransform(el.getScreenCTM()!.inverse());
+    const inside =
+      local.x >= M.left && local.x <= M.left + size && local.y >= M.top && local.y <= M.top + size;
+    setProbe(inside ? [x.invert(local.x), y.invert(local.y)] : null);
+  }
+
+  function onKeyDown(event: KeyboardEvent<SVGSVGElement>) {
+    const step = (extent / 20) * (event.shiftKey ? 5 : 1);
+    const at = probe ?? [0, 0];
+    const moves: Record<string, [number, number]> = {
+      ArrowRight: [step, 0],
+      ArrowLeft: [-step, 0],
+      ArrowUp: [0, step],
+      ArrowDown: [0, -step],
+    };
+    if (event.key === "Escape") setProbe(null);
+    else if (event.key === "Home") setProbe(ab ? [ab[0], ab[1]] : [0, 0]);
+    else if (moves[event.key])
+      setProbe([clampToPlot(at[0] + moves[event.key][0]), clampToPlot(at[1] + moves[event.key][1])]);
+    else return;
+    event.preventDefault();
+  }
+
+  function onFocus(event: FocusEvent<SVGSVGElement>) {
+    // Keyboard users start the probe on the state (or the origin).
+    if (event.target === svg.current && probe === null) setProbe(ab ? [ab[0], ab[1]] : [0, 0]);
+  }
+
   return (
     <Panel
       id="envelope"
@@ -76,10 +124,19 @@ export function EnvelopePlot() {
       bodyClassName="flex gap-2 px-2 py-1.5"
     >
       <svg
+        ref={svg}
         viewBox={`0 0 ${W} ${H}`}
-        className="block h-auto w-[56%] max-w-[300px] min-w-0 shrink-0"
-        role="img"
+        className="block h-auto w-[56%] max-w-[300px] min-w-0 shrink-0 cursor-crosshair rounded-sm outline-none focus-visible:ring-2 focus-visible:ring-ink"
+        role="group"
+        tabIndex={0}
         aria-labelledby="envelope-title"
+        aria-describedby="envelope-probe"
+        aria-roledescription="envelope plot"
+        onPointerMove={onPointerMove}
+        onPointerLeave={() => setProbe(null)}
+        onKeyDown={onKeyDown}
+        onFocus={onFocus}
+        onBlur={() => setProbe(null)}
         data-testid="envelope-svg"
       >
         <title id="envelope-title">
@@ -136,6 +193,43 @@ export function EnvelopePlot() {
             data-testid="envelope-state"
           />
         )}
+        {probe && (
+          <g data-testid="envelope-probe-mark" aria-hidden="true" pointerEvents="none">
+            {reading?.nearest && (
+              <line
+                x1={x(0)}
+                y1={y(0)}
+                x2={x(reading.nearest.point[0])}
+                y2={y(reading.nearest.point[1])}
+                className="stroke-ink"
+                strokeDasharray="1 2"
+                strokeWidth={1}
+              />
+            )}
+            <line
+              x1={x(probe[0]) - 6}
+              x2={x(probe[0]) + 6}
+              y1={y(probe[1])}
+              y2={y(probe[1])}
+              className="stroke-ink"
+            />
+            <line
+              x1={x(probe[0])}
+              x2={x(probe[0])}
+              y1={y(probe[1]) - 6}
+              y2={y(probe[1]) + 6}
+              className="stroke-ink"
+            />
+            {reading?.nearest && (
+              <circle
+                cx={x(reading.nearest.point[0])}
+                cy={y(reading.nearest.point[1])}
+                r={2.5}
+                className="fill-ink"
+              />
+            )}
+          </g>
+        )}
         <g
           ref={xAxis}
           transform={`translate(0 ${M.top + size})`}
@@ -180,6 +274,34 @@ export function EnvelopePlot() {
             </label>
           ))}
         </fieldset>
+        <p
+          id="envelope-probe"
+          aria-live="polite"
+          className="min-h-8 text-graphite"
+          data-testid="envelope-probe"
+        >
+          {probe ? (
+            <>
+              Point (σA, σB) = (<span className="num">{fixed(probe[0], d)}</span>,{" "}
+              <span className="num">{fixed(probe[1], d)}</span>) <span className="unit">{unit}</span>
+              {reading?.nearest ? (
+                <>
+                  ; nearest along its ray: {CRITERION_LABEL[reading.nearest.criterion]}, at{" "}
+                  <span className="num" data-testid="envelope-probe-n">
+                    {factor(reading.nearest.n)}
+                  </span>{" "}
+                  × the point.
+                </>
+              ) : (
+                "; no envelope on its ray."
+              )}
+            </>
+          ) : (
+            <span className="text-graphite-soft">
+              Point at the plot (or focus it and use the arrow keys) to read σA, σB and the nearest envelope.
+            </span>
+          )}
+        </p>
         {ab ? (
           <p className="text-graphite-soft" data-testid="envelope-ray">
             State (σA, σB) = (<span className="num">{fixed(ab[0], d)}</span>,{" "}

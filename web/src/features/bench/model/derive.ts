@@ -14,6 +14,7 @@ import {
   mohrCircles,
   planeStress,
   principalStresses,
+  probeEnvelopes,
   rotateTensor,
   safetyFactor,
   tractionOnPlane,
@@ -214,6 +215,30 @@ export function envelopeRay(sA: number, sB: number, criterion: Criterion, materi
   } catch {
     return null;
   }
+}
+
+/**
+ * What a point of the envelope plot means, for its hover/keyboard readout: each drawn envelope's
+ * factor along the ray from the origin (core's probeEnvelopes on the point in MPa), the nearest
+ * envelope, and where the ray meets it in the bench unit.
+ * @param sA σA of the point, bench unit
+ * @param sB σB of the point, bench unit
+ */
+export function envelopeProbe(
+  sA: number,
+  sB: number,
+  unit: StressUnit,
+  criteria: readonly Criterion[],
+  material: MaterialChoice,
+) {
+  const toMpa = (v: number) => convertStress(v, unit, "MPa");
+  const probe = probeEnvelopes(toMpa(sA), toMpa(sB), criteria, materialForCore(material));
+  const nearest = probe.nearest && {
+    ...probe.nearest,
+    point: [probe.nearest.n * sA, probe.nearest.n * sB] as [number, number],
+    distance: convertStress(probe.nearest.distance, "MPa", unit),
+  };
+  return { hits: probe.hits, nearest };
 }
 
 /** The governing (smallest) safety factor among available criteria. */

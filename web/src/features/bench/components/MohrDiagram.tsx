@@ -79,14 +79,15 @@ function halfDisk(c: MohrCircle, x: (v: number) => number, y: (v: number) => num
 }
 
 /** A symbol with a real subscript inside SVG text (Unicode subscript letters fall back to other fonts). */
-function SvgSym({ base, sub }: { base: string; sub: string }) {
+function SvgSym({ base, sub, after = " " }: { base: string; sub: string; after?: string }) {
   return (
     <>
       {base}
       <tspan dy={3} fontSize="0.75em">
         {sub}
       </tspan>
-      <tspan dy={-3}> </tspan>
+      {/* Back to the baseline; `after` carries what follows the subscript (a space, or a comma). */}
+      <tspan dy={-3}>{after}</tspan>
     </>
   );
 }
@@ -200,6 +201,9 @@ export function MohrDiagram(props: MohrDiagramProps) {
         onPointerLeave={() => setHover(null)}
         onWheel={onWheel}
         data-testid="mohr-svg"
+        data-domain-sigma={x.domain().join(" ")}
+        data-domain-tau={y.domain().join(" ")}
+        data-zoomed={zoom === null ? "no" : "yes"}
       >
         <defs>
           <pattern id="mohr-grid" width="16" height="16" patternUnits="userSpaceOnUse">
@@ -383,7 +387,7 @@ export function MohrDiagram(props: MohrDiagramProps) {
           aria-hidden="true"
         />
         <text x={M.left + PW} y={H - 6} textAnchor="end" className="fill-graphite text-[12px]">
-          <SvgSym base="σ" sub="n" />, {unit} (tension +)
+          <SvgSym base="σ" sub="n" after="," /> {unit} (tension +)
         </text>
         <text
           transform={`translate(13 ${M.top + PH / 2}) rotate(-90)`}
@@ -392,11 +396,11 @@ export function MohrDiagram(props: MohrDiagramProps) {
         >
           {mode === "plane" ? (
             <>
-              <SvgSym base="τ" sub="x′y′" />, {unit} — positive downward ↓
+              <SvgSym base="τ" sub="x′y′" after="," /> {unit} — positive downward ↓
             </>
           ) : (
             <>
-              <SvgSym base="τ" sub="n" />, {unit} (magnitude)
+              <SvgSym base="τ" sub="n" after="," /> {unit} (magnitude)
             </>
           )}
         </text>

@@ -17,13 +17,7 @@ export function PrincipalPanel() {
     { sym: <Sym base="σ" sub="3" />, label: "sigma 3", value: s3, dir: principal.directions[2] },
   ];
   return (
-    <Panel
-      id="principal"
-      index="2"
-      title="Principal stresses"
-      subtitle={`${unit}; directions in x y z`}
-      bodyClassName="px-3 py-2"
-    >
+    <Panel id="principal" index="2" title="Principal stresses" subtitle={unit} bodyClassName="px-3 py-2">
       <table className="w-full text-[13px]" data-testid="principal-table">
         <thead>
           <tr className="text-left text-[12px] text-graphite-soft">

@@ -65,8 +65,14 @@ export function RotatedReadout() {
       <p className="mt-1 text-[12px] text-graphite-soft" data-testid="rotation-description">
         {view === "axis-angle" ? (
           <>
-            Frame turned <Quantity value={fixed(rot.axisAngle.angleDeg, 2)} unit="°" /> about axis (
-            <span className="num">{rot.axisAngle.axis.map((v) => fixed(v, 3)).join(", ")}</span>)
+            Frame turned{" "}
+            <span className="whitespace-nowrap">
+              <Quantity value={fixed(rot.axisAngle.angleDeg, 2)} unit="°" />
+            </span>{" "}
+            <span className="whitespace-nowrap">
+              about axis (<span className="num">{rot.axisAngle.axis.map((v) => fixed(v, 3)).join(", ")}</span>
+              )
+            </span>
           </>
         ) : (
           <>

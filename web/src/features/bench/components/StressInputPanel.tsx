@@ -28,7 +28,7 @@ export function StressInputPanel() {
       id="state"
       index="1"
       title="Stress state"
-      subtitle={`σ in x y z, ${unit}`}
+      subtitle={`x y z, ${unit}`}
       tools={
         <>
           <ToolButton disabled={!canUndo} onClick={() => act.undo()} aria-keyshortcuts="Control+Z">
@@ -72,7 +72,7 @@ export function StressInputPanel() {
           onChange={(e) => e.target.value && act.loadExample(e.target.value)}
           className="min-w-0 flex-1 rounded-sm border border-rule bg-white px-1 py-0.5"
         >
-          <option value="">an example state (CT-7 demo)…</option>
+          <option value="">an example (CT-7 demo)…</option>
           {EXAMPLE_STATES.map((e) => (
             <option key={e.id} value={e.id} title={e.detail}>
               {e.title}

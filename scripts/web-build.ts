@@ -33,6 +33,16 @@ export async function ensureWebBuild(log: (line: string) => void = () => {}): Pr
   if (!webBuildIsStale()) return false;
   log("building the web app (vite build)…");
   const { build } = await import("vite");
-  await build({ configFile: path.join(repoRoot, "vite.config.ts"), logLevel: "warn", mode: "production" });
+  // Vite (and the React plugin) follow NODE_ENV when it is set, and vitest sets it to "test":
+  // without this, a build made by the test run would ship React's development runtime — and
+  // npm start would then serve that build. Every build here is a production build.
+  const nodeEnv = process.env.NODE_ENV;
+  process.env.NODE_ENV = "production";
+  try {
+    await build({ configFile: path.join(repoRoot, "vite.config.ts"), logLevel: "warn", mode: "production" });
+  } finally {
+    if (nodeEnv === undefined) delete process.env.NODE_ENV;
+    else process.env.NODE_ENV = nodeEnv;
+  }
   return true;
 }

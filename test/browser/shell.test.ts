@@ -1,3 +1,4 @@
+import { readdirSync } from "node:fs";
 import { mkdir } from "node:fs/promises";
 import path from "node:path";
 import { AxeBuilder } from "@axe-core/playwright";
@@ -6,6 +7,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { RunningServer } from "../../api/server";
 import { launchChromium, screenshotDir } from "../support/browser";
 import { startTestServer } from "../support/server";
+import { webDist } from "../../scripts/web-build";
 
 describe("the app shell in Chromium", () => {
   let server: RunningServer;
@@ -66,6 +68,13 @@ describe("the app shell in Chromium", () => {
     expect(fonts.monoCheck).toBe(true);
     expect(fonts.bodyFamily).toMatch(/^"?Source Sans 3 Variable/);
     expect(fonts.numberFamily).toMatch(/^"?JetBrains Mono/);
+  });
+
+  it("when the app is built for the tests, then it is a production build (no React development runtime)", () => {
+    // vitest sets NODE_ENV=test, which Vite would otherwise follow; npm start may serve this build.
+    const assets = readdirSync(path.join(webDist, "assets"));
+    expect(assets.some((file) => file.endsWith(".js"))).toBe(true);
+    expect(assets.filter((file) => file.includes("jsx-dev-runtime"))).toEqual([]);
   });
 
   it("when fonts and assets load, then every request stays on the app's own origin (no CDN)", async () => {

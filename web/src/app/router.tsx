@@ -5,6 +5,7 @@ import { ResetPasswordPage } from "../features/auth/components/ResetPasswordPage
 import { SignInPage } from "../features/auth/components/SignInPage";
 import { SignUpPage } from "../features/auth/components/SignUpPage";
 import { HomePage } from "../features/home/components/HomePage";
+import { MailboxPage } from "../features/mailbox/components/MailboxPage";
 import { InvitationsSection } from "../features/workspaces/components/InvitationsSection";
 import { AcceptInvitationPage, JoinShareLinkPage } from "../features/workspaces/components/JoinPages";
 import { MembersSection } from "../features/workspaces/components/MembersSection";
@@ -18,6 +19,7 @@ import { RequireSession } from "./require-session";
 
 // Pages with heavy dependencies load as their own chunks, so the first page (often sign-in)
 // stays light: the bench (d3, and three.js inside it), projects and the comparison (d3, tables).
+// (The mailbox page stays in the main chunk: the header's mailbox link lives in the same file.)
 // React Router's `lazy` loads the module before it renders the route.
 const BenchPage = lazy(() =>
   import("../features/bench/components/BenchPage").then((m) => ({ default: m.BenchPage })),
@@ -45,11 +47,7 @@ export const router = createBrowserRouter([
       { path: "reset-password/:token", element: <ResetPasswordPage /> },
       { path: "invitations/:token", element: <AcceptInvitationPage /> },
       { path: "join/:token", element: <JoinShareLinkPage /> },
-      {
-        path: "dev/mailbox/:messageId?",
-        lazy: () =>
-          import("../features/mailbox/components/MailboxPage").then((m) => ({ Component: m.MailboxPage })),
-      },
+      { path: "dev/mailbox/:messageId?", element: <MailboxPage /> },
       {
         // Signed-in only: a signed-out visitor is sent to sign-in and brought back to the same address.
         element: <RequireSession />,

@@ -161,6 +161,7 @@ describe("the bench in Chromium: camera, grid paste, zoom and hover readouts", (
     await page.mouse.move(px, py);
     const hover = page.getByTestId("mohr-hover");
     await hover.waitFor();
+    await page.screenshot({ path: path.join(screenshotDir, "bench-mohr-hover.png") });
     const text = await hover.textContent();
     expect(text).toMatch(/MPa/);
     const [sigmaShown, tauShown] = numbers(text ?? "");

@@ -408,7 +408,11 @@ export function MohrDiagram(props: MohrDiagramProps) {
           <text
             x={M.left + 6}
             y={M.top + 14}
-            className="fill-graphite-soft font-mono text-[11px]"
+            className="fill-graphite stroke-panel font-mono text-[11px]"
+            // A halo in the panel colour keeps the readout legible over circles and grid.
+            strokeWidth={3}
+            strokeLinejoin="round"
+            paintOrder="stroke"
             data-testid="mohr-hover"
           >
             σ = {fixed(hover.sigma, d)}, τ = {fixed(hover.tau, d)} {unit}

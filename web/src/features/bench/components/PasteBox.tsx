@@ -20,7 +20,7 @@ export function PasteBox() {
       <div className="mt-0.5 flex gap-1.5">
         <textarea
           id={id}
-          rows={2}
+          rows={3}
           value={text}
           spellCheck={false}
           aria-invalid={error !== null}

@@ -28,7 +28,7 @@ export function StressInputPanel() {
       id="state"
       index="1"
       title="Stress state"
-      subtitle={`x y z, ${unit}`}
+      subtitle={unit}
       tools={
         <>
           <ToolButton disabled={!canUndo} onClick={() => act.undo()} aria-keyshortcuts="Control+Z">

@@ -148,6 +148,19 @@ describe("the bench in Chromium: camera, grid paste, zoom and hover readouts", (
     expect(again.sigma[0]).toBeLessThanOrEqual(s3);
     expect(again.sigma[1]).toBeGreaterThanOrEqual(s1);
     expect(await fit.isDisabled()).toBe(true);
+    // Without a wheel: the buttons zoom about the plot's centre (1.25× a press), Fit undoes it.
+    await page.getByRole("button", { name: "Zoom in", exact: true }).click();
+    await page.getByRole("button", { name: "Zoom in", exact: true }).click();
+    const inByButtons = await mohrDomain(page);
+    const span = (d: { sigma: number[] }) => d.sigma[1] - d.sigma[0];
+    expect(span(inByButtons)).toBeCloseTo(span(fitted) / 1.25 ** 2, 6);
+    expect((inByButtons.sigma[0] + inByButtons.sigma[1]) / 2).toBeCloseTo(
+      (fitted.sigma[0] + fitted.sigma[1]) / 2,
+      6,
+    );
+    await page.getByRole("button", { name: "Fit", exact: true }).focus();
+    await page.keyboard.press("Enter");
+    expect(await mohrDomain(page)).toEqual(fitted);
   });
 
   it("when the pointer rests on σ1 on the Mohr diagram's axis, then the hover readout shows σ ≈ σ1 and τ ≈ 0 in MPa", async () => {

@@ -27,6 +27,7 @@ import {
   type MohrDragState,
 } from "../interaction/mohr-drag";
 import { zoomAt, type ZoomView } from "../interaction/zoom";
+import { ToolButton } from "../../../components/ToolButton";
 import type { FacePoint } from "../model/derive";
 import { decimalsFor, fixed } from "../model/format";
 
@@ -167,6 +168,12 @@ export function MohrDiagram(props: MohrDiagramProps) {
   function onWheel(event: WheelEvent<SVGSVGElement>) {
     const p = toData(event.clientX, event.clientY);
     onZoom(zoomAt(zoom, event.deltaY < 0 ? 1.15 : 1 / 1.15, [p.sigma, p.tau], fitCentre));
+  }
+
+  /** Buttons zoom about the centre of the plot, for keyboard users and those without a wheel. */
+  function zoomByButton(factor: number) {
+    const centre: [number, number] = [zoom?.cx ?? fitCentre[0], zoom?.cy ?? fitCentre[1]];
+    onZoom(zoomAt(zoom, factor, centre, fitCentre));
   }
 
   function onPointKey(event: KeyboardEvent<SVGCircleElement>) {
@@ -419,6 +426,29 @@ export function MohrDiagram(props: MohrDiagramProps) {
           </text>
         )}
       </svg>
+      <div
+        role="group"
+        aria-label="Zoom the diagram"
+        className="absolute flex gap-1"
+        style={{ right: `${((M.right + 4) / W) * 100}%`, top: `${((M.top + 4) / H) * 100}%` }}
+      >
+        <ToolButton
+          aria-label="Zoom in"
+          title="Zoom in"
+          onClick={() => zoomByButton(1.25)}
+          className="px-1.5"
+        >
+          +
+        </ToolButton>
+        <ToolButton
+          aria-label="Zoom out"
+          title="Zoom out"
+          onClick={() => zoomByButton(1 / 1.25)}
+          className="px-1.5"
+        >
+          −
+        </ToolButton>
+      </div>
     </figure>
   );
 }

@@ -77,7 +77,8 @@ export function CombinationEditor({
     save(version);
   };
 
-  const label = `Edit combination ${combination.name}`;
+  // Named as it was when opened, so the form keeps its name while a newer version comes and goes.
+  const [label] = useState(`Edit combination ${combination.name}`);
   return (
     <form aria-label={label} onSubmit={submit} noValidate className="basis-full space-y-2 text-[14px]">
       <p className="text-[13px] text-graphite-soft">

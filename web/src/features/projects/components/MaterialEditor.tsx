@@ -1,6 +1,6 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useState } from "react";
-import { useForm } from "react-hook-form";
+import { useForm, useWatch } from "react-hook-form";
 import {
   materialSchema,
   STRESS_UNIT_NAMES,
@@ -67,6 +67,7 @@ export function MaterialEditor({
   });
   const [conflict, setConflict] = useState<{ currentVersion: number; current: Material } | null>(null);
   const errors = form.formState.errors;
+  const version = useWatch({ control: form.control, name: "version" });
   const id = (field: string) => `material-${material.id}-${field}`;
 
   const save = (body: UpdateMaterialBody) =>
@@ -150,7 +151,7 @@ export function MaterialEditor({
           Cancel
         </button>
         <span className="text-[12px] text-graphite-faint">
-          editing version <span className="num">{form.watch("version")}</span>
+          editing version <span className="num">{version}</span>
         </span>
       </div>
       {conflict && (

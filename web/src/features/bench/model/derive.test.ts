@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import { safetyFactor } from "../../../../../core";
-import { criteriaResults } from "./derive";
+import { criteriaResults, envelopeProbe } from "./derive";
 
 const state = { xx: 120, yy: 40, zz: 0, xy: 30, yz: 0, zx: 0 };
 
@@ -32,5 +32,17 @@ describe("criteriaResults", () => {
     if (!vm.available) throw new Error("von Mises must be available");
     expect(vm.n).toBeCloseTo(safetyFactor(state, "von-mises", { yield: 355 }), 12);
     expect(vm.utilisation).toBeCloseTo(1.5 / vm.n, 14);
+  });
+});
+
+describe("envelopeProbe", () => {
+  it("when the plot is in kPa, then the point is read in MPa against MPa strengths and the hit comes back in kPa (uniaxial yield at σ = Sy; common practice, no source)", () => {
+    const material = { presetId: null, yield: 250, ultimateTension: null, ultimateCompression: null };
+    const probe = envelopeProbe(100_000, 0, "kPa", ["von-mises"], material);
+    expect(probe.nearest?.criterion).toBe("von-mises");
+    expect(probe.nearest?.n).toBeCloseTo(2.5, 12);
+    expect(probe.nearest?.point[0]).toBeCloseTo(250_000, 6);
+    expect(probe.nearest?.point[1]).toBe(0);
+    expect(probe.nearest?.distance).toBeCloseTo(150_000, 6);
   });
 });

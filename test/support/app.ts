@@ -1,6 +1,5 @@
 import { inject } from "vitest";
 import { createApp } from "../../api/app";
-import { randomUUID } from "node:crypto";
 import { buildAppContext } from "../../api/context";
 import { parseEnv } from "../../api/env";
 import { createLogger } from "../../api/logger";
@@ -9,20 +8,10 @@ import { initModels } from "../../db/models";
 import { createSequelize } from "../../db/sequelize";
 import { webDist } from "../../scripts/web-build";
 import type { RateLimitSettings } from "../../api/middleware/rate-limit";
+import { relaxedLimits } from "./rate-limits";
 
 /** The origin test apps believe they are served from; send it as `Origin` on state-changing requests. */
 export const TEST_ORIGIN = "http://sigmacube.test";
-
-/**
- * Limits high enough that no ordinary test meets them, with a prefix of this app's own so
- * counters from other test files (same database) never add up. The rate-limit test passes small ones.
- */
-const relaxedLimits = (): Partial<RateLimitSettings> => ({
-  signIn: { limit: 10_000, windowMs: 60_000 },
-  signUp: { limit: 10_000, windowMs: 60_000 },
-  forgotPassword: { limit: 10_000, windowMs: 60_000 },
-  prefix: `test-${randomUUID()}:`,
-});
 
 /**
  * The real Express app over the run's test database (or `databaseUrl`), not listening:

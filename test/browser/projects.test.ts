@@ -124,6 +124,10 @@ describe("projects in Chromium: from an empty project to the governing case, and
       .toBe("governs: Hydrostatic test at head-to-shell junction, Tresca, SF 1.30 against 1.5 required");
     expect(await page.locator('tr[data-governs="overall"]').count()).toBeGreaterThan(0);
     await page.getByText("fails", { exact: true }).first().waitFor();
+    // Like every page inside a workspace, the comparison offers a link back to exactly itself.
+    expect(await page.getByRole("button", { name: "Copy link to this page" }).getAttribute("data-link")).toBe(
+      page.url(),
+    );
     await shot(page, "comparison");
 
     await page.getByLabel("Verdict").selectOption("fail");

@@ -1,3 +1,4 @@
+import { CopyLinkButton } from "../../../components/CopyLinkButton";
 import { useState } from "react";
 import { Link, useParams } from "react-router-dom";
 import { governingSentence } from "../../../../../core/contract/comparison";
@@ -60,9 +61,14 @@ export function ComparisonPage() {
             .
           </p>
         </div>
-        <ToolButton onClick={() => downloadText(`${p.name} comparison.csv`, toCsv(comparisonTable(c, unit)))}>
-          Export CSV
-        </ToolButton>
+        <div className="flex flex-wrap items-center gap-2">
+          <CopyLinkButton />
+          <ToolButton
+            onClick={() => downloadText(`${p.name} comparison.csv`, toCsv(comparisonTable(c, unit)))}
+          >
+            Export CSV
+          </ToolButton>
+        </div>
       </header>
 
       <section aria-label="Governing case" className="rounded-sm border border-rule bg-panel px-4 py-3">

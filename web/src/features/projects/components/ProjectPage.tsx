@@ -1,3 +1,4 @@
+import { CopyLinkButton } from "../../../components/CopyLinkButton";
 import { Link, useParams } from "react-router-dom";
 import { ApiError } from "../../../lib/api-client";
 import { FormMessage, quietButton } from "../../../lib/forms";
@@ -58,7 +59,8 @@ export function ProjectPage() {
             </p>
           )}
         </div>
-        <div className="flex gap-2">
+        <div className="flex flex-wrap items-center gap-2">
+          <CopyLinkButton />
           <Link to={`/workspaces/${workspaceId}/projects/${projectId}/comparison`} className={quietButton}>
             Comparison
           </Link>

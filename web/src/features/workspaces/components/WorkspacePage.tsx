@@ -3,7 +3,7 @@ import { roleAtLeast } from "../../../../../core/contract/workspaces";
 import { ApiError } from "../../../lib/api-client";
 import { FormMessage } from "../../../lib/forms";
 import { useWorkspace } from "../api/get-workspace";
-import { CopyLinkButton } from "./CopyLinkButton";
+import { CopyLinkButton } from "../../../components/CopyLinkButton";
 import { RoleBadge } from "./RoleBadge";
 
 /** `/workspaces/:workspaceId/*`: the workspace's header and tabs; pages inside render below. */

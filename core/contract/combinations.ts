@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { uuidInput } from "./ids";
 import { componentsOutSchema } from "./load-cases";
 import { finiteNumber, versionSchema } from "./materials";
 import { personRefSchema, projectParamsSchema } from "./projects";
@@ -17,7 +18,7 @@ export const SUPERPOSITION_CAUTION =
   "Combinations add load-case stresses by superposition, which assumes linear-elastic material and small displacements.";
 
 export const combinationTermInputSchema = z.object({
-  loadCaseId: z.uuid({ error: "must be a load-case id (UUID)" }),
+  loadCaseId: uuidInput("must be a load-case id (UUID)"),
   factor: finiteNumber()
     .refine((v) => v !== 0, { message: "must not be zero (leave the case out instead)" })
     // With stresses bounded too, a combination of 50 terms can never overflow.

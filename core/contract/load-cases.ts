@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { uuidInput } from "./ids";
 import { stressUnitSchema, stressValue, versionSchema } from "./materials";
 import { personRefSchema, projectParamsSchema } from "./projects";
 
@@ -110,7 +111,7 @@ export type StressInput = z.output<typeof stressInputSchema>;
 
 /** One state to save at a location. */
 export const stateInputSchema = z.object({
-  locationId: z.uuid({ error: "must be a location id (UUID)" }),
+  locationId: uuidInput("must be a location id (UUID)"),
   stress: stressInputSchema,
   source: stateSourceSchema.default("typed"),
   note: z.string().trim().max(2000, "At most 2000 characters.").default(""),
@@ -151,7 +152,7 @@ export const updateLoadCaseBodySchema = z
     /** States to save (a new revision at each location listed); other locations keep theirs. */
     states: statesInputSchema,
     /** Locations whose state is removed from the case. */
-    removeStates: z.array(z.uuid({ error: "must be a location id (UUID)" })),
+    removeStates: z.array(uuidInput("must be a location id (UUID)")),
   })
   .partial()
   .required({ version: true });

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { uuidInput } from "./ids";
 
 /**
  * Materials: a workspace's own library and references to the read-only built-in list of
@@ -101,7 +102,7 @@ export const materialRefSchema = z.discriminatedUnion(
   "kind",
   [
     z.object({ kind: z.literal("published"), id: z.string().min(1).max(40) }),
-    z.object({ kind: z.literal("workspace"), id: z.uuid({ error: "must be a material id (UUID)" }) }),
+    z.object({ kind: z.literal("workspace"), id: uuidInput("must be a material id (UUID)") }),
   ],
   { error: 'must be { kind: "published", id } or { kind: "workspace", id }' },
 );

@@ -79,6 +79,14 @@ describe("combinations", () => {
     });
   });
 
+  it("when a term names its case in upper case, then it is the same case (UUIDs are case-insensitive)", async () => {
+    const response = await team.editor.agent
+      .post(combos())
+      .send({ name: "Upper-case id", terms: [{ loadCaseId: cases.Dead.toUpperCase(), factor: 1 }] });
+    expect(response.status, JSON.stringify(response.body)).toBe(201);
+    expect(response.body.combination.terms[0].loadCaseId).toBe(cases.Dead);
+  });
+
   it("when a term names a case of another project, a zero factor or the same case twice, then 400 names the field", async () => {
     const zero = await team.editor.agent
       .post(combos())

@@ -1,13 +1,11 @@
 /**
- * Every reference case in ../shared/reference-cases/cases.json whose `calc` core covers, loaded at
- * test time. Each test title names the case's source, place in the source and status as the file
- * gives them ("common_practice" = a fact of the trade with no source; "memory" = recalled, not read).
+ * Every reference case in core/testing/reference-cases.ts (the repository's own fixture) whose `calc`
+ * core covers. Each test title names the case's source (a published book with the place in it, or the
+ * formula) and its basis ("published", "recalled from memory", "formula, recomputed independently",
+ * "common practice, no source").
  * Strain-gauge, vessel and shaft cases run through core/calculators/; cases whose expected values core
  * does not compute (UG-27 thickness, Lamé thick cylinders) are listed as skipped with the reason.
  */
-import { readFileSync } from "node:fs";
-import path from "node:path";
-import { fileURLToPath } from "node:url";
 import { describe, expect, it } from "vitest";
 import {
   deltaRosette,
@@ -24,6 +22,12 @@ import { solidShaftStress } from "./calculators/shaft";
 import { thinCylinder, thinSphere, type ThinWallOptions } from "./calculators/thin-wall";
 import { safetyFactor, type Material } from "./criteria/safety-factor";
 import { principalStresses } from "./eigen/principal";
+import {
+  BASIS_WORDS,
+  REFERENCE_CASES,
+  type ReferenceCase,
+  type ReferenceValue,
+} from "./testing/reference-cases";
 import { planeStress, transformPlaneStress } from "./plane/plane-stress";
 import { invariants, maxShear, octahedral, vonMises } from "./tensor/invariants";
 import { rotateTensor, rotationFromAxisAngle } from "./tensor/rotate";
@@ -31,25 +35,10 @@ import { tractionOnPlane } from "./tensor/traction";
 import type { StressTensor, Vec3 } from "./tensor/types";
 import { degToRad } from "./units/angles";
 
-type Tol = { abs?: number; rel?: number };
-type Value = number | number[];
-type Case = {
-  id: string;
-  calc: string;
-  source: string;
-  source_location: string;
-  expected_status: string;
-  from_memory?: boolean;
-  inputs: Record<string, unknown>;
-  expected: Record<string, Value>;
-  corrected_expected?: Record<string, Value>;
-  tolerance: { default: Tol; per_key?: Record<string, Tol> };
-  compare?: Record<string, { mod?: number; vector_up_to_sign?: boolean }>;
-};
+type Value = ReferenceValue;
+type Case = ReferenceCase;
 
-const repoRoot = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "..");
-const casesFile = path.resolve(repoRoot, "../shared/reference-cases/cases.json");
-const cases = JSON.parse(readFileSync(casesFile, "utf8")) as Case[];
+const cases = REFERENCE_CASES;
 
 /** calc kinds core computes (the last four through core/calculators/). */
 const COVERED = [
@@ -249,8 +238,7 @@ function rosetteActuals(c: Case): Actuals {
     theta_e1_deg: () => p().thetaE1,
     // tan 2θp = γxy/(εx − εy); tan has period 180°, so it is the same at ε1 and ε2
     tan_2theta_p: () => Math.tan(degToRad(2 * p().thetaE1)),
-    // σy = E(εy + νεx)/(1 − ν²) with +εx: the source's printed "(0.33)(−0.000770)" is a sign typo
-    // its own number (−7.53 MPa) does not carry
+    // plane-stress Hooke's law: σy = E(εy + νεx)/(1 − ν²)
     sx: () => s().sx,
     sy: () => s().sy,
     txy: () => s().txy,
@@ -280,7 +268,7 @@ function thinVesselActuals(c: Case): Actuals {
     hoop: () => v().hoop,
     axial: () => v().axial,
     tau_max_inplane: () => planeStress(v().tensor.xx, v().tensor.yy, v().tensor.xy).tauMaxInPlane,
-    // allowable by the largest normal stress against σallow, as the sources do
+    // allowable pressure: the largest membrane stress reaches σallow
     p_allow: () => (num(c, "p") * num(c, "sigma_allow")) / Math.max(v().hoop, v().axial),
     vm_per_unit_p: () => vonMises(v().tensor) / num(c, "p"),
     p_yield_DE: () => num(c, "p") * vonMisesFactor(num(c, "Sy")),
@@ -389,13 +377,7 @@ function isCovered(c: Case): boolean {
 }
 
 function title(c: Case): string {
-  const status =
-    c.expected_status === "common_practice"
-      ? "common_practice: common practice, no source"
-      : c.expected_status === "memory" || c.from_memory
-        ? `${c.expected_status}: values partly recalled from memory`
-        : c.expected_status;
-  return `${c.id} — ${c.source}, ${c.source_location} [${status}]`;
+  return `${c.id} — ${c.source} [${BASIS_WORDS[c.basis]}]`;
 }
 
 function compareKey(c: Case, key: string, got: Value, want: Value): void {
@@ -437,8 +419,8 @@ function compareKey(c: Case, key: string, got: Value, want: Value): void {
   }
 }
 
-describe(`reference cases from ${path.relative(repoRoot, casesFile)}`, () => {
-  it("when the file is loaded, then every case has a known calc kind and every fact a known `which`", () => {
+describe("reference cases from core/testing/reference-cases.ts", () => {
+  it("when the fixture is read, then every case has a known calc kind and every fact a known `which`", () => {
     expect(cases.length).toBeGreaterThan(0);
     for (const c of cases) {
       expect([...COVERED, ...Object.keys(NOT_COVERED)], `case ${c.id}`).toContain(c.calc);
@@ -449,10 +431,22 @@ describe(`reference cases from ${path.relative(repoRoot, casesFile)}`, () => {
     }
   });
 
+  it("when the fixture is read, then every case names a source and a basis, and no source is course or lecture material", () => {
+    const ids = new Set(cases.map((c) => c.id));
+    expect(ids.size, "ids are unique").toBe(cases.length);
+    for (const c of cases) {
+      expect(c.source.trim().length, `case ${c.id} source`).toBeGreaterThan(10);
+      expect(Object.keys(BASIS_WORDS), `case ${c.id} basis`).toContain(c.basis);
+      expect(`${c.source} ${c.note ?? ""}`, `case ${c.id}`).not.toMatch(
+        /course|lecture|tutorial|class notes/i,
+      );
+    }
+  });
+
   for (const c of cases.filter(isCovered)) {
     it(title(c), () => {
       const actual = actualsFor(c);
-      const want: Record<string, Value> = { ...c.expected, ...(c.corrected_expected ?? {}) };
+      const want: Record<string, Value> = c.expected;
       const keys = Object.keys(want);
       expect(keys.length).toBeGreaterThan(0);
       for (const key of keys) {

@@ -3,6 +3,8 @@ import express, { type Express } from "express";
 import type { AppContext } from "./context";
 import { errors } from "./errors";
 import { errorHandler } from "./middleware/error-handler";
+import { jsonBody } from "./middleware/json-body";
+import { malformedPath } from "./middleware/malformed-path";
 import { requestLogging } from "./middleware/request-logging";
 import { sessionMiddleware } from "./auth/session-middleware";
 import { mountRoutes } from "./openapi/mount";
@@ -18,9 +20,10 @@ export function createApp(context: AppContext): Express {
   app.set("trust proxy", "loopback");
 
   app.use(requestLogging(context.logger));
+  app.use(malformedPath);
 
   const api = express.Router();
-  api.use(express.json({ limit: "1mb" }));
+  api.use(jsonBody("1mb"));
   api.use(sessionMiddleware(context.auth));
   // Every /api route is registered in the route table (api/openapi/route-table.ts).
   api.use(

@@ -45,6 +45,7 @@ export const errors = {
       "mail_not_sent",
       `${what} was saved, but the mail could not be sent; try sending it again.`,
     ),
+  unsupportedMediaType: (message: string) => new HttpError(415, "unsupported_media_type", message),
   payloadTooLarge: (limit: string) =>
     new HttpError(413, "payload_too_large", `The request body is larger than ${limit}.`),
   databaseUnavailable: () =>

@@ -56,8 +56,10 @@ const matrixSchema = z
   .array(z.array(stressValue()).length(3, "each row has 3 numbers"), {
     error: "must be 3 rows of 3 numbers",
   })
-  .length(3, "must have 3 rows")
+  .length(3, { error: "must have 3 rows", abort: true })
   .superRefine((m, ctx) => {
+    // Symmetry is only asked of a 3×3 matrix; a wrong shape has already been reported.
+    if (m.length !== 3 || m.some((row) => row.length !== 3)) return;
     const scale = Math.max(...m.flat().map(Math.abs), 0);
     for (const [i, j] of [
       [0, 1],

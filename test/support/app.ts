@@ -1,3 +1,4 @@
+import type { Logger } from "pino";
 import { inject } from "vitest";
 import { createApp } from "../../api/app";
 import { buildAppContext } from "../../api/context";
@@ -23,6 +24,8 @@ export function buildTestApp(
     webDist?: string | null;
     rateLimits?: Partial<RateLimitSettings>;
     nodeEnv?: "test" | "production" | "development";
+    /** A logger to read the app's log lines from (silent by default). */
+    logger?: Logger;
   } = {},
 ) {
   const env = parseEnv({
@@ -37,7 +40,7 @@ export function buildTestApp(
   const context = buildAppContext({
     env,
     sequelize,
-    logger: createLogger(env),
+    logger: options.logger ?? createLogger(env),
     version: appVersion,
     webDist: options.webDist === undefined ? webDist : options.webDist,
     rateLimits: { ...relaxedLimits(), ...options.rateLimits },

@@ -53,8 +53,8 @@ export type { Criterion, Material } from "./criteria/safety-factor";
 export { CRITERIA, safetyFactor } from "./criteria/safety-factor";
 export type { ParseTensorOptions, ParseTensorResult, ParseError } from "./parse/parse-tensor";
 export { parseTensor } from "./parse/parse-tensor";
-export type { PrincipalBatchOutput } from "./batch/principal-batch";
-export { principalBatch, vonMisesBatch } from "./batch/principal-batch";
+export { FIRST_BAD_ROWS_LIMIT, principalBatch, vonMisesBatch } from "./batch/principal-batch";
+export type { BatchReport, PrincipalBatchOutput } from "./batch/principal-batch";
 export {
   IDENTITY_ROTATION,
   multiplyMat3,

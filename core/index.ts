@@ -51,10 +51,18 @@ export type { PlaneStressResult } from "./plane/plane-stress";
 export { planeStress, transformPlaneStress } from "./plane/plane-stress";
 export type { Criterion, Material } from "./criteria/safety-factor";
 export { CRITERIA, safetyFactor } from "./criteria/safety-factor";
-export type { ParseTensorOptions, ParseTensorResult, ParseError } from "./parse/parse-tensor";
-export { parseTensor } from "./parse/parse-tensor";
-export type { PrincipalBatchOutput } from "./batch/principal-batch";
-export { principalBatch, vonMisesBatch } from "./batch/principal-batch";
+export type {
+  DecimalMark,
+  ListingPoint,
+  ParseError,
+  ParseProblem,
+  ParseTensorOptions,
+  ParseTensorResult,
+} from "./parse/parse-tensor";
+export { COMMON_SIX_ORDERS, parseTensor } from "./parse/parse-tensor";
+export { MAX_INPUT_STRESS, stressInputProblem } from "./tensor/validate";
+export { FIRST_BAD_ROWS_LIMIT, principalBatch, vonMisesBatch } from "./batch/principal-batch";
+export type { BatchReport, PrincipalBatchOutput } from "./batch/principal-batch";
 export {
   IDENTITY_ROTATION,
   multiplyMat3,

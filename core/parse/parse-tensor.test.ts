@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { StressTensor } from "../tensor/types";
-import { parseTensor, type ParseTensorOptions } from "./parse-tensor";
+import { COMMON_SIX_ORDERS, parseTensor, type ParseTensorOptions } from "./parse-tensor";
 
 const T = (xx: number, yy: number, zz: number, xy: number, yz: number, zx: number): StressTensor => ({
   xx,
@@ -237,7 +237,7 @@ describe("parseTensor on bad inputs names the place", () => {
       "six numbers without an order",
       "1 2 3 4 5 6",
       undefined,
-      "line 1, column 1: six components need their order: give options.order or a header line such as 'xx yy zz xy yz zx'",
+      "line 1, column 1: six values and no header line: their order is needed — σx σy σz τxy τyz τxz, σx σy σz τxy τxz τyz or another",
       1,
       1,
     ],
@@ -327,5 +327,179 @@ describe("parseTensor on bad inputs names the place", () => {
     );
     expect(() => parseTensor("1 2 3", { symmetryTolerance: -1 })).toThrow(RangeError);
     expect(() => parseTensor(42 as unknown as string)).toThrow(TypeError);
+  });
+});
+
+// The comma rules below are product rules (Sigmacube's own, written in parseTensor's JSDoc): a comma
+// that could be a decimal comma, a thousands separator or a value separator is never guessed.
+describe("parseTensor and commas (product rules)", () => {
+  const ambiguous: [string, string][] = [
+    [
+      "1,5 2",
+      "'1,5' is ambiguous: the comma may be a decimal comma (1.5) or a separator between two values (1 and 5)",
+    ],
+    [
+      "12,5 30",
+      "'12,5' is ambiguous: the comma may be a decimal comma (12.5) or a separator between two values (12 and 5)",
+    ],
+    [
+      "1,000 500",
+      "'1,000' is ambiguous: the comma may be a decimal comma (1.000), a thousands separator (1000) or a separator between two values (1 and 000)",
+    ],
+    ["1,250,000 0 0", "'1,250,000' is ambiguous: the commas may be thousands separators (1250000)"],
+    ["100,200,300", "'100,200,300' is ambiguous: the commas may be thousands separators (100200300)"],
+    ["1,05,3", "'1,05,3' is ambiguous"],
+  ];
+  for (const [text, message] of ambiguous) {
+    it(`when '${text}' is pasted with no decimal mark stated, then it is refused as ambiguous and nothing is guessed`, () => {
+      const r = parseTensor(text);
+      expect(r.ok).toBe(false);
+      if (r.ok) return;
+      expect(r.error.message).toContain(message);
+      expect(r.error.message).toContain("State the decimal mark");
+      expect(r.error.problem).toBe("ambiguous-comma");
+    });
+  }
+
+  it("when the decimal mark is stated as a comma, then '1,5 2 3' is σx = 1.5, σy = 2, τxy = 3 and '12,5 30 4' is 12.5, 30, 4", () => {
+    expect(parseTensor("1,5 2 3", { decimal: "," })).toEqual({
+      ok: true,
+      tensor: T(1.5, 2, 0, 3, 0, 0),
+      form: "plane",
+    });
+    expect(parseTensor("12,5\t30\t4 MPa", { decimal: "," })).toEqual({
+      ok: true,
+      tensor: T(12.5, 30, 0, 4, 0, 0),
+      unit: "MPa",
+      form: "plane",
+    });
+    expect(parseTensor("100,5 20 -5\n20 50 10,25\n-5 10,25 -30", { decimal: "," })).toEqual({
+      ok: true,
+      tensor: T(100.5, 50, -30, 20, 10.25, -5),
+      form: "matrix",
+    });
+  });
+
+  it("when the decimal mark is a comma and a number has a point or two commas, then it is refused with the reason", () => {
+    const point = parseTensor("1.000,5 2 3", { decimal: "," });
+    expect(point.ok || point.error.message).toMatch(
+      /'1\.000,5' has a point, but the decimal mark is a comma/,
+    );
+    const two = parseTensor("1,5,2 3 4", { decimal: "," });
+    expect(two.ok || two.error.message).toMatch(/'1,5,2' has more than one comma/);
+  });
+
+  it("when the decimal mark is stated as a point, then commas separate values: '1,000 500' is 1, 0, 500", () => {
+    expect(parseTensor("1,000 500", { decimal: "." })).toEqual({
+      ok: true,
+      tensor: T(1, 0, 0, 500, 0, 0),
+      form: "plane",
+    });
+  });
+
+  it("when commas plainly separate values (a space after them, brackets, or three or more comma-only values), then no decimal mark is needed", () => {
+    expect(parseTensor("100,20,-5\n20,50,10\n-5,10,-30")).toEqual({ ok: true, tensor: M, form: "matrix" });
+    expect(parseTensor("[[100,200,300],[200,50,10],[300,10,-30]]")).toEqual({
+      ok: true,
+      tensor: T(100, 50, -30, 200, 10, 300),
+      form: "matrix",
+    });
+    expect(parseTensor("80, -40, 25")).toEqual({ ok: true, tensor: T(80, -40, 0, 25, 0, 0), form: "plane" });
+    expect(parseTensor("1,5,2")).toEqual({ ok: true, tensor: T(1, 5, 0, 2, 0, 0), form: "plane" });
+  });
+
+  const empty: [string, ParseTensorOptions | undefined, string, number][] = [
+    ["150,0,,25", undefined, "empty field (two commas with nothing between them) in '150,0,,25'", 7],
+    ["150,0,,25", { decimal: "." }, "empty field (two commas with nothing between them)", 7],
+    [",1, 2, 3", undefined, "empty field (a comma starts the row)", 1],
+    ["1, 2, 3,", undefined, "empty field (a comma ends the row)", 8],
+    ["[1, 2, 3,]", undefined, "empty field (a comma before a closing bracket)", 9],
+  ];
+  for (const [text, options, message, column] of empty) {
+    it(`when '${text}' holds an empty field${options ? " (decimal point stated)" : ""}, then it is refused, not read as zero or shifted`, () => {
+      const r = parseTensor(text, options);
+      expect(r.ok).toBe(false);
+      if (r.ok) return;
+      expect(r.error.message).toContain(message);
+      expect(r.error.message).toContain("a blank cell is not read as zero");
+      expect(r.error.problem).toBe("empty-field");
+      expect(r.error.column).toBe(column);
+    });
+  }
+
+  it("when the decimal option is neither '.' nor ',' (a programmer error), then it throws", () => {
+    expect(() => parseTensor("1 2 3", { decimal: ";" as unknown as "." })).toThrow(/options.decimal must be/);
+  });
+});
+
+describe("parseTensor, six bare values and finite-element listings (product rules)", () => {
+  it("when six bare values come without an order, then the refusal says so in σ/τ terms and carries the problem 'order-needed'", () => {
+    const r = parseTensor("150 20 0 25 5 0");
+    expect(r.ok).toBe(false);
+    if (r.ok) return;
+    expect(r.error.problem).toBe("order-needed");
+    expect(r.error.message).not.toContain("options.order");
+    expect(r.error.message).toContain("σx σy σz τxy τyz τxz");
+    expect(r.error.message).toContain("σx σy σz τxy τxz τyz");
+  });
+
+  it("when one of the two common orders is chosen (common practice, no source), then the fifth and sixth values land on τyz/τxz or τxz/τyz", () => {
+    const a = parseTensor("150 20 0 25 5 -3", { order: COMMON_SIX_ORDERS["xy-yz-xz"] });
+    expect(a).toEqual({ ok: true, tensor: T(150, 20, 0, 25, 5, -3), form: "components" });
+    const b = parseTensor("150 20 0 25 5 -3", { order: COMMON_SIX_ORDERS["xy-xz-yz"] });
+    expect(b).toEqual({ ok: true, tensor: T(150, 20, 0, 25, -3, 5), form: "components" });
+  });
+
+  it("when a listing row is headed 'Node SX SY SZ SXY SYZ SXZ', then the first column is the node number and the rest the components", () => {
+    expect(parseTensor("Node SX SY SZ SXY SYZ SXZ\n101 150 20 0 25 5 -3 MPa")).toEqual({
+      ok: true,
+      tensor: T(150, 20, 0, 25, 5, -3),
+      unit: "MPa",
+      form: "components",
+      point: { kind: "node", number: 101 },
+    });
+    expect(parseTensor("Elem\tSX\tSY\tSXY\n7\t80\t-40\t25")).toEqual({
+      ok: true,
+      tensor: T(80, -40, 0, 25, 0, 0),
+      form: "plane",
+      point: { kind: "element", number: 7 },
+    });
+    expect(parseTensor("ELEMENT_ID s11 s22 s33 s12 s23 s13\n12 1 2 3 4 5 6")).toMatchObject({
+      ok: true,
+      point: { kind: "element", number: 12 },
+    });
+  });
+
+  const badListings: [string, string][] = [
+    [
+      "Node SX SY SZ SXY SYZ SXZ\n101 150 20 0 25 5 -3\n102 1 2 3 4 5 6",
+      "line 3, column 1: the listing holds 2 rows (nodes 101, 102); paste the one row of the node to check",
+    ],
+    [
+      "Node SX SY SZ SXY SYZ SXZ\n150 20 0 25 5 -3",
+      "line 2, column 15: the header names a node number and 6 components, so a row needs 7 numbers; this one has 6",
+    ],
+    ["Elem SX SY SXY\n7.5 80 -40 25", "line 2, column 1: '7.5' is not an element number"],
+    ["Node\n1 2 3", "line 1, column 1: 'Node' names the first column of a finite-element listing"],
+  ];
+  for (const [text, message] of badListings) {
+    it(`when a listing is pasted as '${text.replace(/\n/g, " ⏎ ").slice(0, 40)}…', then it is refused with "${message.slice(0, 50)}…"`, () => {
+      const r = parseTensor(text);
+      expect(r.ok).toBe(false);
+      if (!r.ok) expect(r.error.message.startsWith(message), r.error.message).toBe(true);
+    });
+  }
+});
+
+describe("parseTensor refuses values beyond the input range", () => {
+  it("when a value is 1e300 (σ² would overflow) or just above 1e12, then it is refused naming the value; 1e12 itself is accepted", () => {
+    for (const text of ["1e300 0 0", "0 -1e13 0", "1.0000001e12 0 0"]) {
+      const r = parseTensor(text);
+      expect(r.ok).toBe(false);
+      if (r.ok) continue;
+      expect(r.error.problem).toBe("too-large");
+      expect(r.error.message).toMatch(/is larger than 1e\+12 in magnitude/);
+    }
+    expect(parseTensor("1e12 0 0")).toMatchObject({ ok: true, tensor: T(1e12, 0, 0, 0, 0, 0) });
   });
 });

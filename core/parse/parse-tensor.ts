@@ -1,7 +1,22 @@
 import { SYMMETRY_REL_TOL } from "../tolerances";
 import type { Component, StressTensor } from "../tensor/types";
+import { stressInputProblem } from "../tensor/validate";
 import type { StressUnit } from "../units/stress";
-import { componentOf, parseNumberToken, tokenize, unitOf, type Token } from "./tokens";
+import { componentOf, parseNumberToken, tokenize, unitOf, type DecimalMark, type Token } from "./tokens";
+
+export type { DecimalMark } from "./tokens";
+
+/**
+ * The two orders in which six bare components usually come: normal stresses first, then the shears
+ * in one of two orders (common practice, no source). Offered by name where a plain row of six
+ * numbers has to be read.
+ */
+export const COMMON_SIX_ORDERS = {
+  /** σx σy σz τxy τyz τxz */
+  "xy-yz-xz": ["xx", "yy", "zz", "xy", "yz", "zx"],
+  /** σx σy σz τxy τxz τyz */
+  "xy-xz-yz": ["xx", "yy", "zz", "xy", "zx", "yz"],
+} as const satisfies Record<string, readonly Component[]>;
 
 /** Options of {@link parseTensor}. */
 export type ParseTensorOptions = {
@@ -12,14 +27,39 @@ export type ParseTensorOptions = {
   order?: readonly string[];
   /** Relative symmetry tolerance for a 3×3 matrix, as a fraction of its largest absolute entry (default 1e-6). */
   symmetryTolerance?: number;
+  /**
+   * The decimal mark the numbers are written with. "." : commas separate values. ",": a comma is the
+   * decimal mark ("1,5" = 1.5) and values are separated by spaces, tabs or `;`. Not given: commas
+   * separate values, and a comma that could also be a decimal comma or a thousands separator
+   * ("1,5 2", "1,000") is refused so that the caller asks.
+   */
+  decimal?: DecimalMark;
 };
 
+/**
+ * What kind of problem a refusal is, for a caller that offers a way out: "ambiguous-comma" (state
+ * the decimal mark), "order-needed" (six bare values: state their order), "empty-field" (a blank
+ * cell between commas), "too-large" (a value beyond `MAX_INPUT_STRESS`). Other refusals have
+ * no kind.
+ */
+export type ParseProblem = "ambiguous-comma" | "order-needed" | "empty-field" | "too-large";
+
 /** Where and why pasted text was rejected (1-based line and column). */
-export type ParseError = { message: string; line?: number; column?: number };
+export type ParseError = { message: string; line?: number; column?: number; problem?: ParseProblem };
+
+/** The node or element a finite-element listing row belongs to (its first column). */
+export type ListingPoint = { kind: "node" | "element"; number: number };
 
 /** Result of {@link parseTensor}. */
 export type ParseTensorResult =
-  | { ok: true; tensor: StressTensor; unit?: StressUnit; form: "matrix" | "components" | "plane" }
+  | {
+      ok: true;
+      tensor: StressTensor;
+      unit?: StressUnit;
+      form: "matrix" | "components" | "plane";
+      /** present when the text was a finite-element listing row headed "Node …" or "Elem …" */
+      point?: ListingPoint;
+    }
   | { ok: false; error: ParseError };
 
 type Num = { value: number; token: Token };
@@ -34,12 +74,86 @@ const SUB: Readonly<Record<Component, string>> = {
   zx: "zx",
 };
 
-function fail(message: string, at?: Token): ParseTensorResult {
-  if (at === undefined) return { ok: false, error: { message } };
-  return {
-    ok: false,
-    error: { message: `line ${at.line}, column ${at.column}: ${message}`, line: at.line, column: at.column },
+function fail(message: string, at?: Token, problem?: ParseProblem): ParseTensorResult {
+  const error: ParseError =
+    at === undefined
+      ? { message }
+      : { message: `line ${at.line}, column ${at.column}: ${message}`, line: at.line, column: at.column };
+  if (problem !== undefined) error.problem = problem;
+  return { ok: false, error };
+}
+
+/**
+ * The first column of a finite-element listing, by its header word: "Node" or "Elem"/"Element",
+ * optionally with "ID", "No" or "#" ("Node_ID", "ElemNo"); case-insensitive (the trade's generic
+ * terms, product rule).
+ */
+function listingColumnOf(text: string): ListingPoint["kind"] | undefined {
+  const m = /^(node|elem|element)(?:[_-]?(?:id|no|number|#))?$/i.exec(text);
+  if (m === null) return undefined;
+  return m[1].toLowerCase() === "node" ? "node" : "element";
+}
+
+/**
+ * The refusal for commas between digits, naming each reading they allow.
+ * @param chain the tokens joined by those commas, in order ("1", "250", "000" for "1,250,000")
+ */
+function ambiguousComma(chain: readonly Token[]): ParseTensorResult {
+  const texts = chain.map((t) => t.text);
+  const joined = texts.join(",");
+  const groups = texts.slice(1).every((t) => /^\d{3}$/.test(t)) && /^[+-\u2212]?\d{1,3}$/.test(texts[0]);
+  const readings: string[] = [];
+  if (chain.length === 2) readings.push(`a decimal comma (${texts[0]}.${texts[1]})`);
+  if (groups)
+    readings.push(
+      `${chain.length === 2 ? "a thousands separator" : "thousands separators"} (${texts.join("")})`,
+    );
+  const values = `${texts.slice(0, -1).join(", ")} and ${texts.at(-1)}`;
+  readings.push(
+    chain.length === 2
+      ? `a separator between two values (${values})`
+      : `separators between values (${values})`,
+  );
+  const list =
+    readings.length === 1 ? readings[0] : `${readings.slice(0, -1).join(", ")} or ${readings.at(-1)}`;
+  const zero = texts.slice(1).find((t) => /^0\d/.test(t));
+  const why =
+    readings.length === 1 && zero !== undefined ? ` ('${zero}' starts with 0, as a decimal part does)` : "";
+  return fail(
+    `'${joined}' is ambiguous: the comma${chain.length === 2 ? "" : "s"} may be ${list}${why}. ` +
+      "State the decimal mark (point or comma), or put a space after each comma that separates values",
+    chain[0],
+    "ambiguous-comma",
+  );
+}
+
+/**
+ * With no decimal mark stated, a comma between two digits is read as a value separator only where
+ * the row shows it is one (product rule): every value of the row is separated by commas, and either
+ * the row is in brackets, or it holds at least three values that do not look like one number with
+ * thousands separators ("1,250,000"). A value after such a comma that starts with 0 and another
+ * digit ("1,05") is always ambiguous. Otherwise the first such comma is refused.
+ */
+function checkGluedCommas(row: readonly Num[]): ParseTensorResult | undefined {
+  const firstGlued = row.findIndex((n) => n.token.glued === true);
+  if (firstGlued <= 0) return undefined;
+  const refuse = (k: number) => {
+    let from = k - 1;
+    while (from > 0 && row[from].token.glued === true) from--;
+    let to = k;
+    while (to + 1 < row.length && row[to + 1].token.glued === true) to++;
+    return ambiguousComma(row.slice(from, to + 1).map((n) => n.token));
   };
+  const commaLayout = row.every((n, k) => k === 0 || n.token.after === "comma");
+  if (!commaLayout) return refuse(firstGlued);
+  for (let k = 1; k < row.length; k++) {
+    if (row[k].token.glued === true && /^0\d/.test(row[k].token.text)) return refuse(k);
+  }
+  if (row[firstGlued].token.inBrackets === true) return undefined;
+  const thousands =
+    /^[+-\u2212]?\d{1,3}$/.test(row[0].token.text) && row.slice(1).every((n) => /^\d{3}$/.test(n.token.text));
+  if (row.length < 3 || thousands) return refuse(firstGlued);
+  return undefined;
 }
 
 function checkOrder(order: readonly Component[]): string | undefined {
@@ -82,14 +196,25 @@ function fromOrder(order: readonly Component[], nums: readonly Num[]): StressTen
  *   brackets optional (`[a b c; d e f; g h i]`, `[[a,b,c],[d,e,f],[g,h,i]]`); it must be symmetric
  *   within `symmetryTolerance` × its largest entry, and the two triangles are averaged;
  * - six components, in the order of a header line (e.g. `sxx syy szz sxy syz szx`, `s11 s22 s33 s12 s23 s13`)
- *   or of `options.order`;
- * - three plane-stress components σx σy τxy (or in a header's or `options.order`'s order).
+ *   or of `options.order` (see {@link COMMON_SIX_ORDERS}); six bare values without either are refused
+ *   with the problem "order-needed", never guessed;
+ * - three plane-stress components σx σy τxy (or in a header's or `options.order`'s order);
+ * - one row of a finite-element listing whose header starts with a node or element column
+ *   (`Node SX SY SZ SXY SYZ SXZ` then `101 150 20 0 25 0 0`): the first number is the node or
+ *   element number, returned as `point`.
  * Numbers take any form JavaScript's Number() accepts, optionally with a unit suffix or a separate
- * unit word (Pa, kPa, MPa, GPa, psi, ksi, N/mm²); all units given must agree, and values are not converted.
+ * unit word (Pa, kPa, MPa, GPa, psi, ksi, N/mm²); all units given must agree, and values are not
+ * converted. Commas (product rules): with `options.decimal` "," a comma is the decimal mark; with
+ * "." commas separate values; without it, a comma between two digits that could be a decimal comma
+ * or a thousands separator (`1,5 2`, `12,5 30`, `1,000 500`) is refused with the problem
+ * "ambiguous-comma", and an empty field (`150,0,,25`) is refused whatever the mark ("empty-field").
+ * Every value must be finite and at most `MAX_INPUT_STRESS` (1e12) in magnitude, in the unit
+ * written ("too-large" otherwise).
  * @param text pasted text
- * @param options component order for bare six or three values; symmetry tolerance (relative)
+ * @param options component order for bare six or three values; symmetry tolerance (relative);
+ *   decimal mark
  * @returns the tensor (in the pasted unit) and the unit if one was named, or an error whose message
- *   names the line and column
+ *   names the line and column (and, for the refusals a caller can resolve, its `problem`)
  * @throws TypeError/RangeError for invalid options (a programmer error, not a user one)
  */
 export function parseTensor(text: string, options: ParseTensorOptions = {}): ParseTensorResult {
@@ -100,11 +225,19 @@ export function parseTensor(text: string, options: ParseTensorOptions = {}): Par
     throw new RangeError(`options.symmetryTolerance must be a finite number ≥ 0, got ${tol}`);
   }
   const givenOrder = optionOrder(options);
+  const decimal = options.decimal;
+  if (decimal !== undefined && decimal !== "." && decimal !== ",") {
+    throw new RangeError(`options.decimal must be "." or ",", got ${JSON.stringify(decimal)}`);
+  }
 
-  const tokens = tokenize(text);
+  const tokens = tokenize(text, decimal ?? "auto");
   if (!tokens.ok) {
     const { message, line, column } = tokens;
-    return fail(message, { text: "", line, column });
+    return fail(
+      message,
+      { text: "", line, column },
+      tokens.problem === "empty-field" ? "empty-field" : undefined,
+    );
   }
 
   let unit: StressUnit | undefined;
@@ -118,19 +251,32 @@ export function parseTensor(text: string, options: ParseTensorOptions = {}): Par
     return undefined;
   };
 
-  let header: { order: Component[]; first: Token } | undefined;
+  let header: { order: Component[]; first: Token; listing?: ListingPoint["kind"] } | undefined;
   const rows: Num[][] = [];
   for (let r = 0; r < tokens.rows.length; r++) {
     const row: Num[] = [];
     const names: { c: Component; token: Token }[] = [];
-    for (const token of tokens.rows[r]) {
+    let listing: { kind: ListingPoint["kind"]; token: Token } | undefined;
+    for (const [t, token] of tokens.rows[r].entries()) {
+      const column =
+        t === 0 && rows.length === 0 && header === undefined ? listingColumnOf(token.text) : undefined;
+      if (column !== undefined) {
+        listing = { kind: column, token };
+        continue;
+      }
       const u = unitOf(token.text);
       if (u !== undefined) {
         const bad = noteUnit(u, token);
         if (bad !== undefined) return bad;
         continue;
       }
-      const n = parseNumberToken(token.text);
+      if (decimal === "," && token.text.indexOf(",") !== token.text.lastIndexOf(",")) {
+        return fail(
+          `'${token.text}' has more than one comma, but the comma is the decimal mark: separate values with spaces, tabs or ';'`,
+          token,
+        );
+      }
+      const n = parseNumberToken(token.text, decimal ?? ".");
       if (n.kind === "number") {
         if (n.unit !== undefined) {
           const bad = noteUnit(n.unit, token);
@@ -140,6 +286,12 @@ export function parseTensor(text: string, options: ParseTensorOptions = {}): Par
         continue;
       }
       if (n.kind === "non-finite") return fail(`'${token.text}' is not a finite number`, token);
+      if (n.kind === "point-with-decimal-comma") {
+        return fail(
+          `'${token.text}' has a point, but the decimal mark is a comma: write the number without a thousands point (e.g. 1000,5)`,
+          token,
+        );
+      }
       if (n.kind === "bad-unit") {
         return fail(
           `unknown unit '${n.unit}' after ${n.value}; expected Pa, kPa, MPa, GPa, psi, ksi or N/mm²`,
@@ -147,8 +299,16 @@ export function parseTensor(text: string, options: ParseTensorOptions = {}): Par
         );
       }
       const c = componentOf(token.text);
-      if (c === undefined) return fail(`'${token.text}' is neither a number nor a component name`, token);
+      if (c === undefined) {
+        return fail(`'${token.text}' is neither a number nor a component name`, token);
+      }
       names.push({ c, token });
+    }
+    if (listing !== undefined && names.length === 0) {
+      return fail(
+        `'${listing.token.text}' names the first column of a finite-element listing; it must begin a header line of component names such as '${listing.token.text} SX SY SZ SXY SYZ SXZ'`,
+        listing.token,
+      );
     }
     if (names.length > 0) {
       if (rows.length > 0 || header !== undefined) {
@@ -163,7 +323,12 @@ export function parseTensor(text: string, options: ParseTensorOptions = {}): Par
       const problem = checkOrder(order);
       if (problem !== undefined) return fail(`header ${problem}`, names[0].token);
       header = { order, first: names[0].token };
+      if (listing !== undefined) header.listing = listing.kind;
       continue;
+    }
+    if (decimal === undefined) {
+      const ambiguous = checkGluedCommas(row);
+      if (ambiguous !== undefined) return ambiguous;
     }
     if (row.length > 0) rows.push(row);
   }
@@ -173,8 +338,15 @@ export function parseTensor(text: string, options: ParseTensorOptions = {}): Par
   if (n === 0)
     return fail(header === undefined ? "no numbers found" : "the header line is not followed by numbers");
 
+  for (const num of nums) {
+    const problem = stressInputProblem(num.value);
+    if (problem !== undefined) return fail(`'${num.token.text}' ${problem}`, num.token, "too-large");
+  }
+
   const done = (tensor: StressTensor, form: "matrix" | "components" | "plane"): ParseTensorResult =>
     unit === undefined ? { ok: true, tensor, form } : { ok: true, tensor, unit, form };
+
+  if (header?.listing !== undefined) return listingRow(header as Required<typeof header>, rows, done);
 
   if (header !== undefined) {
     const k = header.order.length;
@@ -207,8 +379,10 @@ export function parseTensor(text: string, options: ParseTensorOptions = {}): Par
   if (n === 6) {
     if (givenOrder === undefined || givenOrder.length !== 6) {
       return fail(
-        "six components need their order: give options.order or a header line such as 'xx yy zz xy yz zx'",
+        "six values and no header line: their order is needed — σx σy σz τxy τyz τxz, σx σy σz τxy τxz τyz " +
+          "or another; choose it, or add a header line such as 'sx sy sz sxy syz sxz'",
         nums[0].token,
+        "order-needed",
       );
     }
     return done(fromOrder(givenOrder, nums), "components");
@@ -222,6 +396,43 @@ export function parseTensor(text: string, options: ParseTensorOptions = {}): Par
     `found ${n} number${n === 1 ? "" : "s"}; expected 9 (a 3×3 matrix), 6 (components) or 3 (plane stress σx σy τxy)`,
     at.token,
   );
+}
+
+/**
+ * One row of a finite-element listing: the node or element number, then the components in the
+ * header's order. A listing of several rows is refused (the bench checks one point at a time).
+ */
+function listingRow(
+  header: { order: Component[]; first: Token; listing: ListingPoint["kind"] },
+  rows: readonly Num[][],
+  done: (t: StressTensor, form: "components" | "plane") => ParseTensorResult,
+): ParseTensorResult {
+  const k = header.order.length;
+  const word = header.listing;
+  if (rows.length > 1) {
+    const numbers = rows.slice(0, 3).map((r) => r[0].token.text);
+    return fail(
+      `the listing holds ${rows.length} rows (${word}s ${numbers.join(", ")}${rows.length > 3 ? ", …" : ""}); ` +
+        `paste the one row of the ${word} to check`,
+      rows[1][0].token,
+    );
+  }
+  const row = rows[0];
+  if (row.length !== k + 1) {
+    return fail(
+      `the header names ${word === "element" ? "an" : "a"} ${word} number and ${k} components, so a row needs ${k + 1} numbers; this one has ${row.length}`,
+      row[Math.min(row.length, k + 1) - 1].token,
+    );
+  }
+  const id = row[0].value;
+  if (!Number.isInteger(id) || id < 0) {
+    return fail(
+      `'${row[0].token.text}' is not ${word === "element" ? "an" : "a"} ${word} number (a whole number ≥ 0 is expected)`,
+      row[0].token,
+    );
+  }
+  const result = done(fromOrder(header.order, row.slice(1)), k === 6 ? "components" : "plane");
+  return result.ok ? { ...result, point: { kind: word, number: id } } : result;
 }
 
 function matrix(

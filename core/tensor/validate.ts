@@ -24,3 +24,32 @@ export function assertMat3(m: unknown, name: string): asserts m is Mat3 {
   if (!Array.isArray(m) || m.length !== 3) throw new TypeError(`${name} must be an array of 3 rows`);
   for (let i = 0; i < 3; i++) assertVec3(m[i], `${name}[${i}]`);
 }
+
+/**
+ * The largest stress magnitude accepted where a person or a file enters a stress (the paste parser,
+ * the bench's cells, the API's stress input: `MAX_STRESS_MAGNITUDE` in core/contract/materials.ts,
+ * kept equal by a test), in the unit it is written in. No real stress is near it (1e12 GPa); it
+ * exists so that converting to Pa (× 6.9e6 at most, from ksi), superposing and squaring (von Mises,
+ * invariants) stay far below the overflow of doubles (σ² overflows above about 1.3e154), and so that a
+ * stray exponent (1e300 typed for 1e3) is refused instead of silently flattening every other
+ * component to zero beside it.
+ */
+export const MAX_INPUT_STRESS = 1e12;
+
+/**
+ * Why a stress value cannot be accepted as input, or undefined when it can: it must be a finite
+ * number no larger in magnitude than {@link MAX_INPUT_STRESS}.
+ * @param value the value, in the unit it was entered in
+ * @returns a short reason ("is not a finite number", "is larger than 1e12 in magnitude …") to follow
+ *   the field's name
+ */
+export function stressInputProblem(value: number): string | undefined {
+  if (typeof value !== "number" || !Number.isFinite(value)) return "is not a finite number";
+  if (Math.abs(value) > MAX_INPUT_STRESS) {
+    return (
+      `is larger than ${MAX_INPUT_STRESS.toExponential()} in magnitude: no real stress is near it, ` +
+      "and results at that scale would overflow or lose every smaller component"
+    );
+  }
+  return undefined;
+}

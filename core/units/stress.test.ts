@@ -39,4 +39,27 @@ describe("convertStress against the exact unit definitions (common practice, no 
     );
     expect(() => convertStress("1" as unknown as number, "Pa", "MPa")).toThrow(TypeError);
   });
+
+  it("when the value is NaN, then it throws instead of returning NaN", () => {
+    expect(() => convertStress(Number.NaN, "MPa", "Pa")).toThrow(/cannot convert NaN from MPa to Pa/);
+    expect(() => convertStress(Number.NaN, "MPa", "MPa")).toThrow(RangeError);
+  });
+
+  it("when a finite value would overflow to Infinity in the new unit, then it throws naming the value and units (largest double ≈ 1.8e308, IEEE 754)", () => {
+    expect(() => convertStress(1e305, "GPa", "Pa")).toThrow(/1e\+305 GPa is too large to express in Pa/);
+    expect(() => convertStress(-1e303, "ksi", "Pa")).toThrow(RangeError);
+    // 1e300 GPa is 1e309 Pa: overflow; the same value the other way stays finite.
+    expect(convertStress(1e300, "Pa", "GPa")).toBeCloseTo(1e291, -280);
+  });
+
+  it("when value·factor alone would overflow but the result fits, then the result is still given", () => {
+    // Number.MAX_VALUE Pa in kPa is finite; value·1 / 1000 does not overflow, but psi → ksi does value·6894.76 first.
+    const v = convertStress(Number.MAX_VALUE / 2, "psi", "ksi");
+    expect(v).toBeCloseTo(Number.MAX_VALUE / 2 / 1000, -300);
+    expect(Number.isFinite(v)).toBe(true);
+  });
+
+  it("when the value is ±Infinity (an unbounded quantity), then it stays infinite and does not throw", () => {
+    expect(convertStress(Number.POSITIVE_INFINITY, "MPa", "psi")).toBe(Number.POSITIVE_INFINITY);
+  });
 });

@@ -39,16 +39,27 @@ export function pascalsPer(unit: StressUnit): number {
 
 /**
  * Converts a stress value between units.
- * @param value stress, in unit `from`
+ * @param value stress, in unit `from`; ±Infinity (a quantity that is unbounded, such as the stress
+ *   at which a state never reaches a criterion's surface) converts to itself
  * @param from unit of `value`
  * @param to unit of the result
  * @returns the same stress in unit `to`
- * @throws TypeError if `value` is not a number; RangeError for an unknown unit
+ * @throws TypeError if `value` is not a number; RangeError for an unknown unit, for NaN, and for a
+ *   finite value whose converted result would overflow to ±Infinity (above about 1.8e308)
  */
 export function convertStress(value: number, from: StressUnit, to: StressUnit): number {
   if (typeof value !== "number") throw new TypeError(`value must be a number, got ${typeof value}`);
+  if (Number.isNaN(value))
+    throw new RangeError(`cannot convert NaN from ${from} to ${to}: the value is not a number`);
   const f = pascalsPer(from);
   const t = pascalsPer(to);
   if (f === t) return value;
-  return (value * f) / t;
+  const result = (value * f) / t;
+  if (Number.isFinite(result) || !Number.isFinite(value)) return result;
+  // value·f overflowed although the true result may fit: divide first before giving up.
+  const late = value * (f / t);
+  if (Number.isFinite(late)) return late;
+  throw new RangeError(
+    `${value} ${from} is too large to express in ${to}: the result exceeds the largest number (about 1.8e308)`,
+  );
 }

@@ -49,6 +49,8 @@ export type { MohrCircle } from "./plane/mohr";
 export { mohrCircles } from "./plane/mohr";
 export type { PlaneStressResult } from "./plane/plane-stress";
 export { planeStress, transformPlaneStress } from "./plane/plane-stress";
+export type { PlanePrincipal, PrincipalIndex } from "./plane/plane-principal";
+export { planePrincipal, zIsPrincipal } from "./plane/plane-principal";
 export type { Criterion, Material } from "./criteria/safety-factor";
 export { CRITERIA, safetyFactor } from "./criteria/safety-factor";
 export type {

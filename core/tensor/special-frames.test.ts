@@ -2,8 +2,11 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { principalValues } from "../eigen/principal";
 import { rotationFromQuaternion, tensorWithPrincipal } from "../testing/fixtures";
+import { transformPlaneStress } from "../plane/plane-stress";
+import { axisAngleFromRotation, angleAboutZ } from "./rotation-tools";
 import { rotateTensor } from "./rotate";
 import { maxShearFrame, principalFrame } from "./special-frames";
+import type { StressTensor } from "./types";
 
 const state = fc
   .tuple(
@@ -60,5 +63,68 @@ describe("special frames", () => {
     );
     expect(m.xy).toBeCloseTo(Math.hypot(60, 30), 10);
     expect(m.xx).toBeCloseTo(20, 10);
+  });
+
+  it("when the state is plane stress σx = 150, σy = 0, τxy = 25 MPa, then the principal frame is a turn about z by θp = ½·atan(2τxy/(σx − σy)) = 9.22° counter-clockwise, with x′ = σ1, y′ = −4.06 and z′ = 0 (tan 2θp = 2τxy/(σx − σy): Hibbeler, Mechanics of Materials, stress transformation; recalled from memory)", () => {
+    const s: StressTensor = { xx: 150, yy: 0, zz: 0, xy: 25, yz: 0, zx: 0 };
+    const r = principalFrame(s);
+    const thetaP = (0.5 * Math.atan((2 * 25) / (150 - 0)) * 180) / Math.PI;
+    expect(r[2]).toEqual([0, 0, 1]);
+    expect(angleAboutZ(r)).toBeCloseTo(thetaP, 12);
+    expect(angleAboutZ(r)).toBeCloseTo(9.22, 2);
+    const { axis, angleDeg } = axisAngleFromRotation(r);
+    expect(axis).toEqual([0, 0, 1]);
+    expect(angleDeg).toBeCloseTo(thetaP, 12);
+    const p = rotateTensor(s, r);
+    const root = Math.sqrt(75 ** 2 + 25 ** 2);
+    expect(p.xx).toBeCloseTo(75 + root, 10);
+    expect(p.yy).toBeCloseTo(75 - root, 10);
+    expect(p.zz).toBe(0);
+    expect(Math.abs(p.xy) + Math.abs(p.yz) + Math.abs(p.zx)).toBeLessThan(1e-12);
+    // The in-plane Mohr circle's x′ point at this θ is (σ1, 0): the same turn as the element.
+    const mohr = transformPlaneStress(150, 0, 25, angleAboutZ(r)!);
+    expect(mohr.sx).toBeCloseTo(p.xx, 10);
+    expect(mohr.txy).toBeCloseTo(p.xy, 10);
+  });
+
+  it("when the state is pure shear τxy = 25, then the principal frame turns 45° about z and σ′ = diag(25, −25, 0) (pure shear: principal planes at 45°, common practice, no source)", () => {
+    const s: StressTensor = { xx: 0, yy: 0, zz: 0, xy: 25, yz: 0, zx: 0 };
+    const r = principalFrame(s);
+    expect(angleAboutZ(r)).toBeCloseTo(45, 12);
+    const p = rotateTensor(s, r);
+    expect(p.xx).toBeCloseTo(25, 12);
+    expect(p.yy).toBeCloseTo(-25, 12);
+    expect(p.zz).toBe(0);
+    expect(Math.abs(p.xy)).toBeLessThan(1e-12);
+  });
+
+  it("when z is principal (random σx, σy, τxy, σz), then both snaps turn about z only: the principal frame by θp with tan 2θp = 2τxy/(σx − σy) and σ′x ≥ σ′y, the max-shear frame onto +τmax when σz lies between the in-plane pair (Hibbeler, recalled from memory)", () => {
+    // Values to 0.1 MPa, as typed, so that ties (uniaxial, hydrostatic, σz equal to one of the pair) come up.
+    const v = fc.integer({ min: -5000, max: 5000 }).map((i) => i / 10);
+    fc.assert(
+      fc.property(v, v, v, fc.oneof(fc.constant(0), v), (xx, yy, xy, zz) => {
+        const s: StressTensor = { xx, yy, zz, xy, yz: 0, zx: 0 };
+        const scale = Math.max(1, Math.abs(xx), Math.abs(yy), Math.abs(xy), Math.abs(zz));
+        const r = principalFrame(s);
+        const theta = angleAboutZ(r);
+        expect(theta).not.toBeNull();
+        // tan 2θp = 2τxy/(σx − σy), written without division: (σx − σy)·sin 2θ = 2τxy·cos 2θ.
+        const t2 = (2 * theta! * Math.PI) / 180;
+        expect(Math.abs((xx - yy) * Math.sin(t2) - 2 * xy * Math.cos(t2)) / scale).toBeLessThan(1e-10);
+        const p = rotateTensor(s, r);
+        expect(p.xx).toBeGreaterThanOrEqual(p.yy - 1e-12 * scale);
+        expect(p.zz).toBe(zz);
+        expect(Math.abs(p.xy) / scale).toBeLessThan(1e-12);
+        const m = maxShearFrame(s);
+        const root = Math.hypot((xx - yy) / 2, xy);
+        const centre = (xx + yy) / 2;
+        const between = centre - root <= zz && zz <= centre + root;
+        if (between) {
+          expect(angleAboutZ(m)).not.toBeNull();
+          expect(Math.abs(rotateTensor(s, m).xy - root) / scale).toBeLessThan(1e-12);
+        }
+      }),
+      { seed: 17, numRuns: 1000 },
+    );
   });
 });

@@ -155,7 +155,7 @@ describe("projects in Chromium: from an empty project to the governing case, and
     await field.click();
     await field.fill("150");
     await field.press("Enter");
-    await page.getByText("edited here, not saved").waitFor();
+    await page.getByText("edited here — not saved").waitFor();
     // The address keeps where the state came from while the bench rewrites its own parameters.
     await expect
       .poll(() => new URL(page.url()).searchParams.get("source"))
@@ -228,6 +228,18 @@ describe("projects in Chromium: from an empty project to the governing case, and
     await page.getByRole("link", { name: "Open in bench" }).first().click();
     await page.getByText("View only: as viewer you can explore this state but not save it.").waitFor();
     expect(await page.getByRole("button", { name: "Save to project" }).count()).toBe(0);
+    // Opened from a saved state, the heading says so; a viewer's local edit is marked as an editor's is.
+    expect(await page.locator("h1").innerText()).toMatch(/a saved stress state from a project/);
+    expect(await page.locator("h1").innerText()).not.toMatch(/unsaved/);
+    expect(await page.getByTestId("saved-state-status").innerText()).toBe("unchanged");
+    const viewerCell = page.getByLabel("σxx", { exact: true });
+    await viewerCell.click();
+    await viewerCell.fill("123");
+    await viewerCell.press("Enter");
+    await expect
+      .poll(() => page.getByTestId("saved-state-status").innerText())
+      .toBe("edited here — not saved");
+    await shot(page, "viewer-bench-edited");
 
     const projectId = projectUrl.split("/").pop();
     const refused = await viewer.request.post(

@@ -1,5 +1,5 @@
 import { NavLink, Outlet, useMatch } from "react-router-dom";
-import { Caution } from "../components/Caution";
+import { FooterCaution } from "../components/Caution";
 import { LogoMark } from "../components/LogoMark";
 import { UserMenu } from "../features/auth/components/UserMenu";
 import { MailboxLink } from "../features/mailbox/components/MailboxPage";
@@ -67,7 +67,7 @@ export function Layout() {
       </main>
       <footer className="border-t border-rule bg-panel">
         <div className="mx-auto flex max-w-6xl flex-wrap items-center justify-between gap-x-8 gap-y-2 px-6 py-3 text-sm">
-          <Caution className="max-w-3xl" />
+          <FooterCaution className="max-w-3xl" />
           <ServerStatus />
         </div>
       </footer>

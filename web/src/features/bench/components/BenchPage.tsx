@@ -1,4 +1,4 @@
-import { useEffect } from "react";
+import { useEffect, useState } from "react";
 import { useUrlSync } from "../hooks/use-url-sync";
 import { useBenchStore } from "../model/store";
 import { CriteriaPanel } from "./CriteriaPanel";
@@ -6,9 +6,16 @@ import { ElementPanel } from "./ElementPanel";
 import { EnvelopePlot } from "./EnvelopePlot";
 import { MohrPanel } from "./MohrPanel";
 import { PrincipalPanel } from "./PrincipalPanel";
-import { SavedStateBar } from "./SavedStateBar";
+import { SavedStateBar, benchOrigin } from "./SavedStateBar";
 import { ShareBar } from "./ShareBar";
 import { StressInputPanel } from "./StressInputPanel";
+
+/** What the heading says the bench holds. */
+const HOLDS = {
+  saved: "a saved stress state from a project (below)",
+  combination: "a combination's superposed state, view only",
+  unsaved: "an unsaved stress state",
+} as const;
 
 /**
  * The bench: the state the engineer has, the element they turn, the diagram that explains it and
@@ -17,6 +24,8 @@ import { StressInputPanel } from "./StressInputPanel";
 export function BenchPage() {
   useUrlSync();
   const act = useBenchStore((s) => s.act);
+  // Read on arrival, as the saved-state bar does: the bench then rewrites its address.
+  const [origin] = useState(() => benchOrigin(window.location.search));
 
   // Ctrl+Z / Ctrl+Shift+Z (or Ctrl+Y) undo and redo stress edits, except while typing in a field.
   useEffect(() => {
@@ -44,7 +53,7 @@ export function BenchPage() {
         <h1 className="text-base font-semibold tracking-tight">
           Bench{" "}
           <span className="text-[13px] font-normal text-graphite-soft">
-            — an unsaved stress state; tension positive, shear as tensor components
+            — {HOLDS[origin]}; tension positive, shear as tensor components
           </span>
         </h1>
         <ShareBar />

@@ -43,8 +43,19 @@ export type MohrDiagramProps = {
   circles: readonly [MohrCircle, MohrCircle, MohrCircle];
   principal: readonly [number, number, number];
   faces: readonly FacePoint[];
-  /** plane mode: the in-plane circle, the rotated x′ components and θ (null when not a turn about z) */
-  plane: { circle: PlaneStressResult; sx: number; sy: number; txy: number; theta: number | null } | null;
+  /**
+   * plane mode: the in-plane circle, the rotated x′ components, θ (null when not a turn about z) and
+   * the names of the in-plane pair and of σz by the bench's one rule (σ1 ≥ σ2 ≥ σ3 of the 3D state)
+   */
+  plane: {
+    circle: PlaneStressResult;
+    sx: number;
+    sy: number;
+    txy: number;
+    theta: number | null;
+    names: { major: string; minor: string; outOfPlane: string };
+    sz: number;
+  } | null;
   onTheta: (theta: number) => void;
   zoom: ZoomView;
   onZoom: (view: ZoomView) => void;
@@ -322,7 +333,7 @@ export function MohrDiagram(props: MohrDiagramProps) {
                         aria-valuemin={-180}
                         aria-valuemax={180}
                         aria-valuenow={Number(plane.theta.toFixed(2))}
-                        aria-valuetext={`θ = ${plane.theta.toFixed(2)}°`}
+                        aria-valuetext={`θ = ${fixed(plane.theta, 2)}°`}
                         onPointerDown={onPointDown}
                         onKeyDown={onPointKey}
                         className="cursor-grab fill-ink stroke-panel outline-none focus-visible:stroke-tension"
@@ -343,22 +354,35 @@ export function MohrDiagram(props: MohrDiagramProps) {
               </g>
             )
           )}
-          {/* Principal stresses and τmax marked on the axes. */}
+          {/* Principal stresses and τmax marked on the axes, named by the one rule (σ1 ≥ σ2 ≥ σ3 in 3D). */}
           {(mode === "3d"
-            ? ([s1, s2, s3] as const)
+            ? [
+                { v: s1, name: "1", key: "s1" },
+                { v: s2, name: "2", key: "s2" },
+                { v: s3, name: "3", key: "s3" },
+              ]
             : plane
-              ? ([plane.circle.s1, plane.circle.s2] as const)
+              ? [
+                  { v: plane.circle.s1, name: plane.names.major.slice(1), key: "major" },
+                  { v: plane.circle.s2, name: plane.names.minor.slice(1), key: "minor" },
+                  { v: plane.sz, name: plane.names.outOfPlane.slice(1), key: "z" },
+                ]
               : []
-          ).map((v, k) => (
-            <g key={k}>
-              <circle cx={X(v)} cy={Y(0)} r={2.5} className="fill-graphite" />
+          ).map(({ v, name, key }) => (
+            <g key={key} data-testid={`mohr-principal-${key}`} data-name={`σ${name}`} data-sigma={v}>
+              <circle
+                cx={X(v)}
+                cy={Y(0)}
+                r={2.5}
+                className={key === "z" ? "fill-panel stroke-graphite" : "fill-graphite"}
+              />
               <text
                 x={X(v)}
-                y={Y(0) + (mode === "plane" ? -6 : 14)}
+                y={Y(0) + (mode === "plane" ? (key === "z" ? 14 : -6) : 14)}
                 textAnchor="middle"
                 className="fill-graphite font-mono text-[12px]"
               >
-                <SvgSym base="σ" sub={String(k + 1)} />
+                <SvgSym base="σ" sub={name} after={key === "z" ? " (z)" : " "} />
               </text>
             </g>
           ))}

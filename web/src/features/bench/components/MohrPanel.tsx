@@ -4,6 +4,7 @@ import { Panel } from "../../../components/Panel";
 import { ToolButton } from "../../../components/ToolButton";
 import { useInPlane, useRotated, useRotationDescription, useSummary } from "../hooks/use-derived";
 import type { ZoomView } from "../interaction/zoom";
+import { principalName } from "../model/derive";
 import { useBenchStore } from "../model/store";
 import { MohrDiagram } from "./MohrDiagram";
 
@@ -20,13 +21,21 @@ export function MohrPanel() {
   const inPlane = useInPlane();
   const [zoom, setZoom] = useState<ZoomView>(null);
   const planeMode = mode === "plane" && inPlane !== null;
-  const plane = inPlane && {
-    circle: inPlane,
-    sx: rotated.xx,
-    sy: rotated.yy,
-    txy: rotated.xy,
-    theta: rot.aboutZ,
-  };
+  const named = summary.principal.plane;
+  const plane = inPlane &&
+    named && {
+      circle: inPlane,
+      sx: rotated.xx,
+      sy: rotated.yy,
+      txy: rotated.xy,
+      theta: rot.aboutZ,
+      sz: summary.principal.values[named.outOfPlane],
+      names: {
+        major: principalName(named.inPlaneMajor),
+        minor: principalName(named.inPlaneMinor),
+        outOfPlane: principalName(named.outOfPlane),
+      },
+    };
   return (
     <Panel
       id="mohr"

@@ -2,6 +2,7 @@ import { Panel } from "../../../components/Panel";
 import { Quantity, stressTone } from "../../../components/Quantity";
 import { Sym } from "../../../components/Sym";
 import { useSummary } from "../hooks/use-derived";
+import { PRINCIPAL_NAMING_RULE, principalName } from "../model/derive";
 import { decimalsFor, fixed } from "../model/format";
 import { useBenchStore } from "../model/store";
 
@@ -10,6 +11,7 @@ export function PrincipalPanel() {
   const unit = useBenchStore((s) => s.unit);
   const { principal, tauMax, vonMises } = useSummary();
   const [s1, s2, s3] = principal.values;
+  const plane = principal.plane;
   const d = decimalsFor(Math.max(Math.abs(s1), Math.abs(s3)));
   const rows = [
     { sym: <Sym base="σ" sub="1" />, label: "sigma 1", value: s1, dir: principal.directions[0] },
@@ -68,6 +70,37 @@ export function PrincipalPanel() {
           </tr>
         </tbody>
       </table>
+      <div className="mt-1.5 space-y-1 border-t border-rule pt-1 text-[12px] leading-4 text-graphite-soft">
+        {plane ? (
+          <>
+            <p data-testid="principal-in-plane">
+              In plane x–y: {principalName(plane.inPlaneMajor)} and {principalName(plane.inPlaneMinor)}; along
+              z: {principalName(plane.outOfPlane)} = σz.
+            </p>
+            <p className="flex flex-wrap gap-x-3 text-graphite">
+              <span data-testid="theta-p" data-value={plane.thetaP}>
+                <Sym base="θ" sub="p" /> = <Quantity value={fixed(plane.thetaP, 2)} unit="°" /> (x to{" "}
+                {principalName(plane.inPlaneMajor)})
+              </span>
+              <span data-testid="theta-s" data-value={plane.thetaS}>
+                max shear: <Sym base="θ" sub="p" /> ∓ 45° ={" "}
+                <Quantity value={fixed(plane.thetaS, 2)} unit="°" />,{" "}
+                <Quantity value={fixed(plane.thetaS + 90, 2)} unit="°" />
+              </span>
+            </p>
+            <p data-testid="angle-convention">
+              Angles run from the x axis to a plane&rsquo;s normal, counter-clockwise positive seen from +z (x
+              turning towards y); θp in (−90°, 90°], tan 2θp = 2τxy/(σx − σy). The plane at θp − 45° carries
+              +τmax, the one at θp + 45° −τmax.
+            </p>
+          </>
+        ) : (
+          <p data-testid="principal-in-plane">
+            θp and the in-plane pair apply when z is a principal direction (τyz = τzx = 0).
+          </p>
+        )}
+        <p data-testid="principal-naming-rule">{PRINCIPAL_NAMING_RULE}</p>
+      </div>
     </Panel>
   );
 }

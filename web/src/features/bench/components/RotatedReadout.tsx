@@ -1,5 +1,6 @@
 import { Quantity, stressTone } from "../../../components/Quantity";
-import { useRotated, useRotationDescription } from "../hooks/use-derived";
+import { useRotated, useRotationDescription, useSummary } from "../hooks/use-derived";
+import { principalAxisNames, principalName } from "../model/derive";
 import { decimalsFor, fixed } from "../model/format";
 import { useBenchStore } from "../model/store";
 import type { StressTensor } from "../../../../../core";
@@ -22,6 +23,10 @@ export function RotatedReadout() {
   const sequence = useBenchStore((s) => s.eulerSequence);
   const { rotated } = useRotated();
   const rot = useRotationDescription();
+  const rotation = useBenchStore((s) => s.rotation);
+  const { principal } = useSummary();
+  // On principal axes, say which principal stress each axis carries (the names of the principal panel).
+  const onPrincipal = principalAxisNames(rotation, rotated, principal);
   const scale = Math.max(...Object.values(rotated).map(Math.abs));
   const d = decimalsFor(scale);
   return (
@@ -62,6 +67,11 @@ export function RotatedReadout() {
           ))}
         </tbody>
       </table>
+      {onPrincipal && (
+        <p className="mt-0.5 text-[12px] text-graphite" data-testid="principal-axis-names">
+          On principal axes: {AXES.map((a, i) => `${a} ${principalName(onPrincipal[i])}`).join(", ")}
+        </p>
+      )}
       <p className="mt-1 text-[12px] text-graphite-soft" data-testid="rotation-description">
         {view === "axis-angle" ? (
           <>

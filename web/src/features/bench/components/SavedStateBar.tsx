@@ -82,6 +82,17 @@ function differs(a: Pick<BenchState, "tensor" | "unit">, b: Pick<BenchState, "te
  * their values or keep this copy and save over the newer version. Reviewers and viewers see it
  * read-only. Renders nothing for a plain bench.
  */
+/**
+ * What the bench holds, for its heading: a saved state opened from a project, a combination's
+ * superposed state, or a state that lives only on this page.
+ * @param search the address's query string on arrival
+ */
+export function benchOrigin(search: string): "saved" | "combination" | "unsaved" {
+  if (parseBenchSource(search)) return "saved";
+  if (new URLSearchParams(search).get("combination")) return "combination";
+  return "unsaved";
+}
+
 export function SavedStateBar() {
   const [source] = useState<BenchSource | null>(() => parseBenchSource(window.location.search));
   // Read once on arrival: the bench rewrites its address, keeping only `source`.
@@ -235,9 +246,15 @@ function SavedState({ source }: { source: BenchSource }) {
       >
         Comparison
       </Link>
+      {/* Every role sees whether the values on the bench are still the saved ones. */}
+      <span
+        className={changed ? "font-semibold text-graphite" : "text-graphite-soft"}
+        data-testid="saved-state-status"
+      >
+        {changed ? "edited here — not saved" : "unchanged"}
+      </span>
       {canEdit ? (
         <>
-          <span className="text-graphite-soft">{changed ? "edited here, not saved" : "unchanged"}</span>
           <ToolButton
             onClick={() => (setSavedNote(null), save.mutate(basis.version))}
             disabled={!changed || save.isPending || !!conflict}

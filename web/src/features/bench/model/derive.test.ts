@@ -1,6 +1,14 @@
 import { describe, expect, it } from "vitest";
-import { safetyFactor } from "../../../../../core";
-import { criteriaResults, envelopeProbe } from "./derive";
+import { principalFrame, rotationFromAxisAngle, safetyFactor } from "../../../../../core";
+import {
+  PRINCIPAL_NAMING_RULE,
+  criteriaResults,
+  envelopeProbe,
+  namedPrincipal,
+  principalAxisNames,
+  principalName,
+  rotatedView,
+} from "./derive";
 
 const state = { xx: 120, yy: 40, zz: 0, xy: 30, yz: 0, zx: 0 };
 
@@ -44,5 +52,47 @@ describe("envelopeProbe", () => {
     expect(probe.nearest?.point[0]).toBeCloseTo(250_000, 6);
     expect(probe.nearest?.point[1]).toBe(0);
     expect(probe.nearest?.distance).toBeCloseTo(150_000, 6);
+  });
+});
+
+describe("one naming of principal stresses on every panel", () => {
+  // σx = 150, σy = 0, τxy = 25 MPa: σ = 75 ± √(75² + 25²) = 154.06 and −4.06 (plane-stress handbook
+  // formula, e.g. Hibbeler, Mechanics of Materials; recalled from memory), σz = 0 between them.
+  const plane = { xx: 150, yy: 0, zz: 0, xy: 25, yz: 0, zx: 0 };
+
+  it("when the state is plane stress σx = 150, σy = 0, τxy = 25, then the table's σ1, σ2, σ3 are 154.06, 0 (out of plane), −4.06", () => {
+    const p = namedPrincipal(plane);
+    expect(p.values[0]).toBeCloseTo(75 + Math.hypot(75, 25), 12);
+    expect(p.values[1]).toBe(0);
+    expect(p.values[2]).toBeCloseTo(75 - Math.hypot(75, 25), 12);
+    expect(p.plane && principalName(p.plane.outOfPlane)).toBe("σ2");
+    expect(p.plane && principalName(p.plane.inPlaneMinor)).toBe("σ3");
+    expect(PRINCIPAL_NAMING_RULE).toMatch(/σ1 ≥ σ2 ≥ σ3/);
+  });
+
+  it("when the element snaps to principal on that state, then the readout's axes are named x′ σ1, y′ σ3, z′ σ2, the same names as the table", () => {
+    const rotation = principalFrame(plane);
+    const { rotated } = rotatedView(plane, rotation);
+    expect(principalAxisNames(rotation, rotated, namedPrincipal(plane))).toEqual([0, 2, 1]);
+    expect(rotated.yy).toBeCloseTo(75 - Math.hypot(75, 25), 10);
+  });
+
+  it("when the element is not on principal axes, then no axis is named; for a 3D state on its principal frame, x′ y′ z′ are σ1 σ2 σ3", () => {
+    expect(
+      principalAxisNames(
+        rotationFromAxisAngle([0, 0, 1], 5),
+        rotatedView(plane, rotationFromAxisAngle([0, 0, 1], 5)).rotated,
+        namedPrincipal(plane),
+      ),
+    ).toBeNull();
+    const s = { xx: 80, yy: -40, zz: 10, xy: 30, yz: -15, zx: 5 };
+    const r = principalFrame(s);
+    expect(principalAxisNames(r, rotatedView(s, r).rotated, namedPrincipal(s))).toEqual([0, 1, 2]);
+  });
+
+  it("when the principal values repeat (uniaxial σx = 100), then each axis still gets its own name", () => {
+    const s = { xx: 100, yy: 0, zz: 0, xy: 0, yz: 0, zx: 0 };
+    const r = principalFrame(s);
+    expect(principalAxisNames(r, rotatedView(s, r).rotated, namedPrincipal(s))).toEqual([0, 1, 2]);
   });
 });

@@ -12,6 +12,7 @@ import {
   eulerFromRotation,
   maxShear,
   mohrCircles,
+  planePrincipal,
   planeStress,
   principalStresses,
   probeEnvelopes,
@@ -24,6 +25,8 @@ import {
   type Mat3,
   type Material,
   type MohrCircle,
+  type PlanePrincipal,
+  type PrincipalIndex,
   type StressTensor,
   type StressUnit,
   type Vec3,
@@ -128,9 +131,76 @@ export function criteriaResults(
   });
 }
 
+/**
+ * The one naming rule for principal stresses, stated on the principal panel and used by every panel:
+ * σ1 ≥ σ2 ≥ σ3 of the full 3D state, σz included (0 in plane stress); the in-plane pair is called
+ * by where it falls in that order.
+ */
+export const PRINCIPAL_NAMING_RULE =
+  "Named σ1 ≥ σ2 ≥ σ3 over all three principal stresses, the out-of-plane one included (σz = 0 in plane stress); the in-plane pair keeps these names on every panel.";
+
+/** "σ1", "σ2" or "σ3" for an index in the 3D order. */
+export const principalName = (i: PrincipalIndex) => `σ${i + 1}`;
+
+/**
+ * Principal values and directions named by the rule above. When z is already a principal direction
+ * (plane stress included) they come from core's planePrincipal: the handbook's in-plane pair at θp
+ * and σz, with which of σ1, σ2, σ3 is in plane; otherwise from the 3D eigen-solution.
+ */
+export function namedPrincipal(tensor: StressTensor): {
+  values: [number, number, number];
+  directions: [Vec3, Vec3, Vec3];
+  plane: PlanePrincipal | null;
+} {
+  const plane = planePrincipal(tensor);
+  if (plane) return { values: plane.values, directions: plane.directions, plane };
+  return { ...principalStresses(tensor), plane: null };
+}
+
+/**
+ * Which principal stress each axis of the element carries, when the element sits on principal axes
+ * (σ′ diagonal): x′, y′, z′ each matched to the principal direction it lies along. Null when the
+ * element is not on principal axes.
+ * @param rotation the element's frame (rows x′, y′, z′)
+ * @param rotated σ′ in that frame
+ * @param principal the named principal values and directions
+ */
+export function principalAxisNames(
+  rotation: Mat3,
+  rotated: StressTensor,
+  principal: { values: readonly number[]; directions: readonly Vec3[] },
+): [PrincipalIndex, PrincipalIndex, PrincipalIndex] | null {
+  const scale = Math.max(Math.abs(principal.values[0]), Math.abs(principal.values[2]), Number.MIN_VALUE);
+  const off = Math.max(Math.abs(rotated.xy), Math.abs(rotated.yz), Math.abs(rotated.zx));
+  if (off > 1e-9 * scale) return null;
+  const diagonal = [rotated.xx, rotated.yy, rotated.zz];
+  const taken = new Set<number>();
+  const out: PrincipalIndex[] = [];
+  for (let i = 0; i < 3; i++) {
+    const axis = rotation[i];
+    const along = ([0, 1, 2] as const).find((k) => {
+      const d = principal.directions[k];
+      return !taken.has(k) && Math.abs(axis[0] * d[0] + axis[1] * d[1] + axis[2] * d[2]) > 1 - 1e-9;
+    });
+    // Repeated principal values have no unique direction: then match by value.
+    const k =
+      along ??
+      ([0, 1, 2] as const)
+        .filter((j) => !taken.has(j))
+        .reduce((best, j) =>
+          Math.abs(principal.values[j] - diagonal[i]) < Math.abs(principal.values[best] - diagonal[i])
+            ? j
+            : best,
+        );
+    taken.add(k);
+    out.push(k);
+  }
+  return out as [PrincipalIndex, PrincipalIndex, PrincipalIndex];
+}
+
 /** Principal stresses, maximum shear and equivalent stresses of the state (bench unit). */
 export function stateSummary(tensor: StressTensor) {
-  const principal = principalStresses(tensor);
+  const principal = namedPrincipal(tensor);
   return {
     principal,
     tauMax: maxShear(tensor),

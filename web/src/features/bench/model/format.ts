@@ -1,21 +1,8 @@
 /** Number formatting for the sheet: fixed decimals per column so values align on the decimal point. */
+import { fixed } from "../../../lib/number-format";
 
-/**
- * Decimals that show four significant figures of the largest value in a column.
- * @param maxAbs largest absolute value in the column
- */
-export function decimalsFor(maxAbs: number): number {
-  if (!(maxAbs > 0) || !Number.isFinite(maxAbs)) return 2;
-  return Math.min(6, Math.max(0, 3 - Math.floor(Math.log10(maxAbs))));
-}
-
-/** A value with fixed decimals, a true minus sign and no negative zero. */
-export function fixed(value: number, decimals: number): string {
-  if (!Number.isFinite(value)) return value > 0 ? "∞" : value < 0 ? "−∞" : "—";
-  const text = value.toFixed(decimals);
-  if (/^-0(\.0+)?$/.test(text)) return text.slice(1);
-  return text.replace("-", "−");
-}
+// The shared formatter (web/src/lib/number-format.ts): no negative zero anywhere on the sheet.
+export { decimalsFor, fixed } from "../../../lib/number-format";
 
 /** A safety factor: two decimals, ∞ when the state never reaches the surface. */
 export function factor(n: number): string {
@@ -28,9 +15,16 @@ export function angle(value: number): string {
   return fixed(value, 2);
 }
 
-/** A number for an input box: up to 6 significant figures, plain ASCII. */
+/**
+ * A number for an input box: up to 6 significant figures, plain ASCII. From a million up (stresses
+ * in Pa or psi) and below 0.001 it is written with an exponent, "1.5e8", so that it fits a grid cell.
+ */
 export function editable(value: number): string {
   if (value === 0) return "0";
-  const text = Number(value.toPrecision(6)).toString();
-  return text;
+  const abs = Math.abs(value);
+  if (abs >= 1e6 || abs < 1e-3) {
+    const [mantissa, exponent] = value.toExponential(5).split("e");
+    return `${Number(mantissa)}e${Number(exponent)}`;
+  }
+  return Number(value.toPrecision(6)).toString();
 }

@@ -20,6 +20,7 @@ import { CRITERION_LABELS, type CriterionName } from "../../../../../core/contra
 import { Quantity, stressTone } from "../../../components/Quantity";
 import { Verdict } from "../../../components/Verdict";
 import { benchLinkForState, benchLinkForValues } from "../../../lib/bench-link";
+import { fixed } from "../../../lib/number-format";
 import { checkOf, governingMarks, inUnit } from "../model/rows";
 
 const helper = createColumnHelper<ComparisonRowView>();
@@ -28,7 +29,7 @@ const helper = createColumnHelper<ComparisonRowView>();
 function stress(pa: number, unit: StressUnitName): string {
   const v = inUnit(pa, unit);
   const a = Math.abs(v);
-  return a >= 100 ? v.toFixed(1) : a >= 10 ? v.toFixed(2) : v.toFixed(3);
+  return fixed(v, a >= 100 ? 1 : a >= 10 ? 2 : 3, "-"); // the shared formatter: never "-0.000"
 }
 
 /** Sorts utilisation with "not evaluated" last. */

@@ -1,4 +1,5 @@
 import { convertStress } from "../../../../../core";
+import { sheetValue } from "../../../lib/number-format";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import type { UnitSystem } from "../../../../../core/contract/projects";
 
@@ -13,6 +14,5 @@ export function formatStress(pa: number | null, unit: StressUnitName): string {
   if (pa === null) return "—";
   const v = fromPa(pa, unit);
   if (v === 0) return "0";
-  const abs = Math.abs(v);
-  return abs >= 1000 ? v.toFixed(0) : abs >= 100 ? v.toFixed(1) : abs >= 10 ? v.toFixed(2) : v.toFixed(3);
+  return sheetValue(v, "-"); // the shared formatter: never "-0.000"
 }

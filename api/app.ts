@@ -5,6 +5,7 @@ import { errors } from "./errors";
 import { errorHandler } from "./middleware/error-handler";
 import { requestLogging } from "./middleware/request-logging";
 import { sessionMiddleware } from "./auth/session-middleware";
+import { loopbackOnly, MAILBOX_PATHS } from "./routes/mailbox/loopback-only";
 import { mountRoutes } from "./openapi/mount";
 import { buildRouteTable } from "./openapi/route-table";
 
@@ -15,9 +16,11 @@ import { buildRouteTable } from "./openapi/route-table";
 export function createApp(context: AppContext): Express {
   const app = express();
   app.disable("x-powered-by");
-  app.set("trust proxy", "loopback");
+  // X-Forwarded-For counts only from the proxies TRUST_PROXY names (none by default).
+  app.set("trust proxy", context.env.TRUST_PROXY.length ? context.env.TRUST_PROXY : false);
 
   app.use(requestLogging(context.logger));
+  app.use(MAILBOX_PATHS, loopbackOnly);
 
   const api = express.Router();
   api.use(express.json({ limit: "1mb" }));

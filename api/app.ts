@@ -7,6 +7,7 @@ import { jsonBody } from "./middleware/json-body";
 import { malformedPath } from "./middleware/malformed-path";
 import { requestLogging } from "./middleware/request-logging";
 import { sessionMiddleware } from "./auth/session-middleware";
+import { loopbackOnly, MAILBOX_PATHS } from "./routes/mailbox/loopback-only";
 import { mountRoutes } from "./openapi/mount";
 import { buildRouteTable } from "./openapi/route-table";
 
@@ -17,10 +18,12 @@ import { buildRouteTable } from "./openapi/route-table";
 export function createApp(context: AppContext): Express {
   const app = express();
   app.disable("x-powered-by");
-  app.set("trust proxy", "loopback");
+  // X-Forwarded-For counts only from the proxies TRUST_PROXY names (none by default).
+  app.set("trust proxy", context.env.TRUST_PROXY.length ? context.env.TRUST_PROXY : false);
 
   app.use(requestLogging(context.logger));
   app.use(malformedPath);
+  app.use(MAILBOX_PATHS, loopbackOnly);
 
   const api = express.Router();
   api.use(jsonBody("1mb"));

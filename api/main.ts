@@ -8,7 +8,7 @@
  */
 import path from "node:path";
 import { fileURLToPath } from "node:url";
-import { EnvError, parseEnv } from "./env";
+import { EnvError, isLoopback, parseEnv } from "./env";
 import { startServer } from "./server";
 
 const defaultWebDist = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../dist/web");
@@ -22,6 +22,13 @@ try {
   const listening = `http://${env.HOST}:${running.port}`;
   running.context.logger.info({ listening, publicOrigin: running.url }, "listening");
   console.log(`Sigmacube API listening on ${listening}`);
+  if (running.context.mailer.fake && !isLoopback(env.HOST)) {
+    // Allowed only with SIGMACUBE_FAKE_MAILBOX=1 (parseEnv refuses it otherwise).
+    running.context.logger.warn(
+      { host: env.HOST },
+      "no SMTP_URL: mail goes to the fake mailbox, which only clients on this machine can read",
+    );
+  }
   const stop = (signal: string) => {
     running.context.logger.info({ signal }, "shutting down");
     void running.close().then(() => process.exit(0));

@@ -84,3 +84,46 @@ export function invitationMail(options: {
     footnote: `The invitation expires on ${expires} (UTC). If you were not expecting it, ignore this mail.`,
   });
 }
+
+/** The confirmation mail after sign-up: opening the link proves the address and signs in. */
+export function emailVerificationMail(options: {
+  to: string;
+  name: string;
+  url: string;
+  lifetimeHours: number;
+}): OutgoingMail {
+  return layout({
+    to: options.to,
+    subject: `${PRODUCT}: confirm your e-mail address`,
+    greeting: `Hello ${options.name},`,
+    paragraphs: [
+      `Confirm that this address is yours to finish setting up your ${PRODUCT} account. Invitations to a team's workspace can be accepted only from a confirmed address.`,
+      `The link below works once and expires in ${options.lifetimeHours} hours.`,
+    ],
+    action: { label: "Confirm my address", url: options.url },
+    footnote: "If you did not create an account, ignore this mail: nothing happens without the link.",
+  });
+}
+
+/**
+ * What a sign-up for an address that has an account sends instead of an error, so the
+ * sign-up form does not tell a stranger which addresses have accounts.
+ */
+export function accountExistsMail(options: {
+  to: string;
+  name: string;
+  signInUrl: string;
+  resetUrl: string;
+}): OutgoingMail {
+  return layout({
+    to: options.to,
+    subject: `${PRODUCT}: you already have an account`,
+    greeting: `Hello ${options.name},`,
+    paragraphs: [
+      `Someone (hopefully you) tried to create a ${PRODUCT} account with this address, which has an account already. No second account was made.`,
+      `Sign in with the link below. If you do not remember the password, choose a new one here: ${options.resetUrl}`,
+    ],
+    action: { label: "Sign in", url: options.signInUrl },
+    footnote: "If this was not you, ignore this mail: your account stays as it is.",
+  });
+}

@@ -1,4 +1,4 @@
-import type { RequestHandler } from "express";
+import type { Request, RequestHandler } from "express";
 import {
   ipKeyGenerator,
   rateLimit,
@@ -14,20 +14,25 @@ export type Limit = { limit: number; windowMs: number };
 
 /** The limited operations and their limits; tests pass small ones. */
 export type RateLimitSettings = {
+  /** Failed sign-ins per client address (a correct sign-in does not count). */
   signIn: Limit;
+  /** Failed sign-ins per account (the normalised e-mail address), from any address. */
+  signInPerAccount: Limit;
   signUp: Limit;
   forgotPassword: Limit;
   /** Prepended to every key, so one test's counters cannot fill another's. */
   prefix: string;
 };
 
-export type RateLimitName = Exclude<keyof RateLimitSettings, "prefix">;
+/** The names a route can ask for; the per-account sign-in limit comes with "signIn". */
+export type RateLimitName = Exclude<keyof RateLimitSettings, "prefix" | "signInPerAccount">;
 
 const MINUTE = 60_000;
 
 /** Defaults: generous for a person, tight for a script guessing passwords or addresses. */
 export const defaultRateLimits: RateLimitSettings = {
   signIn: { limit: 10, windowMs: 15 * MINUTE },
+  signInPerAccount: { limit: 10, windowMs: 60 * MINUTE },
   signUp: { limit: 10, windowMs: 60 * MINUTE },
   forgotPassword: { limit: 5, windowMs: 60 * MINUTE },
   prefix: "",
@@ -88,13 +93,44 @@ export class PostgresRateLimitStore implements Store {
 }
 
 /**
- * A limiter for one operation, keyed by client IP (IPv6 by /56 subnet). Over the limit it
- * answers 429 with `Retry-After` in seconds and the usual JSON error body.
+ * The limiters of one operation, run in turn. Over a limit the answer is 429 with
+ * `Retry-After` in seconds and the usual JSON error body.
+ *
+ * Sign-in counts failures only (an office behind one address must not lock itself out by
+ * signing in correctly), per client address and, beside it, per account, so guessing one
+ * account's password from many addresses is limited too.
  */
 export function rateLimiter(
   name: RateLimitName,
   settings: RateLimitSettings,
   sequelize: Sequelize,
+): RequestHandler {
+  if (name !== "signIn") return limiterFor(name, settings, sequelize, byAddress, false);
+  const perAddress = limiterFor("signIn", settings, sequelize, byAddress, true);
+  const perAccount = limiterFor("signInPerAccount", settings, sequelize, byAccount, true);
+  return (req, res, next) => {
+    void perAddress(req, res, (error?: unknown) => {
+      if (error) return next(error);
+      void perAccount(req, res, next);
+    });
+  };
+}
+
+/** The client address (IPv6 by /56 subnet); X-Forwarded-For only counts from a trusted proxy (TRUST_PROXY). */
+const byAddress = (req: Request) => ipKeyGenerator(req.ip ?? "unknown");
+
+/** The account an attempt names: its e-mail address, trimmed and lower-cased as sign-in compares it. */
+const byAccount = (req: Request) => {
+  const email = (req.body as { email?: unknown } | undefined)?.email;
+  return `account:${typeof email === "string" ? email.trim().toLowerCase() : ""}`;
+};
+
+function limiterFor(
+  name: Exclude<keyof RateLimitSettings, "prefix">,
+  settings: RateLimitSettings,
+  sequelize: Sequelize,
+  keyGenerator: (req: Request) => string,
+  skipSuccessfulRequests: boolean,
 ): RequestHandler {
   const { limit, windowMs } = settings[name];
   return rateLimit({
@@ -103,7 +139,10 @@ export function rateLimiter(
     standardHeaders: "draft-8",
     legacyHeaders: false,
     store: new PostgresRateLimitStore(sequelize, `${settings.prefix}${name}:`),
-    keyGenerator: (req) => ipKeyGenerator(req.ip ?? "unknown"),
+    keyGenerator,
+    skipSuccessfulRequests,
+    // An X-Forwarded-For from a client that is not a trusted proxy is ignored on purpose, not a mistake to warn about.
+    validate: { xForwardedForHeader: false },
     handler: (req, res, next) => {
       const resetTime = (req as { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
       const seconds = Math.max(

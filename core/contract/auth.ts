@@ -34,10 +34,25 @@ export const personNameSchema = z
   .min(1, "Enter your name.")
   .max(100, "A name has at most 100 characters.");
 
+/** A secret token from a link in an e-mail (base64url). */
+export const linkTokenSchema = z
+  .string({ error: "The link is incomplete." })
+  .regex(/^[A-Za-z0-9_-]{20,100}$/, "This link is not complete; open it again from the e-mail.");
+
+/** A page of this app to go on to afterwards (a path, never another site). */
+export const nextPathSchema = z
+  .string()
+  .max(500, "A page address has at most 500 characters.")
+  .regex(/^\/(?![/\\])[^\s\\]*$/, "Give a page of this app, starting with a single /.");
+
 export const signUpBodySchema = z.object({
   name: personNameSchema,
   email: emailSchema,
   password: newPasswordSchema,
+  /** The token of the invitation link the person came from: it proves the address, so the account starts signed in. */
+  invitationToken: linkTokenSchema.optional(),
+  /** Where the confirmation link leads after confirming (e.g. back to an invitation). */
+  next: nextPathSchema.optional(),
 });
 export type SignUpBody = z.infer<typeof signUpBodySchema>;
 
@@ -53,10 +68,9 @@ export type SignInBody = z.infer<typeof signInBodySchema>;
 export const forgotPasswordBodySchema = z.object({ email: emailSchema });
 export type ForgotPasswordBody = z.infer<typeof forgotPasswordBodySchema>;
 
-/** A secret token from a link in an e-mail (base64url). */
-export const linkTokenSchema = z
-  .string({ error: "The link is incomplete." })
-  .regex(/^[A-Za-z0-9_-]{20,100}$/, "This link is not complete; open it again from the e-mail.");
+/** `POST /api/auth/verify-email`: the token from the confirmation mail. */
+export const verifyEmailBodySchema = z.object({ token: linkTokenSchema });
+export type VerifyEmailBody = z.infer<typeof verifyEmailBodySchema>;
 
 export const resetPasswordBodySchema = z.object({
   token: linkTokenSchema,
@@ -80,6 +94,17 @@ export type SessionResponse = z.infer<typeof sessionResponseSchema>;
 /** `POST /api/auth/sign-in`, `/sign-up`, `/reset-password`. */
 export const signedInResponseSchema = z.object({ user: userSchema });
 
-/** An answer that only says what happens next (forgot password). */
+/** An answer that only says what happens next (forgot password, sign-up without an invitation). */
 export const notice = z.object({ message: z.string() });
 export type Notice = z.infer<typeof notice>;
+
+/**
+ * `POST /api/auth/sign-up`: signed in straight away (201) when an invitation link proved
+ * the address; otherwise (202) only "check your mail", the same whether or not the address
+ * has an account.
+ */
+export const signUpResponseSchema = z.union([signedInResponseSchema, notice]);
+export type SignUpResponse = z.infer<typeof signUpResponseSchema>;
+
+/** `POST /api/auth/verify-email`: signed in, and the page the person was on their way to. */
+export const verifiedResponseSchema = z.object({ user: userSchema, next: z.string().nullable() });

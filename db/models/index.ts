@@ -2,6 +2,7 @@ import type { Sequelize } from "sequelize";
 import { initAppSetting } from "./app-setting";
 import { associateAccountModels } from "./associations";
 import { initDevMailMessage } from "./dev-mail-message";
+import { initEmailVerificationToken } from "./email-verification-token";
 import { initInvitation } from "./invitation";
 import { initMembership } from "./membership";
 import { initPasswordResetToken } from "./password-reset-token";
@@ -18,6 +19,7 @@ export function initModels(sequelize: Sequelize) {
     User: initUser(sequelize),
     Session: initSession(sequelize),
     PasswordResetToken: initPasswordResetToken(sequelize),
+    EmailVerificationToken: initEmailVerificationToken(sequelize),
     Workspace: initWorkspace(sequelize),
     Membership: initMembership(sequelize),
     Invitation: initInvitation(sequelize),

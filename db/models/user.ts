@@ -9,6 +9,8 @@ export class User extends Model {
   declare passwordHash: string;
   declare passwordChangedAt: Date;
   declare lastSignInAt: Date | null;
+  /** When a link mailed to the address (verification, invitation or reset) proved it; null until then. */
+  declare emailVerifiedAt: Date | null;
   declare createdAt: Date;
   declare updatedAt: Date;
 }
@@ -22,6 +24,7 @@ export function initUser(sequelize: Sequelize) {
       passwordHash: { type: DataTypes.TEXT, allowNull: false },
       passwordChangedAt: { type: DataTypes.DATE, allowNull: false, defaultValue: DataTypes.NOW },
       lastSignInAt: { type: DataTypes.DATE, allowNull: true },
+      emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
     },
     { sequelize, tableName: "users" },
   );

@@ -10,6 +10,7 @@ import {
   invitationForActor,
   resetTokenForBystander,
   roleFixtureFactory,
+  verificationTokenForBystander,
   someMailId,
   type Actor,
   type RoleFixture,
@@ -42,7 +43,7 @@ const table: Record<string, Row> = {
 
   "POST /api/auth/sign-up": {
     who: "public",
-    ok: 201,
+    ok: 202,
     request: () => ({
       path: "/api/auth/sign-up",
       body: { name: "New", email: uniqueEmail("matrix-new"), password: TEST_PASSWORD },
@@ -67,6 +68,14 @@ const table: Record<string, Row> = {
     who: "public",
     ok: 202,
     request: () => ({ path: "/api/auth/forgot-password", body: { email: uniqueEmail("matrix-forgot") } }),
+  },
+  "POST /api/auth/verify-email": {
+    who: "public",
+    ok: 200,
+    request: async (f) => ({
+      path: "/api/auth/verify-email",
+      body: { token: await verificationTokenForBystander(f) },
+    }),
   },
   "POST /api/auth/reset-password": {
     who: "public",

@@ -5,7 +5,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { RunningServer } from "../../api/server";
 import { SUPERPOSITION_CAUTION } from "../../core/contract/combinations";
 import { uniqueEmail } from "../support/accounts";
-import { launchChromium, screenshotDir } from "../support/browser";
+import { confirmInContext, launchChromium, screenshotDir } from "../support/browser";
 import { startTestServer } from "../support/server";
 
 const shot = (page: Page, name: string) =>
@@ -41,15 +41,13 @@ describe("editing a project in Chromium: combinations, materials, the trash, exp
       viewport: { width: 1360, height: 900 },
       acceptDownloads: true,
     });
+    const email = uniqueEmail(name.split(" ")[0].toLowerCase());
     const response = await context.request.post(`${server.url}/api/auth/sign-up`, {
-      data: {
-        name,
-        email: uniqueEmail(name.split(" ")[0].toLowerCase()),
-        password: "carbonation tank seven",
-      },
+      data: { name, email, password: "carbonation tank seven" },
       headers: headers(),
     });
-    expect(response.status()).toBe(201);
+    expect(response.status()).toBe(202);
+    await confirmInContext(context, server.url, email);
     return context;
   }
 

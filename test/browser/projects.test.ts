@@ -4,7 +4,7 @@ import type { Browser, BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { RunningServer } from "../../api/server";
 import { uniqueEmail } from "../support/accounts";
-import { launchChromium, screenshotDir } from "../support/browser";
+import { confirmInContext, launchChromium, screenshotDir } from "../support/browser";
 import { startTestServer } from "../support/server";
 
 const shot = (page: Page, name: string) =>
@@ -28,15 +28,13 @@ describe("projects in Chromium: from an empty project to the governing case, and
   /** Signs up through the API inside a browser context, so the context holds the session cookie. */
   async function signedIn(name: string): Promise<BrowserContext> {
     const context = await browser.newContext({ viewport: { width: 1360, height: 900 } });
+    const email = uniqueEmail(name.split(" ")[0].toLowerCase());
     const response = await context.request.post(`${server.url}/api/auth/sign-up`, {
-      data: {
-        name,
-        email: uniqueEmail(name.split(" ")[0].toLowerCase()),
-        password: "carbonation tank seven",
-      },
+      data: { name, email, password: "carbonation tank seven" },
       headers: { Origin: server.url },
     });
-    expect(response.status()).toBe(201);
+    expect(response.status()).toBe(202);
+    await confirmInContext(context, server.url, email);
     return context;
   }
 

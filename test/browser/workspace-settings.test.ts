@@ -4,16 +4,19 @@ import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { RunningServer } from "../../api/server";
 import { uniqueEmail } from "../support/accounts";
-import { launchChromium, screenshotDir } from "../support/browser";
+import { confirmationLink, launchChromium, screenshotDir } from "../support/browser";
 import { startTestServer } from "../support/server";
 
 /** Signs a new user up in `page` and creates a workspace; leaves the page on its projects tab. */
 async function signUpWithWorkspace(page: Page, origin: string, name: string, workspaceName: string) {
   await page.goto(`${origin}/sign-up`, { waitUntil: "networkidle" });
   await page.getByLabel("Your name").fill(name);
-  await page.getByLabel("E-mail address").fill(uniqueEmail(name.split(" ")[0].toLowerCase()));
+  const email = uniqueEmail(name.split(" ")[0].toLowerCase());
+  await page.getByLabel("E-mail address").fill(email);
   await page.getByLabel("Password").fill("agitator shaft 45");
   await page.getByRole("button", { name: "Create account" }).click();
+  await page.getByRole("heading", { name: "Check your mail" }).waitFor();
+  await page.goto(await confirmationLink(page.request, origin, email));
   await page.waitForURL(`${origin}/workspaces`);
   await page.getByRole("link", { name: "New workspace" }).click();
   await page.getByLabel("Workspace name").fill(workspaceName);

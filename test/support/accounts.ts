@@ -3,6 +3,7 @@ import type { Express } from "express";
 import request from "supertest";
 import { expect } from "vitest";
 import { TEST_ORIGIN } from "./app";
+import { linkIn, waitForMail } from "./mailbox";
 
 /** A fresh address for each test: test files share one database and never truncate it. */
 export function uniqueEmail(label = "person"): string {
@@ -24,7 +25,11 @@ export type TestAccount = {
   password: string;
 };
 
-/** Signs a new account up through the API; its agent holds the session cookie. */
+/**
+ * Signs a new account up through the API as a person would: sign-up answers "check your
+ * mail", and the confirmation link from the fake mailbox confirms the address and signs
+ * in. The returned agent holds the session cookie.
+ */
 export async function signUp(
   app: Express,
   options: { name?: string; email?: string } = {},
@@ -33,8 +38,17 @@ export async function signUp(
   const email = options.email ?? uniqueEmail();
   const name = options.name ?? `Tester ${email.slice(0, 12)}`;
   const response = await agent.post("/api/auth/sign-up").send({ name, email, password: TEST_PASSWORD });
-  expect(response.status, JSON.stringify(response.body)).toBe(201);
-  return { agent, user: response.body.user, email, password: TEST_PASSWORD };
+  expect(response.status, JSON.stringify(response.body)).toBe(202);
+  const token = await confirmationToken(app, email);
+  const confirmed = await agent.post("/api/auth/verify-email").send({ token });
+  expect(confirmed.status, JSON.stringify(confirmed.body)).toBe(200);
+  return { agent, user: confirmed.body.user, email, password: TEST_PASSWORD };
+}
+
+/** The token of the newest confirmation link mailed to `email`. */
+export async function confirmationToken(app: Express, email: string): Promise<string> {
+  const mail = await waitForMail(app, email, { subject: /confirm your e-mail address/ });
+  return linkIn(mail, "/verify-email/").pathname.split("/").pop()!;
 }
 
 /** Creates a workspace owned by `owner` and returns its id. */

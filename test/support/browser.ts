@@ -1,6 +1,6 @@
 import path from "node:path";
 import { randomUUID } from "node:crypto";
-import { chromium, type Browser, type BrowserContext } from "playwright-core";
+import { chromium, type APIRequestContext, type Browser, type BrowserContext } from "playwright-core";
 
 /** Debian's Chromium; playwright-core never downloads a browser of its own. */
 export const CHROMIUM_PATH = process.env.CHROMIUM_PATH ?? "/usr/bin/chromium";
@@ -52,7 +52,44 @@ export async function signUpInContext(
     data: account,
     headers: { Origin: origin },
   });
-  if (response.status() !== 201)
+  if (response.status() !== 202)
     throw new Error(`sign-up failed: ${response.status()} ${await response.text()}`);
+  await confirmInContext(context, origin, account.email);
   return account;
+}
+
+/**
+ * The newest confirmation link mailed to `email`, read from the fake mailbox through the
+ * API as the mailbox page does (sign-up mails it after answering, hence the polling).
+ */
+export async function confirmationLink(
+  request: APIRequestContext,
+  origin: string,
+  email: string,
+): Promise<string> {
+  const deadline = Date.now() + 5_000;
+  for (;;) {
+    const list = await request.get(`${origin}/api/dev/mailbox?to=${encodeURIComponent(email)}`);
+    const { messages } = (await list.json()) as { messages: { id: string; subject: string }[] };
+    const found = messages.find((m) => /confirm your e-mail address/.test(m.subject));
+    if (found) {
+      const message = (await (await request.get(`${origin}/api/dev/mailbox/${found.id}`)).json()) as {
+        text: string;
+      };
+      return message.text.match(/https?:\/\/\S+\/verify-email\/\S+/)![0];
+    }
+    if (Date.now() > deadline) throw new Error(`no confirmation mail to ${email}`);
+    await new Promise((resolve) => setTimeout(resolve, 50));
+  }
+}
+
+/** Confirms `email` through the API from inside `context`, which then holds the session cookie. */
+export async function confirmInContext(context: BrowserContext, origin: string, email: string) {
+  const link = await confirmationLink(context.request, origin, email);
+  const response = await context.request.post(`${origin}/api/auth/verify-email`, {
+    data: { token: link.split("/").pop() },
+    headers: { Origin: origin },
+  });
+  if (response.status() !== 200)
+    throw new Error(`confirmation failed: ${response.status()} ${await response.text()}`);
 }

@@ -7,6 +7,7 @@ import type { RateLimitSettings } from "../../api/middleware/rate-limit";
  */
 export const relaxedLimits = (): Partial<RateLimitSettings> => ({
   signIn: { limit: 10_000, windowMs: 60_000 },
+  signInPerAccount: { limit: 10_000, windowMs: 60_000 },
   signUp: { limit: 10_000, windowMs: 60_000 },
   forgotPassword: { limit: 10_000, windowMs: 60_000 },
   prefix: `test-${randomUUID()}:`,

@@ -6,6 +6,7 @@ import type { Role } from "../../core/contract/workspaces";
 import { DevMailMessage } from "../../db/models/dev-mail-message";
 import { Invitation } from "../../db/models/invitation";
 import { Membership } from "../../db/models/membership";
+import { EmailVerificationToken } from "../../db/models/email-verification-token";
 import { PasswordResetToken } from "../../db/models/password-reset-token";
 import { ShareLink } from "../../db/models/share-link";
 import { User } from "../../db/models/user";
@@ -54,6 +55,8 @@ export async function roleFixtureFactory(context: AppContext): Promise<RoleFixtu
       name: `Matrix ${label}`,
       email: uniqueEmail(`matrix-${label}`),
       passwordHash,
+      // As after the confirmation mail: invitations need a confirmed address.
+      emailVerifiedAt: new Date(),
     });
     return { id: user.id, email: user.email };
   };
@@ -150,6 +153,17 @@ export async function invitationForActor(f: RoleFixture): Promise<string> {
 export async function resetTokenForBystander(f: RoleFixture): Promise<string> {
   const token = newLinkToken();
   await PasswordResetToken.create({
+    userId: f.bystander.id,
+    tokenHash: hashToken(token),
+    expiresAt: new Date(Date.now() + 3_600_000),
+  });
+  return token;
+}
+
+/** A fresh confirmation link's token for the bystander (as the confirmation mail would carry). */
+export async function verificationTokenForBystander(f: RoleFixture): Promise<string> {
+  const token = newLinkToken();
+  await EmailVerificationToken.create({
     userId: f.bystander.id,
     tokenHash: hashToken(token),
     expiresAt: new Date(Date.now() + 3_600_000),

@@ -4,6 +4,7 @@ import { Session } from "../../../db/models/session";
 import { User } from "../../../db/models/user";
 import { currentUser } from "../../auth/guards";
 import { hashPassword, verifyPassword } from "../../auth/password";
+import { deleteUnusedResetLinks } from "../../auth/reset-links";
 import { hashToken } from "../../auth/tokens";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
@@ -37,7 +38,12 @@ export const changePasswordHandler: RouteHandler<NoInput, NoInput, ChangePasswor
   if (!(await verifyPassword(user.passwordHash, currentPassword))) {
     throw errors.invalidInput([{ path: "currentPassword", message: "That is not your current password." }]);
   }
-  await user.update({ passwordHash: await hashPassword(newPassword), passwordChangedAt: new Date() });
+  const passwordHash = await hashPassword(newPassword);
+  await user.sequelize.transaction(async (transaction) => {
+    await user.update({ passwordHash, passwordChangedAt: new Date() }, { transaction });
+    // A reset link mailed before the change (and perhaps read by someone else) must not undo it.
+    await deleteUnusedResetLinks(user.id, transaction);
+  });
   const session = res.locals.session as { id: string };
   await Session.destroy({ where: { userId: user.id, id: { [Op.ne]: hashToken(session.id) } } });
   res.status(204).end();

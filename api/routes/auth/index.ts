@@ -8,6 +8,7 @@ import {
   signOutEverywhereHandler,
   signOutHandler,
   signUpHandler,
+  verifyEmailHandler,
 } from "./handlers";
 import {
   forgotPasswordBodySchema,
@@ -17,6 +18,8 @@ import {
   signedInResponseSchema,
   signInBodySchema,
   signUpBodySchema,
+  verifiedResponseSchema,
+  verifyEmailBodySchema,
 } from "./schema";
 
 const tag = "auth";
@@ -28,22 +31,44 @@ export function authRoutes(context: AppContext): AnyRoute[] {
       method: "post",
       path: "/auth/sign-up",
       tag,
-      summary: "Create an account and sign in",
+      summary: "Create an account (confirmed by a mailed link, or at once from an invitation link)",
+      description:
+        "Without a matching invitation token the answer is the same 202 whether or not the address has an account: a new address is mailed a confirmation link, a known one a reminder.",
       access: { kind: "public" },
       rateLimit: "signUp",
       request: { body: signUpBodySchema },
       responses: {
-        201: { description: "Account created; the session cookie is set.", schema: signedInResponseSchema },
+        201: {
+          description: "From an invitation link for this address: account created and signed in.",
+          schema: signedInResponseSchema,
+        },
+        202: { description: "Check your mail (the same for known and unknown addresses).", schema: notice },
       },
-      errors: { 409: "An account already uses this address." },
+      errors: { 409: "From an invitation link only: an account already uses this address." },
       handler: signUpHandler(context),
+    }),
+    defineRoute({
+      method: "post",
+      path: "/auth/verify-email",
+      tag,
+      summary: "Confirm the address with the token from the confirmation mail, and sign in",
+      access: { kind: "public" },
+      request: { body: verifyEmailBodySchema },
+      responses: {
+        200: {
+          description: "Address confirmed and signed in; `next` is the page to go on to.",
+          schema: verifiedResponseSchema,
+        },
+      },
+      handler: verifyEmailHandler(context),
     }),
     defineRoute({
       method: "post",
       path: "/auth/sign-in",
       tag,
       summary: "Sign in (starts a new session with a new id)",
-      description: "Unknown addresses and wrong passwords get the same 401.",
+      description:
+        "Unknown addresses and wrong passwords get the same 401. Failed attempts are limited per address and per account; correct ones do not count.",
       access: { kind: "public" },
       rateLimit: "signIn",
       request: { body: signInBodySchema },

@@ -4,6 +4,7 @@ import { Invitation } from "../../../db/models/invitation";
 import { Membership } from "../../../db/models/membership";
 import { User } from "../../../db/models/user";
 import { Workspace } from "../../../db/models/workspace";
+import { sendVerificationMail } from "../../auth/email-verification";
 import { currentMembership, currentUser } from "../../auth/guards";
 import { hashToken, newLinkToken } from "../../auth/tokens";
 import { findUserByEmail, sameEmail } from "../../auth/users";
@@ -188,11 +189,18 @@ const UNUSABLE: Record<"accepted" | "revoked" | "expired", string> = {
   expired: "This invitation has expired; ask the workspace's owner to send it again.",
 };
 
+/**
+ * Accepting needs the invited address, and an account whose address is proven (by the
+ * invitation link at sign-up, a confirmation mail or a password reset): otherwise anyone
+ * could sign up with someone else's address and take their seat. An unproven account is
+ * refused with 403 `email_not_verified` and mailed a confirmation link that leads back here.
+ */
 export function acceptInvitationHandler(context: AppContext): RouteHandler<TokenParams, NoInput, NoInput> {
   return async (_req, res) => {
     const user = currentUser(res);
+    const { token } = res.locals.input.params;
     const result = await context.sequelize.transaction(async (transaction) => {
-      const found = await invitationByToken(res.locals.input.params.token, transaction);
+      const found = await invitationByToken(token, transaction);
       // Lock the row: two tabs accepting at once must not both succeed.
       const invitation = await Invitation.findByPk(found.id, { transaction, lock: transaction.LOCK.UPDATE });
       if (!invitation) throw errors.notFound("This invitation");
@@ -205,6 +213,8 @@ export function acceptInvitationHandler(context: AppContext): RouteHandler<Token
           `This invitation was sent to ${invitation.email}; sign in with that address to accept it.`,
         );
       }
+      const account = await User.findByPk(user.id, { transaction, rejectOnEmpty: true });
+      if (!account.emailVerifiedAt) return { kind: "unverified" as const, account };
       const joined = await addMember(
         {
           workspaceId: invitation.workspaceId,
@@ -217,12 +227,22 @@ export function acceptInvitationHandler(context: AppContext): RouteHandler<Token
         transaction,
       );
       await invitation.update({ acceptedAt: new Date(), acceptedBy: user.id }, { transaction });
-      return joined;
+      return { kind: "joined" as const, joined };
     });
+    if (result.kind === "unverified") {
+      await sendVerificationMail(context, result.account, `/invitations/${token}`).catch(() => {
+        throw errors.mailNotSent("The confirmation link");
+      });
+      throw new HttpError(
+        403,
+        "email_not_verified",
+        `Confirm your address first: we have mailed a link to ${result.account.email}. Open it, and you come back here to accept.`,
+      );
+    }
     res.json({
-      workspaceId: result.membership.workspaceId,
-      role: result.membership.role,
-      alreadyMember: result.alreadyMember,
+      workspaceId: result.joined.membership.workspaceId,
+      role: result.joined.membership.role,
+      alreadyMember: result.joined.alreadyMember,
     });
   };
 }

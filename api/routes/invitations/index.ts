@@ -92,7 +92,7 @@ export function invitationRoutes(context: AppContext): AnyRoute[] {
       request: { params: invitationTokenParamsSchema },
       responses: { 200: { description: "Joined (or was a member already).", schema: joinedWorkspaceSchema } },
       errors: {
-        403: "Signed in with another address than the invitation's (invitation_other_address).",
+        403: "Signed in with another address than the invitation's (invitation_other_address), or the account's address is not confirmed yet (email_not_verified; a confirmation link is mailed).",
         404: "No invitation has this link.",
         409: "Expired, revoked or used (invitation_expired, invitation_revoked, invitation_accepted).",
       },

@@ -7,7 +7,8 @@ const tag = "dev-mailbox";
 /**
  * The development mailbox: only registered when SMTP_URL is unset outside production
  * (see `devMailboxEnabled`), because then no mail really leaves and this is the only
- * way to read it. Open to anyone who can reach the development server.
+ * way to read it. It answers loopback clients only: `loopbackOnly` (api/app.ts) turns
+ * every other client away before these routes, because the mail holds reset links.
  */
 export function mailboxRoutes(): AnyRoute[] {
   return [

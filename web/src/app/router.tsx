@@ -4,6 +4,7 @@ import { ForgotPasswordPage } from "../features/auth/components/ForgotPasswordPa
 import { ResetPasswordPage } from "../features/auth/components/ResetPasswordPage";
 import { SignInPage } from "../features/auth/components/SignInPage";
 import { SignUpPage } from "../features/auth/components/SignUpPage";
+import { VerifyEmailPage } from "../features/auth/components/VerifyEmailPage";
 import { HomePage } from "../features/home/components/HomePage";
 import { MailboxPage } from "../features/mailbox/components/MailboxPage";
 import { InvitationsSection } from "../features/workspaces/components/InvitationsSection";
@@ -45,6 +46,7 @@ export const router = createBrowserRouter([
       { path: "sign-up", element: <SignUpPage /> },
       { path: "forgot-password", element: <ForgotPasswordPage /> },
       { path: "reset-password/:token", element: <ResetPasswordPage /> },
+      { path: "verify-email/:token", element: <VerifyEmailPage /> },
       { path: "invitations/:token", element: <AcceptInvitationPage /> },
       { path: "join/:token", element: <JoinShareLinkPage /> },
       { path: "dev/mailbox/:messageId?", element: <MailboxPage /> },

@@ -8,10 +8,18 @@ import { safeNext } from "../../../lib/session";
 import { useSignUp } from "../api/sign-up";
 import { AuthCard } from "./AuthCard";
 
-/** `/sign-up?next=…&email=…`: creates the account, signs in, goes on to `next`. */
+/** An invitation page as `next` carries the invitation's token, which proves the address. */
+const INVITATION_PATH = /^\/invitations\/([A-Za-z0-9_-]{20,100})$/;
+
+/**
+ * `/sign-up?next=…&email=…`: creates the account. Coming from an invitation link it signs
+ * in and goes on to `next`; otherwise it says to check the mail (the same for an address
+ * that has an account), and the mailed link confirms the address and goes on to `next`.
+ */
 export function SignUpPage() {
   const [params] = useSearchParams();
   const next = safeNext(params.get("next"));
+  const invitationToken = INVITATION_PATH.exec(next)?.[1];
   const navigate = useNavigate();
   const signUp = useSignUp();
   const form = useForm<SignUpBody>({
@@ -20,17 +28,36 @@ export function SignUpPage() {
   });
   const { errors } = form.formState;
   const onSubmit = form.handleSubmit((body) =>
-    signUp.mutate(body, {
-      onSuccess: () => navigate(next, { replace: true }),
-      onError: (error) => {
-        if (error instanceof ApiError && error.id === "email_taken") {
-          form.setError("email", { type: "server", message: error.message });
-        } else {
-          applyServerErrors(error, form.setError, ["name", "email", "password"]);
-        }
+    signUp.mutate(
+      { ...body, next, ...(invitationToken ? { invitationToken } : {}) },
+      {
+        onSuccess: (data) => {
+          if ("user" in data) navigate(next, { replace: true });
+        },
+        onError: (error) => {
+          if (error instanceof ApiError && error.id === "email_taken") {
+            form.setError("email", { type: "server", message: error.message });
+          } else {
+            applyServerErrors(error, form.setError, ["name", "email", "password"]);
+          }
+        },
       },
-    }),
+    ),
   );
+  if (signUp.data && !("user" in signUp.data)) {
+    return (
+      <AuthCard title="Check your mail">
+        <p role="status">{signUp.data.message}</p>
+        <p className="mt-4 text-sm">
+          Nothing arrived? Look in the spam folder, or{" "}
+          <Link to={`/sign-in?next=${encodeURIComponent(next)}`} className="text-ink underline">
+            sign in
+          </Link>{" "}
+          if you have an account already.
+        </p>
+      </AuthCard>
+    );
+  }
   const generalError =
     signUp.error instanceof ApiError && !["invalid_input", "email_taken"].includes(signUp.error.id)
       ? signUp.error

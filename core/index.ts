@@ -51,8 +51,14 @@ export type { PlaneStressResult } from "./plane/plane-stress";
 export { planeStress, transformPlaneStress } from "./plane/plane-stress";
 export type { PlanePrincipal, PrincipalIndex } from "./plane/plane-principal";
 export { planePrincipal, zIsPrincipal } from "./plane/plane-principal";
-export type { Criterion, Material } from "./criteria/safety-factor";
-export { CRITERIA, safetyFactor } from "./criteria/safety-factor";
+export type { Criterion, Material, MaterialBehaviour, StrengthKey } from "./criteria/safety-factor";
+export {
+  CRITERIA,
+  safetyFactor,
+  factorFromPrincipals,
+  strengthsFor,
+  modifiedMohrRefusal,
+} from "./criteria/safety-factor";
 export type {
   DecimalMark,
   ListingPoint,
@@ -82,13 +88,34 @@ export { PUBLISHED_MATERIALS, FROM_MEMORY_NOTE, publishedMaterial } from "./mate
 
 export type { CombinationTerm } from "./checks/combine";
 export { combineLoadCases } from "./checks/combine";
-export type { CheckRequirement, CriterionCheck, StateEvaluation } from "./checks/evaluate";
-export { evaluateState } from "./checks/evaluate";
+export type {
+  CriterionCheck,
+  EvaluatedCheck,
+  EvaluationOptions,
+  EvaluationSpec,
+  StateEvaluation,
+} from "./checks/evaluate";
+export { evaluateBatch, evaluateState, evaluateStates, moreCritical } from "./checks/evaluate";
 export type { ComparisonRow, Governing } from "./checks/governing";
-export { findGoverning } from "./checks/governing";
-export { missingStrengths } from "./checks/requirements";
+export { findGoverning, findOverallGoverning } from "./checks/governing";
+export type { Allowables, CategoryFactors, CheckRequirement } from "./checks/requirements";
+export { categoryKey, missingStrengths, requirementsFor } from "./checks/requirements";
+export type { BehaviourFinding } from "./checks/applicability";
+export {
+  BRITTLE_CRITERIA,
+  DUCTILE_CRITERIA,
+  materialBehaviour,
+  unsuitedReason,
+} from "./checks/applicability";
 export type { Verdict } from "./checks/verdict";
-export { CLOSE_BAND, CLOSE_UTILISATION, utilisation, verdictForFactor } from "./checks/verdict";
+export {
+  CLOSE_BAND,
+  CLOSE_UTILISATION,
+  EDGE_REL_TOL,
+  utilisation,
+  verdictForFactor,
+  verdictForUtilisation,
+} from "./checks/verdict";
 
 export type {
   ThinWallForm,

@@ -1,5 +1,5 @@
 import type { Criterion } from "../criteria/safety-factor";
-import type { CriterionCheck, StateEvaluation } from "./evaluate";
+import { moreCritical, type EvaluatedCheck, type StateEvaluation } from "./evaluate";
 
 /** One row of a comparison: a load case (or combination) at a location, evaluated. */
 export type ComparisonRow<Id = string> = { caseId: Id; locationId: Id; evaluation: StateEvaluation };
@@ -9,18 +9,16 @@ export type Governing<Id = string> = {
   criterion: Criterion;
   caseId: Id;
   locationId: Id;
-  check: Extract<CriterionCheck, { factor: number }>;
+  check: EvaluatedCheck;
 };
 
-function evaluatedCheck(row: ComparisonRow<unknown>, criterion: Criterion) {
-  const check = row.evaluation.checks.find((c) => c.criterion === criterion);
-  return check && "factor" in check ? check : null;
-}
-
 /**
- * The governing row for each criterion: the highest utilisation (the smallest margin against
- * the required factor). Ties go to the row that comes first, so the order of the input is
- * the tie-break the caller chooses. Criteria no row could evaluate are left out.
+ * The governing row for each criterion, by the one rule of `moreCritical` (the highest
+ * utilisation, i.e. the smallest margin against the factor required of that row — which may
+ * differ per load-case category). Ties go to the row that comes first, so the order of the
+ * input is the tie-break the caller chooses. Checks that were not rated (missing strengths,
+ * criteria that do not suit the material unless the caller asked for them, refused materials)
+ * take no part; criteria no row could rate are left out.
  * @param rows evaluated rows, any number of cases × locations
  * @param locationId when given, only rows at this location compete
  */
@@ -29,18 +27,32 @@ export function findGoverning<Id>(rows: readonly ComparisonRow<Id>[], locationId
   for (const row of rows) {
     if (locationId !== undefined && row.locationId !== locationId) continue;
     for (const check of row.evaluation.checks) {
-      const evaluated = evaluatedCheck(row, check.criterion);
-      if (!evaluated) continue;
+      if (check.status !== "evaluated") continue;
       const current = best.get(check.criterion);
-      if (!current || evaluated.utilisation > current.check.utilisation) {
+      if (moreCritical(check, current?.check ?? null)) {
         best.set(check.criterion, {
           criterion: check.criterion,
           caseId: row.caseId,
           locationId: row.locationId,
-          check: evaluated,
+          check,
         });
       }
     }
   }
   return [...best.values()];
+}
+
+/**
+ * The single governing check over rows and criteria, by the same rule (ties: the first row, then
+ * the first criterion in its list), or null when nothing was rated.
+ */
+export function findOverallGoverning<Id>(rows: readonly ComparisonRow<Id>[]): Governing<Id> | null {
+  let top: Governing<Id> | null = null;
+  for (const row of rows) {
+    const g = row.evaluation.governing;
+    if (g && moreCritical(g, top?.check ?? null)) {
+      top = { criterion: g.criterion, caseId: row.caseId, locationId: row.locationId, check: g };
+    }
+  }
+  return top;
 }

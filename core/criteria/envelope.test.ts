@@ -31,4 +31,14 @@ describe("failure envelopes in the σA–σB plane", () => {
     expect(envelopeHit(0, 0, "von-mises", { yield: 355 })).toBeNull();
     expect(() => envelopeInPlane("tresca", {})).toThrow(/material.yield/);
   });
+
+  it("when modified Mohr is drawn for a material with Suc < Sut, then no envelope is drawn and the refusal says why (Shigley's Mechanical Engineering Design: modified Mohr is stated for Suc ≥ Sut; recalled from memory)", () => {
+    const weakInCompression = { ultimateTension: 700, ultimateCompression: 200 };
+    expect(() => envelopeInPlane("modified-mohr", weakInCompression)).toThrow(/Suc ≥ Sut/);
+    expect(() => envelopeHit(200, -200, "modified-mohr", weakInCompression)).toThrow(/Suc 200 < Sut 700/);
+    // Suc = Sut is still accepted: the criterion then coincides with maximum principal.
+    expect(
+      envelopeHit(200, -200, "modified-mohr", { ultimateTension: 400, ultimateCompression: 400 })?.n,
+    ).toBeCloseTo(2, 12);
+  });
 });

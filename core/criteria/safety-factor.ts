@@ -15,13 +15,25 @@ export const CRITERIA: readonly Criterion[] = [
   "modified-mohr",
 ];
 
+/** How a material fails: by yielding (ductile) or by fracture without much yielding (brittle). */
+export type MaterialBehaviour = "ductile" | "brittle";
+
 /**
  * Material strengths, in the same stress unit as the tensor, all positive (a compressive strength is
- * given as a positive magnitude).
+ * given as a positive magnitude), and optionally whether the material is ductile or brittle (stated
+ * by the data or chosen by the user; see `materialBehaviour` in checks for the rule when absent).
  */
-export type Material = { yield?: number; ultimateTension?: number; ultimateCompression?: number };
+export type Material = {
+  yield?: number;
+  ultimateTension?: number;
+  ultimateCompression?: number;
+  behaviour?: MaterialBehaviour;
+};
 
-function strength(material: Material, key: keyof Material, criterion: Criterion): number {
+/** The strengths of a material (every key of `Material` but its behaviour). */
+export type StrengthKey = "yield" | "ultimateTension" | "ultimateCompression";
+
+function strength(material: Material, key: StrengthKey, criterion: Criterion): number {
   const v = material[key];
   if (v === undefined) throw new RangeError(`criterion "${criterion}" needs material.${key}`);
   if (typeof v !== "number" || !Number.isFinite(v) || v <= 0) {
@@ -45,52 +57,104 @@ function strength(material: Material, key: keyof Material, criterion: Criterion)
  *   `ultimateTension` St and `ultimateCompression` Sc; pass yield strengths Syt, Syc there for the
  *   ductile Coulomb–Mohr form);
  * - "modified-mohr": n = St/σ1 when σ3 ≥ −σ1 (and σ1 > 0); when σ1 ≥ 0 ≥ σ3 and −σ3 > σ1,
- *   1/n = (Sc − St)σ1/(Sc·St) − σ3/Sc; n = Sc/(−σ3) when σ1 ≤ 0 (needs St and Sc).
+ *   1/n = (Sc − St)σ1/(Sc·St) − σ3/Sc; n = Sc/(−σ3) when σ1 ≤ 0 (needs St and Sc, with Sc ≥ St:
+ *   the criterion is built for materials stronger in compression, and with Sc < St its second
+ *   branch would rate a state safe that already reaches Sc, so such a material is refused).
  * @param s stress tensor (same unit as the strengths)
  * @param criterion one of {@link CRITERIA}
  * @param material strengths, positive, same unit as `s`
  * @returns n > 0, dimensionless (Infinity when the state never reaches the surface)
- * @throws RangeError for an unknown criterion or a missing or invalid strength the criterion needs
+ * @throws RangeError for an unknown criterion, a missing or invalid strength the criterion needs, or
+ *   a material modified Mohr does not apply to (Suc < Sut)
  */
 export function safetyFactor(s: StressTensor, criterion: Criterion, material: Material): number {
   assertTensor(s);
+  if (criterion === "von-mises") {
+    const sy = strengthsFor(criterion, material).yield!;
+    return sy / vonMisesOf(s.xx, s.yy, s.zz, s.xy, s.yz, s.zx);
+  }
+  const [s1, , s3] = principalValues(s);
+  return factorFromPrincipals(criterion, material, s1, s3, NaN);
+}
+
+/** The message with which modified Mohr refuses a material weaker in compression than in tension. */
+export function modifiedMohrRefusal(st: number, sc: number): string {
+  return (
+    `modified Mohr assumes a compressive strength at least equal to the tensile one ` +
+    `(Suc ≥ Sut); this material has Suc ${sc} < Sut ${st}, where the criterion would overrate ` +
+    `the margin — use Mohr–Coulomb or maximum principal for it`
+  );
+}
+
+/**
+ * The strengths `criterion` uses, checked (positive, finite, and Suc ≥ Sut for modified Mohr).
+ * @throws RangeError naming the strength that is missing or invalid, or the modified-Mohr refusal
+ */
+export function strengthsFor(
+  criterion: Criterion,
+  material: Material,
+): Required<Omit<Material, "behaviour">> {
   if (typeof material !== "object" || material === null) throw new TypeError("material must be an object");
   switch (criterion) {
-    case "von-mises": {
-      const sy = strength(material, "yield", criterion);
-      return sy / vonMisesOf(s.xx, s.yy, s.zz, s.xy, s.yz, s.zx);
-    }
-    case "tresca": {
-      const sy = strength(material, "yield", criterion);
-      const [s1, , s3] = principalValues(s);
-      return sy / (s1 - s3);
-    }
+    case "von-mises":
+    case "tresca":
+      return {
+        yield: strength(material, "yield", criterion),
+        ultimateTension: NaN,
+        ultimateCompression: NaN,
+      };
     case "max-principal": {
       const st = strength(material, "ultimateTension", criterion);
       const sc =
         material.ultimateCompression === undefined
           ? st
           : strength(material, "ultimateCompression", criterion);
-      const [s1, , s3] = principalValues(s);
-      return 1 / Math.max(Math.max(s1, 0) / st, Math.max(-s3, 0) / sc);
+      return { yield: NaN, ultimateTension: st, ultimateCompression: sc };
     }
-    case "mohr-coulomb": {
-      const st = strength(material, "ultimateTension", criterion);
-      const sc = strength(material, "ultimateCompression", criterion);
-      const [s1, , s3] = principalValues(s);
-      return 1 / (Math.max(s1, 0) / st - Math.min(s3, 0) / sc);
-    }
+    case "mohr-coulomb":
     case "modified-mohr": {
       const st = strength(material, "ultimateTension", criterion);
       const sc = strength(material, "ultimateCompression", criterion);
-      const [s1, , s3] = principalValues(s);
-      if (s1 <= 0) return sc / Math.max(-s3, 0);
-      if (s3 >= -s1) return st / s1;
-      return 1 / (((sc - st) * s1) / (sc * st) - s3 / sc);
+      if (criterion === "modified-mohr" && sc < st) throw new RangeError(modifiedMohrRefusal(st, sc));
+      return { yield: NaN, ultimateTension: st, ultimateCompression: sc };
     }
     default:
       throw new RangeError(
         `unknown criterion ${JSON.stringify(criterion)}; expected one of ${CRITERIA.join(", ")}`,
       );
+  }
+}
+
+/**
+ * The safety factor of {@link safetyFactor} from values already computed (so a batch kernel's
+ * principal stresses and von Mises stresses can be rated without a second eigen-solve).
+ * @param criterion one of {@link CRITERIA}
+ * @param material strengths, same unit as the stresses
+ * @param s1 largest principal stress σ1
+ * @param s3 smallest principal stress σ3
+ * @param vonMises von Mises stress of the state (used by "von-mises" only)
+ * @throws RangeError as {@link strengthsFor}
+ */
+export function factorFromPrincipals(
+  criterion: Criterion,
+  material: Material,
+  s1: number,
+  s3: number,
+  vonMises: number,
+): number {
+  const { yield: sy, ultimateTension: st, ultimateCompression: sc } = strengthsFor(criterion, material);
+  switch (criterion) {
+    case "von-mises":
+      return sy / vonMises;
+    case "tresca":
+      return sy / (s1 - s3);
+    case "max-principal":
+      return 1 / Math.max(Math.max(s1, 0) / st, Math.max(-s3, 0) / sc);
+    case "mohr-coulomb":
+      return 1 / (Math.max(s1, 0) / st - Math.min(s3, 0) / sc);
+    case "modified-mohr":
+      if (s1 <= 0) return sc / Math.max(-s3, 0);
+      if (s3 >= -s1) return st / s1;
+      return 1 / (((sc - st) * s1) / (sc * st) - s3 / sc);
   }
 }

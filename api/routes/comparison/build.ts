@@ -37,12 +37,12 @@ export const STRENGTHS_CAUTION =
   "Safety factors are against the strengths shown; published minimum values must be verified against the material certificate.";
 
 function checkView(c: CriterionCheck): ComparisonCheck {
-  if ("missing" in c) {
+  if (c.status !== "evaluated") {
     return {
       status: "not-evaluated",
       criterion: c.criterion,
       requiredFactor: c.requiredFactor,
-      missing: c.missing,
+      missing: c.status === "not-evaluated" ? c.missing : [],
     };
   }
   return {

@@ -1,12 +1,10 @@
-import { spawn } from "node:child_process";
-import { existsSync } from "node:fs";
-import { chmod, mkdtemp, readFile } from "node:fs/promises";
+import { chmod, mkdtemp } from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
 import pg from "pg";
 import { afterAll, describe, expect, it } from "vitest";
 import { removeCluster, startCluster } from "../../db/cluster";
-import { repoRoot } from "../../scripts/web-build";
+import { livePostmasterPid, runServeUntilUp } from "./serve-process";
 
 async function query<T extends pg.QueryResultRow>(url: string, sql: string, values: unknown[] = []) {
   const client = new pg.Client({ connectionString: url });
@@ -18,17 +16,8 @@ async function query<T extends pg.QueryResultRow>(url: string, sql: string, valu
   }
 }
 
-/** True while a postmaster runs on this data folder (its pid file names a live process). */
 async function postmasterRunning(dataDir: string): Promise<boolean> {
-  const pidFile = path.join(dataDir, "postmaster.pid");
-  if (!existsSync(pidFile)) return false;
-  const pid = Number((await readFile(pidFile, "utf8")).split("\n")[0]);
-  try {
-    process.kill(pid, 0);
-    return true;
-  } catch {
-    return false;
-  }
+  return (await livePostmasterPid(dataDir)) !== null;
 }
 
 describe("the private cluster, as npm start runs it", () => {
@@ -100,27 +89,3 @@ describe("the private cluster, as npm start runs it", () => {
     },
   );
 });
-
-/** Starts scripts/serve.ts the way `npm start` does, on a free port, and waits for its URL line. */
-function runServeUntilUp(dataDir: string) {
-  const child = spawn(process.execPath, ["--import", "tsx", "scripts/serve.ts"], {
-    cwd: repoRoot,
-    env: { ...process.env, SIGMACUBE_DATA_DIR: dataDir, PORT: "0", LOG_LEVEL: "silent", DATABASE_URL: "" },
-  });
-  let output = "";
-  const exited = new Promise<{ code: number | null; output: string }>((resolve) =>
-    child.on("exit", (code) => resolve({ code, output })),
-  );
-  return new Promise<{ url: string; interrupt: () => Promise<{ code: number | null; output: string }> }>(
-    (resolve, reject) => {
-      const onData = (chunk: Buffer) => {
-        output += chunk.toString();
-        const match = /running at (http:\/\/\S+)/.exec(output);
-        if (match) resolve({ url: match[1], interrupt: () => (child.kill("SIGINT"), exited) });
-      };
-      child.stdout.on("data", onData);
-      child.stderr.on("data", onData);
-      void exited.then(() => reject(new Error(`serve.ts exited before it was up:\n${output}`)));
-    },
-  );
-}

@@ -42,12 +42,10 @@ export const envSchema = z.object({
     )
     .pipe(
       z.array(
-        z
-          .string()
-          .refine(isProxySpec, {
-            error: (issue) =>
-              `"${String(issue.input)}" is not an address, a CIDR range or loopback/linklocal/uniquelocal`,
-          }),
+        z.string().refine(isProxySpec, {
+          error: (issue) =>
+            `"${String(issue.input)}" is not an address, a CIDR range or loopback/linklocal/uniquelocal`,
+        }),
       ),
     )
     .default([]),

@@ -5,18 +5,39 @@ import { PasswordResetToken } from "../../db/models/password-reset-token";
 import { Session } from "../../db/models/session";
 import { User } from "../../db/models/user";
 import { buildTestApp, TEST_ORIGIN } from "../support/app";
-import { browserAgent, sessionCookieOf, signUp, TEST_PASSWORD, uniqueEmail } from "../support/accounts";
+import {
+  browserAgent,
+  confirmationToken,
+  sessionCookieOf,
+  signUp,
+  TEST_PASSWORD,
+  uniqueEmail,
+} from "../support/accounts";
 import { linkIn, mailCount, waitForMail } from "../support/mailbox";
 
 const { app, close } = buildTestApp();
 afterAll(close);
 
+/**
+ * Signs up through `target` and opens the confirmation link in the same agent; returns the
+ * link's answer. The mail is read through the test app's mailbox (a production app has
+ * none; both fake mail servers store in the same table).
+ */
+async function signUpAndConfirm(target: typeof app, name: string, email: string) {
+  const agent = browserAgent(target);
+  const answer = await agent
+    .post("/api/auth/sign-up")
+    .send({ name, email, password: TEST_PASSWORD })
+    .expect(202);
+  // Sign-up itself signs nobody in: the same answer goes to an address that has an account.
+  expect(sessionCookieOf(answer)).toBeNull();
+  const token = await confirmationToken(app, email);
+  return agent.post("/api/auth/verify-email").send({ token }).expect(200);
+}
+
 describe("sign-up and the session cookie", () => {
-  it("when someone signs up, then the cookie is HttpOnly, SameSite=Lax, path / and not Secure over plain-http tests", async () => {
-    const response = await browserAgent(app)
-      .post("/api/auth/sign-up")
-      .send({ name: "Mira Castellan", email: uniqueEmail("mira"), password: TEST_PASSWORD })
-      .expect(201);
+  it("when someone confirms their sign-up, then the cookie is HttpOnly, SameSite=Lax, path / and not Secure over plain-http tests", async () => {
+    const response = await signUpAndConfirm(app, "Mira Castellan", uniqueEmail("mira"));
     const cookie = ([] as string[])
       .concat(response.headers["set-cookie"] ?? [])
       .find((c) => c.startsWith("sigmacube_session="))!;
@@ -31,10 +52,7 @@ describe("sign-up and the session cookie", () => {
     // Sequelize models are module-wide: this second app's pool stays open until the file ends.
     const production = buildTestApp({ nodeEnv: "production" });
     afterAll(production.close);
-    const response = await browserAgent(production.app)
-      .post("/api/auth/sign-up")
-      .send({ name: "Teo Valdric", email: uniqueEmail("teo"), password: TEST_PASSWORD })
-      .expect(201);
+    const response = await signUpAndConfirm(production.app, "Teo Valdric", uniqueEmail("teo"));
     expect(([] as string[]).concat(response.headers["set-cookie"] ?? []).join("\n")).toMatch(
       /sigmacube_session=\w+.*; Secure/i,
     );
@@ -74,18 +92,45 @@ describe("sign-up and the session cookie", () => {
     );
   });
 
-  it("when an address is used again in other letter case, then sign-up is a 409 and sign-in accepts either case", async () => {
+  it("when an address is used again in other letter case, then sign-up answers as for a new address, mails a reminder, and the account is unchanged", async () => {
     const email = uniqueEmail("Ines");
-    await signUp(app, { email });
+    const first = await signUp(app, { email, name: "Ines Okafor-Lund" });
     const again = await browserAgent(app)
       .post("/api/auth/sign-up")
-      .send({ name: "Ines again", email: email.toUpperCase(), password: TEST_PASSWORD })
-      .expect(409);
-    expect(again.body.error.id).toBe("email_taken");
+      .send({ name: "Ines again", email: email.toUpperCase(), password: "another passphrase" })
+      .expect(202);
+    expect(sessionCookieOf(again)).toBeNull();
+    const reminder = await waitForMail(app, email, { subject: /already have an account/ });
+    expect(reminder.text).toContain("Hello Ines Okafor-Lund");
+    expect(await User.count({ where: { email: [email, email.toUpperCase()] } })).toBe(1);
+    expect((await User.findByPk(first.user.id))!.name).toBe("Ines Okafor-Lund");
     await browserAgent(app)
       .post("/api/auth/sign-in")
       .send({ email: email.toUpperCase(), password: TEST_PASSWORD })
       .expect(200);
+    await browserAgent(app)
+      .post("/api/auth/sign-in")
+      .send({ email, password: "another passphrase" })
+      .expect(401);
+  });
+
+  it("when a confirmation link is opened twice or was never issued, then it is a 400 on the token field", async () => {
+    const email = uniqueEmail("twice");
+    await browserAgent(app)
+      .post("/api/auth/sign-up")
+      .send({ name: "Twice", email, password: TEST_PASSWORD })
+      .expect(202);
+    const token = await confirmationToken(app, email);
+    await browserAgent(app).post("/api/auth/verify-email").send({ token }).expect(200);
+    const reuse = await browserAgent(app).post("/api/auth/verify-email").send({ token }).expect(400);
+    expect(reuse.body.error.details).toEqual([
+      { path: "token", message: expect.stringMatching(/used already/) },
+    ]);
+    const unknown = await browserAgent(app)
+      .post("/api/auth/verify-email")
+      .send({ token: "B".repeat(43) })
+      .expect(400);
+    expect(unknown.body.error.details[0].path).toBe("token");
   });
 });
 

@@ -1,7 +1,15 @@
 import { afterAll, describe, expect, it } from "vitest";
 import { Invitation } from "../../db/models/invitation";
+import { User } from "../../db/models/user";
 import { buildTestApp, TEST_ORIGIN } from "../support/app";
-import { browserAgent, createWorkspace, signUp, uniqueEmail } from "../support/accounts";
+import {
+  browserAgent,
+  createWorkspace,
+  sessionCookieOf,
+  signUp,
+  TEST_PASSWORD,
+  uniqueEmail,
+} from "../support/accounts";
 import { linkIn, waitForMail } from "../support/mailbox";
 
 const { app, close } = buildTestApp();
@@ -133,5 +141,88 @@ describe("invitations end to end through the fake SMTP server", () => {
       "email",
       "role",
     ]);
+  });
+});
+
+describe("only a confirmed address accepts an invitation", () => {
+  it("when an account that never confirmed its address accepts, then it is refused and mailed a link that leads back, after which accepting works", async () => {
+    const { workspaceId, email, token } = await invite("editor");
+    // Signed up, never opened the confirmation mail, signed in with the password.
+    await browserAgent(app)
+      .post("/api/auth/sign-up")
+      .send({ name: "Pim Osterlund", email, password: TEST_PASSWORD })
+      .expect(202);
+    await waitForMail(app, email, { subject: /confirm your e-mail address/ });
+    const agent = browserAgent(app);
+    await agent.post("/api/auth/sign-in").send({ email, password: TEST_PASSWORD }).expect(200);
+    const asked = new Date();
+    const refused = await agent.post(`/api/invitations/${token}/accept`).expect(403);
+    expect(refused.body.error.id).toBe("email_not_verified");
+    expect(refused.body.error.message).toContain(email);
+    await agent.get(`/api/workspaces/${workspaceId}`).expect(404);
+
+    const mail = await waitForMail(app, email, { subject: /confirm your e-mail address/, after: asked });
+    const confirmToken = linkIn(mail, "/verify-email/").pathname.split("/").pop()!;
+    const confirmed = await agent.post("/api/auth/verify-email").send({ token: confirmToken }).expect(200);
+    expect(confirmed.body.next).toBe(`/invitations/${token}`);
+    const accepted = await agent.post(`/api/invitations/${token}/accept`).expect(200);
+    expect(accepted.body).toMatchObject({ workspaceId, role: "editor" });
+  });
+
+  it("when someone signs up from the invitation link with the invited address, then they are signed in at once with a confirmed address and can accept", async () => {
+    const { workspaceId, email, token } = await invite("viewer");
+    const agent = browserAgent(app);
+    const created = await agent
+      .post("/api/auth/sign-up")
+      .send({
+        name: "Sam Pellworth",
+        email: email.toUpperCase(),
+        password: TEST_PASSWORD,
+        invitationToken: token,
+      })
+      .expect(201);
+    expect(sessionCookieOf(created)).not.toBeNull();
+    const row = await User.findByPk(created.body.user.id);
+    expect(row!.emailVerifiedAt).toBeInstanceOf(Date);
+    await agent.post(`/api/invitations/${token}/accept`).expect(200);
+    await agent.get(`/api/workspaces/${workspaceId}`).expect(200);
+
+    // The link proves the address, so saying it has an account now tells its holder nothing new.
+    const again = await browserAgent(app)
+      .post("/api/auth/sign-up")
+      .send({ name: "Sam again", email, password: TEST_PASSWORD, invitationToken: token })
+      .expect(202);
+    expect(sessionCookieOf(again)).toBeNull();
+  });
+
+  it("when an invitation token comes with another address, then sign-up is the plain check-your-mail answer and the address stays unconfirmed", async () => {
+    const { token } = await invite();
+    const other = uniqueEmail("other");
+    const answer = await browserAgent(app)
+      .post("/api/auth/sign-up")
+      .send({ name: "Eve", email: other, password: TEST_PASSWORD, invitationToken: token })
+      .expect(202);
+    expect(sessionCookieOf(answer)).toBeNull();
+    await waitForMail(app, other, { subject: /confirm your e-mail address/ });
+    expect((await User.findOne({ where: { email: other } }))!.emailVerifiedAt).toBeNull();
+  });
+
+  it("when the invited address has an account already and signs up from the link, then it is told to sign in (409)", async () => {
+    const owner = await signUp(app, { name: "Mira Castellan" });
+    const workspaceId = await createWorkspace(owner);
+    const existing = await signUp(app);
+    // Invite an address whose account is not a member yet.
+    await owner.agent
+      .post(`/api/workspaces/${workspaceId}/invitations`)
+      .send({ email: existing.email, role: "viewer" })
+      .expect(201);
+    const token = linkIn(await waitForMail(app, existing.email, { subject: /invited you/ }), "/invitations/")
+      .pathname.split("/")
+      .pop()!;
+    const taken = await browserAgent(app)
+      .post("/api/auth/sign-up")
+      .send({ name: "Again", email: existing.email, password: TEST_PASSWORD, invitationToken: token })
+      .expect(409);
+    expect(taken.body.error.id).toBe("email_taken");
   });
 });

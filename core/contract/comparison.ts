@@ -1,5 +1,11 @@
 import { z } from "zod";
-import { CRITERION_LABELS, criterionSchema, requirementSchema, type CriterionName } from "./projects";
+import {
+  CRITERION_LABELS,
+  categoryRequirementSchema,
+  criterionSchema,
+  requirementSchema,
+  type CriterionName,
+} from "./projects";
 
 /**
  * The comparison: every load case and combination at every location, evaluated against the
@@ -12,22 +18,38 @@ import { CRITERION_LABELS, criterionSchema, requirementSchema, type CriterionNam
 export const verdictSchema = z.enum(["pass", "close", "fail"]);
 export type VerdictName = z.infer<typeof verdictSchema>;
 
+/** The load-case category whose factor a check used, or null for the project-wide default. */
+const allowableCategory = z.string().nullable();
+
 export const comparisonCheckSchema = z.discriminatedUnion("status", [
   z.object({
     status: z.literal("evaluated"),
     criterion: criterionSchema,
     requiredFactor: z.number(),
+    category: allowableCategory,
     /** null: infinite (the state never reaches the surface). */
     factor: z.number().nullable(),
     utilisation: z.number(),
     verdict: verdictSchema,
+    /** Why the criterion does not suit the material, when the project asked to rate it anyway; else null. */
+    unsuited: z.string().nullable(),
   }),
   z.object({
     status: z.literal("not-evaluated"),
     criterion: criterionSchema,
     requiredFactor: z.number(),
-    /** Strengths the material lacks for this criterion. */
+    category: allowableCategory,
+    /** Strengths the material lacks for this criterion (empty when the reason is another). */
     missing: z.array(z.string()),
+    reason: z.string(),
+  }),
+  z.object({
+    /** The criterion does not suit the material (ductile vs brittle); left out of the governing search. */
+    status: z.literal("not-applicable"),
+    criterion: criterionSchema,
+    requiredFactor: z.number(),
+    category: allowableCategory,
+    reason: z.string(),
   }),
 ]);
 export type ComparisonCheck = z.infer<typeof comparisonCheckSchema>;
@@ -44,6 +66,11 @@ export const comparisonRowSchema = z.object({
   /** The case's version and the state's revision (load cases only), for opening in the bench. */
   caseVersion: z.int(),
   stateRevision: z.int().nullable(),
+  /**
+   * The allowables the row was checked against: its category's factors (`category`) or the
+   * project default (null; also for combinations, which have no category). `label` says it in words.
+   */
+  allowable: z.object({ category: z.string().nullable(), label: z.string() }),
   material: z.object({
     label: z.string(),
     kind: z.enum(["published", "workspace", "none"]),
@@ -72,6 +99,8 @@ export const governingSchema = z.object({
   locationName: z.string(),
   factor: z.number().nullable(),
   requiredFactor: z.number(),
+  /** The category whose factor was required, or null for the project default. */
+  category: z.string().nullable(),
   utilisation: z.number(),
   verdict: verdictSchema,
 });
@@ -79,10 +108,17 @@ export type GoverningView = z.infer<typeof governingSchema>;
 
 export const comparisonSchema = z.object({
   projectId: z.uuid(),
+  /** The project-wide default factors (every criterion checked). */
   requirements: z.array(requirementSchema),
+  /** Per load-case category, the factors that replace the default's. */
+  categoryRequirements: z.array(categoryRequirementSchema),
+  /** Whether criteria that do not suit a material were rated and could govern (the project's choice). */
+  includeUnsuitedCriteria: z.boolean(),
   rows: z.array(comparisonRowSchema),
   /** Per criterion, over every row. */
   governing: z.array(governingSchema),
+  /** The one check that governs over every row and criterion (core's rule), or null with nothing rated. */
+  governingOverall: governingSchema.nullable(),
   /** Per location, per criterion. */
   governingByLocation: z.array(
     z.object({ locationId: z.uuid(), locationName: z.string(), governing: z.array(governingSchema) }),
@@ -100,22 +136,20 @@ export function formatFactor(factor: number | null): string {
   return factor === null ? "∞" : factor.toFixed(2);
 }
 
-/** The governing check in one line, as a calculation sheet states it. */
-export function governingSentence(
-  g: Pick<GoverningView, "criterion" | "caseName" | "locationName" | "factor" | "requiredFactor">,
-): string {
-  const label = CRITERION_LABELS[g.criterion as CriterionName];
-  return `${g.caseName} at ${g.locationName}, ${label}, SF ${formatFactor(g.factor)} against ${g.requiredFactor} required`;
+/** Where a required factor comes from, in words: "the test factors" or "the project default". */
+export function allowableLabel(category: string | null): string {
+  return category === null ? "the project default" : `the “${category}” factors`;
 }
 
-/**
- * The summary line: the governing check with the highest utilisation over every criterion
- * (ties: the order of `governing`), or null when nothing could be evaluated.
- */
-export function governingSummary(governing: readonly GoverningView[]): string | null {
-  let top: GoverningView | null = null;
-  for (const g of governing) if (!top || g.utilisation > top.utilisation) top = g;
-  return top ? `governs: ${governingSentence(top)}` : null;
+/** The governing check in one line, as a calculation sheet states it. */
+export function governingSentence(
+  g: Pick<
+    GoverningView,
+    "criterion" | "caseName" | "locationName" | "factor" | "requiredFactor" | "category"
+  >,
+): string {
+  const label = CRITERION_LABELS[g.criterion as CriterionName];
+  return `${g.caseName} at ${g.locationName}, ${label}, SF ${formatFactor(g.factor)} against ${g.requiredFactor} required (${allowableLabel(g.category)})`;
 }
 
 export const comparisonParamsSchema = z.object({

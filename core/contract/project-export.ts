@@ -2,7 +2,12 @@ import { z } from "zod";
 import { stateSourceSchema } from "./load-cases";
 import { finiteNumber, stressPaValue, stressUnitSchema } from "./materials";
 import { MAX_COMBINATION_FACTOR } from "./combinations";
-import { requirementSchema, unitSystemSchema } from "./projects";
+import {
+  categoryRequirementIssues,
+  categoryRequirementsSchema,
+  requirementSchema,
+  unitSystemSchema,
+} from "./projects";
 
 /**
  * The project export file (documented in docs/project-export.md). Its own versioned schema:
@@ -14,7 +19,10 @@ import { requirementSchema, unitSystemSchema } from "./projects";
  */
 
 export const PROJECT_EXPORT_FORMAT = "sigmacube.project";
-export const PROJECT_EXPORT_SCHEMA_VERSION = 1;
+/** The version this Sigmacube writes. */
+export const PROJECT_EXPORT_SCHEMA_VERSION = 2;
+/** Every version this Sigmacube reads (1: before allowables per load-case category). */
+export const READABLE_SCHEMA_VERSIONS = [1, 2] as const;
 
 const key = z.string({ error: "must be a key (text)" }).min(1, "must not be empty").max(100);
 // PostgreSQL text cannot hold U+0000; refuse it here with the field named rather than fail on insert.
@@ -71,15 +79,20 @@ const exportStateSchema = z.object({
 
 const baseSchema = z.object({
   format: z.literal(PROJECT_EXPORT_FORMAT, { error: `must be "${PROJECT_EXPORT_FORMAT}"` }),
-  schemaVersion: z.literal(PROJECT_EXPORT_SCHEMA_VERSION, {
-    error: `must be ${PROJECT_EXPORT_SCHEMA_VERSION} (the only version this Sigmacube reads)`,
+  schemaVersion: z.literal(READABLE_SCHEMA_VERSIONS, {
+    error: `must be ${READABLE_SCHEMA_VERSIONS.join(" or ")} (the versions this Sigmacube reads)`,
   }),
   exportedAt: z.iso.datetime({ error: "must be an ISO date-time" }),
   project: z.object({
     name: text(150).trim().min(1, "Name the project."),
     description: text(4000),
     unitSystem: unitSystemSchema,
+    /** The project-wide default factors. */
     requirements: z.array(requirementSchema).min(1, "Check at least one criterion."),
+    /** schemaVersion 2: per load-case category, the factors that replace the default's. */
+    categoryRequirements: categoryRequirementsSchema.optional(),
+    /** schemaVersion 2: rate criteria that do not suit a material and let them govern. */
+    includeUnsuitedCriteria: z.boolean({ error: "must be true or false" }).optional(),
     defaultMaterial: exportMaterialRefSchema.nullable(),
   }),
   materials: z.array(exportMaterialSchema).max(500),
@@ -198,7 +211,32 @@ function crossReferenceIssues(
       });
     seenCriteria.add(r.criterion);
   });
+  if (file.schemaVersion >= 2) {
+    for (const field of ["categoryRequirements", "includeUnsuitedCriteria"] as const) {
+      if (file.project[field] === undefined) {
+        issues.push({ path: ["project", field], message: "is required from schemaVersion 2 on" });
+      }
+    }
+  }
+  for (const issue of categoryRequirementIssues(
+    file.project.requirements,
+    file.project.categoryRequirements ?? [],
+  )) {
+    issues.push({ path: ["project", ...issue.path], message: issue.message });
+  }
   return issues;
+}
+
+/** A file of any readable version in today's layout (a version-1 file has no category factors). */
+function upgrade(file: z.infer<typeof baseSchema>) {
+  return {
+    ...file,
+    project: {
+      ...file.project,
+      categoryRequirements: file.project.categoryRequirements ?? [],
+      includeUnsuitedCriteria: file.project.includeUnsuitedCriteria ?? false,
+    },
+  };
 }
 
 /**
@@ -206,14 +244,18 @@ function crossReferenceIssues(
  * server also refuse references to built-in grades it does not have.
  */
 export function projectExportSchemaWith(publishedIds: ReadonlySet<string> | null) {
-  return baseSchema.superRefine((file, ctx) => {
-    for (const issue of crossReferenceIssues(file, publishedIds)) ctx.addIssue({ code: "custom", ...issue });
-  });
+  return baseSchema
+    .superRefine((file, ctx) => {
+      for (const issue of crossReferenceIssues(file, publishedIds))
+        ctx.addIssue({ code: "custom", ...issue });
+    })
+    .transform(upgrade);
 }
 
 /** The export file schema without the check against the built-in list. */
 export const projectExportSchema = projectExportSchemaWith(null);
-export type ProjectExport = z.infer<typeof baseSchema>;
+/** A file as read: any readable version, in today's layout. */
+export type ProjectExport = z.output<typeof projectExportSchema>;
 
 export const importResponseSchema = z.object({
   project: z.object({ id: z.uuid(), name: z.string() }),

@@ -28,16 +28,18 @@ export const CRITERION_LABELS: Readonly<Record<CriterionName, string>> = {
   "modified-mohr": "modified Mohr",
 };
 
+const requiredFactorSchema = z
+  .number({ error: "must be a number" })
+  .refine((v) => Number.isFinite(v) && v > 0, { message: "must be a positive finite number" });
+
 /** A criterion to check and the safety factor the project requires with it. */
 export const requirementSchema = z.object({
   criterion: criterionSchema,
-  requiredFactor: z
-    .number({ error: "must be a number" })
-    .refine((v) => Number.isFinite(v) && v > 0, { message: "must be a positive finite number" }),
+  requiredFactor: requiredFactorSchema,
 });
 export type Requirement = z.infer<typeof requirementSchema>;
 
-const requirementsSchema = z
+export const requirementsSchema = z
   .array(requirementSchema)
   .min(1, "Check at least one criterion.")
   .max(CRITERION_NAMES.length)
@@ -57,6 +59,62 @@ export const DEFAULT_REQUIREMENTS: Requirement[] = [
   { criterion: "tresca", requiredFactor: 1.5 },
 ];
 
+/**
+ * Load-case categories offered for their own allowables (a hydrostatic test, an upset and a
+ * design case are not checked against the same margin); users add others. Matched to a load
+ * case's category trimmed and case-insensitively (core's categoryKey).
+ */
+export const ALLOWABLE_CATEGORY_SUGGESTIONS = ["operating", "design", "test", "upset"] as const;
+
+/** A category's name as a project's allowables list it (the same bounds as a load case's category). */
+export const categoryNameSchema = z
+  .string({ error: "Name the category." })
+  .trim()
+  .min(1, "Name the category.")
+  .max(40, "A category has at most 40 characters.");
+
+/**
+ * The required factors of one load-case category, per criterion; a criterion it leaves out
+ * uses the project-wide default (`requirements`).
+ */
+export const categoryRequirementSchema = z.object({
+  category: categoryNameSchema,
+  factors: z.partialRecord(criterionSchema, requiredFactorSchema),
+});
+export type CategoryRequirement = z.infer<typeof categoryRequirementSchema>;
+
+const sameCategory = (a: string, b: string) => a.trim().toLowerCase() === b.trim().toLowerCase();
+
+export const categoryRequirementsSchema = z
+  .array(categoryRequirementSchema)
+  .max(50, "At most 50 categories.")
+  .superRefine((list, ctx) => {
+    list.forEach((c, i) => {
+      if (list.slice(0, i).some((o) => sameCategory(o.category, c.category))) {
+        ctx.addIssue({ code: "custom", path: [i, "category"], message: `"${c.category}" is listed twice` });
+      }
+    });
+  });
+
+/**
+ * Factors a category gives for criteria the project does not check (they could never apply):
+ * issues with their paths under `categoryRequirements`, to refuse with the field named.
+ */
+export function categoryRequirementIssues(
+  requirements: readonly Requirement[],
+  categories: readonly CategoryRequirement[],
+): { path: (string | number)[]; message: string }[] {
+  const checked = new Set(requirements.map((r) => r.criterion));
+  return categories.flatMap((c, i) =>
+    Object.keys(c.factors)
+      .filter((k) => !checked.has(k as CriterionName))
+      .map((k) => ({
+        path: ["categoryRequirements", i, "factors", k],
+        message: `the project does not check ${CRITERION_LABELS[k as CriterionName]}; add it to the default requirements first or remove this factor`,
+      })),
+  );
+}
+
 export const unitSystemSchema = z.enum(["SI", "US"], { error: "must be SI or US" });
 export type UnitSystem = z.infer<typeof unitSystemSchema>;
 
@@ -67,15 +125,27 @@ const projectName = z
   .max(150, "A project name has at most 150 characters.");
 const description = z.string().trim().max(4000, "At most 4000 characters.");
 
-export const createProjectBodySchema = z.object({
-  name: projectName,
-  description: description.default(""),
-  unitSystem: unitSystemSchema.default("SI"),
-  requirements: requirementsSchema.default(DEFAULT_REQUIREMENTS),
-  defaultMaterial: materialRefSchema.nullable().default(null),
-});
+const includeUnsuitedCriteria = z.boolean({ error: "must be true or false" });
+
+export const createProjectBodySchema = z
+  .object({
+    name: projectName,
+    description: description.default(""),
+    unitSystem: unitSystemSchema.default("SI"),
+    requirements: requirementsSchema.default(DEFAULT_REQUIREMENTS),
+    categoryRequirements: categoryRequirementsSchema.default([]),
+    /** Rate criteria that do not suit a location's material (ductile vs brittle) and let them govern. */
+    includeUnsuitedCriteria: includeUnsuitedCriteria.default(false),
+    defaultMaterial: materialRefSchema.nullable().default(null),
+  })
+  .superRefine((body, ctx) => {
+    for (const issue of categoryRequirementIssues(body.requirements, body.categoryRequirements)) {
+      ctx.addIssue({ code: "custom", ...issue });
+    }
+  });
 export type CreateProjectBody = z.infer<typeof createProjectBodySchema>;
 
+/** A change to a project; `requirements` and `categoryRequirements` are checked against each other (the stored one when only one is sent). */
 export const updateProjectBodySchema = z
   .object({
     version: versionSchema,
@@ -83,6 +153,8 @@ export const updateProjectBodySchema = z
     description,
     unitSystem: unitSystemSchema,
     requirements: requirementsSchema,
+    categoryRequirements: categoryRequirementsSchema,
+    includeUnsuitedCriteria,
     defaultMaterial: materialRefSchema.nullable(),
   })
   .partial()
@@ -98,7 +170,11 @@ export const projectSchema = z.object({
   name: z.string(),
   description: z.string(),
   unitSystem: unitSystemSchema,
+  /** The project-wide default: every criterion checked, with its required factor. */
   requirements: z.array(requirementSchema),
+  /** Per load-case category, the factors that replace the default's. */
+  categoryRequirements: z.array(categoryRequirementSchema),
+  includeUnsuitedCriteria: z.boolean(),
   defaultMaterial: materialRefSchema.nullable(),
   version: z.int(),
   /** Counts for the project list. */

@@ -84,11 +84,18 @@ describe("the comparison", () => {
         expect(row.trescaPa).toBe(expected.tresca);
         expect(row.maxShearPa).toBe(expected.maxShear);
         for (const [i, check] of expected.checks.entries()) {
-          if (!("factor" in check)) throw new Error("SA-516-70 has every strength");
+          if (check.criterion === "max-principal") {
+            // SA-516-70 has a yield strength, so it is ductile: the brittle criterion is not applicable.
+            expect(row.checks[i]).toMatchObject({ status: "not-applicable", criterion: "max-principal" });
+            expect(check.status).toBe("not-applicable");
+            continue;
+          }
+          if (check.status !== "evaluated") throw new Error("SA-516-70 has every strength");
           expect(row.checks[i]).toMatchObject({
             status: "evaluated",
             factor: check.factor,
             verdict: check.verdict,
+            category: null,
           });
         }
       }
@@ -134,8 +141,9 @@ describe("the comparison", () => {
     // Tresca governs: at the junction in the test σ1 = pr/2t + 70 = 113.875 MPa, σ3 = 0, so
     // n = 260 / 113.875 = 2.28 and u = 1.5 / 2.28 = 0.66, above von Mises' 0.60 (hand arithmetic).
     expect(comparison.summary).toBe(
-      "governs: Hydrostatic test at head junction, Tresca, SF 2.28 against 1.5 required",
+      "governs: Hydrostatic test at head junction, Tresca, SF 2.28 against 1.5 required (the project default)",
     );
+    expect(comparison.governingOverall).toMatchObject({ caseName: "Hydrostatic test", criterion: "tresca" });
   });
 
   it("when governing is asked per location, then each location's governing row is core's for that location", () => {
@@ -166,7 +174,9 @@ describe("the comparison", () => {
       status: "not-evaluated",
       criterion: "von-mises",
       requiredFactor: 1.5,
+      category: null,
       missing: ["yield"],
+      reason: "needs the yield strength Sy",
     });
     expect(result.summary).toBeNull();
   });

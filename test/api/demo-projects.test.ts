@@ -45,7 +45,7 @@ describe("the demo seed's projects step", () => {
     // Hand check of the governing row: σx = pr/2t + 133p = 43.875 + 155.61 = 199.49 MPa at 1.17 MPa,
     // σθ = pr/t = 87.75 MPa, σ3 = 0; Tresca n = 260 / 199.49 = 1.30 (< 1.5 required).
     expect(shell.summary).toBe(
-      "governs: Hydrostatic test at head-to-shell junction, Tresca, SF 1.30 against 1.5 required",
+      "governs: Hydrostatic test at head-to-shell junction, Tresca, SF 1.30 against 1.5 required (the project default)",
     );
     const failing = shell.rows.filter((r) =>
       r.checks.some((c) => c.status === "evaluated" && c.verdict === "fail"),

@@ -32,6 +32,8 @@ beforeAll(async () => {
       name: "CT-7 agitator shaft",
       defaultMaterial: { kind: "workspace", id: material.body.material.id },
       requirements: [{ criterion: "von-mises", requiredFactor: 2 }],
+      categoryRequirements: [{ category: "start-up", factors: { "von-mises": 1.25 } }],
+      includeUnsuitedCriteria: true,
     },
     ["keyway", "bearing seat"],
   );
@@ -41,6 +43,7 @@ beforeAll(async () => {
     .post(`${base}/load-cases`)
     .send({
       name: "Start-up",
+      category: "start-up",
       states: [
         {
           locationId: made.locationIds[0],
@@ -74,9 +77,14 @@ beforeAll(async () => {
 });
 
 describe("project export and import", () => {
-  it("when a project is exported, then the file matches its schema, version 1, with Pa values as stored", async () => {
+  it("when a project is exported, then the file matches its schema, version 2, with Pa values as stored and the per-category factors", async () => {
     const file = projectExportSchema.parse(exported);
     expect(file.schemaVersion).toBe(PROJECT_EXPORT_SCHEMA_VERSION);
+    expect(PROJECT_EXPORT_SCHEMA_VERSION).toBe(2);
+    expect(file.project.categoryRequirements).toEqual([
+      { category: "start-up", factors: { "von-mises": 1.25 } },
+    ]);
+    expect(file.project.includeUnsuitedCriteria).toBe(true);
     expect(file.materials).toEqual([
       expect.objectContaining({ key: "m1", yieldPa: 420e6, reference: "certificate 88-2" }),
     ]);
@@ -112,6 +120,50 @@ describe("project export and import", () => {
     );
   });
 
+  it("when a version-1 file (written before per-category factors) is imported, then it is read with its requirements as the project default and no category factors", async () => {
+    const v1 = structuredClone(exported) as { schemaVersion: number; project: Record<string, unknown> };
+    v1.schemaVersion = 1;
+    delete v1.project.categoryRequirements;
+    delete v1.project.includeUnsuitedCriteria;
+    v1.project.name = `Version one ${Date.now()}`;
+    const imported = await team.editor.agent.post(wsPath(team, "/project-imports")).send(v1);
+    expect(imported.status, JSON.stringify(imported.body)).toBe(201);
+    const project = await team.editor.agent
+      .get(wsPath(team, `/projects/${imported.body.project.id}`))
+      .expect(200);
+    expect(project.body.project).toMatchObject({
+      requirements: [{ criterion: "von-mises", requiredFactor: 2 }],
+      categoryRequirements: [],
+      includeUnsuitedCriteria: false,
+    });
+    // Exported again, it is a version-2 file.
+    const again = await team.editor.agent
+      .get(wsPath(team, `/projects/${imported.body.project.id}/export`))
+      .expect(200);
+    expect(again.body.schemaVersion).toBe(2);
+    expect(again.body.project.categoryRequirements).toEqual([]);
+  });
+
+  it("when a version-2 file lacks the category factors or gives one for a criterion the project does not check, then it is refused naming the field", async () => {
+    const missing = structuredClone(exported) as { project: Record<string, unknown> };
+    delete missing.project.categoryRequirements;
+    const r1 = await team.editor.agent.post(wsPath(team, "/project-imports")).send(missing).expect(400);
+    expect(r1.body.error.details.map((d: { path: string }) => d.path)).toContain(
+      "project.categoryRequirements",
+    );
+    const stray = structuredClone(exported) as { project: Record<string, unknown> };
+    stray.project.categoryRequirements = [{ category: "test", factors: { tresca: 1.1 } }];
+    const r2 = await team.editor.agent.post(wsPath(team, "/project-imports")).send(stray).expect(400);
+    expect(r2.body.error.details).toEqual(
+      expect.arrayContaining([
+        expect.objectContaining({
+          path: "project.categoryRequirements.0.factors.tresca",
+          message: expect.stringMatching(/does not check Tresca/),
+        }),
+      ]),
+    );
+  });
+
   it("when a viewer imports, then 403", async () => {
     await team.viewer.agent.post(wsPath(team, "/project-imports")).send(exported).expect(403);
   });
@@ -121,7 +173,7 @@ describe("project export and import", () => {
     const name = `Malformed ${Date.now()}`;
     const bad = {
       ...file,
-      schemaVersion: 2,
+      schemaVersion: 3,
       project: { ...file.project, name, defaultMaterial: { kind: "library", key: "nowhere" } },
       locations: [file.locations[0], { ...file.locations[1], key: file.locations[0].key }],
       loadCases: [

@@ -288,7 +288,7 @@ describe("editing a project in Chromium: combinations, materials, the trash, exp
     // The edited combination governs at the junction (hand arithmetic, SA-516 70 yield 260 MPa):
     // σx = 153.45 + 0.6 × 199.485 = 273.141 MPa, σy = 120.15 MPa, σz = 0, so Tresca = 273.141 MPa and n = 260 / 273.141 = 0.95.
     const expected =
-      "governs: Design plus test (owner) at head-to-shell junction, Tresca, SF 0.95 against 1.5 required";
+      "governs: Design plus test (owner) at head-to-shell junction, Tresca, SF 0.95 against 1.5 required (the project default)";
     await expect.poll(() => page.getByTestId("governing-summary").innerText()).toBe(expected);
 
     await page.goto(`${server.url}/workspaces/${workspaceId}/projects/${projectId}`, {

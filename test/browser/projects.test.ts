@@ -119,7 +119,9 @@ describe("projects in Chromium: from an empty project to the governing case, and
     // Tresca at the junction in the test: n = 260 / (43.875 + 155.61) = 1.30 (hand arithmetic).
     await expect
       .poll(() => page.getByTestId("governing-summary").innerText())
-      .toBe("governs: Hydrostatic test at head-to-shell junction, Tresca, SF 1.30 against 1.5 required");
+      .toBe(
+        "governs: Hydrostatic test at head-to-shell junction, Tresca, SF 1.30 against 1.5 required (the project default)",
+      );
     expect(await page.locator('tr[data-governs="overall"]').count()).toBeGreaterThan(0);
     await page.getByText("fails", { exact: true }).first().waitFor();
     // Like every page inside a workspace, the comparison offers a link back to exactly itself.
@@ -167,7 +169,9 @@ describe("projects in Chromium: from an empty project to the governing case, and
     // With 150 MPa at the junction in the test, the design case governs: Tresca n = 260 / (33.75 + 119.7) = 1.69.
     await expect
       .poll(() => page.getByTestId("governing-summary").innerText())
-      .toBe("governs: Design at head-to-shell junction, Tresca, SF 1.69 against 1.5 required");
+      .toBe(
+        "governs: Design at head-to-shell junction, Tresca, SF 1.69 against 1.5 required (the project default)",
+      );
     await shot(page, "comparison-after-bench");
 
     // Meanwhile another editor saves the same case: this copy's save is refused with 409 and the choice is offered.

@@ -1,4 +1,4 @@
-import type { CheckRequirement } from "../../../core";
+import type { CategoryRequirement, Requirement } from "../../../core/contract/projects";
 import { Combination } from "../../../db/models/combination";
 import { LoadCase } from "../../../db/models/load-case";
 import { Location } from "../../../db/models/location";
@@ -29,7 +29,11 @@ export async function loadComparisonInput(project: Project): Promise<ComparisonI
   const states = stateIndex(await currentStatesOf(caseIds));
   return {
     projectId: project.id,
-    requirements: project.requirements as CheckRequirement[],
+    allowables: {
+      requirements: project.requirements as Requirement[],
+      categoryRequirements: project.categoryRequirements as CategoryRequirement[],
+    },
+    includeUnsuitedCriteria: project.includeUnsuitedCriteria,
     locations: locations.map((l) => ({
       id: l.id,
       name: l.name,

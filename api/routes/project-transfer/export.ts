@@ -5,7 +5,7 @@ import {
 } from "../../../core/contract/project-export";
 import type { StressUnitName, MaterialRef } from "../../../core/contract/materials";
 import type { StateSource } from "../../../core/contract/load-cases";
-import type { Requirement } from "../../../core/contract/projects";
+import type { CategoryRequirement, Requirement } from "../../../core/contract/projects";
 import { Combination } from "../../../db/models/combination";
 import { LoadCase } from "../../../db/models/load-case";
 import { Location } from "../../../db/models/location";
@@ -61,6 +61,8 @@ export async function exportProject(project: Project): Promise<ProjectExport> {
       description: project.description,
       unitSystem: project.unitSystem,
       requirements: project.requirements as Requirement[],
+      categoryRequirements: project.categoryRequirements as CategoryRequirement[],
+      includeUnsuitedCriteria: project.includeUnsuitedCriteria,
       defaultMaterial,
     },
     materials: [...materialKeys].map(([id, key]) => {

@@ -45,6 +45,8 @@ export async function importProject(
       description: file.project.description,
       unitSystem: file.project.unitSystem,
       requirements: file.project.requirements,
+      categoryRequirements: file.project.categoryRequirements,
+      includeUnsuitedCriteria: file.project.includeUnsuitedCriteria,
       defaultMaterialId: projectMaterial.materialId,
       defaultPublishedMaterial: projectMaterial.publishedMaterial,
       createdBy: user.id,

@@ -19,7 +19,8 @@ export function projectTransferRoutes(context: AppContext): AnyRoute[] {
       method: "get",
       path: "/workspaces/{workspaceId}/projects/{projectId}/export",
       tag,
-      summary: "The project as an export file (format sigmacube.project, schemaVersion 1)",
+      summary:
+        "The project as an export file (format sigmacube.project, schemaVersion 2; versions 1 and 2 are read)",
       access: { kind: "member", role: "viewer" },
       request: { params: projectParamsSchema },
       responses: { 200: { description: "The export file.", schema: projectExportSchema } },

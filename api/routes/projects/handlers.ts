@@ -1,6 +1,13 @@
-import type { CreateProjectBody, UpdateProjectBody } from "../../../core/contract/projects";
+import {
+  categoryRequirementIssues,
+  type CategoryRequirement,
+  type CreateProjectBody,
+  type Requirement,
+  type UpdateProjectBody,
+} from "../../../core/contract/projects";
 import { Project } from "../../../db/models/project";
 import { currentMembership, currentUser } from "../../auth/guards";
+import { errors } from "../../errors";
 import type { AppContext } from "../../context";
 import type { RouteHandler } from "../../openapi/registry";
 import { changedFields, recordAudit } from "../audit/record";
@@ -56,6 +63,8 @@ export function createProjectHandler(
           description: body.description,
           unitSystem: body.unitSystem,
           requirements: body.requirements,
+          categoryRequirements: body.categoryRequirements,
+          includeUnsuitedCriteria: body.includeUnsuitedCriteria,
           defaultMaterialId: columns.materialId,
           defaultPublishedMaterial: columns.publishedMaterial,
           createdBy: user.id,
@@ -96,6 +105,14 @@ export function updateProjectHandler(
         presentProject(p, counts.get(p.id)!, people),
       );
       await assertMaterialRef(workspace.id, defaultMaterial, "defaultMaterial", transaction);
+      // A category's factors must name criteria the project checks, whichever of the two changes.
+      const issues = categoryRequirementIssues(
+        body.requirements ?? (p.requirements as Requirement[]),
+        body.categoryRequirements ?? (p.categoryRequirements as CategoryRequirement[]),
+      );
+      if (issues.length > 0) {
+        throw errors.invalidInput(issues.map((i) => ({ path: i.path.join("."), message: i.message })));
+      }
       const before = projectAuditFields(p);
       const material =
         defaultMaterial === undefined

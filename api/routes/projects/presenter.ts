@@ -1,4 +1,8 @@
-import type { Project as ProjectView, Requirement } from "../../../core/contract/projects";
+import type {
+  CategoryRequirement,
+  Project as ProjectView,
+  Requirement,
+} from "../../../core/contract/projects";
 import type { Project } from "../../../db/models/project";
 import { refFromColumns } from "../materials/resolve";
 import { personOf, type PersonRef } from "./people";
@@ -18,6 +22,8 @@ export function presentProject(
     description: p.description,
     unitSystem: p.unitSystem,
     requirements: p.requirements as Requirement[],
+    categoryRequirements: p.categoryRequirements as CategoryRequirement[],
+    includeUnsuitedCriteria: p.includeUnsuitedCriteria,
     defaultMaterial: refFromColumns(p.defaultMaterialId, p.defaultPublishedMaterial),
     version: p.version,
     counts,
@@ -35,6 +41,8 @@ export function projectAuditFields(p: Project) {
     description: p.description,
     unitSystem: p.unitSystem,
     requirements: p.requirements,
+    categoryRequirements: p.categoryRequirements,
+    includeUnsuitedCriteria: p.includeUnsuitedCriteria,
     defaultMaterial: refFromColumns(p.defaultMaterialId, p.defaultPublishedMaterial),
   };
 }

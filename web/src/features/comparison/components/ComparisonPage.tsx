@@ -30,10 +30,8 @@ export function ComparisonPage() {
   const p = project.data;
   const unit = p.unitSystem === "US" ? "ksi" : "MPa";
   const criterion = chartCriterion ?? c.requirements[0]?.criterion ?? "von-mises";
-  const top = c.governing.reduce<(typeof c.governing)[number] | null>(
-    (a, g) => (!a || g.utilisation > a.utilisation ? g : a),
-    null,
-  );
+  // The server's evaluator picked it (core's one governing rule); nothing is re-ranked here.
+  const top = c.governingOverall;
 
   return (
     <div className="space-y-5">
@@ -56,9 +54,31 @@ export function ComparisonPage() {
           </p>
           <h1 className="text-3xl font-semibold tracking-tight">Comparison</h1>
           <p className="mt-1 text-graphite-soft">
-            Every load case and combination at every location, against{" "}
+            Every load case and combination at every location, against the project default{" "}
             {c.requirements.map((r) => `${CRITERION_LABELS[r.criterion]} n ≥ ${r.requiredFactor}`).join(", ")}
-            .
+            {c.categoryRequirements.length > 0 && (
+              <>
+                ; per category:{" "}
+                {c.categoryRequirements
+                  .map(
+                    (cat) =>
+                      `${cat.category} ${
+                        Object.entries(cat.factors)
+                          .map(([k, v]) => `${CRITERION_LABELS[k as CriterionName]} n ≥ ${v}`)
+                          .join(", ") || "(default)"
+                      }`,
+                  )
+                  .join("; ")}
+              </>
+            )}
+            . Each row says which factors it used.
+          </p>
+          <p className="mt-1 text-[13px] text-graphite-soft">
+            Tresca is shown two ways: the equivalent stress σ₁ − σ₃ (compared with the yield strength) and the
+            maximum shear τmax = (σ₁ − σ₃)/2 (compared with half of it).{" "}
+            {c.includeUnsuitedCriteria
+              ? "Criteria that do not suit a material (ductile vs brittle) are rated on this project's request and can govern."
+              : "Criteria that do not suit a location's material (fracture criteria on a ductile metal, yield criteria on a brittle one) are marked not applicable and left out of the governing search."}
           </p>
         </div>
         <div className="flex flex-wrap items-center gap-2">

@@ -85,6 +85,9 @@ export function ComparisonTable({
                   {m.atLocation.map((c) => CRITERION_LABELS[c]).join(", ")}
                 </div>
               )}
+              <div className="text-[12px] text-graphite-soft" data-testid="allowable">
+                {r.category && r.kind === "load-case" ? `${r.category} · ` : ""}factors: {r.allowable.label}
+              </div>
             </div>
           );
         },
@@ -138,14 +141,37 @@ export function ComparisonTable({
             const check = checkOf(i.row.original, c);
             if (!check) return null;
             if (check.status === "not-evaluated") {
-              return <span className="text-[12px] text-graphite-soft">needs {check.missing.join(", ")}</span>;
+              return (
+                <span className="text-[12px] text-graphite-soft" title={check.reason}>
+                  not evaluated:{" "}
+                  {check.missing.length > 0 ? `needs ${check.missing.join(", ")}` : check.reason}
+                </span>
+              );
+            }
+            if (check.status === "not-applicable") {
+              return (
+                <span className="text-[12px] text-graphite-soft" title={check.reason}>
+                  not applicable to this material
+                </span>
+              );
             }
             return (
               <span className="inline-flex items-center gap-2 whitespace-nowrap">
                 <span className="num">{formatFactor(check.factor)}</span>
-                <span className="unit text-[12px]">/ {check.requiredFactor}</span>
+                <span
+                  className="unit text-[12px]"
+                  title={`required: ${check.category === null ? "project default" : `“${check.category}” factor`}`}
+                >
+                  / {check.requiredFactor}
+                  {check.category !== null && <sup className="ml-0.5">{check.category}</sup>}
+                </span>
                 <span className="num text-[12px] text-graphite-soft">u {check.utilisation.toFixed(2)}</span>
                 <Verdict state={check.verdict} />
+                {check.unsuited && (
+                  <span className="text-[11px] text-close" title={check.unsuited}>
+                    unsuited, rated on request
+                  </span>
+                )}
               </span>
             );
           },

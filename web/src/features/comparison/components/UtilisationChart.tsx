@@ -1,8 +1,7 @@
-import { scaleBand, scaleLinear } from "d3";
-import { CLOSE_UTILISATION } from "../../../../../core";
+import { scaleBand } from "d3";
 import type { Comparison } from "../../../../../core/contract/comparison";
 import { CRITERION_LABELS, type CriterionName } from "../../../../../core/contract/projects";
-import { checkOf } from "../model/rows";
+import { CHART, chartAxis, chartBars } from "../model/chart";
 
 const VERDICT_FILL = { pass: "fill-pass", close: "fill-close", fail: "fill-fail" } as const;
 const VERDICT_MARK = { pass: "✓", close: "≈", fail: "✗" } as const;
@@ -19,24 +18,15 @@ export function UtilisationChart({
   comparison: Comparison;
   criterion: CriterionName;
 }) {
-  const bars = comparison.rows.flatMap((r) => {
-    const c = checkOf(r, criterion);
-    return c?.status === "evaluated"
-      ? [{ id: r.rowId, label: `${r.caseName} · ${r.locationName}`, u: c.utilisation, verdict: c.verdict }]
-      : [];
-  });
+  const bars = chartBars(comparison, criterion);
   if (bars.length === 0)
     return (
       <p className="p-3 text-graphite-soft">No row could be evaluated with {CRITERION_LABELS[criterion]}.</p>
     );
-  const labelWidth = 260;
-  const width = 760;
+  const { labelWidth, width } = CHART;
   const rowHeight = 22;
   const height = bars.length * rowHeight + 34;
-  const maxU = Math.max(1.2, ...bars.map((b) => b.u)) * 1.08;
-  const x = scaleLinear()
-    .domain([0, maxU])
-    .range([labelWidth, width - 56]);
+  const { x, closeEdgeX, allowableX } = chartAxis(bars);
   const y = scaleBand<string>()
     .domain(bars.map((b) => b.id))
     .range([8, height - 26])
@@ -87,16 +77,23 @@ export function UtilisationChart({
         </g>
       ))}
       <line
-        x1={x(CLOSE_UTILISATION)}
-        x2={x(CLOSE_UTILISATION)}
+        x1={closeEdgeX}
+        x2={closeEdgeX}
         y1={4}
         y2={height - 26}
         className="stroke-close"
         strokeDasharray="3 3"
         strokeWidth={1}
       />
-      <line x1={x(1)} x2={x(1)} y1={4} y2={height - 26} className="stroke-fail" strokeWidth={1.6} />
-      <text x={x(1) + 3} y={12} className="fill-fail text-[11px] font-semibold">
+      <line
+        x1={allowableX}
+        x2={allowableX}
+        y1={4}
+        y2={height - 26}
+        className="stroke-fail"
+        strokeWidth={1.6}
+      />
+      <text x={allowableX + 3} y={12} className="fill-fail text-[11px] font-semibold">
         allowable (u = 1)
       </text>
       <text x={labelWidth - 24} y={height - 10} textAnchor="end" className="fill-graphite-soft text-[11px]">

@@ -45,7 +45,7 @@ export function watchCluster(cluster: RunningCluster, options: WatchOptions): Cl
         options.say(`PostgreSQL is running again (pid ${current.pid}, ${seconds} s after it was lost)`);
         break;
       } catch (error) {
-        const message = error instanceof Error ? error.message.split("\n")[0] : String(error);
+        const message = (error instanceof Error ? error.message : String(error)).replace(/\s*\n\s*/g, " / ");
         if (attempt === 1 || attempt % 10 === 0) {
           options.say(`restarting PostgreSQL failed (attempt ${attempt}), trying again: ${message}`);
         }

@@ -5,6 +5,7 @@ import { errors } from "./errors";
 import { errorHandler } from "./middleware/error-handler";
 import { jsonBody } from "./middleware/json-body";
 import { malformedPath } from "./middleware/malformed-path";
+import { securityHeaders } from "./middleware/security-headers";
 import { requestLogging } from "./middleware/request-logging";
 import { sessionMiddleware } from "./auth/session-middleware";
 import { mountRoutes } from "./openapi/mount";
@@ -20,6 +21,7 @@ export function createApp(context: AppContext): Express {
   app.set("trust proxy", "loopback");
 
   app.use(requestLogging(context.logger));
+  app.use(securityHeaders({ production: context.env.NODE_ENV === "production" }));
   app.use(malformedPath);
 
   const api = express.Router();

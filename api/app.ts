@@ -5,6 +5,7 @@ import { errors } from "./errors";
 import { errorHandler } from "./middleware/error-handler";
 import { jsonBody } from "./middleware/json-body";
 import { malformedPath } from "./middleware/malformed-path";
+import { securityHeaders } from "./middleware/security-headers";
 import { requestLogging } from "./middleware/request-logging";
 import { sessionMiddleware } from "./auth/session-middleware";
 import { loopbackOnly, MAILBOX_PATHS } from "./routes/mailbox/loopback-only";
@@ -22,6 +23,7 @@ export function createApp(context: AppContext): Express {
   app.set("trust proxy", context.env.TRUST_PROXY.length ? context.env.TRUST_PROXY : false);
 
   app.use(requestLogging(context.logger));
+  app.use(securityHeaders({ production: context.env.NODE_ENV === "production" }));
   app.use(malformedPath);
   app.use(MAILBOX_PATHS, loopbackOnly);
 

@@ -1,4 +1,4 @@
-import { useId, useState, type KeyboardEvent, type ReactNode } from "react";
+import { useEffect, useId, useRef, useState, type KeyboardEvent, type ReactNode } from "react";
 
 /**
  * A number input for the sheet. While typing, the draft is the user's own text; on Enter or leaving
@@ -15,6 +15,8 @@ export function NumberField({
   className = "",
   inputClassName = "",
   min,
+  check,
+  onValidityChange,
   describedBy,
 }: {
   /** accessible name, also used in error messages ("σxy is not a number") */
@@ -28,12 +30,28 @@ export function NumberField({
   inputClassName?: string;
   /** smallest accepted value (inclusive) */
   min?: number;
+  /** a further rule: returns why a number is refused ("is larger than 1e12 …"), after the label */
+  check?: (value: number) => string | undefined;
+  /**
+   * Told whenever the field starts or stops holding a refused entry (and valid on unmount), so
+   * whatever shows results from the stored value can say they are out of date meanwhile.
+   */
+  onValidityChange?: (valid: boolean) => void;
   describedBy?: string;
 }) {
   const id = useId();
   const [draft, setDraft] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [focusText, setFocusText] = useState<string | null>(null);
+  const report = useRef(onValidityChange);
+  useEffect(() => {
+    report.current = onValidityChange;
+  });
+  const invalid = error !== null;
+  useEffect(() => {
+    report.current?.(!invalid);
+  }, [invalid]);
+  useEffect(() => () => report.current?.(true), []);
 
   function commit() {
     if (draft === null) return;
@@ -62,6 +80,11 @@ export function NumberField({
     }
     if (min !== undefined && n < min) {
       setError(`${label}: must be at least ${min}`);
+      return;
+    }
+    const problem = check?.(n);
+    if (problem !== undefined) {
+      setError(`${label}: ${problem}`);
       return;
     }
     setError(null);

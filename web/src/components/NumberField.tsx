@@ -1,3 +1,4 @@
+import { readNumberText } from "../lib/number-text";
 import { useEffect, useId, useRef, useState, type KeyboardEvent, type ReactNode } from "react";
 
 /**
@@ -61,7 +62,7 @@ export function NumberField({
       setError(null);
       return;
     }
-    const text = draft.trim().replace(/−/g, "-").replace(/,/g, ".");
+    const text = draft.trim();
     if (text === "") {
       if (value === null) {
         setDraft(null);
@@ -73,7 +74,12 @@ export function NumberField({
       setError(null);
       return;
     }
-    const n = Number(text);
+    const read = readNumberText(text);
+    if ("refused" in read) {
+      setError(`${label}: ${read.refused}`);
+      return;
+    }
+    const n = read.value;
     if (!Number.isFinite(n)) {
       setError(`${label}: “${draft}” is not a number`);
       return;

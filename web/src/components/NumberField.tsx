@@ -1,4 +1,5 @@
-import { useId, useState, type KeyboardEvent, type ReactNode } from "react";
+import { readNumberText } from "../lib/number-text";
+import { useEffect, useId, useRef, useState, type KeyboardEvent, type ReactNode } from "react";
 
 /**
  * A number input for the sheet. While typing, the draft is the user's own text; on Enter or leaving
@@ -15,6 +16,8 @@ export function NumberField({
   className = "",
   inputClassName = "",
   min,
+  check,
+  onValidityChange,
   describedBy,
 }: {
   /** accessible name, also used in error messages ("σxy is not a number") */
@@ -28,12 +31,28 @@ export function NumberField({
   inputClassName?: string;
   /** smallest accepted value (inclusive) */
   min?: number;
+  /** a further rule: returns why a number is refused ("is larger than 1e12 …"), after the label */
+  check?: (value: number) => string | undefined;
+  /**
+   * Told whenever the field starts or stops holding a refused entry (and valid on unmount), so
+   * whatever shows results from the stored value can say they are out of date meanwhile.
+   */
+  onValidityChange?: (valid: boolean) => void;
   describedBy?: string;
 }) {
   const id = useId();
   const [draft, setDraft] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [focusText, setFocusText] = useState<string | null>(null);
+  const report = useRef(onValidityChange);
+  useEffect(() => {
+    report.current = onValidityChange;
+  });
+  const invalid = error !== null;
+  useEffect(() => {
+    report.current?.(!invalid);
+  }, [invalid]);
+  useEffect(() => () => report.current?.(true), []);
 
   function commit() {
     if (draft === null) return;
@@ -43,7 +62,7 @@ export function NumberField({
       setError(null);
       return;
     }
-    const text = draft.trim().replace(/−/g, "-").replace(/,/g, ".");
+    const text = draft.trim();
     if (text === "") {
       if (value === null) {
         setDraft(null);
@@ -55,13 +74,23 @@ export function NumberField({
       setError(null);
       return;
     }
-    const n = Number(text);
+    const read = readNumberText(text);
+    if ("refused" in read) {
+      setError(`${label}: ${read.refused}`);
+      return;
+    }
+    const n = read.value;
     if (!Number.isFinite(n)) {
       setError(`${label}: “${draft}” is not a number`);
       return;
     }
     if (min !== undefined && n < min) {
       setError(`${label}: must be at least ${min}`);
+      return;
+    }
+    const problem = check?.(n);
+    if (problem !== undefined) {
+      setError(`${label}: ${problem}`);
       return;
     }
     setError(null);

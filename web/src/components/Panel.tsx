@@ -13,6 +13,7 @@ export function Panel({
   children,
   className = "",
   bodyClassName = "",
+  outOfDate,
 }: {
   id: string;
   index?: string;
@@ -22,6 +23,11 @@ export function Panel({
   children: ReactNode;
   className?: string;
   bodyClassName?: string;
+  /**
+   * When given, shown in place of the body: the panel's results were drawn from an input that is
+   * no longer valid, so neither its numbers nor its verdicts may stay on screen.
+   */
+  outOfDate?: ReactNode;
 }) {
   return (
     <section
@@ -36,7 +42,11 @@ export function Panel({
         {subtitle && <span className="min-w-0 truncate text-[13px] text-graphite-soft">{subtitle}</span>}
         {tools && <div className="ml-auto flex shrink-0 items-center gap-1.5">{tools}</div>}
       </header>
-      <div className={`min-h-0 flex-1 ${bodyClassName}`}>{children}</div>
+      {outOfDate ? (
+        <div className="min-h-0 flex-1 px-3 py-2">{outOfDate}</div>
+      ) : (
+        <div className={`min-h-0 flex-1 ${bodyClassName}`}>{children}</div>
+      )}
     </section>
   );
 }

@@ -1,5 +1,5 @@
 import { NumberField } from "../../../components/NumberField";
-import type { Component } from "../../../../../core";
+import { stressInputProblem, type Component } from "../../../../../core";
 import { editable } from "../model/format";
 import { useBenchStore } from "../model/store";
 
@@ -31,6 +31,8 @@ export function ComponentsForm({ plane }: { plane: boolean }) {
             value={tensor[c]}
             format={editable}
             onCommit={(v) => act.setComponent(c, v ?? 0)}
+            check={stressInputProblem}
+            onValidityChange={(valid) => act.setInputValidity(label, valid)}
           />
         ))}
       </div>

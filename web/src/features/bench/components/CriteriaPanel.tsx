@@ -15,9 +15,11 @@ import { useCriteria } from "../hooks/use-derived";
 import { CRITERION_LABEL, governing } from "../model/derive";
 import { decimalsFor, editable, factor, fixed } from "../model/format";
 import { useBenchStore } from "../model/store";
+import { useOutOfDate } from "../hooks/use-out-of-date";
 
 /** Panel 5: the verdict that matters — every criterion against the material and the required factor. */
 export function CriteriaPanel() {
+  const outOfDate = useOutOfDate();
   const unit = useBenchStore((s) => s.unit);
   const material = useBenchStore((s) => s.material);
   const required = useBenchStore((s) => s.requiredFactor);
@@ -35,6 +37,7 @@ export function CriteriaPanel() {
   );
   return (
     <Panel
+      outOfDate={outOfDate}
       id="criteria"
       index="6"
       title="Criteria"

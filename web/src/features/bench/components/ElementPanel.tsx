@@ -5,6 +5,7 @@ import { useBenchStore } from "../model/store";
 import { PlaneOfInterest } from "./PlaneOfInterest";
 import { RotatedReadout } from "./RotatedReadout";
 import { RotationControls } from "./RotationControls";
+import { useOutOfDate } from "../hooks/use-out-of-date";
 
 // three.js and react-three-fiber are large: the element loads as its own chunk.
 const Element3D = lazy(() => import("./Element3D"));
@@ -16,11 +17,13 @@ function Swatch({ className }: { className: string }) {
 
 /** Panel 3: the element the engineer turns, its frame and the components in that frame. */
 export function ElementPanel() {
+  const outOfDate = useOutOfDate();
   const unit = useBenchStore((s) => s.unit);
   const dragTarget = useBenchStore((s) => s.dragTarget);
   const act = useBenchStore((s) => s.act);
   return (
     <Panel
+      outOfDate={outOfDate}
       id="element"
       index="3"
       title="Element"

@@ -14,6 +14,7 @@ import { useEnvelopes, useSummary } from "../hooks/use-derived";
 import { CRITERION_LABEL, envelopeProbe, envelopeRay, planePrincipals } from "../model/derive";
 import { factor, fixed, decimalsFor } from "../model/format";
 import { useBenchStore } from "../model/store";
+import { useOutOfDate } from "../hooks/use-out-of-date";
 
 const W = 300;
 const H = 270;
@@ -30,6 +31,7 @@ const STYLE: Readonly<Record<Criterion, { dash: string; className: string }>> = 
 
 /** Panel 6: the failure envelopes in the σA–σB plane for plane stress, with the state and its safety-factor ray. */
 export function EnvelopePlot() {
+  const outOfDate = useOutOfDate();
   const unit = useBenchStore((s) => s.unit);
   const chosen = useBenchStore((s) => s.envelopeCriteria);
   const material = useBenchStore((s) => s.material);
@@ -117,6 +119,7 @@ export function EnvelopePlot() {
 
   return (
     <Panel
+      outOfDate={outOfDate}
       id="envelope"
       index="5"
       title="Failure envelopes"

@@ -7,11 +7,13 @@ import type { ZoomView } from "../interaction/zoom";
 import { principalName } from "../model/derive";
 import { useBenchStore } from "../model/store";
 import { MohrDiagram } from "./MohrDiagram";
+import { useOutOfDate } from "../hooks/use-out-of-date";
 
 const fmt = (v: number) => Number(v.toFixed(3)).toString();
 
 /** Panel 4: the diagram that explains the state, linked to the element. */
 export function MohrPanel() {
+  const outOfDate = useOutOfDate();
   const unit = useBenchStore((s) => s.unit);
   const mode = useBenchStore((s) => s.mohrView);
   const act = useBenchStore((s) => s.act);
@@ -38,6 +40,7 @@ export function MohrPanel() {
     };
   return (
     <Panel
+      outOfDate={outOfDate}
       id="mohr"
       index="4"
       title="Mohr's circles"

@@ -5,9 +5,11 @@ import { useSummary } from "../hooks/use-derived";
 import { PRINCIPAL_NAMING_RULE, principalName } from "../model/derive";
 import { decimalsFor, fixed } from "../model/format";
 import { useBenchStore } from "../model/store";
+import { useOutOfDate } from "../hooks/use-out-of-date";
 
 /** Panel: what core computes of the state itself, independent of the element's frame. */
 export function PrincipalPanel() {
+  const outOfDate = useOutOfDate();
   const unit = useBenchStore((s) => s.unit);
   const { principal, tauMax, vonMises } = useSummary();
   const [s1, s2, s3] = principal.values;
@@ -19,7 +21,14 @@ export function PrincipalPanel() {
     { sym: <Sym base="σ" sub="3" />, label: "sigma 3", value: s3, dir: principal.directions[2] },
   ];
   return (
-    <Panel id="principal" index="2" title="Principal stresses" subtitle={unit} bodyClassName="px-3 py-2">
+    <Panel
+      outOfDate={outOfDate}
+      id="principal"
+      index="2"
+      title="Principal stresses"
+      subtitle={unit}
+      bodyClassName="px-3 py-2"
+    >
       <table className="w-full text-[13px]" data-testid="principal-table">
         <thead>
           <tr className="text-left text-[12px] text-graphite-soft">

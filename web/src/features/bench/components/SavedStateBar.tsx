@@ -17,7 +17,7 @@ import { ApiError, apiGet, apiSend } from "../../../lib/api-client";
 import { parseBenchSource, type BenchSource } from "../../../lib/bench-link";
 import { FormMessage } from "../../../lib/forms";
 import { useBenchStore } from "../model/store";
-import type { BenchState } from "../model/bench-state";
+import { selectInputValid, type BenchState } from "../model/bench-state";
 
 const workspaceResponse = z.object({ workspace: workspaceSchema });
 const KEYS = ["xx", "yy", "zz", "xy", "yz", "zx"] as const;
@@ -163,6 +163,7 @@ function SavedState({ source }: { source: BenchSource }) {
   const basis = laterBasis ?? loadedBasis;
   const [conflict, setConflict] = useState<{ currentVersion: number; current: LoadCase } | null>(null);
   const [savedNote, setSavedNote] = useState<string | null>(null);
+  const inputValid = useBenchStore(selectInputValid); // a cell holding no valid stress is never saved
   const applied = useRef(false);
 
   // Puts the saved values into the bench's store once they arrive.
@@ -257,7 +258,7 @@ function SavedState({ source }: { source: BenchSource }) {
         <>
           <ToolButton
             onClick={() => (setSavedNote(null), save.mutate(basis.version))}
-            disabled={!changed || save.isPending || !!conflict}
+            disabled={!changed || save.isPending || !!conflict || !inputValid}
           >
             Save to project
           </ToolButton>

@@ -2,12 +2,14 @@ import { useState } from "react";
 import { ToolButton } from "../../../components/ToolButton";
 import { currentLink } from "../hooks/use-url-sync";
 import { resultsAsText } from "../model/results-text";
+import { selectInputValid } from "../model/bench-state";
 import { useBenchStore } from "../model/store";
 
 /** Copies the link that reproduces this bench, or the results as an aligned text block. */
 export function ShareBar() {
   const [message, setMessage] = useState<string | null>(null);
   const [fallback, setFallback] = useState<string | null>(null);
+  const inputValid = useBenchStore(selectInputValid); // no results text for an input that is not valid
 
   async function copy(text: string, what: string) {
     try {
@@ -24,7 +26,10 @@ export function ShareBar() {
   return (
     <div className="flex items-center gap-1.5">
       <ToolButton onClick={() => copy(currentLink(), "Link")}>Copy link</ToolButton>
-      <ToolButton onClick={() => copy(resultsAsText(useBenchStore.getState(), currentLink()), "Results")}>
+      <ToolButton
+        disabled={!inputValid}
+        onClick={() => copy(resultsAsText(useBenchStore.getState(), currentLink()), "Results")}
+      >
         Copy results as text
       </ToolButton>
       <span role="status" className="min-w-0 text-[12px] text-graphite-soft">

@@ -1,4 +1,5 @@
 import type { ClipboardEvent } from "react";
+import { stressInputProblem } from "../../../../../core";
 import { NumberField } from "../../../components/NumberField";
 import { Sym } from "../../../components/Sym";
 import { componentAt } from "../model/actions";
@@ -63,6 +64,8 @@ export function TensorGrid() {
                   value={tensor[c]}
                   format={editable}
                   onCommit={(v) => act.setComponent(c, v ?? 0)}
+                  check={stressInputProblem}
+                  onValidityChange={(valid) => act.setInputValidity(cellLabel(i, j), valid)}
                   inputClassName={i === j ? "" : "bg-paper/40"}
                 />
               );

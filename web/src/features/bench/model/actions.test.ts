@@ -174,3 +174,53 @@ describe("bench store and typed rotations", () => {
     expect(act.setAxisAngle(base(), [0, 0, 0], 35)).toEqual(base());
   });
 });
+
+describe("bench paste choices and input validity (product rules)", () => {
+  it("when '1,5 2 3' is pasted with the decimal mark left to ask, then it is refused as ambiguous and the text is kept for the choice; choosing the comma reads σx = 1.5", () => {
+    const s = act.applyPaste(base(), "1,5 2 3");
+    expect(s.tensor).toEqual(base().tensor);
+    expect(s.pasteError).toMatch(/'1,5' is ambiguous/);
+    expect(s.pasteProblem).toEqual({ problem: "ambiguous-comma", text: "1,5 2 3" });
+    const chosen = act.applyPaste(s, s.pasteProblem!.text, { decimal: "," });
+    expect(chosen.tensor).toEqual({ xx: 1.5, yy: 2, zz: 0, xy: 3, yz: 0, zx: 0 });
+    expect(chosen.pasteProblem).toBeNull();
+  });
+
+  it("when the user's decimal mark is a comma, then every paste is read with it", () => {
+    const s = act.applyPaste(act.setPasteDecimal(base(), ","), "12,5\t30\t4");
+    expect(s.tensor).toEqual({ xx: 12.5, yy: 30, zz: 0, xy: 4, yz: 0, zx: 0 });
+  });
+
+  it("when six bare values are pasted, then the order is asked for; each common order (common practice, no source) puts the last two on the shears it names", () => {
+    const s = act.applyPaste(base(), "150 20 0 25 5 -3");
+    expect(s.pasteProblem?.problem).toBe("order-needed");
+    const a = act.applyPaste(s, "150 20 0 25 5 -3", { order: ["xx", "yy", "zz", "xy", "yz", "zx"] });
+    expect(a.tensor).toEqual({ xx: 150, yy: 20, zz: 0, xy: 25, yz: 5, zx: -3 });
+    expect(a.pasteNote).toMatch(/σx σy σz τxy τyz τxz/);
+    const b = act.applyPaste(s, "150 20 0 25 5 -3", { order: ["xx", "yy", "zz", "xy", "zx", "yz"] });
+    expect(b.tensor).toEqual({ xx: 150, yy: 20, zz: 0, xy: 25, yz: -3, zx: 5 });
+  });
+
+  it("when a node listing row is pasted, then the note names the node", () => {
+    const s = act.applyPaste(base(), "Node SX SY SZ SXY SYZ SXZ\n101 150 20 0 25 0 0");
+    expect(s.tensor).toEqual({ xx: 150, yy: 20, zz: 0, xy: 25, yz: 0, zx: 0 });
+    expect(s.pasteNote).toMatch(/of node 101/);
+  });
+
+  it("when a cell is marked invalid and then valid again, then the input is invalid only meanwhile", async () => {
+    const { selectInputValid } = await import("./bench-state");
+    const bad = act.setInputValidity(base(), "σxx", false);
+    expect(selectInputValid(bad)).toBe(false);
+    expect(act.setInputValidity(bad, "σxx", false)).toBe(bad);
+    const two = act.setInputValidity(bad, "τxy", false);
+    expect(two.invalidInputs).toEqual(["σxx", "τxy"]);
+    expect(selectInputValid(act.setInputValidity(act.setInputValidity(two, "σxx", true), "τxy", true))).toBe(
+      true,
+    );
+  });
+
+  it("when 1e300 is set in σxx (σ² would overflow), then the tensor is left as it was; 1e12 is accepted", () => {
+    expect(act.setComponent(base(), "xx", 1e300)).toEqual(base());
+    expect(act.setComponent(base(), "xx", 1e12).tensor.xx).toBe(1e12);
+  });
+});

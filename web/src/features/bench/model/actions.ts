@@ -13,8 +13,10 @@ import {
   publishedMaterial,
   rotationFromAxisAngle,
   rotationFromEuler,
+  stressInputProblem,
   type Component,
   type Criterion,
+  type DecimalMark,
   type Mat3,
   type StressTensor,
   type StressUnit,
@@ -23,6 +25,7 @@ import {
 import {
   HISTORY_LIMIT,
   type BenchState,
+  type DecimalChoice,
   type DragTarget,
   type EulerSequence,
   type InputForm,
@@ -38,7 +41,7 @@ const SIX: readonly Component[] = ["xx", "yy", "zz", "xy", "yz", "zx"];
 function withHistory(state: BenchState, tensor: StressTensor, unit: StressUnit = state.unit): BenchState {
   if (unit === state.unit && SIX.every((c) => tensor[c] === state.tensor[c])) return state;
   const past = [...state.history.past, { tensor: state.tensor, unit: state.unit }].slice(-HISTORY_LIMIT);
-  return { ...state, tensor, unit, pasteError: null, history: { past, future: [] } };
+  return { ...state, tensor, unit, pasteError: null, pasteProblem: null, history: { past, future: [] } };
 }
 
 /**
@@ -46,7 +49,7 @@ function withHistory(state: BenchState, tensor: StressTensor, unit: StressUnit =
  * editing σyx too: the 3×3 grid is symmetric by construction.
  */
 export function setComponent(state: BenchState, component: Component, value: number): BenchState {
-  if (!Number.isFinite(value)) return state;
+  if (stressInputProblem(value) !== undefined) return state;
   return withHistory(state, { ...state.tensor, [component]: value });
 }
 
@@ -83,29 +86,71 @@ export function changeUnit(state: BenchState, unit: StressUnit, mode: "convert" 
 }
 
 /**
- * Reads pasted text with core's parseTensor. A failure leaves the tensor as it was and records the
- * message (which names the line and column); a success replaces the tensor, adopting the pasted unit
- * when one was written.
+ * Reads pasted text with core's parseTensor, with the decimal mark the user chose (`state.pasteDecimal`
+ * unless `choice.decimal` overrides it) and, for six bare values, the order they chose. A failure
+ * leaves the tensor as it was and records the message (which names the line and column) and, when a
+ * choice resolves it (decimal mark, component order), the problem and the text so the paste box can
+ * offer that choice and read the same text again; a success replaces the tensor, adopting the pasted
+ * unit when one was written.
  */
-export function applyPaste(state: BenchState, text: string): BenchState {
-  const result = parseTensor(text);
-  if (!result.ok) return { ...state, pasteError: result.error.message, pasteNote: null };
+export function applyPaste(
+  state: BenchState,
+  text: string,
+  choice: { decimal?: DecimalMark; order?: readonly Component[] } = {},
+): BenchState {
+  const decimal = choice.decimal ?? (state.pasteDecimal === "ask" ? undefined : state.pasteDecimal);
+  const result = parseTensor(text, { decimal, order: choice.order });
+  if (!result.ok) {
+    const problem = result.error.problem;
+    const resolvable = problem === "ambiguous-comma" || problem === "order-needed";
+    return {
+      ...state,
+      pasteError: result.error.message,
+      pasteNote: null,
+      pasteProblem: resolvable ? { problem, text } : null,
+    };
+  }
   const unit = result.unit ?? state.unit;
   const next = withHistory(state, result.tensor, unit);
   const form = { matrix: "a 3×3 matrix", components: "six components", plane: "plane stress σx σy τxy" }[
     result.form
   ];
+  const point = result.point ? ` of ${result.point.kind} ${result.point.number}` : "";
+  const order =
+    choice.order && result.form === "components"
+      ? ` (${choice.order.map((c) => (c[0] === c[1] ? `σ${c[0]}` : `τ${c === "zx" ? "xz" : c}`)).join(" ")})`
+      : "";
   return {
     ...next,
     pasteError: null,
-    pasteNote: `Read as ${form}, in ${unit}${result.unit === undefined ? " (no unit written: the bench's unit)" : ""}.`,
+    pasteProblem: null,
+    pasteNote: `Read as ${form}${order}${point}, in ${unit}${result.unit === undefined ? " (no unit written: the bench's unit)" : ""}.`,
     inputForm: result.form === "plane" ? "plane" : next.inputForm,
+  };
+}
+
+/** Sets the decimal mark pastes are read with ("ask": refuse an ambiguous comma and offer the choice). */
+export function setPasteDecimal(state: BenchState, decimal: DecimalChoice): BenchState {
+  return state.pasteDecimal === decimal ? state : { ...state, pasteDecimal: decimal };
+}
+
+/**
+ * Records whether an input cell holds an acceptable stress. While any cell does not, the panels
+ * that show results say they are out of date and show no verdict.
+ * @param key the cell's name (its accessible label)
+ */
+export function setInputValidity(state: BenchState, key: string, valid: boolean): BenchState {
+  const listed = state.invalidInputs.includes(key);
+  if (valid === !listed) return state;
+  return {
+    ...state,
+    invalidInputs: valid ? state.invalidInputs.filter((k) => k !== key) : [...state.invalidInputs, key],
   };
 }
 
 /** Clears the paste message. */
 export function dismissPasteMessage(state: BenchState): BenchState {
-  return { ...state, pasteError: null, pasteNote: null };
+  return { ...state, pasteError: null, pasteNote: null, pasteProblem: null };
 }
 
 /** Steps back one stress edit. */
@@ -277,5 +322,12 @@ export function setDragTarget(state: BenchState, target: DragTarget): BenchState
 
 /** Replaces the shareable part of the state (from a link), keeping history empty. */
 export function applyShared(state: BenchState, shared: Partial<BenchState>): BenchState {
-  return { ...state, ...shared, history: { past: [], future: [] }, pasteError: null, pasteNote: null };
+  return {
+    ...state,
+    ...shared,
+    history: { past: [], future: [] },
+    pasteError: null,
+    pasteNote: null,
+    pasteProblem: null,
+  };
 }

@@ -1,6 +1,8 @@
 import {
   IDENTITY_ROTATION,
   type Criterion,
+  type DecimalMark,
+  type ParseProblem,
   type Mat3,
   type StressTensor,
   type StressUnit,
@@ -30,6 +32,9 @@ export type MaterialChoice = {
   ultimateCompression: number | null;
 };
 
+/** How the paste box reads commas: ask when a comma is ambiguous, or the user's stated decimal mark. */
+export type DecimalChoice = "ask" | DecimalMark;
+
 /** What undo and redo step through: the tensor and the unit it is written in. */
 export type StressSnapshot = { tensor: StressTensor; unit: StressUnit };
 
@@ -56,6 +61,15 @@ export type BenchState = {
   pasteError: string | null;
   /** a short note on what the last successful paste was read as */
   pasteNote: string | null;
+  /** the kind of the last refusal the user can resolve by a choice (decimal mark, order), and its text */
+  pasteProblem: { problem: ParseProblem; text: string } | null;
+  /** the decimal mark pastes are read with (the paste box keeps it per user) */
+  pasteDecimal: DecimalChoice;
+  /**
+   * Input cells whose text is not an acceptable stress (not a number, or beyond the input range).
+   * While any is listed, the tensor is not what the user sees, so every result is out of date.
+   */
+  invalidInputs: string[];
   history: { past: StressSnapshot[]; future: StressSnapshot[] };
 };
 
@@ -79,6 +93,13 @@ export function initialBenchState(): BenchState {
     dragTarget: "element",
     pasteError: null,
     pasteNote: null,
+    pasteProblem: null,
+    pasteDecimal: "ask",
+    invalidInputs: [],
     history: { past: [], future: [] },
   };
 }
+
+/** True when every input cell holds an acceptable stress: the results describe what the user sees. */
+export const selectInputValid = (state: Pick<BenchState, "invalidInputs">): boolean =>
+  state.invalidInputs.length === 0;

@@ -65,3 +65,17 @@ describe("bench state in the URL and as text", () => {
     expect(planePrincipals([100, 5, -20])).toBeNull();
   });
 });
+
+describe("a link is an entry point too", () => {
+  it("when a link carries 1e300 in σxx, then the tensor is not taken from it", () => {
+    expect(decodeBenchState("?s=1e300,0,0,0,0,0&u=MPa").tensor).toBeUndefined();
+    expect(decodeBenchState("?s=100,0,0,0,0,0&u=MPa").tensor).toEqual({
+      xx: 100,
+      yy: 0,
+      zz: 0,
+      xy: 0,
+      yz: 0,
+      zx: 0,
+    });
+  });
+});

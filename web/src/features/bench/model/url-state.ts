@@ -11,6 +11,7 @@ import {
   axisAngleFromRotation,
   publishedMaterial,
   rotationFromAxisAngle,
+  stressInputProblem,
   type Criterion,
   type StressUnit,
   type Vec3,
@@ -71,7 +72,9 @@ export function decodeBenchState(search: string): Partial<BenchState> {
   const q = new URLSearchParams(search);
   const out: Partial<BenchState> = {};
   const s = numbers(q.get("s"), 6);
-  if (s) out.tensor = { xx: s[0], yy: s[1], zz: s[2], xy: s[3], yz: s[4], zx: s[5] };
+  // A link is an entry point too: a stress beyond the input range is ignored like any malformed value.
+  if (s && s.every((v) => stressInputProblem(v) === undefined))
+    out.tensor = { xx: s[0], yy: s[1], zz: s[2], xy: s[3], yz: s[4], zx: s[5] };
   const u = q.get("u");
   if (u !== null && (STRESS_UNITS as readonly string[]).includes(u)) out.unit = u as StressUnit;
   const r = numbers(q.get("r"), 4);

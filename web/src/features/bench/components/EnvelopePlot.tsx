@@ -13,6 +13,7 @@ import { CRITERIA, convertStress, type Criterion } from "../../../../../core";
 import { useEnvelopes, useSummary } from "../hooks/use-derived";
 import { CRITERION_LABEL, envelopeProbe, envelopeRay, planePrincipals } from "../model/derive";
 import { factor, fixed, decimalsFor } from "../model/format";
+import { axisTickFormat } from "../../../lib/number-format";
 import { useBenchStore } from "../model/store";
 
 const W = 300;
@@ -66,10 +67,25 @@ export function EnvelopePlot() {
   );
   const xAxis = useRef<SVGGElement>(null);
   const yAxis = useRef<SVGGElement>(null);
+  // Short tick labels in any unit: Pa values are written under a power of ten named by the title.
+  const xTicks = useMemo(() => axisTickFormat(x.ticks(5)), [x]);
+  const yTicks = useMemo(() => axisTickFormat(y.ticks(5)), [y]);
   useEffect(() => {
-    if (xAxis.current) select(xAxis.current).call(axisBottom(x).ticks(5).tickSizeOuter(0));
-    if (yAxis.current) select(yAxis.current).call(axisLeft(y).ticks(5).tickSizeOuter(0));
-  }, [x, y]);
+    if (xAxis.current)
+      select(xAxis.current).call(
+        axisBottom(x)
+          .ticks(5)
+          .tickSizeOuter(0)
+          .tickFormat((v) => xTicks.format(Number(v))),
+      );
+    if (yAxis.current)
+      select(yAxis.current).call(
+        axisLeft(y)
+          .ticks(5)
+          .tickSizeOuter(0)
+          .tickFormat((v) => yTicks.format(Number(v))),
+      );
+  }, [x, y, xTicks, yTicks]);
   const path = line<[number, number]>()
     .x((p) => x(toUnit(p[0])))
     .y((p) => y(toUnit(p[1])));
@@ -242,15 +258,17 @@ export function EnvelopePlot() {
           className="font-mono text-[10px] text-graphite-soft"
           aria-hidden="true"
         />
-        <text x={M.left + size} y={H - 4} textAnchor="end" className="fill-graphite text-[11px]">
-          σA, {unit}
+        <text x={M.left + size} y={H - 1} textAnchor="end" className="fill-graphite text-[11px]">
+          σA, {xTicks.multiplier}
+          {unit}
         </text>
         <text
           transform={`translate(11 ${M.top + size / 2}) rotate(-90)`}
           textAnchor="middle"
           className="fill-graphite text-[11px]"
         >
-          σB, {unit}
+          σB, {yTicks.multiplier}
+          {unit}
         </text>
       </svg>
       <div className="min-w-0 flex-1 space-y-1 text-[12px] leading-4">

@@ -11,7 +11,13 @@ import {
 import { Panel } from "../../../components/Panel";
 import { CRITERIA, convertStress, type Criterion } from "../../../../../core";
 import { useEnvelopes, useSummary } from "../hooks/use-derived";
-import { CRITERION_LABEL, envelopeProbe, envelopeRay, planePrincipals } from "../model/derive";
+import {
+  CRITERION_LABEL,
+  envelopeProbe,
+  envelopeRay,
+  planePairNames,
+  planePrincipals,
+} from "../model/derive";
 import { factor, fixed, decimalsFor } from "../model/format";
 import { axisTickFormat } from "../../../lib/number-format";
 import { useBenchStore } from "../model/store";
@@ -38,6 +44,7 @@ export function EnvelopePlot() {
   const summary = useSummary();
   const curves = useEnvelopes();
   const ab = planePrincipals(summary.principal.values);
+  const pairNames = planePairNames(summary.principal.values);
   const toUnit = (mpa: number) => convertStress(mpa, "MPa", unit);
   const stateMpa = ab && ([convertStress(ab[0], unit, "MPa"), convertStress(ab[1], unit, "MPa")] as const);
   const first = curves[0]?.criterion;
@@ -322,7 +329,7 @@ export function EnvelopePlot() {
         </p>
         {ab ? (
           <p className="text-graphite-soft" data-testid="envelope-ray">
-            State (σA, σB) = (<span className="num">{fixed(ab[0], d)}</span>,{" "}
+            State (σA, σB) = ({pairNames?.join(", ")}) = (<span className="num">{fixed(ab[0], d)}</span>,{" "}
             <span className="num">{fixed(ab[1], d)}</span>) {unit}.{" "}
             {ray && first ? (
               <>

@@ -182,7 +182,7 @@ describe("plane stress on the bench in Chromium", () => {
     await paste(page, "150 0 25");
     await page.getByRole("button", { name: "Principal", exact: true }).click();
     await page.getByLabel("Unit", { exact: true }).selectOption("Pa");
-    await page.getByRole("button", { name: "3×3", exact: true }).click();
+    await page.getByRole("radio", { name: "3×3", exact: true }).click();
     await expect.poll(() => page.getByLabel("σxx", { exact: true }).inputValue()).toBe("1.5e8");
     for (const view of ["3D", "In-plane"]) {
       await page.getByRole("button", { name: view, exact: true }).click();
@@ -196,27 +196,38 @@ describe("plane stress on the bench in Chromium", () => {
       expect(cut, view).toEqual([]);
       const overlaps = await page.evaluate(() => {
         const hit: string[] = [];
-        const boxes = (sel: string, root: Element) =>
-          [...root.querySelectorAll(sel)]
-            .map((t) => ({ text: t.textContent, r: t.getBoundingClientRect() }))
-            .filter((b) => b.r.width > 0);
         const overlap = (a: DOMRect, b: DOMRect) =>
           a.left < b.right - 0.5 &&
           b.left < a.right - 0.5 &&
           a.top < b.bottom - 0.5 &&
           b.top < a.bottom - 0.5;
+        const pairs = (texts: Element[], what: string) => {
+          const boxes = texts
+            .map((el) => ({ text: el.textContent, r: el.getBoundingClientRect() }))
+            .filter((b) => b.r.width > 0);
+          for (let i = 0; i < boxes.length; i++)
+            for (let j = i + 1; j < boxes.length; j++)
+              if (overlap(boxes[i].r, boxes[j].r)) hit.push(`${what}: ${boxes[i].text} / ${boxes[j].text}`);
+        };
         for (const svg of document.querySelectorAll("main svg")) {
-          for (const axis of svg.querySelectorAll("g")) {
-            if (!axis.querySelector(":scope > g.tick")) continue;
-            const ticks = boxes(":scope > g.tick text", axis);
-            for (let i = 0; i < ticks.length; i++)
-              for (let j = i + 1; j < ticks.length; j++)
-                if (overlap(ticks[i].r, ticks[j].r)) hit.push(`ticks ${ticks[i].text} / ${ticks[j].text}`);
+          const frame = svg.getBoundingClientRect();
+          for (const text of svg.querySelectorAll("text")) {
+            const r = text.getBoundingClientRect();
+            if (r.width > 0 && (r.left < frame.left - 1 || r.right > frame.right + 1))
+              hit.push(`cut at the edge: ${text.textContent}`);
           }
-          const texts = boxes(":scope > text", svg);
-          for (let i = 0; i < texts.length; i++)
-            for (let j = i + 1; j < texts.length; j++)
-              if (overlap(texts[i].r, texts[j].r)) hit.push(`labels ${texts[i].text} / ${texts[j].text}`);
+          // Each axis's ticks against each other; every other label against every label and tick.
+          for (const axis of svg.querySelectorAll("g")) {
+            const ticks = [...axis.querySelectorAll(":scope > g.tick text")];
+            if (ticks.length > 0) pairs(ticks, "ticks");
+          }
+          const labels = [...svg.querySelectorAll("text")].filter((el) => !el.closest("g.tick"));
+          const ticks = [...svg.querySelectorAll("g.tick text")];
+          pairs(labels, "labels");
+          for (const label of labels)
+            for (const tick of ticks)
+              if (overlap(label.getBoundingClientRect(), tick.getBoundingClientRect()))
+                hit.push(`label on tick: ${label.textContent} / ${tick.textContent}`);
         }
         return hit;
       });

@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { decimalsFor, fixed, sheetValue } from "./number-format";
+import { axisTickFormat, decimalsFor, fixed, sheetValue } from "./number-format";
 
 describe("fixed", () => {
   it("when a negative value rounds to zero at the shown precision, then it shows 0 with its decimals, never −0 (rule of issue 9, common practice, no source)", () => {
@@ -50,5 +50,27 @@ describe("decimalsFor and sheetValue", () => {
     expect(sheetValue(-154.06)).toBe("−154.1");
     expect(sheetValue(-12.345, "-")).toBe("-12.35");
     expect(sheetValue(-0.00004)).toBe("0.000");
+  });
+});
+
+describe("axisTickFormat", () => {
+  it("when ticks run to 150 000 000 (Pa), then they read 0 … 150 under ×10⁶ and stay short", () => {
+    const { format, multiplier } = axisTickFormat([0, 50e6, 100e6, 150e6]);
+    expect(multiplier).toBe("×10⁶ ");
+    expect([0, 50e6, 100e6, 150e6].map(format)).toEqual(["0", "50", "100", "150"]);
+  });
+
+  it("when ticks are ordinary MPa values, then no multiplier and decimals follow the step; no negative zero", () => {
+    const a = axisTickFormat([-40, -20, 0, 20, 40]);
+    expect(a.multiplier).toBe("");
+    expect([-40, -0, 20].map(a.format)).toEqual(["−40", "0", "20"]);
+    expect(axisTickFormat([0, 0.5, 1]).format(0.5)).toBe("0.5");
+    expect(axisTickFormat([-0.004, -0.002, 0]).multiplier).toBe("×10⁻³ ");
+  });
+
+  it("when ticks reach 21 756 (psi), then they read in thousands", () => {
+    const { format, multiplier } = axisTickFormat([0, 5000, 10000, 15000, 20000]);
+    expect(multiplier).toBe("×10³ ");
+    expect(format(15000)).toBe("15");
   });
 });

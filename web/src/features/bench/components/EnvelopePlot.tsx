@@ -11,8 +11,15 @@ import {
 import { Panel } from "../../../components/Panel";
 import { CRITERIA, convertStress, type Criterion } from "../../../../../core";
 import { useEnvelopes, useSummary } from "../hooks/use-derived";
-import { CRITERION_LABEL, envelopeProbe, envelopeRay, planePrincipals } from "../model/derive";
+import {
+  CRITERION_LABEL,
+  envelopeProbe,
+  envelopeRay,
+  planePairNames,
+  planePrincipals,
+} from "../model/derive";
 import { factor, fixed, decimalsFor } from "../model/format";
+import { axisTickFormat } from "../../../lib/number-format";
 import { useBenchStore } from "../model/store";
 import { useOutOfDate } from "../hooks/use-out-of-date";
 
@@ -39,6 +46,7 @@ export function EnvelopePlot() {
   const summary = useSummary();
   const curves = useEnvelopes();
   const ab = planePrincipals(summary.principal.values);
+  const pairNames = planePairNames(summary.principal.values);
   const toUnit = (mpa: number) => convertStress(mpa, "MPa", unit);
   const stateMpa = ab && ([convertStress(ab[0], unit, "MPa"), convertStress(ab[1], unit, "MPa")] as const);
   const first = curves[0]?.criterion;
@@ -68,10 +76,25 @@ export function EnvelopePlot() {
   );
   const xAxis = useRef<SVGGElement>(null);
   const yAxis = useRef<SVGGElement>(null);
+  // Short tick labels in any unit: Pa values are written under a power of ten named by the title.
+  const xTicks = useMemo(() => axisTickFormat(x.ticks(5)), [x]);
+  const yTicks = useMemo(() => axisTickFormat(y.ticks(5)), [y]);
   useEffect(() => {
-    if (xAxis.current) select(xAxis.current).call(axisBottom(x).ticks(5).tickSizeOuter(0));
-    if (yAxis.current) select(yAxis.current).call(axisLeft(y).ticks(5).tickSizeOuter(0));
-  }, [x, y]);
+    if (xAxis.current)
+      select(xAxis.current).call(
+        axisBottom(x)
+          .ticks(5)
+          .tickSizeOuter(0)
+          .tickFormat((v) => xTicks.format(Number(v))),
+      );
+    if (yAxis.current)
+      select(yAxis.current).call(
+        axisLeft(y)
+          .ticks(5)
+          .tickSizeOuter(0)
+          .tickFormat((v) => yTicks.format(Number(v))),
+      );
+  }, [x, y, xTicks, yTicks]);
   const path = line<[number, number]>()
     .x((p) => x(toUnit(p[0])))
     .y((p) => y(toUnit(p[1])));
@@ -245,15 +268,17 @@ export function EnvelopePlot() {
           className="font-mono text-[10px] text-graphite-soft"
           aria-hidden="true"
         />
-        <text x={M.left + size} y={H - 4} textAnchor="end" className="fill-graphite text-[11px]">
-          σA, {unit}
+        <text x={M.left + size} y={H - 1} textAnchor="end" className="fill-graphite text-[11px]">
+          σA, {xTicks.multiplier}
+          {unit}
         </text>
         <text
           transform={`translate(11 ${M.top + size / 2}) rotate(-90)`}
           textAnchor="middle"
           className="fill-graphite text-[11px]"
         >
-          σB, {unit}
+          σB, {yTicks.multiplier}
+          {unit}
         </text>
       </svg>
       <div className="min-w-0 flex-1 space-y-1 text-[12px] leading-4">
@@ -307,7 +332,7 @@ export function EnvelopePlot() {
         </p>
         {ab ? (
           <p className="text-graphite-soft" data-testid="envelope-ray">
-            State (σA, σB) = (<span className="num">{fixed(ab[0], d)}</span>,{" "}
+            State (σA, σB) = ({pairNames?.join(", ")}) = (<span className="num">{fixed(ab[0], d)}</span>,{" "}
             <span className="num">{fixed(ab[1], d)}</span>) {unit}.{" "}
             {ray && first ? (
               <>

@@ -29,6 +29,7 @@ import {
 import { zoomAt, type ZoomView } from "../interaction/zoom";
 import { ToolButton } from "../../../components/ToolButton";
 import type { FacePoint } from "../model/derive";
+import { axisTickFormat } from "../../../lib/number-format";
 import { decimalsFor, fixed } from "../model/format";
 
 const W = 480;
@@ -104,6 +105,40 @@ function SvgSym({ base, sub, after = " " }: { base: string; sub: string; after?:
   );
 }
 
+/** Label width on the σ axis (px of the viewBox) under which two names would touch. */
+const NAME_GAP = 20;
+
+/**
+ * The marks in σ order, each with where its name goes: centred under its dot, or, when it would
+ * touch a neighbour's name, pushed to the outer side (the lower value's name to the left, the
+ * higher one's to the right).
+ */
+function staggered<T extends { v: number }>(marks: readonly T[], x: (v: number) => number) {
+  const out = [...marks]
+    .sort((a, b) => a.v - b.v)
+    .map((m) => ({ ...m, anchor: "middle" as "middle" | "start" | "end", dx: 0 }));
+  for (let i = 1; i < out.length; i++) {
+    if (Math.abs(x(out[i].v) - x(out[i - 1].v)) >= NAME_GAP) continue;
+    if (out[i - 1].anchor === "middle") Object.assign(out[i - 1], { anchor: "end", dx: -3 });
+    Object.assign(out[i], { anchor: "start", dx: 3 });
+  }
+  return out;
+}
+
+/** How far (px) to lift each of a few labels so that none sits on an earlier one at the same spot. */
+function liftOverlapping(points: readonly (readonly [number, number])[]): number[] {
+  const lifts: number[] = [];
+  points.forEach(([px, py], i) => {
+    let lift = 0;
+    for (let j = 0; j < i; j++) {
+      const [qx, qy] = points[j];
+      if (Math.abs(px - qx) < 18 && Math.abs(py - lift - (qy - lifts[j])) < 16) lift += 16;
+    }
+    lifts.push(lift);
+  });
+  return lifts;
+}
+
 export function MohrDiagram(props: MohrDiagramProps) {
   const { unit, mode, circles, principal, faces, plane, onTheta, zoom, onZoom } = props;
   const svg = useRef<SVGSVGElement>(null);
@@ -134,10 +169,52 @@ export function MohrDiagram(props: MohrDiagramProps) {
   const { x, y, fitCentre } = useScales(ext.x0, ext.x1, ext.y0, ext.y1, zoom, tauDown);
   const d = decimalsFor(big);
 
+  // Short tick labels in any unit: Pa values are written under a power of ten named by the title.
+  const xTicks = useMemo(() => axisTickFormat(x.ticks(7)), [x]);
+  const yTicks = useMemo(() => axisTickFormat(y.ticks(6)), [y]);
   useEffect(() => {
-    if (xAxis.current) select(xAxis.current).call(axisBottom(x).ticks(7).tickSizeOuter(0));
-    if (yAxis.current) select(yAxis.current).call(axisLeft(y).ticks(6).tickSizeOuter(0));
-  }, [x, y]);
+    if (xAxis.current)
+      select(xAxis.current).call(
+        axisBottom(x)
+          .ticks(7)
+          .tickSizeOuter(0)
+          .tickFormat((v) => xTicks.format(Number(v))),
+      );
+    if (yAxis.current)
+      select(yAxis.current).call(
+        axisLeft(y)
+          .ticks(6)
+          .tickSizeOuter(0)
+          .tickFormat((v) => yTicks.format(Number(v))),
+      );
+  }, [x, y, xTicks, yTicks]);
+
+  // A value written inside the plot, in the axis's power of ten so that it stays as short as the ticks.
+  const short = (v: number) =>
+    xTicks.multiplier === ""
+      ? fixed(v, d)
+      : `${fixed(v / xTicks.scale, decimalsFor(Math.abs(v / xTicks.scale)))} ${xTicks.multiplier.trim()}`;
+
+  // Principal stresses marked on the σ axis, named by the one rule (σ1 ≥ σ2 ≥ σ3 in 3D); a name
+  // that would sit on its neighbour's moves one line further from the axis.
+  const marks = staggered(
+    mode === "3d"
+      ? [
+          { v: s1, name: "1", key: "s1" },
+          { v: s2, name: "2", key: "s2" },
+          { v: s3, name: "3", key: "s3" },
+        ]
+      : plane
+        ? [
+            { v: plane.circle.s1, name: plane.names.major.slice(1), key: "major" },
+            { v: plane.circle.s2, name: plane.names.minor.slice(1), key: "minor" },
+            { v: plane.sz, name: plane.names.outOfPlane.slice(1), key: "z" },
+          ]
+        : [],
+    x,
+  );
+  // Face labels likewise step up when two faces sit on one spot (e.g. y′ and z′ at the origin).
+  const faceLabelLift = liftOverlapping(faces.map((f) => [x(f.normal), y(f.shear)] as const));
 
   // Commit mark for the benchmark's Mohr-drag variant.
   useEffect(() => markCommit(), [plane?.theta]);
@@ -275,7 +352,7 @@ export function MohrDiagram(props: MohrDiagramProps) {
                   </circle>
                   <text
                     x={X(f.normal) + 7}
-                    y={Y(f.shear) - 6}
+                    y={Y(f.shear) - 6 - faceLabelLift[faces.indexOf(f)]}
                     className="fill-graphite font-mono text-[12px]"
                   >
                     {f.face}
@@ -315,8 +392,8 @@ export function MohrDiagram(props: MohrDiagramProps) {
                         <title>{`y′ face: σy′ = ${fixed(plane.sy, d)} ${unit}, −τx′y′ = ${fixed(-plane.txy, d)} ${unit}`}</title>
                       </circle>
                       <text
-                        x={X(plane.sy) + 8}
-                        y={Y(-plane.txy) + 4}
+                        x={X(plane.sy) + 9}
+                        y={Y(-plane.txy) - 7}
                         className="fill-graphite font-mono text-[12px]"
                       >
                         y′
@@ -354,21 +431,7 @@ export function MohrDiagram(props: MohrDiagramProps) {
               </g>
             )
           )}
-          {/* Principal stresses and τmax marked on the axes, named by the one rule (σ1 ≥ σ2 ≥ σ3 in 3D). */}
-          {(mode === "3d"
-            ? [
-                { v: s1, name: "1", key: "s1" },
-                { v: s2, name: "2", key: "s2" },
-                { v: s3, name: "3", key: "s3" },
-              ]
-            : plane
-              ? [
-                  { v: plane.circle.s1, name: plane.names.major.slice(1), key: "major" },
-                  { v: plane.circle.s2, name: plane.names.minor.slice(1), key: "minor" },
-                  { v: plane.sz, name: plane.names.outOfPlane.slice(1), key: "z" },
-                ]
-              : []
-          ).map(({ v, name, key }) => (
+          {marks.map(({ v, name, key, anchor, dx }) => (
             <g key={key} data-testid={`mohr-principal-${key}`} data-name={`σ${name}`} data-sigma={v}>
               <circle
                 cx={X(v)}
@@ -377,9 +440,9 @@ export function MohrDiagram(props: MohrDiagramProps) {
                 className={key === "z" ? "fill-panel stroke-graphite" : "fill-graphite"}
               />
               <text
-                x={X(v)}
-                y={Y(0) + (mode === "plane" ? (key === "z" ? 14 : -6) : 14)}
-                textAnchor="middle"
+                x={X(v) + dx}
+                y={mode === "plane" && key !== "z" ? Y(0) - 6 : Y(0) + 14}
+                textAnchor={anchor}
                 className="fill-graphite font-mono text-[12px]"
               >
                 <SvgSym base="σ" sub={name} after={key === "z" ? " (z)" : " "} />
@@ -392,16 +455,17 @@ export function MohrDiagram(props: MohrDiagramProps) {
               y={Y(circles[0].radius) - 5}
               className="fill-graphite font-mono text-[12px]"
             >
-              <SvgSym base="τ" sub="max" />= {fixed(circles[0].radius, d)}
+              <SvgSym base="τ" sub="max" />= {short(circles[0].radius)}
             </text>
           )}
           {mode === "plane" && plane && (
             <text
-              x={X(plane.circle.center) + 4}
+              x={X(plane.circle.center)}
               y={Y(-plane.circle.radius) + 16}
+              textAnchor="middle"
               className="fill-graphite font-mono text-[12px]"
             >
-              <SvgSym base="τ" sub="max, in-plane" />= {fixed(plane.circle.radius, d)}
+              <SvgSym base="τ" sub="max, in-plane" />= {short(plane.circle.radius)}
             </text>
           )}
         </g>
@@ -417,8 +481,10 @@ export function MohrDiagram(props: MohrDiagramProps) {
           className="font-mono text-[11px] text-graphite-soft"
           aria-hidden="true"
         />
-        <text x={M.left + PW} y={H - 6} textAnchor="end" className="fill-graphite text-[12px]">
-          <SvgSym base="σ" sub="n" after="," /> {unit} (tension +)
+        {/* On the bottom edge, clear of the tick labels above it. */}
+        <text x={M.left + PW} y={H - 3} textAnchor="end" className="fill-graphite text-[12px]">
+          <SvgSym base="σ" sub="n" after="," /> {xTicks.multiplier}
+          {unit} (tension +)
         </text>
         <text
           transform={`translate(13 ${M.top + PH / 2}) rotate(-90)`}
@@ -427,11 +493,13 @@ export function MohrDiagram(props: MohrDiagramProps) {
         >
           {mode === "plane" ? (
             <>
-              <SvgSym base="τ" sub="x′y′" after="," /> {unit} — positive downward ↓
+              <SvgSym base="τ" sub="x′y′" after="," /> {yTicks.multiplier}
+              {unit} — positive downward ↓
             </>
           ) : (
             <>
-              <SvgSym base="τ" sub="n" after="," /> {unit} (magnitude)
+              <SvgSym base="τ" sub="n" after="," /> {yTicks.multiplier}
+              {unit} (magnitude)
             </>
           )}
         </text>

@@ -5,6 +5,7 @@ import {
   criteriaResults,
   envelopeProbe,
   namedPrincipal,
+  planePairNames,
   principalAxisNames,
   principalName,
   rotatedView,
@@ -94,5 +95,14 @@ describe("one naming of principal stresses on every panel", () => {
     const s = { xx: 100, yy: 0, zz: 0, xy: 0, yz: 0, zx: 0 };
     const r = principalFrame(s);
     expect(principalAxisNames(r, rotatedView(s, r).rotated, namedPrincipal(s))).toEqual([0, 1, 2]);
+  });
+});
+
+describe("planePairNames", () => {
+  it("when σ2 is the zero principal stress, then the envelope plot's σA and σB are named σ1 and σ3; when σ3 is zero, σ1 and σ2", () => {
+    expect(planePairNames([154.06, 0, -4.06])).toEqual(["σ1", "σ3"]);
+    expect(planePairNames([100, 50, 0])).toEqual(["σ1", "σ2"]);
+    expect(planePairNames([0, -50, -100])).toEqual(["σ2", "σ3"]);
+    expect(planePairNames([3, 2, 1])).toBeNull();
   });
 });

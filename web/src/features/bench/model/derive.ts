@@ -264,6 +264,18 @@ export function planePrincipals(values: readonly [number, number, number]): [num
   return [rest[0], rest[1]];
 }
 
+/**
+ * The names (by the one rule) of the two principal stresses `planePrincipals` plots as σA and σB,
+ * e.g. ["σ1", "σ3"] when σ2 is the zero one; null when none is zero.
+ */
+export function planePairNames(values: readonly [number, number, number]): [string, string] | null {
+  const big = Math.max(Math.abs(values[0]), Math.abs(values[2]), Number.MIN_VALUE);
+  const zero = values.findIndex((v) => Math.abs(v) <= PLANE_STATE_REL * big);
+  if (zero < 0) return null;
+  const rest = ([0, 1, 2] as const).filter((i) => i !== zero);
+  return [principalName(rest[0]), principalName(rest[1])];
+}
+
 /** The envelope polygons (MPa) of the chosen criteria that the material supports. */
 export function envelopes(criteria: readonly Criterion[], material: MaterialChoice) {
   const m = materialForCore(material);

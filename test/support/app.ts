@@ -23,9 +23,12 @@ export function buildTestApp(
     webDist?: string | null;
     rateLimits?: Partial<RateLimitSettings>;
     nodeEnv?: "test" | "production" | "development";
+    /** More variables for the app's environment (e.g. TRUST_PROXY). */
+    env?: Record<string, string>;
   } = {},
 ) {
   const env = parseEnv({
+    ...options.env,
     NODE_ENV: options.nodeEnv ?? "test",
     LOG_LEVEL: "silent",
     PUBLIC_ORIGIN: TEST_ORIGIN,

@@ -1,6 +1,7 @@
 import { afterAll, describe, expect, inject, it } from "vitest";
 import { ensureDatabase } from "../../db/ensure-database";
 import { migrate } from "../../db/migrate";
+import { User } from "../../db/models/user";
 import { DEMO_TEAM } from "../../db/seed-accounts";
 import { seedDemo } from "../../db/seed";
 import { buildTestApp } from "../support/app";
@@ -30,6 +31,9 @@ describe("the demo seed's accounts step", () => {
       expect(workspaces).toEqual([
         expect.objectContaining({ name: "Quillon Engineering", role: person.role, memberCount: 4 }),
       ]);
+      // Their invented addresses cannot receive mail: the seed marks them confirmed, so invitations work.
+      const row = await User.findOne({ where: { email: person.email } });
+      expect(row!.emailVerifiedAt, person.email).toBeInstanceOf(Date);
     }
 
     const again: string[] = [];

@@ -26,9 +26,12 @@ export function buildTestApp(
     nodeEnv?: "test" | "production" | "development";
     /** A logger to read the app's log lines from (silent by default). */
     logger?: Logger;
+    /** More variables for the app's environment (e.g. TRUST_PROXY). */
+    env?: Record<string, string>;
   } = {},
 ) {
   const env = parseEnv({
+    ...options.env,
     NODE_ENV: options.nodeEnv ?? "test",
     LOG_LEVEL: "silent",
     PUBLIC_ORIGIN: TEST_ORIGIN,

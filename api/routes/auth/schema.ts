@@ -18,5 +18,4 @@ export const FORGOT_PASSWORD_NOTICE =
   "If an account uses that address, a link to choose a new password is on its way. It works once, for one hour.";
 
 /** The same answer whether or not the address has an account (no enumeration). */
-export const SIGN_UP_NOTICE =
-  "Check your mail: we have sent a message to that address. Follow the link in it to go on.";
+export const SIGN_UP_NOTICE = "We have sent a message to that address. Follow the link in it to go on.";

@@ -4,15 +4,18 @@ import { NumberField } from "../../../components/NumberField";
 import { Panel } from "../../../components/Panel";
 import { Quantity } from "../../../components/Quantity";
 import { Verdict } from "../../../components/Verdict";
+import { ToolButton } from "../../../components/ToolButton";
 import {
   CLOSE_BAND,
   FROM_MEMORY_NOTE,
   PUBLISHED_MATERIALS,
   convertStress,
+  materialBehaviour,
   publishedMaterial,
 } from "../../../../../core";
-import { useCriteria } from "../hooks/use-derived";
-import { CRITERION_LABEL, governing } from "../model/derive";
+import { useCriteria, useSummary } from "../hooks/use-derived";
+import type { BehaviourChoice } from "../model/bench-state";
+import { CRITERION_LABEL, governing, materialForCore } from "../model/derive";
 import { decimalsFor, editable, factor, fixed } from "../model/format";
 import { useBenchStore } from "../model/store";
 import { useOutOfDate } from "../hooks/use-out-of-date";
@@ -23,8 +26,14 @@ export function CriteriaPanel() {
   const unit = useBenchStore((s) => s.unit);
   const material = useBenchStore((s) => s.material);
   const required = useBenchStore((s) => s.requiredFactor);
+  const project = useBenchStore((s) => s.projectRequirements);
+  const behaviour = useBenchStore((s) => s.behaviour);
+  const includeUnsuited = useBenchStore((s) => s.includeUnsuited);
   const act = useBenchStore((s) => s.act);
   const results = useCriteria();
+  const summary = useSummary();
+  const found = materialBehaviour(materialForCore(material, behaviour));
+  const behaviourId = useId();
   const preset = material.presetId ? publishedMaterial(material.presetId) : null;
   const gov = governing(results);
   const selectId = useId();
@@ -64,19 +73,40 @@ export function CriteriaPanel() {
             ))}
           </optgroup>
         </select>
-        <span className="shrink-0 text-[12px] text-graphite-soft" aria-hidden="true">
-          required n
-        </span>
-        <NumberField
-          label="required safety factor n"
-          hideLabel
-          value={required}
-          format={(v) => String(v)}
-          min={1}
-          className="w-12 shrink-0"
-          onCommit={(v) => v !== null && act.setRequiredFactor(v)}
-        />
+        {!project && (
+          <>
+            <span className="shrink-0 text-[12px] text-graphite-soft" aria-hidden="true">
+              required n
+            </span>
+            <NumberField
+              label="required safety factor n"
+              hideLabel
+              value={required}
+              format={(v) => String(v)}
+              min={1}
+              className="w-12 shrink-0"
+              onCommit={(v) => v !== null && act.setRequiredFactor(v)}
+            />
+          </>
+        )}
       </div>
+      {project && (
+        <div
+          className="flex flex-wrap items-center gap-x-2 text-[12px] leading-4 text-graphite-soft"
+          data-testid="requirements-source"
+        >
+          <span>
+            Required factors from <span className="text-graphite">{project.source}</span>:{" "}
+            {project.requirements
+              .map((r) => `${CRITERION_LABEL[r.criterion]} n ≥ ${r.requiredFactor}`)
+              .join(", ")}
+            .
+          </span>
+          <ToolButton onClick={() => act.setProjectRequirements(null)}>
+            Use one factor here instead
+          </ToolButton>
+        </div>
+      )}
       <div className="grid grid-cols-3 gap-1.5 text-[13px]">
         {(
           [
@@ -113,6 +143,27 @@ export function CriteriaPanel() {
           "Strengths as typed (Sy yield, Sut tensile, Suc compressive). A criterion that needs a blank one says so."
         )}
       </p>
+      <div className="flex flex-wrap items-center gap-x-3 gap-y-1 text-[12px] text-graphite-soft">
+        <label htmlFor={behaviourId}>Material behaves</label>
+        <select
+          id={behaviourId}
+          value={behaviour}
+          onChange={(e) => act.setBehaviour(e.target.value as BehaviourChoice)}
+          className="rounded-sm border border-rule bg-white px-1 py-0.5 text-[12px]"
+        >
+          <option value="from-data">as its data says ({found.behaviour})</option>
+          <option value="ductile">ductile (yields first)</option>
+          <option value="brittle">brittle (fractures)</option>
+        </select>
+        <label className="inline-flex items-center gap-1">
+          <input
+            type="checkbox"
+            checked={includeUnsuited}
+            onChange={(e) => act.setIncludeUnsuited(e.target.checked)}
+          />
+          also rate criteria that do not suit it
+        </label>
+      </div>
       <table className="w-full text-[13px]" data-testid="criteria-table">
         <thead>
           <tr className="border-b border-rule text-[12px] text-graphite-soft">
@@ -124,6 +175,9 @@ export function CriteriaPanel() {
             </th>
             <th scope="col" className="text-right font-normal">
               n
+            </th>
+            <th scope="col" className="text-right font-normal">
+              required
             </th>
             <th scope="col" className="text-right font-normal">
               utilisation
@@ -155,15 +209,31 @@ export function CriteriaPanel() {
                   <td className="num text-right" data-testid="n">
                     {factor(r.n)}
                   </td>
+                  <td
+                    className="num text-right"
+                    data-testid="required"
+                    title={
+                      r.category === null
+                        ? "project default or the bench's factor"
+                        : `the “${r.category}” factor`
+                    }
+                  >
+                    {r.requiredFactor}
+                  </td>
                   <td className="num text-right">
                     {Number.isFinite(r.n) ? `${(r.utilisation * 100).toFixed(0)} %` : "0 %"}
                   </td>
                   <td className="pl-3">
                     <Verdict state={r.verdict} />
+                    {r.unsuited && (
+                      <span className="ml-1 text-[11px] text-close" title={r.unsuited}>
+                        unsuited
+                      </span>
+                    )}
                   </td>
                 </>
               ) : (
-                <td colSpan={4} className="text-[12px] text-graphite-soft">
+                <td colSpan={5} className="text-[12px] text-graphite-soft" data-testid="not-rated">
                   — {r.reason}
                 </td>
               )}
@@ -175,11 +245,16 @@ export function CriteriaPanel() {
         className="text-[12px] leading-4 text-graphite-soft"
         title="n is the factor the whole state may grow by before the criterion is reached; utilisation = required n ÷ n."
       >
-        <span className="text-pass">✓ passes</span> n ≥{" "}
-        <span className="num">{factor(required * (1 + CLOSE_BAND))}</span> ·{" "}
-        <span className="text-close">≈ close</span> within {(CLOSE_BAND * 100).toFixed(0)} % above the
-        required <span className="num">{factor(required)}</span> · <span className="text-fail">✗ fails</span>{" "}
-        below it
+        <span className="text-pass">✓ passes</span> n at least {(CLOSE_BAND * 100).toFixed(0)} % above the
+        required · <span className="text-close">≈ close</span> n from the required up to{" "}
+        {(CLOSE_BAND * 100).toFixed(0)} % above it · <span className="text-fail">✗ fails</span> below it. The
+        governing criterion has the highest utilisation.
+      </p>
+      <p className="text-[12px] leading-4 text-graphite-soft" data-testid="tresca-definitions">
+        Tresca, both ways: equivalent stress σ₁ − σ₃ ={" "}
+        <Quantity value={fixed(summary.tresca, d)} unit={unit} /> (rated against Sy), and maximum shear τmax =
+        (σ₁ − σ₃)/2 = <Quantity value={fixed(summary.tauMax, d)} unit={unit} /> (against Sy/2); the same
+        check, named either way in practice.
       </p>
       <Caution className="!text-[12px] leading-4" />
     </Panel>

@@ -5,11 +5,7 @@ import { z } from "zod";
 import { convertStress } from "../../../../../core";
 import { SUPERPOSITION_CAUTION } from "../../../../../core/contract/combinations";
 import { loadCaseResponseSchema, type LoadCase } from "../../../../../core/contract/load-cases";
-import {
-  materialListSchema,
-  type MaterialList,
-  type MaterialRef,
-} from "../../../../../core/contract/materials";
+import { materialListSchema } from "../../../../../core/contract/materials";
 import { locationResponseSchema, projectResponseSchema } from "../../../../../core/contract/projects";
 import { roleAtLeast, workspaceSchema } from "../../../../../core/contract/workspaces";
 import { ToolButton } from "../../../components/ToolButton";
@@ -18,15 +14,10 @@ import { parseBenchSource, type BenchSource } from "../../../lib/bench-link";
 import { FormMessage } from "../../../lib/forms";
 import { useBenchStore } from "../model/store";
 import { selectInputValid, type BenchState } from "../model/bench-state";
+import { benchFieldsOf, benchMaterialOf, projectRequirementsFor } from "../model/project-requirements";
 
 const workspaceResponse = z.object({ workspace: workspaceSchema });
 const KEYS = ["xx", "yy", "zz", "xy", "yz", "zx"] as const;
-
-/** The saved state at the source's location, as bench fields (tensor in the unit it was entered in). */
-function benchFieldsOf(loadCase: LoadCase, locationId: string): Pick<BenchState, "tensor" | "unit"> | null {
-  const s = loadCase.states.find((x) => x.locationId === locationId);
-  return s ? { tensor: { ...s.components }, unit: s.unit } : null;
-}
 
 /** A copy's basis: the case version it started from, and the values and revision saved at it. */
 type Basis = { version: number; saved: Pick<BenchState, "tensor" | "unit">; revision: number };
@@ -35,35 +26,6 @@ function basisOf(loadCase: LoadCase, locationId: string): Basis | null {
   const saved = benchFieldsOf(loadCase, locationId);
   const state = loadCase.states.find((s) => s.locationId === locationId);
   return saved && state ? { version: loadCase.version, saved, revision: state.revision } : null;
-}
-
-/** The bench's material for a project material reference (strengths in MPa, as the bench keeps them). */
-function materialFieldsOf(
-  ref: MaterialRef | null,
-  list: MaterialList | undefined,
-): BenchState["material"] | null {
-  if (!ref || !list) return null;
-  const mpa = (pa: number | null) => (pa === null ? null : convertStress(pa, "Pa", "MPa"));
-  if (ref.kind === "published") {
-    const m = list.published.find((p) => p.id === ref.id);
-    return m
-      ? {
-          presetId: m.id,
-          yield: mpa(m.yieldPa),
-          ultimateTension: mpa(m.ultimateTensionPa),
-          ultimateCompression: mpa(m.ultimateCompressionPa),
-        }
-      : null;
-  }
-  const m = list.materials.find((x) => x.id === ref.id);
-  return m
-    ? {
-        presetId: null,
-        yield: mpa(m.yieldPa),
-        ultimateTension: mpa(m.ultimateTensionPa),
-        ultimateCompression: mpa(m.ultimateCompressionPa),
-      }
-    : null;
 }
 
 /** Whether the bench's tensor differs from the saved one (compared in Pa, to 1e-9 relative). */
@@ -173,16 +135,18 @@ function SavedState({ source }: { source: BenchSource }) {
     act.applyShared(loadedBasis.saved);
   }, [loadedBasis, act]);
 
-  // The check the project makes: its first required factor and the location's (or project's) material.
+  // The check the project makes: its required factor per criterion for the case's category (the
+  // comparison's lookup), its choice on unsuited criteria, and the location's (or project's) material.
   useEffect(() => {
-    if (!project.data || !location.data || !materials.data) return;
-    const material = materialFieldsOf(location.data.material ?? project.data.defaultMaterial, materials.data);
-    const required = project.data.requirements[0]?.requiredFactor;
+    if (!project.data || !location.data || !materials.data || !loadCase.data) return;
+    const material = benchMaterialOf(location.data.material ?? project.data.defaultMaterial, materials.data);
     act.applyShared({
       ...(material ? { material } : {}),
-      ...(required ? { requiredFactor: required } : {}),
+      projectRequirements: projectRequirementsFor(project.data, loadCase.data.category),
+      behaviour: "from-data",
+      includeUnsuited: project.data.includeUnsuitedCriteria,
     });
-  }, [project.data, location.data, materials.data, act]);
+  }, [project.data, location.data, materials.data, loadCase.data, act]);
 
   const save = useMutation({
     mutationFn: (version: number) =>

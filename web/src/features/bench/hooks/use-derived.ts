@@ -5,6 +5,7 @@
  */
 import { useMemo } from "react";
 import {
+  benchRequirements,
   criteriaResults,
   envelopes,
   inPlaneCircle,
@@ -41,13 +42,23 @@ export function useInPlane() {
   return useMemo(() => (isPlaneInXY(tensor) ? inPlaneCircle(tensor) : null), [tensor]);
 }
 
-/** Every criterion's result against the chosen material and required factor. */
+/** Every criterion's result against the chosen material and the required factors (the project's, or the bench's own). */
 export function useCriteria() {
   const tensor = useBenchStore((s) => s.tensor);
   const unit = useBenchStore((s) => s.unit);
   const material = useBenchStore((s) => s.material);
   const required = useBenchStore((s) => s.requiredFactor);
-  return useMemo(() => criteriaResults(tensor, unit, material, required), [tensor, unit, material, required]);
+  const project = useBenchStore((s) => s.projectRequirements);
+  const behaviour = useBenchStore((s) => s.behaviour);
+  const includeUnsuited = useBenchStore((s) => s.includeUnsuited);
+  return useMemo(
+    () =>
+      criteriaResults(tensor, unit, material, benchRequirements(required, project), {
+        behaviour,
+        includeUnsuited,
+      }),
+    [tensor, unit, material, required, project, behaviour, includeUnsuited],
+  );
 }
 
 /** Envelope polygons (MPa) for the chosen criteria. */

@@ -273,6 +273,24 @@ export function setRequiredFactor(state: BenchState, factor: number): BenchState
   return { ...state, requiredFactor: factor };
 }
 
+/** Takes a project's required factors (one per criterion, with where they come from); null returns to the bench's own factor. */
+export function setProjectRequirements(
+  state: BenchState,
+  project: BenchState["projectRequirements"],
+): BenchState {
+  return { ...state, projectRequirements: project };
+}
+
+/** Says whether the material is ductile or brittle, or lets its data decide. */
+export function setBehaviour(state: BenchState, behaviour: BenchState["behaviour"]): BenchState {
+  return { ...state, behaviour };
+}
+
+/** Asks for criteria that do not suit the material to be rated (and to take part in the governing search), or not. */
+export function setIncludeUnsuited(state: BenchState, include: boolean): BenchState {
+  return { ...state, includeUnsuited: include };
+}
+
 /** Shows or hides one criterion's envelope on the σ1–σ2 plot. */
 export function toggleEnvelope(state: BenchState, criterion: Criterion): BenchState {
   const on = state.envelopeCriteria.includes(criterion);

@@ -1,5 +1,6 @@
 import {
   IDENTITY_ROTATION,
+  type CheckRequirement,
   type Criterion,
   type DecimalMark,
   type ParseProblem,
@@ -35,6 +36,16 @@ export type MaterialChoice = {
 /** How the paste box reads commas: ask when a comma is ambiguous, or the user's stated decimal mark. */
 export type DecimalChoice = "ask" | DecimalMark;
 
+/** Whether the material is ductile or brittle: decided from its data (a preset's flag, else a yield strength) or chosen. */
+export type BehaviourChoice = "from-data" | "ductile" | "brittle";
+
+/** A project's required factors, one per criterion it checks, and where they come from (for a bench opened from a project row). */
+export type ProjectRequirements = {
+  requirements: CheckRequirement[];
+  /** in words, e.g. "CT-7 shell and heads, load case category “test”: the “test” factors" */
+  source: string;
+};
+
 /** What undo and redo step through: the tensor and the unit it is written in. */
 export type StressSnapshot = { tensor: StressTensor; unit: StressUnit };
 
@@ -48,8 +59,14 @@ export type BenchState = {
   rotationView: RotationView;
   eulerSequence: EulerSequence;
   material: MaterialChoice;
-  /** the safety factor the design must reach */
+  /** the safety factor the design must reach, with every criterion (when no project's factors apply) */
   requiredFactor: number;
+  /** the factors of the project the state was opened from (they replace `requiredFactor`), or null */
+  projectRequirements: ProjectRequirements | null;
+  /** ductile or brittle: from the material's data, or the user's choice */
+  behaviour: BehaviourChoice;
+  /** rate criteria that do not suit the material too, and let them govern (the user asks) */
+  includeUnsuited: boolean;
   /** criteria drawn on the envelope plot */
   envelopeCriteria: Criterion[];
   /** optional plane of interest through the element (unit normal in x y z) */
@@ -86,6 +103,9 @@ export function initialBenchState(): BenchState {
     eulerSequence: "ZYX",
     material: { presetId: "s355", yield: 355, ultimateTension: 470, ultimateCompression: 470 },
     requiredFactor: 1.5,
+    projectRequirements: null,
+    behaviour: "from-data",
+    includeUnsuited: false,
     envelopeCriteria: ["von-mises", "tresca"],
     plane: { enabled: false, normal: [1, 1, 0] },
     mohrView: "3d",

@@ -4,12 +4,14 @@ import {
   PRINCIPAL_NAMING_RULE,
   criteriaResults,
   envelopeProbe,
+  governing,
   namedPrincipal,
   planePairNames,
   principalAxisNames,
   principalName,
   rotatedView,
 } from "./derive";
+import { projectRequirementsFor } from "./project-requirements";
 
 const state = { xx: 120, yy: 40, zz: 0, xy: 30, yz: 0, zx: 0 };
 
@@ -104,5 +106,72 @@ describe("planePairNames", () => {
     expect(planePairNames([100, 50, 0])).toEqual(["σ1", "σ2"]);
     expect(planePairNames([0, -50, -100])).toEqual(["σ2", "σ3"]);
     expect(planePairNames([3, 2, 1])).toBeNull();
+  });
+});
+
+describe("the bench's criteria come from core's evaluator with the project's factors", () => {
+  const s355 = { presetId: "s355", yield: 355, ultimateTension: 470, ultimateCompression: 470 };
+  const project = {
+    name: "Vessel",
+    requirements: [
+      { criterion: "von-mises" as const, requiredFactor: 1.5 },
+      { criterion: "tresca" as const, requiredFactor: 2 },
+    ],
+    categoryRequirements: [{ category: "test", factors: { tresca: 1.25 } }],
+  };
+
+  it("when a project requires von Mises 1.5 and Tresca 2 and both factors are about 1.5, then Tresca fails and governs (highest utilisation, not the smallest factor)", () => {
+    // Uniaxial 236.67 MPa against Sy 355: n = 355/236.67 = 1.5 for both (common practice, no source).
+    const { requirements } = projectRequirementsFor(project, "design");
+    const results = criteriaResults(
+      { xx: 355 / 1.5, yy: 0, zz: 0, xy: 0, yz: 0, zx: 0 },
+      "MPa",
+      s355,
+      requirements,
+    );
+    const vm = results.find((r) => r.criterion === "von-mises")!;
+    const tr = results.find((r) => r.criterion === "tresca")!;
+    expect(vm).toMatchObject({ available: true, requiredFactor: 1.5, verdict: "close", governs: false });
+    expect(tr).toMatchObject({ available: true, requiredFactor: 2, verdict: "fail", governs: true });
+    expect(governing(results)?.criterion).toBe("tresca");
+    expect(results.find((r) => r.criterion === "max-principal")).toMatchObject({
+      available: false,
+      kind: "not-checked",
+    });
+  });
+
+  it("when the case's category has its own factors, then they are used and the source says so; otherwise the default, said so", () => {
+    const test = projectRequirementsFor(project, "Test");
+    expect(test.requirements).toEqual([
+      { criterion: "von-mises", requiredFactor: 1.5, category: null },
+      { criterion: "tresca", requiredFactor: 1.25, category: "test" },
+    ]);
+    expect(test.source).toBe(
+      "Vessel, load case category “Test”: the “test” factors (the rest from the project default)",
+    );
+    expect(projectRequirementsFor(project, "upset").source).toBe(
+      "Vessel, load case category “upset”: the project default (no factors given for “upset”)",
+    );
+    expect(projectRequirementsFor(project, "").source).toBe(
+      "Vessel: the project default (the load case has no category)",
+    );
+  });
+
+  it("when S355 (a ductile steel) is checked with every criterion, then the fracture criteria say not applicable with the reason unless the user asks for them", () => {
+    const shear = { xx: 0, yy: 0, zz: 0, xy: 250, yz: 0, zx: 0 };
+    const plain = criteriaResults(shear, "MPa", s355, 1.5);
+    for (const c of ["max-principal", "mohr-coulomb", "modified-mohr"] as const) {
+      const r = plain.find((x) => x.criterion === c)!;
+      expect(r).toMatchObject({ available: false, kind: "not-applicable" });
+      if (!r.available)
+        expect(r.reason).toMatch(/^not applicable to this material: the material is set as ductile/);
+    }
+    const asked = criteriaResults(shear, "MPa", s355, 1.5, { includeUnsuited: true });
+    const mp = asked.find((x) => x.criterion === "max-principal")!;
+    if (!mp.available) throw new Error("asked for, so rated");
+    expect(mp.n).toBeCloseTo(470 / 250, 12); // Sut/σ1 with σ1 = τ in pure shear (common practice, no source)
+    expect(mp.unsuited).toMatch(/ductile/);
+    const brittle = criteriaResults(shear, "MPa", s355, 1.5, { behaviour: "brittle" });
+    expect(brittle.find((x) => x.criterion === "von-mises")).toMatchObject({ kind: "not-applicable" });
   });
 });

@@ -17,10 +17,12 @@ import {
   principalStresses,
   probeEnvelopes,
   rotateTensor,
-  safetyFactor,
+  evaluateState,
+  publishedMaterial,
   tractionOnPlane,
   tresca,
   vonMises,
+  type CheckRequirement,
   type Criterion,
   type Mat3,
   type Material,
@@ -28,14 +30,18 @@ import {
   type PlanePrincipal,
   type PrincipalIndex,
   type StressTensor,
+  type StrengthKey,
   type StressUnit,
   type Vec3,
   type Verdict,
-  missingStrengths,
-  utilisation,
-  verdictForFactor,
 } from "../../../../../core";
-import type { BenchState, EulerSequence, MaterialChoice } from "./bench-state";
+import type {
+  BehaviourChoice,
+  BenchState,
+  EulerSequence,
+  MaterialChoice,
+  ProjectRequirements,
+} from "./bench-state";
 
 /** Display names of the criteria, typeset. */
 export const CRITERION_LABEL: Readonly<Record<Criterion, string>> = {
@@ -49,16 +55,10 @@ export const CRITERION_LABEL: Readonly<Record<Criterion, string>> = {
 /** A verdict: the safety factor against the required one (core's rule, shared with the comparison). */
 export type VerdictKind = Verdict;
 
-/** The stress the criterion rates against, and its name. */
-const REFERENCE: Readonly<Record<Criterion, { key: keyof Material; symbol: string }>> = {
-  "von-mises": { key: "yield", symbol: "Sy" },
-  tresca: { key: "yield", symbol: "Sy" },
-  "max-principal": { key: "ultimateTension", symbol: "Sut" },
-  "mohr-coulomb": { key: "ultimateTension", symbol: "Sut" },
-  "modified-mohr": { key: "ultimateTension", symbol: "Sut" },
-};
+/** Why a criterion has no factor on the bench. */
+export type NotRatedKind = "missing" | "not-applicable" | "not-checked" | "refused";
 
-/** One row of the criteria panel. */
+/** One row of the criteria panel, read from core's evaluation (nothing is rated here). */
 export type CriterionResult =
   | {
       criterion: Criterion;
@@ -68,19 +68,52 @@ export type CriterionResult =
       /** which strength it is compared with (Sy or Sut) */
       reference: string;
       n: number;
+      requiredFactor: number;
+      /** the load-case category whose factor was required, or null (project default or the bench's own) */
+      category: string | null;
       /** required factor / n (≤ 1 is acceptable) */
       utilisation: number;
       verdict: VerdictKind;
+      /** core's governing check for the state (highest utilisation) */
+      governs: boolean;
+      /** why the criterion does not suit the material when it was rated on request, else null */
+      unsuited: string | null;
     }
-  | { criterion: Criterion; available: false; reason: string };
+  | {
+      criterion: Criterion;
+      available: false;
+      kind: NotRatedKind;
+      reason: string;
+      requiredFactor: number | null;
+    };
 
-/** The strengths a core Material needs, from the bench's choice (all MPa). */
-export function materialForCore(m: MaterialChoice): Material {
+const SYMBOL: Readonly<Record<StrengthKey, string>> = {
+  yield: "Sy",
+  ultimateTension: "Sut",
+  ultimateCompression: "Suc",
+};
+
+/**
+ * The strengths a core Material needs, from the bench's choice (all MPa), with the material's
+ * behaviour: as chosen, else a built-in grade's own flag, else left to core (a yield strength
+ * means ductile).
+ */
+export function materialForCore(m: MaterialChoice, behaviour: BehaviourChoice = "from-data"): Material {
   const out: Material = {};
   if (m.yield !== null) out.yield = m.yield;
   if (m.ultimateTension !== null) out.ultimateTension = m.ultimateTension;
   if (m.ultimateCompression !== null) out.ultimateCompression = m.ultimateCompression;
+  const preset = m.presetId ? publishedMaterial(m.presetId) : null;
+  if (behaviour !== "from-data") out.behaviour = behaviour;
+  else if (preset) out.behaviour = preset.brittle ? "brittle" : "ductile";
   return out;
+}
+
+/** The requirements the bench checks: the project's when it was opened from one, else every criterion at `required`. */
+export function benchRequirements(required: number, project: ProjectRequirements | null): CheckRequirement[] {
+  return project
+    ? project.requirements
+    : CRITERIA.map((criterion) => ({ criterion, requiredFactor: required, category: null }));
 }
 
 /** The tensor in another unit, component by component (core's convertStress). */
@@ -91,42 +124,67 @@ export function tensorIn(s: StressTensor, from: StressUnit, to: StressUnit): Str
 }
 
 /**
- * Every criterion's result for a state: n from core's safetyFactor on the tensor in MPa against
- * strengths in MPa; a criterion whose strength is missing says which one.
+ * Every criterion's result for a state, from core's evaluator (`evaluateState`: the same one the
+ * comparison uses) on the tensor in MPa against strengths in MPa: factor, utilisation, verdict and
+ * the governing check; a criterion that lacks strengths, does not suit the material, refuses it,
+ * or that the project does not check says why.
+ * @param required the bench's own factor for every criterion, or the project's requirements
  */
 export function criteriaResults(
   tensor: StressTensor,
   unit: StressUnit,
   material: MaterialChoice,
-  required: number,
+  required: number | readonly CheckRequirement[],
+  options: { behaviour?: BehaviourChoice; includeUnsuited?: boolean } = {},
 ): CriterionResult[] {
-  const mpa = tensorIn(tensor, unit, "MPa");
-  const m = materialForCore(material);
+  const requirements = typeof required === "number" ? benchRequirements(required, null) : required;
+  const evaluation = evaluateState(
+    tensorIn(tensor, unit, "MPa"),
+    materialForCore(material, options.behaviour),
+    requirements,
+    { includeUnsuited: options.includeUnsuited ?? false },
+  );
   return CRITERIA.map((criterion): CriterionResult => {
-    const ref = REFERENCE[criterion];
-    const missing = missingStrengths(criterion, m);
-    if (missing.length > 0) {
-      const names = {
-        yield: "yield strength Sy",
-        ultimateTension: "tensile strength Sut",
-        ultimateCompression: "compressive strength Suc",
-      };
+    const check = evaluation.checks.find((c) => c.criterion === criterion);
+    if (!check) {
       return {
         criterion,
         available: false,
-        reason: `needs the ${missing.map((k) => names[k]).join(" and ")}`,
+        kind: "not-checked",
+        reason: "not checked by this project",
+        requiredFactor: null,
       };
     }
-    const n = safetyFactor(mpa, criterion, m);
-    const strength = m[ref.key] as number;
+    if (check.status === "not-applicable") {
+      return {
+        criterion,
+        available: false,
+        kind: "not-applicable",
+        reason: `not applicable to this material: ${check.reason}`,
+        requiredFactor: check.requiredFactor,
+      };
+    }
+    if (check.status === "not-evaluated") {
+      return {
+        criterion,
+        available: false,
+        kind: check.missing.length > 0 ? "missing" : "refused",
+        reason: check.reason,
+        requiredFactor: check.requiredFactor,
+      };
+    }
     return {
       criterion,
       available: true,
-      equivalent: convertStress(strength / n, "MPa", unit),
-      reference: ref.symbol,
-      n,
-      utilisation: utilisation(n, required),
-      verdict: verdictForFactor(n, required),
+      equivalent: convertStress(check.equivalent, "MPa", unit),
+      reference: SYMBOL[check.reference],
+      n: check.factor,
+      requiredFactor: check.requiredFactor,
+      category: check.category,
+      utilisation: check.utilisation,
+      verdict: check.verdict,
+      governs: evaluation.governing === check,
+      unsuited: check.unsuited,
     };
   });
 }
@@ -323,14 +381,20 @@ export function envelopeProbe(
   return { hits: probe.hits, nearest };
 }
 
-/** The governing (smallest) safety factor among available criteria. */
+/** The criterion core's evaluator says governs (highest utilisation), or null when none was rated. */
 export function governing(results: readonly CriterionResult[]) {
-  let best: Extract<CriterionResult, { available: true }> | null = null;
-  for (const r of results) if (r.available && (best === null || r.n < best.n)) best = r;
-  return best;
+  return (
+    results.find((r): r is Extract<CriterionResult, { available: true }> => r.available && r.governs) ?? null
+  );
 }
 
 /** Convenience: criteria of a whole bench state. */
 export function criteriaOf(state: BenchState) {
-  return criteriaResults(state.tensor, state.unit, state.material, state.requiredFactor);
+  return criteriaResults(
+    state.tensor,
+    state.unit,
+    state.material,
+    benchRequirements(state.requiredFactor, state.projectRequirements),
+    { behaviour: state.behaviour, includeUnsuited: state.includeUnsuited },
+  );
 }

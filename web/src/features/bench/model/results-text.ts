@@ -5,7 +5,14 @@
 import { publishedMaterial, type StressTensor } from "../../../../../core";
 import { RESULTS_CAUTION } from "../../../../../core/contract/cautions";
 import type { BenchState } from "./bench-state";
-import { CRITERION_LABEL, criteriaOf, rotatedView, rotationDescription, stateSummary } from "./derive";
+import {
+  CRITERION_LABEL,
+  criteriaOf,
+  governing,
+  rotatedView,
+  rotationDescription,
+  stateSummary,
+} from "./derive";
 import { decimalsFor, factor, fixed } from "./format";
 
 const VERDICT_WORD = { pass: "passes", close: "close", fail: "FAILS" } as const;
@@ -49,6 +56,7 @@ export function resultsAsText(state: BenchState, link?: string): string {
     line("σ₁", f(s1)),
     line("σ₂", f(s2)),
     line("σ₃", f(s3)),
+    line("Tresca σ₁ − σ₃", f(summary.tresca)),
     line("τₘₐₓ = (σ₁ − σ₃)/2", f(summary.tauMax)),
     line("σ_vM (von Mises)", f(summary.vonMises)),
     "",
@@ -57,18 +65,28 @@ export function resultsAsText(state: BenchState, link?: string): string {
     ...tensorBlock("σ′ = R σ Rᵀ in x′ y′ z′", rotated, u),
     "",
     `Material: ${preset ? `${preset.standard} ${preset.name} (${preset.scope}), values ${preset.note}` : "strengths typed in"}`,
-    `Required safety factor: ${factor(state.requiredFactor)}`,
-    `${"Criterion".padEnd(20)}${pad("σ_eq", 12)}      ${pad("n", 8)}${pad("utilisation", 13)}  verdict`,
+    state.projectRequirements
+      ? `Required safety factors from ${state.projectRequirements.source}`
+      : `Required safety factor: ${factor(state.requiredFactor)} for every criterion`,
+    `${"Criterion".padEnd(20)}${pad("σ_eq", 12)}      ${pad("n", 8)}${pad("required", 10)}${pad("utilisation", 13)}  verdict`,
   ];
-  for (const r of criteriaOf(state)) {
+  const results = criteriaOf(state);
+  for (const r of results) {
     if (!r.available) {
       out.push(`${CRITERION_LABEL[r.criterion].padEnd(20)}${r.reason}`);
       continue;
     }
     out.push(
-      `${CRITERION_LABEL[r.criterion].padEnd(20)}${pad(f(r.equivalent), 12)} ${u.padEnd(5)}${pad(factor(r.n), 8)}${pad(`${(r.utilisation * 100).toFixed(0)} %`, 13)}  ${VERDICT_WORD[r.verdict]}`,
+      `${CRITERION_LABEL[r.criterion].padEnd(20)}${pad(f(r.equivalent), 12)} ${u.padEnd(5)}${pad(factor(r.n), 8)}${pad(String(r.requiredFactor), 10)}${pad(`${(r.utilisation * 100).toFixed(0)} %`, 13)}  ${VERDICT_WORD[r.verdict]}${r.unsuited ? " (unsuited to the material, rated on request)" : ""}`,
     );
   }
+  const top = governing(results);
+  out.push(
+    top
+      ? `Governs: ${CRITERION_LABEL[top.criterion]} (highest utilisation, ${(top.utilisation * 100).toFixed(0)} %)`
+      : "Governs: nothing could be rated",
+    "Tresca is given both ways: the equivalent stress σ₁ − σ₃ (against Sy) and the maximum shear (σ₁ − σ₃)/2 (against Sy/2).",
+  );
   out.push("", `Caution: ${RESULTS_CAUTION}`);
   if (link) out.push(`Link: ${link}`);
   return out.join("\n");

@@ -106,6 +106,7 @@ describe("plane stress on the bench in Chromium", () => {
     expect(Number(await page.getByTestId("theta-p").getAttribute("data-value"))).toBeCloseTo(thetaP, 10);
     expect(await page.getByTestId("theta-p").innerText()).toMatch(/θp = 9\.22\s*° \(x to σ1\)/);
     expect(await page.getByTestId("theta-s").innerText()).toMatch(/−35\.78\s*°, 54\.22\s*°/);
+    expect(await page.getByTestId("theta-s").innerText()).not.toMatch(/acts on planes at 45° to z/);
     expect(await page.getByTestId("angle-convention").innerText()).toMatch(
       /counter-clockwise positive seen from \+z/,
     );
@@ -147,6 +148,13 @@ describe("plane stress on the bench in Chromium", () => {
     expect(r.yy).toBeCloseTo(-25, 9);
     expect(r.zz).toBe(0);
     expect(Number(await page.getByTestId("theta-p").getAttribute("data-value"))).toBeCloseTo(45, 10);
+    // Both in-plane stresses tensile: the in-plane pair is σ1, σ2, the zero σz is σ3, and τmax = σ1/2
+    // acts out of plane (common practice, no source).
+    await paste(page, "100 50 0");
+    expect(await page.getByTestId("principal-in-plane").innerText()).toBe(
+      "In plane x–y: σ1 and σ2; along z: σ3 = σz.",
+    );
+    expect(await page.getByTestId("theta-s").innerText()).toMatch(/τmax itself acts on planes at 45° to z/);
   });
 
   it("when the element sits on a frame that leaves tiny negative residues, then no −0.000 (or -0.00) is shown anywhere, HTML or SVG", async () => {

@@ -137,7 +137,7 @@ describe("plane stress on the bench in Chromium", () => {
     expect(errors).toEqual([]);
   });
 
-  it("when pure shear τxy = 25 snaps to principal, then the element turns 45° about z and σ′ = diag(25, −25, 0) (pure shear, common practice, no source)", async () => {
+  it("when pure shear τxy = 25 snaps to principal, then the element turns 45° about z and σ′ = diag(25, −25, 0); when both in-plane stresses are tensile, then they are σ1 and σ2 and τmax is said to act out of plane (common practice, no source)", async () => {
     await paste(page, "0 0 25");
     await page.getByRole("button", { name: "Principal", exact: true }).click();
     const turned = await displayedAxisAngle(page);

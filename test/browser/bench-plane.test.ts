@@ -106,6 +106,7 @@ describe("plane stress on the bench in Chromium", () => {
     expect(Number(await page.getByTestId("theta-p").getAttribute("data-value"))).toBeCloseTo(thetaP, 10);
     expect(await page.getByTestId("theta-p").innerText()).toMatch(/θp = 9\.22\s*° \(x to σ1\)/);
     expect(await page.getByTestId("theta-s").innerText()).toMatch(/−35\.78\s*°, 54\.22\s*°/);
+    expect(await page.getByTestId("theta-s").innerText()).not.toMatch(/acts on planes at 45° to z/);
     expect(await page.getByTestId("angle-convention").innerText()).toMatch(
       /counter-clockwise positive seen from \+z/,
     );
@@ -136,7 +137,7 @@ describe("plane stress on the bench in Chromium", () => {
     expect(errors).toEqual([]);
   });
 
-  it("when pure shear τxy = 25 snaps to principal, then the element turns 45° about z and σ′ = diag(25, −25, 0) (pure shear, common practice, no source)", async () => {
+  it("when pure shear τxy = 25 snaps to principal, then the element turns 45° about z and σ′ = diag(25, −25, 0); when both in-plane stresses are tensile, then they are σ1 and σ2 and τmax is said to act out of plane (common practice, no source)", async () => {
     await paste(page, "0 0 25");
     await page.getByRole("button", { name: "Principal", exact: true }).click();
     const turned = await displayedAxisAngle(page);
@@ -147,6 +148,13 @@ describe("plane stress on the bench in Chromium", () => {
     expect(r.yy).toBeCloseTo(-25, 9);
     expect(r.zz).toBe(0);
     expect(Number(await page.getByTestId("theta-p").getAttribute("data-value"))).toBeCloseTo(45, 10);
+    // Both in-plane stresses tensile: the in-plane pair is σ1, σ2, the zero σz is σ3, and τmax = σ1/2
+    // acts out of plane (common practice, no source).
+    await paste(page, "100 50 0");
+    expect(await page.getByTestId("principal-in-plane").innerText()).toBe(
+      "In plane x–y: σ1 and σ2; along z: σ3 = σz.",
+    );
+    expect(await page.getByTestId("theta-s").innerText()).toMatch(/τmax itself acts on planes at 45° to z/);
   });
 
   it("when the element sits on a frame that leaves tiny negative residues, then no −0.000 (or -0.00) is shown anywhere, HTML or SVG", async () => {
@@ -178,61 +186,69 @@ describe("plane stress on the bench in Chromium", () => {
     expect(await page.locator("footer").getByTestId("results-caution").count()).toBe(0);
   });
 
-  it("when the unit is Pa at 1280×800, then no grid or table cell is cut and neither axis ticks nor readouts overlap", async () => {
-    await paste(page, "150 0 25");
-    await page.getByRole("button", { name: "Principal", exact: true }).click();
-    await page.getByLabel("Unit", { exact: true }).selectOption("Pa");
-    await page.getByRole("radio", { name: "3×3", exact: true }).click();
-    await expect.poll(() => page.getByLabel("σxx", { exact: true }).inputValue()).toBe("1.5e8");
-    for (const view of ["3D", "In-plane"]) {
-      await page.getByRole("button", { name: view, exact: true }).click();
-      await page.waitForTimeout(200);
-      await shot(page, `pa-${view === "3D" ? "3d" : "plane"}`);
-      const cut = await page.evaluate(() =>
-        [...document.querySelectorAll("main input, main td, main th")]
-          .filter((el) => el.scrollWidth > el.clientWidth + 1)
-          .map((el) => `${el.tagName} ${(el as HTMLInputElement).value ?? ""}${el.textContent}`),
-      );
-      expect(cut, view).toEqual([]);
-      const overlaps = await page.evaluate(() => {
-        const hit: string[] = [];
-        const overlap = (a: DOMRect, b: DOMRect) =>
-          a.left < b.right - 0.5 &&
-          b.left < a.right - 0.5 &&
-          a.top < b.bottom - 0.5 &&
-          b.top < a.bottom - 0.5;
-        const pairs = (texts: Element[], what: string) => {
-          const boxes = texts
-            .map((el) => ({ text: el.textContent, r: el.getBoundingClientRect() }))
-            .filter((b) => b.r.width > 0);
-          for (let i = 0; i < boxes.length; i++)
-            for (let j = i + 1; j < boxes.length; j++)
-              if (overlap(boxes[i].r, boxes[j].r)) hit.push(`${what}: ${boxes[i].text} / ${boxes[j].text}`);
-        };
-        for (const svg of document.querySelectorAll("main svg")) {
-          const frame = svg.getBoundingClientRect();
-          for (const text of svg.querySelectorAll("text")) {
-            const r = text.getBoundingClientRect();
-            if (r.width > 0 && (r.left < frame.left - 1 || r.right > frame.right + 1))
-              hit.push(`cut at the edge: ${text.textContent}`);
+  it.each([
+    ["Pa", "1.5e8"],
+    ["kPa", "150000"],
+    ["psi", "21755.7"],
+  ])(
+    "when the unit is %s at 1280×800, then no grid or table cell is cut and neither axis ticks nor readouts overlap",
+    async (unit, sxx) => {
+      await paste(page, "150 0 25 MPa");
+      await page.getByRole("button", { name: "Principal", exact: true }).click();
+      await page.getByLabel("Unit", { exact: true }).selectOption(unit);
+      await page.getByRole("radio", { name: "3×3", exact: true }).click();
+      // 150 MPa converted (1 psi = 6894.757 Pa, NIST SP 811).
+      await expect.poll(() => page.getByLabel("σxx", { exact: true }).inputValue()).toBe(sxx);
+      for (const view of ["3D", "In-plane"]) {
+        await page.getByRole("button", { name: view, exact: true }).click();
+        await page.waitForTimeout(200);
+        await shot(page, `${unit}-${view === "3D" ? "3d" : "plane"}`);
+        const cut = await page.evaluate(() =>
+          [...document.querySelectorAll("main input, main td, main th")]
+            .filter((el) => el.scrollWidth > el.clientWidth + 1)
+            .map((el) => `${el.tagName} ${(el as HTMLInputElement).value ?? ""}${el.textContent}`),
+        );
+        expect(cut, view).toEqual([]);
+        const overlaps = await page.evaluate(() => {
+          const hit: string[] = [];
+          const overlap = (a: DOMRect, b: DOMRect) =>
+            a.left < b.right - 0.5 &&
+            b.left < a.right - 0.5 &&
+            a.top < b.bottom - 0.5 &&
+            b.top < a.bottom - 0.5;
+          const pairs = (texts: Element[], what: string) => {
+            const boxes = texts
+              .map((el) => ({ text: el.textContent, r: el.getBoundingClientRect() }))
+              .filter((b) => b.r.width > 0);
+            for (let i = 0; i < boxes.length; i++)
+              for (let j = i + 1; j < boxes.length; j++)
+                if (overlap(boxes[i].r, boxes[j].r)) hit.push(`${what}: ${boxes[i].text} / ${boxes[j].text}`);
+          };
+          for (const svg of document.querySelectorAll("main svg")) {
+            const frame = svg.getBoundingClientRect();
+            for (const text of svg.querySelectorAll("text")) {
+              const r = text.getBoundingClientRect();
+              if (r.width > 0 && (r.left < frame.left - 1 || r.right > frame.right + 1))
+                hit.push(`cut at the edge: ${text.textContent}`);
+            }
+            // Each axis's ticks against each other; every other label against every label and tick.
+            for (const axis of svg.querySelectorAll("g")) {
+              const ticks = [...axis.querySelectorAll(":scope > g.tick text")];
+              if (ticks.length > 0) pairs(ticks, "ticks");
+            }
+            const labels = [...svg.querySelectorAll("text")].filter((el) => !el.closest("g.tick"));
+            const ticks = [...svg.querySelectorAll("g.tick text")];
+            pairs(labels, "labels");
+            for (const label of labels)
+              for (const tick of ticks)
+                if (overlap(label.getBoundingClientRect(), tick.getBoundingClientRect()))
+                  hit.push(`label on tick: ${label.textContent} / ${tick.textContent}`);
           }
-          // Each axis's ticks against each other; every other label against every label and tick.
-          for (const axis of svg.querySelectorAll("g")) {
-            const ticks = [...axis.querySelectorAll(":scope > g.tick text")];
-            if (ticks.length > 0) pairs(ticks, "ticks");
-          }
-          const labels = [...svg.querySelectorAll("text")].filter((el) => !el.closest("g.tick"));
-          const ticks = [...svg.querySelectorAll("g.tick text")];
-          pairs(labels, "labels");
-          for (const label of labels)
-            for (const tick of ticks)
-              if (overlap(label.getBoundingClientRect(), tick.getBoundingClientRect()))
-                hit.push(`label on tick: ${label.textContent} / ${tick.textContent}`);
-        }
-        return hit;
-      });
-      expect(overlaps, view).toEqual([]);
-    }
-    expect(errors).toEqual([]);
-  });
+          return hit;
+        });
+        expect(overlaps, view).toEqual([]);
+      }
+      expect(errors).toEqual([]);
+    },
+  );
 });

@@ -172,6 +172,8 @@ describe("projects in Chromium: from an empty project to the governing case, and
       .toBe(
         "governs: Design at head-to-shell junction, Tresca, SF 1.69 against 1.5 required (the project default)",
       );
+    // The results caution is said once on the page (beside the results, not again in the footer).
+    expect(await page.getByTestId("results-caution").count()).toBe(1);
     await shot(page, "comparison-after-bench");
 
     // Meanwhile another editor saves the same case: this copy's save is refused with 409 and the choice is offered.

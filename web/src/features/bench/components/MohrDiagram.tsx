@@ -196,7 +196,7 @@ export function MohrDiagram(props: MohrDiagramProps) {
       : `${fixed(v / xTicks.scale, decimalsFor(Math.abs(v / xTicks.scale)))} ${xTicks.multiplier.trim()}`;
 
   // Principal stresses marked on the σ axis, named by the one rule (σ1 ≥ σ2 ≥ σ3 in 3D); a name
-  // that would sit on its neighbour's moves one line further from the axis.
+  // that would sit on its neighbour's moves to the side, away from it.
   const marks = staggered(
     mode === "3d"
       ? [

@@ -86,7 +86,7 @@ export function MohrPanel() {
             <p className="flex-1" data-testid="shear-convention">
               Shear convention: τx′y′ &gt; 0 acts in +y′ on the +x′ face, plotted{" "}
               <strong className="font-semibold">downward</strong>: the x′ point turns the same way as the
-              element, by 2θ. σ names as in panel 2 (σ1 ≥ σ2 ≥ σ3 in 3D); (z) marks σz.
+              element, by 2θ.
               {rot.aboutZ === null &&
                 " The element is now tilted out of x–y: drag or type θ to turn it about z from the original axes."}
             </p>

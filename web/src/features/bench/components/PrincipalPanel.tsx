@@ -15,6 +15,11 @@ export function PrincipalPanel() {
   const [s1, s2, s3] = principal.values;
   const plane = principal.plane;
   const d = decimalsFor(Math.max(Math.abs(s1), Math.abs(s3)));
+  // The in-plane circle is the outer one (its radius is τmax) when σz lies between the in-plane pair.
+  const inPlaneGoverns =
+    plane !== null &&
+    plane.values[plane.inPlaneMinor] <= plane.values[plane.outOfPlane] &&
+    plane.values[plane.outOfPlane] <= plane.values[plane.inPlaneMajor];
   const rows = [
     { sym: <Sym base="σ" sub="1" />, label: "sigma 1", value: s1, dir: principal.directions[0] },
     { sym: <Sym base="σ" sub="2" />, label: "sigma 2", value: s2, dir: principal.directions[1] },
@@ -92,9 +97,10 @@ export function PrincipalPanel() {
                 {principalName(plane.inPlaneMajor)})
               </span>
               <span data-testid="theta-s" data-value={plane.thetaS}>
-                max shear: <Sym base="θ" sub="p" /> ∓ 45° ={" "}
+                in-plane max shear: <Sym base="θ" sub="p" /> ∓ 45° ={" "}
                 <Quantity value={fixed(plane.thetaS, 2)} unit="°" />,{" "}
                 <Quantity value={fixed(plane.thetaS + 90, 2)} unit="°" />
+                {!inPlaneGoverns && " (τmax itself acts on planes at 45° to z)"}
               </span>
             </p>
             <p data-testid="angle-convention">

@@ -1,5 +1,6 @@
 import { describe, expect, it } from "vitest";
 import {
+  angleAboutZ,
   PASCALS_PER_PSI,
   principalValues,
   rotateTensor,
@@ -103,6 +104,18 @@ describe("bench actions", () => {
       [0, 1, 0],
       [0, 0, 1],
     ]);
+  });
+
+  it("when a plane state σx = 150, σy = 0, τxy = 25 snaps to principal and then to max shear, then the element turns about z only, by θp = ½·atan(2τxy/(σx − σy)) and by θp − 45° (Hibbeler, Mechanics of Materials, stress transformation; recalled from memory)", () => {
+    const plane: BenchState = { ...base(), tensor: { xx: 150, yy: 0, zz: 0, xy: 25, yz: 0, zx: 0 } };
+    const thetaP = (Math.atan(50 / 150) * 90) / Math.PI;
+    const p = act.snapToPrincipal(plane);
+    expect(angleAboutZ(p.rotation)).toBeCloseTo(thetaP, 10);
+    const r = rotateTensor(p.tensor, p.rotation);
+    expect(r.xx).toBeCloseTo(75 + Math.hypot(75, 25), 10);
+    expect(r.yy).toBeCloseTo(75 - Math.hypot(75, 25), 10);
+    expect(r.zz).toBe(0);
+    expect(angleAboutZ(act.snapToMaxShear(plane).rotation)).toBeCloseTo(thetaP - 45, 10);
   });
 
   it("when the element snaps to the maximum-shear frame, then σ′xy = τmax = (σ1 − σ3)/2", () => {

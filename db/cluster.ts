@@ -13,7 +13,7 @@
 import { execFile } from "node:child_process";
 import { createHash, randomBytes } from "node:crypto";
 import { existsSync, readdirSync, readFileSync } from "node:fs";
-import { chmod, chown, lstat, mkdir, readFile, rm, writeFile } from "node:fs/promises";
+import { chmod, chown, lstat, mkdir, readdir, readFile, rm, writeFile } from "node:fs/promises";
 import { createServer } from "node:net";
 import os from "node:os";
 import path from "node:path";
@@ -147,7 +147,8 @@ async function pgRun(bin: string, tool: string, args: string[]) {
   const file = path.join(bin, tool);
   const [cmd, argv] = isRoot() ? ["runuser", ["-u", "postgres", "--", file, ...args]] : [file, args];
   try {
-    return await run(cmd, argv, { encoding: "utf8" });
+    // cwd "/": the tools chdir back to where they were started, which the postgres user may not enter.
+    return await run(cmd, argv, { encoding: "utf8", cwd: "/" });
   } catch (error) {
     const e = error as { stderr?: string; stdout?: string; message: string };
     const detail = (e.stderr || e.stdout || e.message).trim();
@@ -235,7 +236,7 @@ export async function startCluster(options: ClusterOptions): Promise<RunningClus
       ? ["-c fsync=off", "-c synchronous_commit=off", "-c full_page_writes=off"]
       : []),
   ].join(" ");
-  await removeLockOfDeadPostmaster(dataDir);
+  await removeLocksOfDeadPostmaster(dataDir, socketDir);
   const serverLog = path.join(baseDir, "server.log");
   await pgRun(bin, "pg_ctl", [
     "start",
@@ -312,17 +313,24 @@ function processAlive(pid: number, startedAt: string | null): boolean {
 
 /**
  * After a postmaster was killed its pid may stay a zombie until init reaps it, and PostgreSQL
- * takes a lock file whose process still "exists" for a running server. /proc tells a zombie
- * apart, so its lock file goes; PostgreSQL's own check of the shared memory still guards
- * against backends of the old server that have not exited yet.
+ * takes a lock file (the data folder's and the socket's) whose process still "exists" for a
+ * running server. /proc tells a zombie apart, so its lock files go; PostgreSQL's own check of
+ * the shared memory still guards against backends of the old server that have not exited yet.
  */
-async function removeLockOfDeadPostmaster(dataDir: string): Promise<void> {
-  const lockFile = path.join(dataDir, "postmaster.pid");
-  const text = await readFile(lockFile, "utf8").catch(() => null);
-  if (text === null) return;
-  const pid = Number(text.split("\n")[0]);
-  const state = procStat(pid)?.[0];
-  if (state === "Z" || state === "X") await rm(lockFile, { force: true });
+async function removeLocksOfDeadPostmaster(dataDir: string, socketDir: string): Promise<void> {
+  const sockets = await readdir(socketDir).catch(() => [] as string[]);
+  const lockFiles = [
+    path.join(dataDir, "postmaster.pid"),
+    ...sockets
+      .filter((name) => /^\.s\.PGSQL\.\d+\.lock$/.test(name))
+      .map((name) => path.join(socketDir, name)),
+  ];
+  for (const lockFile of lockFiles) {
+    const text = await readFile(lockFile, "utf8").catch(() => null);
+    if (text === null) continue;
+    const state = procStat(Number(text.split("\n")[0]))?.[0];
+    if (state === "Z" || state === "X") await rm(lockFile, { force: true });
+  }
 }
 
 /** Removes a cluster's folder (throwaway clusters, after `stop`). */

@@ -17,3 +17,17 @@ export function readNumberText(text: string): { value: number } | { refused: str
   if (commas === 1 && !t.includes(".")) return { value: Number(t.replace(",", ".")) };
   return { value: commas === 0 ? Number(t) : Number.NaN };
 }
+
+const ONE_NUMBER = /^[+\-\u2212]?(?:\d+[.,]?\d*|[.,]\d+)(?:[eE][-+]?\d+)?$/;
+const ANY_NUMBER = /[-+\u2212]?\d*\.?\d+(?:[eE][-+]?\d+)?/g;
+
+/**
+ * True when pasted text holds more than one number (a matrix or a row to read as a whole), false
+ * for one number, including one written with a decimal comma ("1,5"), which belongs in the field.
+ * @param text the clipboard's plain text
+ */
+export function looksLikeSeveralNumbers(text: string): boolean {
+  const t = text.trim();
+  if (ONE_NUMBER.test(t)) return false;
+  return (t.match(ANY_NUMBER) ?? []).length > 1;
+}

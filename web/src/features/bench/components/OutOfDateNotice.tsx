@@ -13,7 +13,6 @@ export function OutOfDateNotice() {
       data-testid="results-out-of-date"
       className="rounded-sm border border-dashed border-rule-strong bg-paper px-2 py-1.5 text-[13px] leading-5 text-graphite"
     >
-      <span aria-hidden="true">⧗ </span>
       <strong className="font-semibold">Out of date</strong> — {cells.join(", ")}{" "}
       {cells.length === 1 ? "holds" : "hold"} no valid stress. Results and verdicts come back when the input
       is a valid number again (Esc in the cell restores its value).

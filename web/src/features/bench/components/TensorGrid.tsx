@@ -1,6 +1,7 @@
 import type { ClipboardEvent } from "react";
 import { stressInputProblem } from "../../../../../core";
 import { NumberField } from "../../../components/NumberField";
+import { looksLikeSeveralNumbers } from "../../../lib/number-text";
 import { Sym } from "../../../components/Sym";
 import { componentAt } from "../model/actions";
 import { editable } from "../model/format";
@@ -15,7 +16,7 @@ function cellLabel(i: number, j: number): string {
 
 /** Pasting more than one number anywhere on the grid reads the whole paste as a tensor. */
 export function pasteLooksLikeTensor(text: string): boolean {
-  return (text.match(/[-+−]?\d*\.?\d+(?:[eE][-+]?\d+)?/g) ?? []).length > 1;
+  return looksLikeSeveralNumbers(text); // "1,5" is one number for this cell, not two
 }
 
 /**

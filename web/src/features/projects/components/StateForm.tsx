@@ -5,7 +5,7 @@ import { STRESS_UNIT_NAMES, type StressUnitName } from "../../../../../core/cont
 import { DecimalMarkSelect, PasteProblemChoices } from "../../../components/PasteChoices";
 import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
-import { readNumberText } from "../../../lib/number-text";
+import { looksLikeSeveralNumbers, readNumberText } from "../../../lib/number-text";
 import { useDecimalPreference } from "../../../lib/paste-preferences";
 import type { StressBody } from "../api/load-cases";
 
@@ -18,9 +18,6 @@ const LABEL: Record<(typeof KEYS)[number], string> = {
   yz: "τyz",
   zx: "τzx",
 };
-
-/** More than one number in a paste: the text is a matrix or a row, not one component. */
-const looksLikeSeveral = (text: string) => (text.match(/\d+/g) ?? []).length > 1;
 
 /**
  * Six components in a unit, with the source of the numbers: how an editor types a state at
@@ -82,7 +79,7 @@ export function StateForm({
 
   const onFieldPaste = (event: ClipboardEvent<HTMLInputElement>) => {
     const text = event.clipboardData.getData("text/plain");
-    if (!looksLikeSeveral(text)) return;
+    if (!looksLikeSeveralNumbers(text)) return;
     event.preventDefault();
     setPasteText(text);
     readPaste(text);

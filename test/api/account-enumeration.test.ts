@@ -103,7 +103,7 @@ describe("sign-up and forgot-password do not tell which addresses have accounts"
     expect(created?.emailVerifiedAt).toBeNull();
   });
 
-  it("when forgot-password is asked 30 times each for a known and an unknown address, then the median answer times differ by less than 5 ms", async () => {
+  it("when forgot-password is asked 30 times each for a known and an unknown address, back to back, then the answer times differ by less than 5 ms (median)", async () => {
     const known = await signUp(app);
     const unknownEmail = uniqueEmail("nobody");
     const times = await timeInWorker({
@@ -113,12 +113,16 @@ describe("sign-up and forgot-password do not tell which addresses have accounts"
       tries: 30,
       pauseMs: 40,
     });
-    const difference = Math.abs(median(times.known) - median(times.unknown));
-    console.log(
-      `forgot-password medians over 30 tries: known ${median(times.known).toFixed(2)} ms, unknown ${median(times.unknown).toFixed(2)} ms, difference ${difference.toFixed(2)} ms`,
-    );
     expect(times.known).toHaveLength(30);
-    expect(difference).toBeLessThan(5);
+    expect(times.unknown).toHaveLength(30);
+    // Each try asks for both addresses back to back, so a change in the machine's load (other
+    // test runs share its two cores) falls on both: the median of the 30 paired differences is
+    // what the addresses themselves cost. With the token work done before answering it measured 7.7 and 9.8 ms here.
+    const paired = median(times.known.map((known, i) => known - times.unknown[i]));
+    console.log(
+      `forgot-password over 30 tries: median known ${median(times.known).toFixed(2)} ms, unknown ${median(times.unknown).toFixed(2)} ms, median paired difference ${paired.toFixed(2)} ms`,
+    );
+    expect(Math.abs(paired)).toBeLessThan(5);
     await waitForMail(app, known.email, { subject: /reset your password/ });
     expect(await mailCount(app, unknownEmail)).toBe(0);
   });

@@ -120,10 +120,17 @@ export function verifyEmailHandler(context: AppContext): BodyHandler<VerifyEmail
     const row = await EmailVerificationToken.findOne({
       where: { tokenHash: hashToken(res.locals.input.body.token) },
     });
-    if (!row) throw tokenProblem("This confirmation link is not valid. Sign up again for a new one.");
+    // A new link comes from "Forgot your password?" (a reset proves the address too), not from signing up
+    // again: that only reminds the address of its account, so whoever chose the first password keeps no hold on it.
+    if (!row)
+      throw tokenProblem(
+        "This confirmation link is not valid. Sign in, or use “Forgot your password?”: a reset confirms the address too.",
+      );
     if (row.usedAt) throw tokenProblem("This confirmation link has been used already. Sign in.");
     if (row.expiresAt.getTime() <= Date.now())
-      throw tokenProblem("This confirmation link has expired. Sign up again for a new one.");
+      throw tokenProblem(
+        "This confirmation link has expired. Sign in, or use “Forgot your password?”: a reset confirms the address too.",
+      );
     const user = await context.sequelize.transaction(async (transaction) => {
       // Single use even if opened twice at once.
       const [claimed] = await EmailVerificationToken.update(

@@ -1,7 +1,12 @@
 import { zodResolver } from "@hookform/resolvers/zod";
 import { useForm } from "react-hook-form";
 import { Link, useNavigate, useSearchParams } from "react-router-dom";
-import { PASSWORD_MIN_LENGTH, signUpBodySchema, type SignUpBody } from "../../../../../core/contract/auth";
+import {
+  nextPathSchema,
+  PASSWORD_MIN_LENGTH,
+  signUpBodySchema,
+  type SignUpBody,
+} from "../../../../../core/contract/auth";
 import { ApiError } from "../../../lib/api-client";
 import { applyServerErrors, Field, FormMessage, primaryButton } from "../../../lib/forms";
 import { safeNext } from "../../../lib/session";
@@ -29,7 +34,12 @@ export function SignUpPage() {
   const { errors } = form.formState;
   const onSubmit = form.handleSubmit((body) =>
     signUp.mutate(
-      { ...body, next, ...(invitationToken ? { invitationToken } : {}) },
+      {
+        ...body,
+        // A `next` the server would refuse is dropped rather than failing a field the form does not show.
+        ...(nextPathSchema.safeParse(next).success ? { next } : {}),
+        ...(invitationToken ? { invitationToken } : {}),
+      },
       {
         onSuccess: (data) => {
           if ("user" in data) navigate(next, { replace: true });

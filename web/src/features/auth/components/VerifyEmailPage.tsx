@@ -28,8 +28,8 @@ export function VerifyEmailPage() {
             Sign in
           </Link>{" "}
           or{" "}
-          <Link to="/sign-up" className="text-ink underline">
-            sign up again
+          <Link to="/forgot-password" className="text-ink underline">
+            choose a new password
           </Link>
           .
         </p>

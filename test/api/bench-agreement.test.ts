@@ -10,6 +10,7 @@ import { criteriaResults } from "../../web/src/features/bench/model/derive";
 import {
   benchFieldsOf,
   benchMaterialOf,
+  combinationRequirementsFor,
   projectRequirementsFor,
 } from "../../web/src/features/bench/model/project-requirements";
 import { browserAgent } from "../support/accounts";
@@ -17,10 +18,11 @@ import { buildTestApp } from "../support/app";
 
 /**
  * The bench and the comparison must give the same verdict for the same saved state: for every
- * load-case row of the comparison, the state is opened the way the bench opens it from that row
- * (its saved tensor and unit, the location's material in MPa, the project's factors for the
- * case's category, the project's choice on unsuited criteria) and rated by the bench's own
- * model; each check must match the comparison's — status, required factor, factor and verdict.
+ * row of the comparison, the state is opened the way the bench opens it from that row (a load
+ * case's saved tensor and unit with its category's factors; a combination's superposed tensor
+ * with the project default; the location's material in MPa; the project's choice on unsuited
+ * criteria) and rated by the bench's own model; each check must match the comparison's —
+ * status, required factor, category, factor and verdict.
  */
 describe("the bench and the comparison agree on every row", () => {
   const adminUrl = inject("adminUrl");
@@ -41,12 +43,20 @@ describe("the bench and the comparison agree on every row", () => {
       (await agent.get(`/api/workspaces/${workspaceId}/materials`).expect(200)).body,
     );
     let compared = 0;
-    for (const row of comparison.rows.filter((r) => r.kind === "load-case")) {
-      const loadCase = loadCases.find((c) => c.id === row.caseId)!;
+    for (const row of comparison.rows) {
       const location = locations.find((l) => l.id === row.locationId)!;
-      const fields = benchFieldsOf(loadCase, location.id)!;
       const material = benchMaterialOf(location.material ?? project.defaultMaterial, materials)!;
-      const { requirements } = projectRequirementsFor(project, loadCase.category);
+      // A load case opens with its saved tensor and its category's factors; a combination opens
+      // with its superposed tensor (the link carries it) and the project default.
+      const loadCase = loadCases.find((c) => c.id === row.caseId);
+      const fields =
+        row.kind === "load-case"
+          ? benchFieldsOf(loadCase!, location.id)!
+          : { tensor: row.componentsPa, unit: "Pa" as const };
+      const { requirements } =
+        row.kind === "load-case"
+          ? projectRequirementsFor(project, loadCase!.category)
+          : combinationRequirementsFor(project);
       const bench = criteriaResults(fields.tensor, fields.unit, material, requirements, {
         includeUnsuited: project.includeUnsuitedCriteria,
       });
@@ -72,7 +82,7 @@ describe("the bench and the comparison agree on every row", () => {
     return { compared, comparison };
   }
 
-  it("when the demo is seeded, and again after the shell project is given factors per category and asks for unsuited criteria, then every check of every load-case row has the bench's verdict and factor", async () => {
+  it("when the demo is seeded, and again after the shell project is given factors per category and asks for unsuited criteria, then every check of every row (load cases and combinations) has the bench's verdict and factor", async () => {
     await ensureDatabase(adminUrl, "sigmacube_bench_agreement");
     const { app, context, close } = buildTestApp({ databaseUrl, webDist: null });
     closeApp = close;

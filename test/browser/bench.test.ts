@@ -265,7 +265,10 @@ describe("the bench in Chromium", () => {
     await page.getByText("Results copied.").waitFor();
     const text = await page.evaluate(() => navigator.clipboard.readText());
     expect(text).toMatch(/σ₁\s+\d/);
-    expect(text).toMatch(/von Mises\s+[\d.]+ MPa\s+[\d.]+\s+\d+ %\s+(passes|close|FAILS)/);
+    // criterion, σ_eq, n, required n, utilisation, verdict (the required factor has its own column)
+    expect(text).toMatch(/von Mises\s+[\d.]+ MPa\s+[\d.]+\s+[\d.]+\s+\d+ %\s+(passes|close|FAILS)/);
+    expect(text).toMatch(/Governs: \S/);
+    expect(text).toMatch(/maximum shear \(σ₁ − σ₃\)\/2/);
     expect(text).toMatch(/licensed engineer/);
     expect(text).toMatch(/EN 10025-2 S235/);
   });

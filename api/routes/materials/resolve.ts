@@ -89,11 +89,15 @@ export function resolveMaterial(ref: MaterialRef | null, library: Map<string, Ma
     const m = publishedMaterial(ref.id);
     if (!m) return { ...NONE, note: `The built-in material "${ref.id}" is not known here.` };
     return {
-      strengths: strengthsOf(
-        m.yield === undefined ? null : m.yield * MPA,
-        m.ultimateTension * MPA,
-        m.ultimateCompression * MPA,
-      ),
+      // The built-in list says whether a grade is brittle; core uses it to pick the criteria that apply.
+      strengths: {
+        ...strengthsOf(
+          m.yield === undefined ? null : m.yield * MPA,
+          m.ultimateTension * MPA,
+          m.ultimateCompression * MPA,
+        ),
+        behaviour: m.brittle ? "brittle" : "ductile",
+      },
       label: `${m.name} (${m.standard})`,
       kind: "published",
       note: `Published minimum values, ${FROM_MEMORY_NOTE}.`,

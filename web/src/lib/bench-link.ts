@@ -42,3 +42,30 @@ export function parseBenchSource(search: string): BenchSource | null {
   const [workspaceId, projectId, loadCaseId, locationId] = parts;
   return { workspaceId, projectId, loadCaseId, locationId };
 }
+
+/** Where a combination's superposed state was computed: the project and location (its factors and material). */
+export type CombinationSource = { workspaceId: string; projectId: string; locationId: string };
+
+/** The bench address for a combination's superposed state: view only, checked as its project checks it there. */
+export function benchLinkForCombination(
+  name: string,
+  from: CombinationSource,
+  components: Components,
+  unit: StressUnitName,
+): string {
+  const q = new URLSearchParams();
+  stateParams(q, components, unit);
+  q.set("combination", name);
+  q.set("from", [from.workspaceId, from.projectId, from.locationId].join("/"));
+  return `/bench?${tidy(q)}`;
+}
+
+/** Reads `from=workspace/project/location` from a query string; null when absent or malformed. */
+export function parseCombinationSource(search: string): CombinationSource | null {
+  const raw = new URLSearchParams(search).get("from");
+  if (!raw) return null;
+  const parts = raw.split("/");
+  if (parts.length !== 3 || !parts.every((p) => UUID.test(p))) return null;
+  const [workspaceId, projectId, locationId] = parts;
+  return { workspaceId, projectId, locationId };
+}

@@ -10,11 +10,21 @@ import { locationResponseSchema, projectResponseSchema } from "../../../../../co
 import { roleAtLeast, workspaceSchema } from "../../../../../core/contract/workspaces";
 import { ToolButton } from "../../../components/ToolButton";
 import { ApiError, apiGet, apiSend } from "../../../lib/api-client";
-import { parseBenchSource, type BenchSource } from "../../../lib/bench-link";
+import {
+  parseBenchSource,
+  parseCombinationSource,
+  type BenchSource,
+  type CombinationSource,
+} from "../../../lib/bench-link";
 import { FormMessage } from "../../../lib/forms";
 import { useBenchStore } from "../model/store";
 import { selectInputValid, type BenchState } from "../model/bench-state";
-import { benchFieldsOf, benchMaterialOf, projectRequirementsFor } from "../model/project-requirements";
+import {
+  benchFieldsOf,
+  benchMaterialOf,
+  combinationRequirementsFor,
+  projectRequirementsFor,
+} from "../model/project-requirements";
 
 const workspaceResponse = z.object({ workspace: workspaceSchema });
 const KEYS = ["xx", "yy", "zz", "xy", "yz", "zx"] as const;
@@ -59,13 +69,14 @@ export function SavedStateBar() {
   const [source] = useState<BenchSource | null>(() => parseBenchSource(window.location.search));
   // Read once on arrival: the bench rewrites its address, keeping only `source`.
   const [combination] = useState(() => new URLSearchParams(window.location.search).get("combination"));
-  if (combination && !source) return <CombinationNote name={combination} />;
+  const [from] = useState(() => parseCombinationSource(window.location.search));
+  if (combination && !source) return <CombinationNote name={combination} from={from} />;
   if (!source) return null;
   return <SavedState source={source} />;
 }
 
 /** A combination's superposed state is not stored anywhere: it is shown view-only, with the superposition caution. */
-function CombinationNote({ name }: { name: string }) {
+function CombinationNote({ name, from }: { name: string; from: CombinationSource | null }) {
   return (
     <section
       aria-label="Combination state"
@@ -75,11 +86,50 @@ function CombinationNote({ name }: { name: string }) {
         Combination: <strong>{name}</strong> · view only (a superposed state is computed, not saved; edit its
         load cases instead)
       </p>
+      {from && <CombinationCheck from={from} />}
       <p className="text-graphite-soft">
         <span aria-hidden="true">⚠ </span>
         {SUPERPOSITION_CAUTION}
       </p>
     </section>
+  );
+}
+
+/** Applies the check the comparison made of the combination there: the project's default factors and the location's material. */
+function CombinationCheck({ from }: { from: CombinationSource }) {
+  const base = `/workspaces/${from.workspaceId}/projects/${from.projectId}`;
+  const act = useBenchStore((s) => s.act);
+  const project = useQuery({
+    queryKey: ["bench-combination", from, "project"],
+    queryFn: () => apiGet(base, projectResponseSchema).then((r) => r.project),
+    retry: false,
+  });
+  const location = useQuery({
+    queryKey: ["bench-combination", from, "location"],
+    queryFn: () =>
+      apiGet(`${base}/locations/${from.locationId}`, locationResponseSchema).then((r) => r.location),
+    retry: false,
+  });
+  const materials = useQuery({
+    queryKey: ["bench-combination", from, "materials"],
+    queryFn: () => apiGet(`/workspaces/${from.workspaceId}/materials`, materialListSchema),
+  });
+  useEffect(() => {
+    if (!project.data || !location.data || !materials.data) return;
+    const material = benchMaterialOf(location.data.material ?? project.data.defaultMaterial, materials.data);
+    act.applyShared({
+      ...(material ? { material } : {}),
+      projectRequirements: combinationRequirementsFor(project.data),
+      behaviour: "from-data",
+      includeUnsuited: project.data.includeUnsuitedCriteria,
+    });
+  }, [project.data, location.data, materials.data, act]);
+  if (!project.data || !location.data) return null;
+  return (
+    <p className="text-graphite-soft">
+      At <strong>{location.data.name}</strong> in {project.data.name}, checked with the project&apos;s default
+      factors and this location&apos;s material.
+    </p>
   );
 }
 

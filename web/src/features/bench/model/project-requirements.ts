@@ -37,6 +37,19 @@ export function projectRequirementsFor(
   };
 }
 
+/** The project's factors for a combination's superposed state: the default (a combination has no category). */
+export function combinationRequirementsFor(
+  project: Pick<Project, "name" | "requirements" | "categoryRequirements">,
+): ProjectRequirements {
+  return {
+    requirements: requirementsFor(
+      { defaults: project.requirements, categories: project.categoryRequirements },
+      null,
+    ),
+    source: `${project.name}, combination: the project default (a combination has no category)`,
+  };
+}
+
 /** The saved state at a location, as bench fields (tensor in the unit it was entered in). */
 export function benchFieldsOf(
   loadCase: LoadCase,

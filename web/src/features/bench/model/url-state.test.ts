@@ -15,6 +15,7 @@ describe("bench state in the URL and as text", () => {
     s = act.toggleEnvelope(s, "mohr-coulomb");
     s = act.setPlaneEnabled(act.setPlaneNormal(s, [1, 2, 2]), true);
     s = act.setMohrView(act.setRotationView(s, "euler"), "plane");
+    s = act.setIncludeUnsuited(act.setBehaviour(s, "brittle"), true);
     const back = act.applyShared(initialBenchState(), decodeBenchState("?" + encodeBenchState(s)));
     expect(back.unit).toBe("ksi");
     expect(back.tensor.xx).toBe(s.tensor.xx === 0 ? 0 : Number(s.tensor.xx.toPrecision(15)));
@@ -27,6 +28,11 @@ describe("bench state in the URL and as text", () => {
     expect(back.plane).toEqual({ enabled: true, normal: [1, 2, 2] });
     expect(back.rotationView).toBe("euler");
     expect(back.mohrView).toBe("plane");
+    expect(back.behaviour).toBe("brittle");
+    expect(back.includeUnsuited).toBe(true);
+    expect(criteriaOf(back).map((r) => r.available && r.verdict)).toEqual(
+      criteriaOf(s).map((r) => r.available && r.verdict),
+    );
   });
 
   it("when a link holds malformed values, then they are ignored and the rest is read", () => {

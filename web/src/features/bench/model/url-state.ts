@@ -2,7 +2,8 @@
  * The bench's shareable state in the URL's query, so a link reproduces what the sender saw:
  * s = six components (xx yy zz xy yz zx, in u), u = unit, r = rotation as axis x,y,z and angle (°),
  * rv = rotation description, seq = Euler sequence, m = built-in material id or "custom" with
- * fy, fu, fc (MPa), n = required factor, env = envelope criteria, p = plane normal (when shown),
+ * fy, fu, fc (MPa), n = required factor, mb = material behaviour when chosen (ductile|brittle),
+ * un = 1 when criteria that do not suit the material are rated too, env = envelope criteria, p = plane normal (when shown),
  * mohr = Mohr picture, in = input form. Unknown or malformed parameters are ignored, never fatal.
  */
 import {
@@ -57,6 +58,8 @@ export function encodeBenchState(state: BenchState): string {
     if (m.ultimateCompression !== null) q.set("fc", num(m.ultimateCompression));
   }
   q.set("n", num(state.requiredFactor));
+  if (state.behaviour !== "from-data") q.set("mb", state.behaviour);
+  if (state.includeUnsuited) q.set("un", "1");
   q.set("env", state.envelopeCriteria.map((c) => CRITERION_CODE[c]).join(","));
   if (state.plane.enabled) q.set("p", state.plane.normal.map(num).join(","));
   if (state.mohrView !== "3d") q.set("mohr", state.mohrView);
@@ -109,6 +112,9 @@ export function decodeBenchState(search: string): Partial<BenchState> {
   }
   const n = Number(q.get("n"));
   if (q.get("n") !== null && Number.isFinite(n) && n >= 1) out.requiredFactor = n;
+  const mb = q.get("mb");
+  if (mb === "ductile" || mb === "brittle") out.behaviour = mb;
+  if (q.get("un") === "1") out.includeUnsuited = true;
   const env = q.get("env");
   if (env !== null) {
     const codes = env.split(",");

@@ -19,7 +19,7 @@ import type { StressUnitName } from "../../../../../core/contract/materials";
 import { CRITERION_LABELS, type CriterionName } from "../../../../../core/contract/projects";
 import { Quantity, stressTone } from "../../../components/Quantity";
 import { Verdict } from "../../../components/Verdict";
-import { benchLinkForState, benchLinkForValues } from "../../../lib/bench-link";
+import { benchLinkForCombination, benchLinkForState } from "../../../lib/bench-link";
 import { fixed } from "../../../lib/number-format";
 import { checkOf, governingMarks, inUnit } from "../model/rows";
 
@@ -205,8 +205,14 @@ export function ComparisonTable({
                   values,
                   unit,
                 )
-              : // `combination` names the superposed state, so the bench says it is view-only and a superposition.
-                `${benchLinkForValues(values, unit)}&combination=${encodeURIComponent(r.caseName)}`;
+              : // The bench says the superposed state is view-only and a superposition, and checks it
+                // with the project's default factors and the location's material, as this row is.
+                benchLinkForCombination(
+                  r.caseName,
+                  { workspaceId, projectId: comparison.projectId, locationId: r.locationId },
+                  values,
+                  unit,
+                );
           return (
             <Link
               to={to}

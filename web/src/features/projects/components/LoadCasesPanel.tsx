@@ -32,6 +32,7 @@ export function LoadCasesPanel({
   locations,
   unit,
   canEdit,
+  allowableCategories = [],
 }: {
   workspaceId: string;
   projectId: string;
@@ -39,7 +40,11 @@ export function LoadCasesPanel({
   locations: Location[];
   unit: StressUnitName;
   canEdit: boolean;
+  /** Categories the project gives factors of their own (the checks panel); others use the default. */
+  allowableCategories?: string[];
 }) {
+  const ownFactors = (category: string) =>
+    allowableCategories.some((a) => a.trim().toLowerCase() === category.trim().toLowerCase());
   const m = useLoadCaseMutations(workspaceId, projectId);
   const [editing, setEditing] = useState<{ caseId: string; locationId: string } | null>(null);
   const [history, setHistory] = useState<{ caseId: string; locationId: string } | null>(null);
@@ -98,6 +103,11 @@ export function LoadCasesPanel({
                       {c.category}
                     </span>
                   )}
+                  <div className="text-[12px] font-normal text-graphite-soft" data-testid="case-allowables">
+                    {c.category && ownFactors(c.category)
+                      ? `checked with the “${c.category}” factors`
+                      : "checked with the project default factors"}
+                  </div>
                   <div className="text-[12px] font-normal text-graphite-faint">version {c.version}</div>
                   {c.description && (
                     <div className="max-w-56 text-[12px] font-normal text-graphite-soft">{c.description}</div>
@@ -303,7 +313,9 @@ export function LoadCasesPanel({
             className="w-36 rounded-sm border border-rule-strong bg-panel px-2 py-1"
           />
           <datalist id="case-categories">
-            {LOAD_CASE_CATEGORY_SUGGESTIONS.map((s) => (
+            {[
+              ...new Set([...LOAD_CASE_CATEGORY_SUGGESTIONS, ...allowableCategories.map((a) => a.trim())]),
+            ].map((s) => (
               <option key={s} value={s} />
             ))}
           </datalist>

@@ -87,6 +87,7 @@ export function ProjectPage() {
         locations={locations.data ?? []}
         unit={unit}
         canEdit={canEdit}
+        allowableCategories={p.categoryRequirements.map((c) => c.category)}
       />
       <CombinationsPanel
         workspaceId={workspaceId}

@@ -4,8 +4,10 @@
  * under a few to a few dozen load cases and code combinations, each combination summing a
  * handful of cases (common practice, no source) — so an engineer never meets them, while
  * they cap what one request can make the server compute: the comparison of the largest
- * project is (cases + combinations) × locations = 400 × 200 = 80 000 rows, which the server
- * answers within 2 s (test/api/comparison-scale.test.ts). Finite-element point tables, which
+ * project is (cases + combinations) × locations = 200 × 100 = 20 000 rows, which the server
+ * answers within 2 s on a 2-core machine (test/api/comparison-scale.test.ts). Twice these
+ * counts (80 000 rows) took 8–13 s to compute there, most of it per-row work in the
+ * comparison's builder, so raise them only with a faster builder and that test passing. Finite-element point tables, which
  * do have thousands of points, are screened in the browser's batch layer, not stored here.
  *
  * The API refuses to go past them on create and on import with a 400 that names the limit;
@@ -13,11 +15,11 @@
  */
 export const PROJECT_LIMITS = {
   /** Live locations in one project. */
-  locations: 200,
+  locations: 100,
   /** Live load cases in one project. */
-  loadCases: 200,
+  loadCases: 100,
   /** Live combinations in one project. */
-  combinations: 200,
+  combinations: 100,
   /** Terms (factor × load case) in one combination. */
   termsPerCombination: 50,
 } as const;

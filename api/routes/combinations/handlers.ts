@@ -16,6 +16,7 @@ import { changedFields, recordAudit } from "../audit/record";
 import { moveToTrashHandler } from "../trash/move-to-trash";
 import { currentStatesOf } from "../load-cases/states";
 import { peopleById } from "../projects/people";
+import { assertWithinLimit } from "../projects/limits";
 import { findProject } from "../projects/scope";
 import { assertVersion } from "../projects/versioning";
 import { combinationFormula, presentCombination } from "./presenter";
@@ -150,6 +151,11 @@ export function createCombinationHandler(
         lock: true,
       });
       await assertProjectCases(project.id, body.terms, transaction);
+      const live = await Combination.count({
+        where: { projectId: project.id, deletedAt: null },
+        transaction,
+      });
+      assertWithinLimit("combinations", live, 1, "combinations");
       const last = (await Combination.max("position", { where: { projectId: project.id }, transaction })) as
         number | null;
       const c = await Combination.create(

@@ -11,7 +11,7 @@ import { buildComparison, type ComparisonInput } from "./build";
 /** How long one chunk of computation may hold the event loop before the next waits its turn. */
 const CHUNK_TARGET_MS = 20;
 /** Rows the first chunk computes; later chunks are sized from the time the previous ones took. */
-const FIRST_CHUNK_ROWS = 2_000;
+const FIRST_CHUNK_ROWS = 500;
 
 const nextTurn = () => new Promise<void>((resolve) => setImmediate(resolve));
 

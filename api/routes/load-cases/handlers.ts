@@ -10,6 +10,7 @@ import type { RouteHandler } from "../../openapi/registry";
 import { changedFields, recordAudit } from "../audit/record";
 import { moveToTrashHandler } from "../trash/move-to-trash";
 import { peopleById } from "../projects/people";
+import { assertWithinLimit } from "../projects/limits";
 import { findProject } from "../projects/scope";
 import { assertVersion } from "../projects/versioning";
 import { loadCaseAuditFields, presentLoadCases } from "./presenter";
@@ -97,6 +98,8 @@ export function createLoadCaseHandler(
         body.states.map((_, i) => `states.${i}.locationId`),
         transaction,
       );
+      const live = await LoadCase.count({ where: { projectId: project.id, deletedAt: null }, transaction });
+      assertWithinLimit("loadCases", live, 1, "loadCases");
       const last = (await LoadCase.max("position", { where: { projectId: project.id }, transaction })) as
         number | null;
       const c = await LoadCase.create(

@@ -111,7 +111,7 @@ export const comparisonPageSchema = comparisonSchema.extend({
     totalPages: z.int(),
   }),
 });
-export type ComparisonPage = z.infer<typeof comparisonPageSchema>;
+export type PagedComparison = z.infer<typeof comparisonPageSchema>;
 
 /** `?page=1&limit=200`: which rows the client shows (1-based page of `limit` rows). */
 export const comparisonQuerySchema = z.object({

@@ -5,13 +5,14 @@
  * handful of cases (common practice, no source) — so an engineer never meets them, while
  * they cap what one request can make the server compute: the comparison of the largest
  * project is (cases + combinations) × locations = 200 × 100 = 20 000 rows, which the server
- * answers within 2 s on a 2-core machine (test/api/comparison-scale.test.ts). Twice these
- * counts (80 000 rows) took 8–13 s to compute there, most of it per-row work in the
- * comparison's builder, so raise them only with a faster builder and that test passing. Finite-element point tables, which
- * do have thousands of points, are screened in the browser's batch layer, not stored here.
+ * must answer within 2 s on this 2-core machine (test/api/comparison-scale.test.ts). Twice
+ * these counts (80 000 rows) took 8–13 s to compute here, nearly all of it per-row work in
+ * the comparison's builder, so raise them only with a faster builder and that test passing.
+ * Finite-element point tables, which do have thousands of points, are screened in the
+ * browser's batch layer, not stored here.
  *
  * The API refuses to go past them on create and on import with a 400 that names the limit;
- * the browser shows the same numbers. Plain constants: imports nothing.
+ * the API and the browser import them from here. Plain constants: imports nothing.
  */
 export const PROJECT_LIMITS = {
   /** Live locations in one project. */
@@ -26,7 +27,7 @@ export const PROJECT_LIMITS = {
 
 export type ProjectLimitName = keyof typeof PROJECT_LIMITS;
 
-/** How the 400 names a limit, e.g. "A project holds at most 200 locations." */
+/** How the 400 names a limit, e.g. "A project holds at most 100 locations (limit "locations")." */
 export const LIMIT_NOUNS: Record<ProjectLimitName, string> = {
   locations: "locations",
   loadCases: "load cases",

@@ -3,7 +3,7 @@ import type { Server } from "node:http";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import {
   comparisonPageSchema,
-  type ComparisonPage,
+  type PagedComparison,
   type GoverningView,
 } from "../../core/contract/comparison";
 import { PROJECT_LIMITS } from "../../core/contract/limits";
@@ -36,7 +36,7 @@ afterAll(async () => {
   await close();
 });
 
-async function comparison(projectId: string, query = ""): Promise<ComparisonPage> {
+async function comparison(projectId: string, query = ""): Promise<PagedComparison> {
   const response = await fetch(`${origin}${wsPath(team, `/projects/${projectId}/comparison`)}${query}`, {
     headers: { cookie },
   });
@@ -45,7 +45,7 @@ async function comparison(projectId: string, query = ""): Promise<ComparisonPage
 }
 
 /** Per criterion, the row with the highest utilisation, the first one on ties (core's findGoverning rule, restated). */
-function highestUtilisation(rows: ComparisonPage["rows"]) {
+function highestUtilisation(rows: PagedComparison["rows"]) {
   const best = new Map<GoverningView["criterion"], { rowId: string; utilisation: number }>();
   for (const row of rows) {
     for (const check of row.checks) {

@@ -2,7 +2,7 @@ import { findGoverning, type ComparisonRow } from "../../../core";
 import {
   governingSummary,
   type Comparison,
-  type ComparisonPage,
+  type PagedComparison,
   type ComparisonQuery,
   type GoverningView,
 } from "../../../core/contract/comparison";
@@ -74,7 +74,7 @@ function takeRun(input: ComparisonInput, items: Item[], start: number, rows: num
 export async function comparisonPage(
   input: ComparisonInput,
   query: ComparisonQuery,
-): Promise<ComparisonPage> {
+): Promise<PagedComparison> {
   const items: Item[] = [
     ...input.cases.map((_, index) => ({ kind: "case" as const, index })),
     ...input.combinations.map((_, index) => ({ kind: "combination" as const, index })),

@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { uuidInput } from "./ids";
+import { limitMessage, PROJECT_LIMITS } from "./limits";
 import { componentsOutSchema } from "./load-cases";
 import { finiteNumber, versionSchema } from "./materials";
 import { personRefSchema, projectParamsSchema } from "./projects";
@@ -30,7 +31,7 @@ export const combinationTermInputSchema = z.object({
 const termsSchema = z
   .array(combinationTermInputSchema)
   .min(1, "Add at least one load case with its factor.")
-  .max(50, "At most 50 terms.")
+  .max(PROJECT_LIMITS.termsPerCombination, limitMessage("termsPerCombination"))
   .superRefine((terms, ctx) => {
     const seen = new Set<string>();
     terms.forEach((t, i) => {

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { COMPARISON_PAGE } from "./limits";
 import {
   CRITERION_LABELS,
   categoryRequirementSchema,
@@ -130,6 +131,35 @@ export const comparisonSchema = z.object({
   cautions: z.array(z.string()),
 });
 export type Comparison = z.infer<typeof comparisonSchema>;
+
+/**
+ * What `GET …/comparison` answers: one page of the rows (and of the skipped pairs), in the
+ * comparison's order, while `governing`, `governingByLocation` and `summary` always cover
+ * every row of the project.
+ */
+export const comparisonPageSchema = comparisonSchema.extend({
+  paging: z.object({
+    page: z.int(),
+    limit: z.int(),
+    totalRows: z.int(),
+    totalSkipped: z.int(),
+    /** At least 1, so page 1 always exists. */
+    totalPages: z.int(),
+  }),
+});
+export type PagedComparison = z.infer<typeof comparisonPageSchema>;
+
+/** `?page=1&limit=200`: which rows the client shows (1-based page of `limit` rows). */
+export const comparisonQuerySchema = z.object({
+  page: z.coerce.number({ error: "must be a whole number" }).int("must be a whole number").min(1).default(1),
+  limit: z.coerce
+    .number({ error: "must be a whole number" })
+    .int("must be a whole number")
+    .min(1)
+    .max(COMPARISON_PAGE.maxLimit, `must be at most ${COMPARISON_PAGE.maxLimit}`)
+    .default(COMPARISON_PAGE.defaultLimit),
+});
+export type ComparisonQuery = z.infer<typeof comparisonQuerySchema>;
 
 /** A safety factor as the summary writes it: two decimals, "∞" for none. */
 export function formatFactor(factor: number | null): string {

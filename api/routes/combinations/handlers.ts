@@ -16,6 +16,7 @@ import { changedFields, recordAudit } from "../audit/record";
 import { moveToTrashHandler } from "../trash/move-to-trash";
 import { currentStatesOf } from "../load-cases/states";
 import { peopleById } from "../projects/people";
+import { assertWithinLimit } from "../projects/limits";
 import { findProject } from "../projects/scope";
 import { assertVersion } from "../projects/versioning";
 import { combinationFormula, presentCombination } from "./presenter";
@@ -65,7 +66,20 @@ async function writeTerms(combinationId: string, terms: TermInput[], transaction
 
 async function present(c: Combination, transaction?: Transaction) {
   const terms = (await termsOf([c], transaction)).get(c.id)!;
-  return presentCombination(c, terms, await peopleById([c.updatedBy, c.createdBy]));
+  return presentCombination(c, terms, await peopleById([c.updatedBy, c.createdBy], transaction));
+}
+
+/** A write's transaction found the combination at another version than the one sent: nothing was written. */
+const STALE = Symbol("stale version");
+
+/** The 409 for a write based on an old version, built after its transaction ended (the row lock is held no longer than the read). */
+async function refuseStale(projectId: string, combinationId: string, sentVersion: number) {
+  // The transaction has just found the project in this workspace; the combination is read afresh for its version.
+  const c = await findCombination(projectId, combinationId);
+  const current = await present(c);
+  assertVersion(c, sentVersion, `The combination "${c.name}"`, () => current);
+  // Versions only grow, so a stale version cannot become current again.
+  throw new Error(`combination ${combinationId} was stale at version ${sentVersion} but is now at it`);
 }
 
 export const listCombinationsHandler: RouteHandler<ProjectParams, NoInput, NoInput> = async (_req, res) => {
@@ -137,6 +151,11 @@ export function createCombinationHandler(
         lock: true,
       });
       await assertProjectCases(project.id, body.terms, transaction);
+      const live = await Combination.count({
+        where: { projectId: project.id, deletedAt: null },
+        transaction,
+      });
+      assertWithinLimit("combinations", live, 1, "combinations");
       const last = (await Combination.max("position", { where: { projectId: project.id }, transaction })) as
         number | null;
       const c = await Combination.create(
@@ -174,11 +193,12 @@ export function updateCombinationHandler(
     const user = currentUser(res);
     const { workspace } = currentMembership(res);
     const { version, terms, ...fields } = res.locals.input.body;
+    const { projectId, combinationId } = res.locals.input.params;
     const updated = await context.sequelize.transaction(async (transaction) => {
-      const project = await findProject(workspace.id, res.locals.input.params.projectId, { transaction });
-      const c = await findCombination(project.id, res.locals.input.params.combinationId, transaction);
+      const project = await findProject(workspace.id, projectId, { transaction });
+      const c = await findCombination(project.id, combinationId, transaction);
+      if (c.version !== version) return STALE;
       const current = await present(c, transaction);
-      assertVersion(c, version, `The combination "${c.name}"`, () => current);
       if (terms) await assertProjectCases(project.id, terms, transaction);
       const before = {
         name: c.name,
@@ -199,6 +219,7 @@ export function updateCombinationHandler(
       });
       return view;
     });
+    if (updated === STALE) return refuseStale(projectId, combinationId, version);
     res.json({ combination: updated });
   };
 }

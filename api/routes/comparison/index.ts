@@ -1,9 +1,14 @@
-import { comparisonParamsSchema, comparisonSchema } from "../../../core/contract/comparison";
+import {
+  comparisonPageSchema,
+  comparisonParamsSchema,
+  comparisonQuerySchema,
+} from "../../../core/contract/comparison";
+import type { AppContext } from "../../context";
 import { defineRoute, type AnyRoute } from "../../openapi/registry";
 import { comparisonHandler } from "./handlers";
 
 /** The comparison of every case and combination at every location, with the governing case named. */
-export function comparisonRoutes(): AnyRoute[] {
+export function comparisonRoutes(context: AppContext): AnyRoute[] {
   return [
     defineRoute({
       method: "get",
@@ -11,11 +16,11 @@ export function comparisonRoutes(): AnyRoute[] {
       tag: "comparison",
       summary: "Every load case and combination × location evaluated, with the governing case per criterion",
       description:
-        "Stresses in Pa. A factor of null is infinite (the state never reaches the criterion's surface). Combinations are superposed, which assumes linear-elastic behaviour.",
+        "Stresses in Pa. A factor of null is infinite (the state never reaches the criterion's surface). Combinations are superposed, which assumes linear-elastic behaviour. Rows and skipped pairs come a page at a time (`page`, `limit`); the governing results always cover every row.",
       access: { kind: "member", role: "viewer" },
-      request: { params: comparisonParamsSchema },
-      responses: { 200: { description: "The comparison.", schema: comparisonSchema } },
-      handler: comparisonHandler,
+      request: { params: comparisonParamsSchema, query: comparisonQuerySchema },
+      responses: { 200: { description: "One page of the comparison.", schema: comparisonPageSchema } },
+      handler: comparisonHandler(context),
     }),
   ];
 }

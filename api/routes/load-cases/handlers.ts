@@ -10,6 +10,7 @@ import type { RouteHandler } from "../../openapi/registry";
 import { changedFields, recordAudit } from "../audit/record";
 import { moveToTrashHandler } from "../trash/move-to-trash";
 import { peopleById } from "../projects/people";
+import { assertWithinLimit } from "../projects/limits";
 import { findProject } from "../projects/scope";
 import { assertVersion } from "../projects/versioning";
 import { loadCaseAuditFields, presentLoadCases } from "./presenter";
@@ -39,6 +40,23 @@ async function locationNames(ids: string[], transaction?: Transaction) {
 
 async function presentOne(c: LoadCase, transaction?: Transaction) {
   return (await presentLoadCases([c], transaction))[0];
+}
+
+/** A write's transaction found the case at another version than the one sent: nothing was written. */
+const STALE = Symbol("stale version");
+
+/**
+ * The 409 for a write based on an old version, built after its transaction ended: the row
+ * lock is released at once, so fifty saves from one version queue on the lock for a read
+ * each, not for a read and the presenter's three queries.
+ */
+async function refuseStale(projectId: string, loadCaseId: string, sentVersion: number) {
+  // The transaction has just found the project in this workspace; the case is read afresh for its version.
+  const c = await findLoadCase(projectId, loadCaseId);
+  const current = await presentOne(c);
+  assertVersion(c, sentVersion, `The load case "${c.name}"`, () => current);
+  // Versions only grow, so a stale version cannot become current again.
+  throw new Error(`load case ${loadCaseId} was stale at version ${sentVersion} but is now at it`);
 }
 
 export const listLoadCasesHandler: RouteHandler<ProjectParams, NoInput, NoInput> = async (_req, res) => {
@@ -80,6 +98,8 @@ export function createLoadCaseHandler(
         body.states.map((_, i) => `states.${i}.locationId`),
         transaction,
       );
+      const live = await LoadCase.count({ where: { projectId: project.id, deletedAt: null }, transaction });
+      assertWithinLimit("loadCases", live, 1, "loadCases");
       const last = (await LoadCase.max("position", { where: { projectId: project.id }, transaction })) as
         number | null;
       const c = await LoadCase.create(
@@ -125,11 +145,11 @@ export function updateLoadCaseHandler(
     const user = currentUser(res);
     const { workspace } = currentMembership(res);
     const { version, states = [], removeStates = [], ...fields } = res.locals.input.body;
+    const { projectId, loadCaseId } = res.locals.input.params;
     const updated = await context.sequelize.transaction(async (transaction) => {
-      const project = await findProject(workspace.id, res.locals.input.params.projectId, { transaction });
-      const c = await findLoadCase(project.id, res.locals.input.params.loadCaseId, transaction);
-      const current = await presentOne(c, transaction);
-      assertVersion(c, version, `The load case "${c.name}"`, () => current);
+      const project = await findProject(workspace.id, projectId, { transaction });
+      const c = await findLoadCase(project.id, loadCaseId, transaction);
+      if (c.version !== version) return STALE;
       const ids = [...states.map((s) => s.locationId), ...removeStates];
       await assertProjectLocations(
         project.id,
@@ -167,6 +187,7 @@ export function updateLoadCaseHandler(
         await removeState(transaction, user, c.id, locationId, scope(locationId));
       return presentOne(c, transaction);
     });
+    if (updated === STALE) return refuseStale(projectId, loadCaseId, version);
     res.json({ loadCase: updated });
   };
 }
@@ -181,8 +202,7 @@ export function putStateHandler(context: AppContext): RouteHandler<StateParams, 
     const updated = await context.sequelize.transaction(async (transaction) => {
       const project = await findProject(workspace.id, projectId, { transaction });
       const c = await findLoadCase(project.id, loadCaseId, transaction);
-      const current = await presentOne(c, transaction);
-      assertVersion(c, version, `The load case "${c.name}"`, () => current);
+      if (c.version !== version) return STALE;
       await assertProjectLocations(project.id, [locationId], ["params.locationId"], transaction);
       const names = await locationNames([locationId], transaction);
       await c.update({ version: c.version + 1, updatedBy: user.id }, { transaction });
@@ -200,6 +220,7 @@ export function putStateHandler(context: AppContext): RouteHandler<StateParams, 
       );
       return presentOne(c, transaction);
     });
+    if (updated === STALE) return refuseStale(projectId, loadCaseId, version);
     res.json({ loadCase: updated });
   };
 }

@@ -1,3 +1,4 @@
+import type { Transaction } from "sequelize";
 import type { LoadCase as LoadCaseView } from "../../../core/contract/load-cases";
 import type { LoadCase } from "../../../db/models/load-case";
 import type { StressState } from "../../../db/models/stress-state";
@@ -25,16 +26,16 @@ export function presentLoadCase(
   };
 }
 
-/** Loads the current states and the people named, then presents the cases. */
-export async function presentLoadCases(cases: LoadCase[], transaction?: import("sequelize").Transaction) {
+/** Loads the current states and the people named (inside `transaction` when given), then presents the cases. */
+export async function presentLoadCases(cases: LoadCase[], transaction?: Transaction) {
   const states = await currentStatesOf(
     cases.map((c) => c.id),
     transaction,
   );
-  const people = await peopleById([
-    ...cases.flatMap((c) => [c.updatedBy, c.createdBy]),
-    ...states.map((s) => s.createdBy),
-  ]);
+  const people = await peopleById(
+    [...cases.flatMap((c) => [c.updatedBy, c.createdBy]), ...states.map((s) => s.createdBy)],
+    transaction,
+  );
   return cases.map((c) =>
     presentLoadCase(
       c,

@@ -1,4 +1,4 @@
-import { Op, type Transaction } from "sequelize";
+import { literal, Op, type Transaction } from "sequelize";
 import type { User } from "lucia";
 import { convertStress, type StressUnit } from "../../../core";
 import type {
@@ -53,23 +53,24 @@ export function presentState(s: StressState, people: Map<string, PersonRef>): St
   };
 }
 
-/** The current revision of every state of these cases (at locations not in the trash). */
+/**
+ * The current revision of every state of these cases at locations not in the trash, in
+ * location order (one query: the location's liveness and position are read in it).
+ */
 export async function currentStatesOf(caseIds: string[], transaction?: Transaction): Promise<StressState[]> {
   if (caseIds.length === 0) return [];
-  const rows = await StressState.findAll({
-    where: { loadCaseId: caseIds, isCurrent: true },
-    order: [["createdAt", "ASC"]],
+  return StressState.findAll({
+    where: {
+      loadCaseId: caseIds,
+      isCurrent: true,
+      locationId: { [Op.in]: literal("(SELECT id FROM locations WHERE deleted_at IS NULL)") },
+    },
+    order: [
+      [literal('(SELECT position FROM locations WHERE locations.id = "StressState"."location_id")'), "ASC"],
+      ["createdAt", "ASC"],
+    ],
     transaction,
   });
-  const live = await Location.findAll({
-    attributes: ["id", "position"],
-    where: { id: [...new Set(rows.map((r) => r.locationId))], deletedAt: null },
-    transaction,
-  });
-  const position = new Map(live.map((l) => [l.id, l.position]));
-  return rows
-    .filter((r) => position.has(r.locationId))
-    .sort((a, b) => position.get(a.locationId)! - position.get(b.locationId)!);
 }
 
 /**

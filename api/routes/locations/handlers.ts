@@ -8,6 +8,7 @@ import type { RouteHandler } from "../../openapi/registry";
 import { changedFields, recordAudit } from "../audit/record";
 import { moveToTrashHandler } from "../trash/move-to-trash";
 import { assertMaterialRef, columnsFromRef } from "../materials/resolve";
+import { assertWithinLimit } from "../projects/limits";
 import { findProject } from "../projects/scope";
 import { assertVersion } from "../projects/versioning";
 import { locationAuditFields, presentLocation } from "./presenter";
@@ -61,6 +62,8 @@ export function createLocationHandler(
         lock: true,
       });
       await assertMaterialRef(workspace.id, body.material, "material", transaction);
+      const live = await Location.count({ where: { projectId: project.id, deletedAt: null }, transaction });
+      assertWithinLimit("locations", live, 1, "locations");
       const last = (await Location.max("position", { where: { projectId: project.id }, transaction })) as
         number | null;
       const columns = columnsFromRef(body.material);

@@ -125,7 +125,7 @@ export function updateMaterialHandler(
     const { version, ...body } = res.locals.input.body;
     const material = await context.sequelize.transaction(async (transaction) => {
       const m = await findMaterial(workspace.id, res.locals.input.params.materialId, transaction);
-      const people = await peopleById([m.updatedBy, m.createdBy]);
+      const people = await peopleById([m.updatedBy, m.createdBy], transaction);
       assertVersion(m, version, `The material "${m.name}"`, () => presentMaterial(m, people));
       const before = auditFields(m);
       // Values sent without a unit are in the unit the material already has; strengths not sent keep their Pa values.

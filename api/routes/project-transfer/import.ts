@@ -9,11 +9,28 @@ import { Location } from "../../../db/models/location";
 import { Material } from "../../../db/models/material";
 import { Project } from "../../../db/models/project";
 import { StressState } from "../../../db/models/stress-state";
+import { PROJECT_LIMITS } from "../../../core/contract/limits";
 import { recordAudit } from "../audit/record";
+import { assertWithinLimit, projectLimitError } from "../projects/limits";
 import { columnsFromRef } from "../materials/resolve";
 
 /** What an import made. */
 export type ImportCounts = { materials: number; locations: number; loadCases: number; combinations: number };
+
+/**
+ * Refuses (400 `project_limit`, naming the list) a file whose project would be larger than
+ * PROJECT_LIMITS allow to create by hand, before anything is written.
+ */
+function assertFileWithinLimits(file: ProjectExport) {
+  assertWithinLimit("locations", 0, file.locations.length, "locations");
+  assertWithinLimit("loadCases", 0, file.loadCases.length, "loadCases");
+  assertWithinLimit("combinations", 0, file.combinations.length, "combinations");
+  file.combinations.forEach((c, i) => {
+    if (c.terms.length > PROJECT_LIMITS.termsPerCombination) {
+      throw projectLimitError("termsPerCombination", `combinations.${i}.terms`, c.terms.length);
+    }
+  });
+}
 
 /**
  * Writes a validated export file into `workspaceId` as a new project, all inside the caller's
@@ -26,6 +43,7 @@ export async function importProject(
   workspaceId: string,
   file: ProjectExport,
 ): Promise<{ project: Project; counts: ImportCounts }> {
+  assertFileWithinLimits(file);
   const materialIds = new Map<string, string>();
   for (const m of file.materials) {
     const { key, ...values } = m;

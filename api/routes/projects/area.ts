@@ -21,7 +21,7 @@ export function projectAreaRoutes(context: AppContext): AnyRoute[] {
     ...locationRoutes(context),
     ...loadCaseRoutes(context),
     ...combinationRoutes(context),
-    ...comparisonRoutes(),
+    ...comparisonRoutes(context),
     ...auditRoutes(),
     ...trashRoutes(context),
     ...projectTransferRoutes(context),

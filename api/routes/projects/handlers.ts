@@ -100,7 +100,7 @@ export function updateProjectHandler(
         lock: true,
       });
       const counts = await projectCounts([p.id], transaction);
-      const people = await peopleById([p.createdBy, p.updatedBy]);
+      const people = await peopleById([p.createdBy, p.updatedBy], transaction);
       assertVersion(p, version, `The project "${p.name}"`, () =>
         presentProject(p, counts.get(p.id)!, people),
       );

@@ -96,7 +96,10 @@ export function listTrashHandler(
         );
         found.push(...rows.map((row) => ({ kind, row })));
       }
-      const people = await peopleById(found.map((f) => f.row.deletedBy));
+      const people = await peopleById(
+        found.map((f) => f.row.deletedBy),
+        transaction,
+      );
       return found
         .map(({ kind, row }): TrashItem => {
           const project = row.projectId ? projects.get(row.projectId) : undefined;

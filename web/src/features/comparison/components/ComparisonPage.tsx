@@ -20,7 +20,8 @@ export function ComparisonPage() {
   const { workspaceId = "", projectId = "" } = useParams();
   const workspace = useComparedWorkspace(workspaceId);
   const project = useComparedProject(workspaceId, projectId);
-  const comparison = useComparison(workspaceId, projectId);
+  const [page, setPage] = useState(1);
+  const comparison = useComparison(workspaceId, projectId, page);
   const [chartCriterion, setChartCriterion] = useState<CriterionName | null>(null);
 
   if (comparison.isPending || project.isPending)
@@ -131,7 +132,13 @@ export function ComparisonPage() {
         title="Cases × locations"
         subtitle={`principal stresses σ₁ ≥ σ₂ ≥ σ₃ in ${unit}; SF against the required factor`}
       >
-        <ComparisonTable comparison={c} unit={unit} workspaceId={workspaceId} />
+        <ComparisonTable
+          comparison={c}
+          unit={unit}
+          workspaceId={workspaceId}
+          paging={c.paging}
+          onPage={setPage}
+        />
         {c.skipped.length > 0 && (
           <p className="border-t border-rule px-3 py-2 text-[13px] text-graphite-soft">
             Not compared:{" "}

@@ -14,10 +14,12 @@ import {
   formatFactor,
   type Comparison,
   type ComparisonRowView,
+  type PagedComparison,
 } from "../../../../../core/contract/comparison";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import { CRITERION_LABELS, type CriterionName } from "../../../../../core/contract/projects";
 import { Quantity, stressTone } from "../../../components/Quantity";
+import { ToolButton } from "../../../components/ToolButton";
 import { Verdict } from "../../../components/Verdict";
 import { benchLinkForCombination, benchLinkForState } from "../../../lib/bench-link";
 import { fixed } from "../../../lib/number-format";
@@ -41,15 +43,21 @@ const utilisationOf = (row: ComparisonRowView, c: CriterionName) => {
 /**
  * Every case and combination × location, sortable by any column and filterable by text,
  * kind, location and verdict; governing rows are highlighted and say for which criterion.
+ * A project too large for one page is shown a page at a time (`paging`, `onPage`): sorting
+ * and filters then act on the page shown, while the governing marks cover every row.
  */
 export function ComparisonTable({
   comparison,
   unit,
   workspaceId,
+  paging,
+  onPage,
 }: {
   comparison: Comparison;
   unit: StressUnitName;
   workspaceId: string;
+  paging?: PagedComparison["paging"];
+  onPage?: (page: number) => void;
 }) {
   const marks = useMemo(() => governingMarks(comparison), [comparison]);
   const criteria = comparison.requirements.map((r) => r.criterion);
@@ -302,8 +310,29 @@ export function ComparisonTable({
         </label>
         <span className="ml-auto text-graphite-soft">
           <span className="num">{table.getRowModel().rows.length}</span> of{" "}
-          <span className="num">{comparison.rows.length}</span> rows · stresses in {unit}
+          <span className="num">{comparison.rows.length}</span> rows
+          {paging && paging.totalPages > 1 && (
+            <>
+              {" "}
+              on this page, <span className="num">{paging.totalRows}</span> in all
+            </>
+          )}{" "}
+          · stresses in {unit}
         </span>
+        {paging && paging.totalPages > 1 && onPage && (
+          <nav aria-label="Comparison pages" className="flex items-center gap-2">
+            <ToolButton disabled={paging.page <= 1} onClick={() => onPage(paging.page - 1)}>
+              Previous
+            </ToolButton>
+            <span>
+              page <span className="num">{paging.page}</span> of{" "}
+              <span className="num">{paging.totalPages}</span>
+            </span>
+            <ToolButton disabled={paging.page >= paging.totalPages} onClick={() => onPage(paging.page + 1)}>
+              Next
+            </ToolButton>
+          </nav>
+        )}
       </div>
       <div className="overflow-x-auto">
         <table

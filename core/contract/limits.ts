@@ -1,0 +1,45 @@
+/**
+ * How big one project may grow. The numbers sit well above real checking work — a pressure
+ * vessel, a lifting lug or a shaft is checked at a handful to a few dozen critical locations,
+ * under a few to a few dozen load cases and code combinations, each combination summing a
+ * handful of cases (common practice, no source) — so an engineer never meets them, while
+ * they cap what one request can make the server compute: the comparison of the largest
+ * project is (cases + combinations) × locations = 200 × 100 = 20 000 rows, which the server
+ * must answer within 2 s on this 2-core machine (test/api/comparison-scale.test.ts). Twice
+ * these counts (80 000 rows) took 8–13 s to compute here, nearly all of it per-row work in
+ * the comparison's builder, so raise them only with a faster builder and that test passing.
+ * Finite-element point tables, which do have thousands of points, are screened in the
+ * browser's batch layer, not stored here.
+ *
+ * The API refuses to go past them on create and on import with a 400 that names the limit;
+ * the API and the browser import them from here. Plain constants: imports nothing.
+ */
+export const PROJECT_LIMITS = {
+  /** Live locations in one project. */
+  locations: 100,
+  /** Live load cases in one project. */
+  loadCases: 100,
+  /** Live combinations in one project. */
+  combinations: 100,
+  /** Terms (factor × load case) in one combination. */
+  termsPerCombination: 50,
+} as const;
+
+export type ProjectLimitName = keyof typeof PROJECT_LIMITS;
+
+/** How the 400 names a limit, e.g. "A project holds at most 100 locations (limit "locations")." */
+export const LIMIT_NOUNS: Record<ProjectLimitName, string> = {
+  locations: "locations",
+  loadCases: "load cases",
+  combinations: "combinations",
+  termsPerCombination: "terms",
+};
+
+/** The sentence a refusal carries: the limit, its number, and what to do. */
+export function limitMessage(limit: ProjectLimitName): string {
+  const where = limit === "termsPerCombination" ? "A combination" : "A project";
+  return `${where} holds at most ${PROJECT_LIMITS[limit]} ${LIMIT_NOUNS[limit]} (limit "${limit}"). Split the work into several projects, or remove some first.`;
+}
+
+/** Rows per page of the comparison when the client does not say, and the most it may ask for. */
+export const COMPARISON_PAGE = { defaultLimit: 200, maxLimit: 1000 } as const;

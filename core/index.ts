@@ -100,7 +100,7 @@ export type { PublishedMaterial } from "./materials/published";
 export { PUBLISHED_MATERIALS, FROM_MEMORY_NOTE, publishedMaterial } from "./materials/published";
 
 export type { CombinationTerm } from "./checks/combine";
-export { combineLoadCases } from "./checks/combine";
+export { combineLoadCases, combinePacked } from "./checks/combine";
 export type {
   CriterionCheck,
   EvaluatedCheck,

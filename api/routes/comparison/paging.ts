@@ -6,7 +6,7 @@ import {
   type ComparisonQuery,
   type GoverningView,
 } from "../../../core/contract/comparison";
-import { buildComparison, type ComparisonInput } from "./build";
+import { buildComparisonWindow, type ComparisonInput } from "./build";
 
 /** How long one chunk of computation may hold the event loop before the next waits its turn. */
 const CHUNK_TARGET_MS = 20;
@@ -88,12 +88,16 @@ export async function comparisonPage(
   do {
     const run = takeRun(input, items, start, runRows);
     const began = performance.now();
-    const part = buildComparison(run);
+    // Only this page's rows are written out; every row of the run counts for governing.
+    const { comparison: part, rowCount } = buildComparisonWindow(run, {
+      from: Math.max(0, from - totalRows),
+      to: Math.max(0, to - totalRows),
+    });
     const took = performance.now() - began;
     first ??= part;
-    rows.push(...part.rows.slice(Math.max(0, from - totalRows), Math.max(0, to - totalRows)));
+    rows.push(...part.rows);
     skipped.push(...part.skipped.slice(Math.max(0, from - totalSkipped), Math.max(0, to - totalSkipped)));
-    totalRows += part.rows.length;
+    totalRows += rowCount;
     totalSkipped += part.skipped.length;
     governing.push(...part.governing);
     overallCandidates.push(part.governingOverall);
@@ -102,7 +106,7 @@ export async function comparisonPage(
     start += Math.max(1, run.cases.length + run.combinations.length);
     if (start < items.length) {
       // Aim the next run at CHUNK_TARGET_MS from the rate this one ran at.
-      const computed = part.rows.length + part.skipped.length;
+      const computed = rowCount + part.skipped.length;
       runRows = Math.max(1, Math.round((computed * CHUNK_TARGET_MS) / Math.max(took, 1)));
       await nextTurn();
     }

@@ -82,7 +82,7 @@ export async function run(): Promise<void> {
     // One case per connection for the saves, in a project of its own.
     const saves = await seedProject(workspaceId, userId, {
       locations: 1,
-      loadCases: SAVE_CONNECTIONS,
+      loadCases: 2 * SAVE_CONNECTIONS,
       combinations: 0,
       termsPerCombination: 0,
     });
@@ -90,13 +90,15 @@ export async function run(): Promise<void> {
     const casesBase = `/api/workspaces/${workspaceId}/projects/${saves.projectId}/load-cases`;
     // Versions live outside autocannon's per-connection context, which starts afresh each run.
     const versions = new Map(saves.caseIds.map((id) => [id, 1]));
-    let nextCase = 0;
+    // Each request takes a case no other request in flight is saving, and gives it back on
+    // the answer, so no two saves ever race on one version.
+    const idle = [...saves.caseIds];
     type SaveContext = { caseId?: string };
     const saveRequest: autocannon.Request = {
       method: "PUT",
       setupRequest: (request, context) => {
         const c = context as SaveContext;
-        c.caseId ??= saves.caseIds[nextCase++ % saves.caseIds.length];
+        c.caseId = idle.shift()!;
         const version = versions.get(c.caseId)!;
         return {
           ...request,
@@ -112,10 +114,11 @@ export async function run(): Promise<void> {
       },
       onResponse: (status, body, context) => {
         const caseId = (context as SaveContext).caseId!;
+        idle.push(caseId);
         if (status === 200) {
           versions.set(caseId, (JSON.parse(body) as { loadCase: { version: number } }).loadCase.version);
         } else if (status === 409) {
-          // Should not happen (one case per connection); if it does, catch up and count it as an error.
+          // Should not happen (no two saves share a case); if it does, catch up and count it as an error.
           const { error } = JSON.parse(body) as { error: { details: { currentVersion: number } } };
           versions.set(caseId, error.details.currentVersion);
         }
@@ -144,6 +147,7 @@ export async function run(): Promise<void> {
           where: { id: saves.caseIds },
         }))
           versions.set(c.id, c.version);
+        idle.splice(0, idle.length, ...saves.caseIds);
       },
     );
 

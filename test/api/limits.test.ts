@@ -123,6 +123,26 @@ describe("project limits on create", () => {
   });
 });
 
+describe("project limits on restore", () => {
+  it("when a project is full and one of its locations comes back from the trash, then the restore is refused with a 400 naming the limit and the location stays in the trash", async () => {
+    const { base } = await projectWith("locations", PROJECT_LIMITS.locations);
+    const projectId = base.split("/").pop()!;
+    const trashed = await Location.create({
+      projectId,
+      name: "in the trash",
+      note: "",
+      position: 999,
+      deletedAt: new Date(),
+      deletedBy: team.editor.user.id,
+    });
+    const refused = await team.editor.agent.post(wsPath(team, `/trash/location/${trashed.id}/restore`));
+    expect(refused.status).toBe(400);
+    expectLimit(refused.body, "locations", "itemId");
+    await trashed.reload();
+    expect(trashed.deletedAt).not.toBeNull();
+  });
+});
+
 describe("project limits on import", () => {
   it("when a file holds as many locations and combinations as the limits allow, then it is imported", async () => {
     const name = `At the limits ${randomUUID()}`;

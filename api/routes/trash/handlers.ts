@@ -12,6 +12,8 @@ import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
 import { recordAudit } from "../audit/record";
+import type { ProjectLimitName } from "../../../core/contract/limits";
+import { assertWithinLimit } from "../projects/limits";
 import { peopleById, personOf } from "../projects/people";
 import { TRASH_MODELS, type TrashableRow } from "./kinds";
 
@@ -134,6 +136,13 @@ async function findTrashed(workspaceId: string, kind: TrashKind, itemId: string,
   return { row, project: row.projectId ? projects.get(row.projectId)! : null };
 }
 
+/** The project limit a restored row counts against (projects and materials have none). */
+const RESTORE_LIMITS: Partial<Record<keyof typeof TRASH_MODELS, ProjectLimitName>> = {
+  location: "locations",
+  "load-case": "loadCases",
+  combination: "combinations",
+};
+
 export function restoreHandler(context: AppContext): RouteHandler<ItemParams, NoInput, NoInput> {
   return async (_req, res) => {
     const user = currentUser(res);
@@ -146,6 +155,16 @@ export function restoreHandler(context: AppContext): RouteHandler<ItemParams, No
           "project_in_trash",
           `The project "${project.name}" is in the trash too; restore the project first.`,
         );
+      }
+      const limit = RESTORE_LIMITS[kind];
+      if (limit && row.projectId) {
+        // Under the project's lock, as creates count, so a restore cannot slip past a limit beside a create.
+        await Project.findByPk(row.projectId, { transaction, lock: transaction.LOCK.UPDATE });
+        const live = await TRASH_MODELS[kind].model.count({
+          where: { projectId: row.projectId, deletedAt: null },
+          transaction,
+        });
+        assertWithinLimit(limit, live, 1, "itemId");
       }
       await row.update({ deletedAt: null, deletedBy: null }, { transaction });
       await recordAudit(transaction, user, {

@@ -19,7 +19,7 @@ import { mpa, projectTeam, projectWithLocations, wsPath, type ProjectTeam } from
  * prints the seed and every failing request, so it can be replayed.
  */
 const SEED = Number(process.env.FUZZ_SEED ?? 20261203);
-const RUNS = Number(process.env.FUZZ_RUNS ?? 2000);
+const RUNS = Number(process.env.FUZZ_RUNS ?? 3000);
 
 const { app, context, close } = buildTestApp({ webDist: null });
 const server = createServer(app);

@@ -10,8 +10,11 @@ export const PASSWORD_MIN_LENGTH = 10;
 /** Longest password accepted: argon2 hashes anything, but a cap stops megabyte bodies being hashed. */
 export const PASSWORD_MAX_LENGTH = 200;
 
-// Deliberately loose (one @, a dot in the domain, no spaces): the mail server is the real check.
-const EMAIL_PATTERN = /^[^\s@]+@[^\s@]+\.[^\s@]+$/;
+// The HTML Standard's "valid e-mail address" (what <input type=email> accepts), with a dot in
+// the domain: loose enough for real addresses, strict enough that the mail transport can send
+// to it (quotes, brackets or "_" in the domain used to pass here and fail there with a 502).
+const EMAIL_PATTERN =
+  /^[a-zA-Z0-9.!#$%&'*+/=?^_`{|}~-]+@[a-zA-Z0-9](?:[a-zA-Z0-9-]{0,61}[a-zA-Z0-9])?(?:\.[a-zA-Z0-9](?:[a-zA-Z0-9-]{0,61}[a-zA-Z0-9])?)+$/;
 
 /** An e-mail address as typed: trimmed; compared case-insensitively by the server. */
 export const emailSchema = z

@@ -99,6 +99,10 @@ describe("the built app under its Content-Security-Policy in Chromium", () => {
     ["a project", () => `/workspaces/${workspaceId}/projects/${projectId}`],
     ["the comparison", () => `/workspaces/${workspaceId}/projects/${projectId}/comparison`],
     ["the account page", () => "/account"],
+    ["the members of a workspace", () => `/workspaces/${workspaceId}/members`],
+    ["the workspace settings", () => `/workspaces/${workspaceId}/settings`],
+    ["the development mailbox", () => "/dev/mailbox"],
+    ["a page that does not exist", () => "/no-such-page"],
   ] as const) {
     it(`when ${label} opens, then no resource or style is refused by the policy`, async () => {
       await page.goto(`${server.url}${route()}`, { waitUntil: "networkidle" });

@@ -250,7 +250,7 @@ function paramValue(name: string, schema: JsonSchema | undefined): fc.Arbitrary<
     "%FF",
     "%00",
     "%E2%82",
-    "..",
+    "..", // a URL path segment (scan: not a file path)
     "%2e%2e%2f",
     "x".repeat(300),
     "12345",

@@ -47,6 +47,8 @@ function exportFile(name: string, size: { locations: number; combinations: numbe
       description: "",
       unitSystem: "SI",
       requirements: [{ criterion: "von-mises", requiredFactor: 1.5 }],
+      categoryRequirements: [],
+      includeUnsuitedCriteria: false,
       defaultMaterial: null,
     },
     materials: [],

@@ -7,7 +7,7 @@ import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
 import { describe, expect, it } from "vitest";
 import { repoRoot } from "../../scripts/web-build";
-import { findPathsOutsideRepo } from "./outside-paths";
+import { findPathsOutsideRepo, NOT_A_FILE_PATH } from "./outside-paths";
 
 /** Folders that hold no test code of ours. */
 const SKIPPED_DIRS = new Set(["node_modules", "dist", ".git", ".data", "test-results"]);
@@ -43,9 +43,11 @@ describe("tests on a fresh clone", () => {
       `const notes = readFileSync("/${"work"}/notes/x.md");`,
       'const fixture = readFileSync(path.join(here, "fixtures/a.json"));',
       `const sibling = readFileSync(path.resolve(repoRoot, "../${"other"}/data.csv"));`,
+      `const segment = ".${"."}"; // sent in a URL (${NOT_A_FILE_PATH})`,
+      `const unmarked = ".${"."}";`,
     ].join("\n");
     const hits = findPathsOutsideRepo(source, path.join(repoRoot, "test", "lifecycle"), repoRoot);
-    expect(hits.map((h) => h.line)).toEqual([2, 3, 5]);
+    expect(hits.map((h) => h.line)).toEqual([2, 3, 5, 7]);
   });
 
   it("when the test code is scanned, then no file names a path outside the repository", () => {

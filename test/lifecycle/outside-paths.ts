@@ -11,6 +11,9 @@ const FOREIGN_ROOTS = /^\/(work|home|root|tmp|srv|mnt|media|var|etc|opt)(\/|$)/;
 /** An import specifier is resolved by the module loader against its own file only. */
 const IMPORT_LINE = /^\s*(import|export)\b|\bfrom\s+["']|\bimport\(|\bvi\.mock\(/;
 
+/** The marker comment that exempts a line from the scan, e.g. a parent-folder segment sent in a URL. */
+export const NOT_A_FILE_PATH = "scan: not a file path";
+
 /**
  * Finds string literals in `source` (a file in `fileDir`) that point outside `repoRoot`: a relative
  * path that climbs above the repository from the file or from the repository root (where tests run
@@ -20,6 +23,8 @@ export function findPathsOutsideRepo(source: string, fileDir: string, repoRoot: 
   const inside = (resolved: string) => resolved === repoRoot || resolved.startsWith(repoRoot + path.sep);
   const hits: OutsidePath[] = [];
   source.split("\n").forEach((text, index) => {
+    // A line that says so holds a URL or other non-file text that merely looks like a path.
+    if (text.includes(NOT_A_FILE_PATH)) return;
     for (const match of text.matchAll(/(["'`])((?:(?!\1)[^\\\n]|\\.)*)\1/g)) {
       const literal = match[2];
       const line = index + 1;

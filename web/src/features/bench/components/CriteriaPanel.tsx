@@ -31,7 +31,11 @@ export function CriteriaPanel() {
   const results = useCriteria();
   // Criteria that do not suit the material share one line (same reason), to keep the panel short.
   const unsuitedRows = results.filter((r) => !r.available && r.kind === "not-applicable");
-  const shownRows = results.filter((r) => r.available || r.kind !== "not-applicable");
+  // So do those the project does not check.
+  const uncheckedRows = results.filter((r) => !r.available && r.kind === "not-checked");
+  const shownRows = results.filter(
+    (r) => r.available || (r.kind !== "not-applicable" && r.kind !== "not-checked"),
+  );
   const found = materialBehaviour(materialForCore(material, behaviour));
   const behaviourId = useId();
   const preset = material.presetId ? publishedMaterial(material.presetId) : null;
@@ -234,6 +238,14 @@ export function CriteriaPanel() {
               )}
             </tr>
           ))}
+          {uncheckedRows.length > 0 && (
+            <tr className="border-b border-rule/60" data-testid="criteria-not-checked">
+              <td colSpan={6} className="py-[2px] text-[12px] text-graphite-soft">
+                {uncheckedRows.map((r) => CRITERION_LABEL[r.criterion]).join(", ")}: not checked by this
+                project
+              </td>
+            </tr>
+          )}
           {unsuitedRows.length > 0 && (
             <tr className="border-b border-rule/60" data-testid="criteria-not-applicable">
               <td

@@ -232,6 +232,11 @@ describe("projects in Chromium: from an empty project to the governing case, and
     await page.getByRole("link", { name: "Open in bench" }).first().click();
     await page.getByText("View only: as viewer you can explore this state but not save it.").waitFor();
     expect(await page.getByRole("button", { name: "Save to project" }).count()).toBe(0);
+    // The bench checks the state against the project's factors and says where they come from.
+    await expect
+      .poll(() => page.getByTestId("requirements-source").innerText())
+      .toMatch(/^Required factors from CT-7 shell and heads, load case category “\w+”: the project default/);
+    expect(await page.getByTestId("criterion-tresca").getByTestId("required").innerText()).toBe("1.5");
     // Opened from a saved state, the heading says so; a viewer's local edit is marked as an editor's is.
     expect(await page.locator("h1").innerText()).toMatch(/a saved stress state from a project/);
     expect(await page.locator("h1").innerText()).not.toMatch(/unsaved/);

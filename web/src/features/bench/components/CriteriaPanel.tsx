@@ -13,7 +13,7 @@ import {
   materialBehaviour,
   publishedMaterial,
 } from "../../../../../core";
-import { useCriteria, useSummary } from "../hooks/use-derived";
+import { useCriteria } from "../hooks/use-derived";
 import type { BehaviourChoice } from "../model/bench-state";
 import { CRITERION_LABEL, governing, materialForCore } from "../model/derive";
 import { decimalsFor, editable, factor, fixed } from "../model/format";
@@ -31,7 +31,13 @@ export function CriteriaPanel() {
   const includeUnsuited = useBenchStore((s) => s.includeUnsuited);
   const act = useBenchStore((s) => s.act);
   const results = useCriteria();
-  const summary = useSummary();
+  // Criteria that do not suit the material share one line (same reason), to keep the panel short.
+  const unsuitedRows = results.filter((r) => !r.available && r.kind === "not-applicable");
+  // So do those the project does not check.
+  const uncheckedRows = results.filter((r) => !r.available && r.kind === "not-checked");
+  const shownRows = results.filter(
+    (r) => r.available || (r.kind !== "not-applicable" && r.kind !== "not-checked"),
+  );
   const found = materialBehaviour(materialForCore(material, behaviour));
   const behaviourId = useId();
   const preset = material.presetId ? publishedMaterial(material.presetId) : null;
@@ -72,6 +78,18 @@ export function CriteriaPanel() {
               </option>
             ))}
           </optgroup>
+        </select>
+        <select
+          id={behaviourId}
+          aria-label="Ductile or brittle"
+          title="Which criteria suit the material: yield criteria for a ductile one, fracture criteria for a brittle one"
+          value={behaviour}
+          onChange={(e) => act.setBehaviour(e.target.value as BehaviourChoice)}
+          className="w-28 shrink-0 rounded-sm border border-rule bg-white px-1 py-0.5 text-[12px]"
+        >
+          <option value="from-data">{found.behaviour} (data)</option>
+          <option value="ductile">ductile</option>
+          <option value="brittle">brittle</option>
         </select>
         {!project && (
           <>
@@ -143,27 +161,6 @@ export function CriteriaPanel() {
           "Strengths as typed (Sy yield, Sut tensile, Suc compressive). A criterion that needs a blank one says so."
         )}
       </p>
-      <div className="flex flex-wrap items-center gap-x-3 gap-y-1 text-[12px] text-graphite-soft">
-        <label htmlFor={behaviourId}>Material behaves</label>
-        <select
-          id={behaviourId}
-          value={behaviour}
-          onChange={(e) => act.setBehaviour(e.target.value as BehaviourChoice)}
-          className="rounded-sm border border-rule bg-white px-1 py-0.5 text-[12px]"
-        >
-          <option value="from-data">as its data says ({found.behaviour})</option>
-          <option value="ductile">ductile (yields first)</option>
-          <option value="brittle">brittle (fractures)</option>
-        </select>
-        <label className="inline-flex items-center gap-1">
-          <input
-            type="checkbox"
-            checked={includeUnsuited}
-            onChange={(e) => act.setIncludeUnsuited(e.target.checked)}
-          />
-          also rate criteria that do not suit it
-        </label>
-      </div>
       <table className="w-full text-[13px]" data-testid="criteria-table">
         <thead>
           <tr className="border-b border-rule text-[12px] text-graphite-soft">
@@ -188,7 +185,7 @@ export function CriteriaPanel() {
           </tr>
         </thead>
         <tbody>
-          {results.map((r) => (
+          {shownRows.map((r) => (
             <tr
               key={r.criterion}
               className={`border-b border-rule/60 ${gov?.criterion === r.criterion ? "bg-paper/60" : ""}`}
@@ -233,28 +230,71 @@ export function CriteriaPanel() {
                   </td>
                 </>
               ) : (
-                <td colSpan={5} className="text-[12px] text-graphite-soft" data-testid="not-rated">
-                  — {r.reason}
+                <td
+                  colSpan={5}
+                  className="text-[12px] text-graphite-soft"
+                  data-testid="not-rated"
+                  title={r.reason}
+                >
+                  — {r.brief}
                 </td>
               )}
             </tr>
           ))}
+          {uncheckedRows.length > 0 && (
+            <tr className="border-b border-rule/60" data-testid="criteria-not-checked">
+              <td colSpan={6} className="py-[2px] text-[12px] text-graphite-soft">
+                {uncheckedRows.map((r) => CRITERION_LABEL[r.criterion]).join(", ")}: not checked by this
+                project
+              </td>
+            </tr>
+          )}
+          {unsuitedRows.length > 0 && (
+            <tr className="border-b border-rule/60" data-testid="criteria-not-applicable">
+              <td
+                colSpan={6}
+                className="py-[2px] text-[12px] text-graphite-soft"
+                title={unsuitedRows[0].available ? undefined : unsuitedRows[0].reason}
+              >
+                {unsuitedRows.map((r) => CRITERION_LABEL[r.criterion]).join(", ")}:{" "}
+                {unsuitedRows[0].available ? "" : unsuitedRows[0].brief}
+                <label className="ml-2 inline-flex items-center gap-1">
+                  <input
+                    type="checkbox"
+                    checked={includeUnsuited}
+                    onChange={(e) => act.setIncludeUnsuited(e.target.checked)}
+                  />
+                  rate them too
+                </label>
+              </td>
+            </tr>
+          )}
+          {includeUnsuited && (
+            <tr className="border-b border-rule/60">
+              <td colSpan={6} className="py-[2px] text-[12px] text-graphite-soft">
+                Criteria that do not suit the material are rated on request and can govern.
+                <label className="ml-2 inline-flex items-center gap-1">
+                  <input
+                    type="checkbox"
+                    checked={includeUnsuited}
+                    onChange={(e) => act.setIncludeUnsuited(e.target.checked)}
+                  />
+                  rate them
+                </label>
+              </td>
+            </tr>
+          )}
         </tbody>
       </table>
       <p
         className="text-[12px] leading-4 text-graphite-soft"
-        title="n is the factor the whole state may grow by before the criterion is reached; utilisation = required n ÷ n."
+        data-testid="tresca-definitions"
+        title="n is the factor the whole state may grow by before the criterion is reached; utilisation = required n ÷ n; the criterion with the highest utilisation governs. Practitioners call either Tresca form by that name."
       >
-        <span className="text-pass">✓ passes</span> n at least {(CLOSE_BAND * 100).toFixed(0)} % above the
-        required · <span className="text-close">≈ close</span> n from the required up to{" "}
-        {(CLOSE_BAND * 100).toFixed(0)} % above it · <span className="text-fail">✗ fails</span> below it. The
-        governing criterion has the highest utilisation.
-      </p>
-      <p className="text-[12px] leading-4 text-graphite-soft" data-testid="tresca-definitions">
-        Tresca, both ways: equivalent stress σ₁ − σ₃ ={" "}
-        <Quantity value={fixed(summary.tresca, d)} unit={unit} /> (rated against Sy), and maximum shear τmax =
-        (σ₁ − σ₃)/2 = <Quantity value={fixed(summary.tauMax, d)} unit={unit} /> (against Sy/2); the same
-        check, named either way in practice.
+        <span className="text-pass">✓ passes</span> n ≥ 1.1 × required ·{" "}
+        <span className="text-close">≈ close</span> within {(CLOSE_BAND * 100).toFixed(0)} % above ·{" "}
+        <span className="text-fail">✗ fails</span> below. Tresca: σ₁ − σ₃ vs Sy, i.e. τmax = (σ₁ − σ₃)/2 vs
+        Sy/2.
       </p>
       <Caution className="!text-[12px] leading-4" />
     </Panel>

@@ -83,7 +83,10 @@ export type CriterionResult =
       criterion: Criterion;
       available: false;
       kind: NotRatedKind;
+      /** the whole reason, as core gives it */
       reason: string;
+      /** the reason in a few words, for a table cell (the whole one goes in its tooltip) */
+      brief: string;
       requiredFactor: number | null;
     };
 
@@ -152,6 +155,7 @@ export function criteriaResults(
         available: false,
         kind: "not-checked",
         reason: "not checked by this project",
+        brief: "not checked by this project",
         requiredFactor: null,
       };
     }
@@ -161,6 +165,7 @@ export function criteriaResults(
         available: false,
         kind: "not-applicable",
         reason: `not applicable to this material: ${check.reason}`,
+        brief: `not applicable to this material (${/taken as ductile|set as ductile/.test(check.reason) ? "ductile" : "brittle"})`,
         requiredFactor: check.requiredFactor,
       };
     }
@@ -170,6 +175,12 @@ export function criteriaResults(
         available: false,
         kind: check.missing.length > 0 ? "missing" : "refused",
         reason: check.reason,
+        brief:
+          check.missing.length > 0
+            ? check.reason
+            : /Suc ≥ Sut/.test(check.reason)
+              ? "refused: it assumes Suc ≥ Sut, this material has Suc < Sut"
+              : check.reason,
         requiredFactor: check.requiredFactor,
       };
     }

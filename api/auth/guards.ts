@@ -39,8 +39,12 @@ export async function loadMembership(
   minimum: Role,
 ): Promise<MembershipLocals> {
   const user = currentUser(res);
-  const membership = await Membership.findOne({ where: { workspaceId, userId: user.id } });
-  const workspace = membership ? await Workspace.findByPk(workspaceId) : null;
+  // The membership and its workspace in one statement (every workspace request runs it).
+  const membership = await Membership.findOne({
+    where: { workspaceId, userId: user.id },
+    include: [{ model: Workspace, as: "workspace", required: true }],
+  });
+  const workspace = (membership?.get("workspace") as Workspace | undefined) ?? null;
   if (!membership || !workspace) throw errors.notFound("This workspace");
   if (!roleAtLeast(membership.role, minimum)) {
     throw errors.forbidden(`This needs the ${minimum} role or higher; you are ${article(membership.role)}.`);

@@ -1,8 +1,20 @@
 import type { Adapter, DatabaseSession, DatabaseUser } from "lucia";
-import { Op } from "sequelize";
+import { Op, QueryTypes } from "sequelize";
 import { Session } from "../../db/models/session";
-import { User } from "../../db/models/user";
 import { hashToken } from "./tokens";
+
+const SESSION_AND_USER_SQL = `
+SELECT s.user_id AS "userId", s.expires_at AS "expiresAt", u.name, u.email, u.created_at AS "createdAt"
+FROM sessions s JOIN users u ON u.id = s.user_id
+WHERE s.id = :id`;
+
+type SessionUserRow = {
+  userId: string;
+  expiresAt: Date | string;
+  name: string;
+  email: string;
+  createdAt: Date | string;
+};
 
 /**
  * lucia 3's storage over the Sequelize models. Session ids are stored as their SHA-256
@@ -11,13 +23,19 @@ import { hashToken } from "./tokens";
  */
 export class SequelizeSessionAdapter implements Adapter {
   async getSessionAndUser(sessionId: string): Promise<[DatabaseSession | null, DatabaseUser | null]> {
-    const session = await Session.findByPk(hashToken(sessionId));
-    if (!session) return [null, null];
-    const user = await User.findByPk(session.userId);
-    if (!user) return [null, null];
+    // One statement for both (every signed-in request runs it): two model queries here were
+    // a third of the database round trips of a small comparison under load.
+    const [row] = await Session.sequelize!.query<SessionUserRow>(SESSION_AND_USER_SQL, {
+      type: QueryTypes.SELECT,
+      replacements: { id: hashToken(sessionId) },
+    });
+    if (!row) return [null, null];
     return [
-      { id: sessionId, userId: session.userId, expiresAt: session.expiresAt, attributes: {} },
-      { id: user.id, attributes: userAttributes(user) },
+      { id: sessionId, userId: row.userId, expiresAt: new Date(row.expiresAt), attributes: {} },
+      {
+        id: row.userId,
+        attributes: { name: row.name, email: row.email, createdAt: new Date(row.createdAt) },
+      },
     ];
   }
 
@@ -50,7 +68,3 @@ export class SequelizeSessionAdapter implements Adapter {
 
 /** The user fields lucia hands back on every validated request. */
 export type SessionUserAttributes = { name: string; email: string; createdAt: Date };
-
-function userAttributes(user: User): SessionUserAttributes {
-  return { name: user.name, email: user.email, createdAt: user.createdAt };
-}

@@ -116,6 +116,10 @@ describe("acknowledged writes when PostgreSQL is killed under load", () => {
             `health 200 again ${recovered} ms after the kill; ${log.join(" | ")}`,
         );
         expect(lost).toEqual([]);
+        // A write the outage broke answers 503 database_unavailable (issue 10 item 7), never a 500.
+        expect([...failures.keys()].filter((status) => status !== "503" && status.startsWith("5"))).toEqual(
+          [],
+        );
         expect(acknowledged.length).toBeGreaterThan(ackedAtRecovery);
         expect(log.some((line) => /stopped unexpectedly/.test(line))).toBe(true);
       } finally {

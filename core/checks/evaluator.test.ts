@@ -197,3 +197,25 @@ describe("allowables per load-case category", () => {
     expect(findOverallGoverning(rows)).toMatchObject({ caseId: "upset", criterion: "von-mises" });
   });
 });
+
+describe("evaluateBatch past a bad row", () => {
+  it("when one row of a table has a NaN component, then that row's checks are not evaluated with the reason and every other row equals evaluateState", () => {
+    // The finite-element point tables go through here: one bad row must not stop the rest
+    // (product rule, issue 9); the good rows are checked against the single-state path.
+    const material = { yield: 250, ultimateTension: 400 };
+    const requirements: CheckRequirement[] = [
+      { criterion: "von-mises", requiredFactor: 1.5 },
+      { criterion: "tresca", requiredFactor: 1.5 },
+    ];
+    const states = [t(100, 20, 0, 30), t(Number.NaN, 0), t(-80, 40, 10, 0, 5, -5)];
+    const packed = new Float64Array(states.flatMap((s) => [s.xx, s.yy, s.zz, s.xy, s.yz, s.zx]));
+    const out = evaluateBatch(packed, () => ({ material, requirements }));
+    expect(out).toHaveLength(3);
+    for (const check of out[1].checks) {
+      expect(check.status).toBe("not-evaluated");
+      if (check.status === "not-evaluated") expect(check.reason).toMatch(/not a finite number/);
+    }
+    expect(out[1].governing).toBeNull();
+    for (const k of [0, 2]) expect(out[k]).toEqual(evaluateState(states[k], material, requirements));
+  });
+});

@@ -3,8 +3,7 @@ import path from "node:path";
 import type { Browser, BrowserContext } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { RunningServer } from "../../api/server";
-import { uniqueEmail } from "../support/accounts";
-import { launchChromium, screenshotDir } from "../support/browser";
+import { launchChromium, screenshotDir, signUpInContext } from "../support/browser";
 import { startTestServer } from "../support/server";
 
 describe("allowables per load-case category in Chromium", () => {
@@ -18,11 +17,8 @@ describe("allowables per load-case category in Chromium", () => {
     ({ browser, close: closeBrowser } = await launchChromium());
     await mkdir(screenshotDir, { recursive: true });
     editor = await browser.newContext({ viewport: { width: 1360, height: 900 } });
-    const response = await editor.request.post(`${server.url}/api/auth/sign-up`, {
-      data: { name: "Teo Valdric", email: uniqueEmail("teo"), password: "carbonation tank seven" },
-      headers: { Origin: server.url },
-    });
-    expect(response.status()).toBe(201);
+    // Signed up and confirmed through the mailed link (sign-up itself signs no one in).
+    await signUpInContext(editor, server.url, "Teo Valdric");
   });
   afterAll(async () => {
     await closeBrowser?.();

@@ -1,7 +1,7 @@
 /**
  * A fresh clone has nothing beside it: tests may read only files inside the repository. This scans
  * every file that tests load for path literals that leave the repository, so a fixture read from a
- * sibling folder (as the shared reference cases once were) fails here instead of on a user's machine with ENOENT.
+ * sibling folder fails here instead of on a user's machine with ENOENT.
  */
 import { readdirSync, readFileSync } from "node:fs";
 import path from "node:path";
@@ -32,11 +32,7 @@ function testCodeFiles(dir: string, found: string[] = []): string[] {
 describe("tests on a fresh clone", () => {
   it("when a test reads a sibling folder or a machine path, then the scan names the line", () => {
     // Built from pieces so that this file itself does not hold the paths it checks for.
-    const oldRead = [
-      "const casesFile = path.resolve(repoRoot, '../",
-      "shared",
-      "/reference-cases/cases.json');",
-    ];
+    const oldRead = ["const casesFile = path.resolve(repoRoot, '../", "sibling", "/cases/cases.json');"];
     const source = [
       'import { startCluster } from "../../db/cluster";',
       oldRead.join(""),

@@ -17,7 +17,7 @@ export const NOT_A_FILE_PATH = "scan: not a file path";
 /**
  * Finds string literals in `source` (a file in `fileDir`) that point outside `repoRoot`: a relative
  * path that climbs above the repository from the file or from the repository root (where tests run
- * and where `path.resolve(repoRoot, …)` starts), a foreign absolute path, or the old shared fixture.
+ * and where `path.resolve(repoRoot, …)` starts), or a foreign absolute path.
  */
 export function findPathsOutsideRepo(source: string, fileDir: string, repoRoot: string): OutsidePath[] {
   const inside = (resolved: string) => resolved === repoRoot || resolved.startsWith(repoRoot + path.sep);
@@ -28,9 +28,7 @@ export function findPathsOutsideRepo(source: string, fileDir: string, repoRoot: 
     for (const match of text.matchAll(/(["'`])((?:(?!\1)[^\\\n]|\\.)*)\1/g)) {
       const literal = match[2];
       const line = index + 1;
-      if (/shared\/reference-cases/.test(literal)) {
-        hits.push({ line, literal, why: "the shared reference cases are not in a clone" });
-      } else if (FOREIGN_ROOTS.test(literal)) {
+      if (FOREIGN_ROOTS.test(literal)) {
         hits.push({ line, literal, why: "absolute path outside the repository" });
       } else if (/^\.\.?(\/|$)/.test(literal)) {
         if (!inside(path.resolve(fileDir, literal))) {

@@ -105,7 +105,7 @@ export async function loadComparisonInput(
       zxPa,
     }),
   );
-  // resolveMaterial and superposeAt read only the columns selected above; the rows stand in
+  // resolveMaterial and the comparison builder read only the columns selected above; the rows stand in
   // for model instances, which would cost a hydration per row for nothing.
   const library = new Map(project.library.map((m) => [m.id, m as Material]));
   const defaultRef = refFromColumns(project.defaultMaterialId, project.defaultPublishedMaterial);

@@ -42,6 +42,12 @@ describe("npm start's watch over its private cluster", () => {
         expect(serve.output()).toMatch(
           /PostgreSQL \(postmaster pid \d+\) stopped unexpectedly; restarting it/,
         );
+        // Health can answer before the watch's own "pg_ctl start" returns and it logs: wait for the line.
+        const logged = await waitUntil(
+          async () => /PostgreSQL is running again/.test(serve.output()),
+          30_000,
+        );
+        expect(logged, "the restart is logged").not.toBeNull();
         expect(serve.output()).toMatch(/PostgreSQL is running again/);
       } finally {
         const exit = await serve.interrupt();

@@ -21,10 +21,27 @@ import {
   type GoverningView,
 } from "../../../core/contract/comparison";
 import type { CategoryRequirement, Requirement } from "../../../core/contract/projects";
-import type { StressState } from "../../../db/models/stress-state";
-import type { StoredTerm } from "../combinations/superpose";
-import { componentsPaOf } from "../load-cases/states";
-import type { ResolvedMaterial } from "../materials/resolve";
+import type { StoredTerm } from "../../routes/combinations/superpose";
+import { componentsPaOf } from "../../routes/load-cases/states";
+import type { ResolvedMaterial } from "../../routes/materials/resolve";
+
+/** A current stress state as the comparison reads it: its revision and six components in Pa. */
+export type ComparisonState = {
+  loadCaseId: string;
+  locationId: string;
+  revision: number;
+  xxPa: number;
+  yyPa: number;
+  zzPa: number;
+  xyPa: number;
+  yzPa: number;
+  zxPa: number;
+};
+
+/** The key of a state in `ComparisonInput.states`. */
+export function stateKey(loadCaseId: string, locationId: string): string {
+  return `${loadCaseId}:${locationId}`;
+}
 
 /** What the comparison is built from (plain data, already loaded). */
 export type ComparisonInput = {
@@ -36,7 +53,7 @@ export type ComparisonInput = {
   locations: { id: string; name: string; material: ResolvedMaterial }[];
   cases: { id: string; name: string; category: string; version: number }[];
   /** Current states keyed "caseId:locationId". */
-  states: Map<string, StressState>;
+  states: Map<string, ComparisonState>;
   combinations: { id: string; name: string; version: number; terms: StoredTerm[] }[];
 };
 
@@ -145,7 +162,7 @@ export function buildComparisonWindow(
 
   for (const c of input.cases) {
     for (const location of input.locations) {
-      const state = input.states.get(`${c.id}:${location.id}`);
+      const state = input.states.get(stateKey(c.id, location.id));
       if (!state) {
         skipped.push({
           caseName: c.name,

@@ -1,8 +1,13 @@
 import { describe, expect, it } from "vitest";
 import { combineLoadCases, evaluateState, findGoverning, requirementsFor } from "../../../core";
-import type { StressState } from "../../../db/models/stress-state";
 import { seededRandom } from "../../../core/testing/fixtures";
-import { buildComparison, buildComparisonWindow, coreAllowables, type ComparisonInput } from "./build";
+import {
+  buildComparison,
+  buildComparisonWindow,
+  coreAllowables,
+  type ComparisonInput,
+  type ComparisonState,
+} from "./build";
 import { comparisonPage } from "./paging";
 
 const uuid = (prefix: number, i: number) =>
@@ -35,7 +40,7 @@ function project(): ComparisonInput {
     category,
     version: 1,
   }));
-  const states = new Map<string, StressState>();
+  const states = new Map<string, ComparisonState>();
   for (const c of cases) {
     for (const l of locations) {
       if (c.id === cases[1].id && l.id === locations[2].id) continue; // no state entered here
@@ -50,7 +55,7 @@ function project(): ComparisonInput {
         yzPa: stress(),
         zxPa: stress(),
       };
-      states.set(`${c.id}:${l.id}`, row as unknown as StressState);
+      states.set(`${c.id}:${l.id}`, row);
     }
   }
   const term = (i: number, factor: number) => ({

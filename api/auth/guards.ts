@@ -5,6 +5,13 @@ import { roleAtLeast, type Role } from "../../core/contract/workspaces";
 import { Membership } from "../../db/models/membership";
 import { Workspace } from "../../db/models/workspace";
 import { errors } from "../errors";
+import {
+  MEMBERSHIP_COLUMNS,
+  membershipFromRow,
+  type FoundMembership,
+  type MembershipRow,
+} from "./membership-row";
+import type { SessionLocals } from "./session-middleware";
 
 /** The caller's membership in the workspace named by the route, loaded by `loadMembership`. */
 export type MembershipLocals = { membership: Membership; workspace: Workspace };
@@ -39,8 +46,9 @@ export async function loadMembership(
   minimum: Role,
 ): Promise<MembershipLocals> {
   const user = currentUser(res);
-  const { membership, workspace } = await findMembership(workspaceId, user.id);
-  if (!membership || !workspace) throw errors.notFound("This workspace");
+  const found = await findMembership(res, workspaceId, user.id);
+  if (!found) throw errors.notFound("This workspace");
+  const { membership, workspace } = found;
   if (!roleAtLeast(membership.role, minimum)) {
     throw errors.forbidden(`This needs the ${minimum} role or higher; you are ${article(membership.role)}.`);
   }
@@ -50,61 +58,27 @@ export async function loadMembership(
   return { membership, workspace };
 }
 
-/**
- * The membership and its workspace in one raw statement. Every workspace request runs it, and
- * the model query with an include it replaces spent more CPU building and parsing SQL than
- * PostgreSQL spent answering (a profile of 100 connections put Sequelize's include machinery
- * at over a quarter of the process).
- */
 const MEMBERSHIP_SQL = `
-SELECT m.id, m.workspace_id AS "workspaceId", m.user_id AS "userId", m.role, m.joined_via AS "joinedVia",
-  m.invitation_id AS "invitationId", m.share_link_id AS "shareLinkId", m.added_by AS "addedBy",
-  m.last_active_at AS "lastActiveAt", m.created_at AS "createdAt", m.updated_at AS "updatedAt",
-  w.name AS "workspaceName", w.created_by AS "workspaceCreatedBy",
-  w.created_at AS "workspaceCreatedAt", w.updated_at AS "workspaceUpdatedAt"
+SELECT ${MEMBERSHIP_COLUMNS}
 FROM memberships m JOIN workspaces w ON w.id = m.workspace_id
 WHERE m.workspace_id = :workspaceId AND m.user_id = :userId`;
 
-type MembershipRow = Pick<
-  Membership,
-  | "id"
-  | "workspaceId"
-  | "userId"
-  | "role"
-  | "joinedVia"
-  | "invitationId"
-  | "shareLinkId"
-  | "addedBy"
-  | "lastActiveAt"
-  | "createdAt"
-  | "updatedAt"
-> & {
-  workspaceName: string;
-  workspaceCreatedBy: string | null;
-  workspaceCreatedAt: Date;
-  workspaceUpdatedAt: Date;
-};
-
-async function findMembership(workspaceId: string, userId: string) {
+/**
+ * The caller's membership of `workspaceId`: the one the session statement read along (when the
+ * path named this workspace), else read now.
+ */
+async function findMembership(
+  res: Response,
+  workspaceId: string,
+  userId: string,
+): Promise<FoundMembership | null> {
+  const prefetched = (res.locals as SessionLocals).prefetchedMembership;
+  if (prefetched?.workspaceId === workspaceId && prefetched.found !== undefined) return prefetched.found;
   const [row] = await Membership.sequelize!.query<MembershipRow>(MEMBERSHIP_SQL, {
     type: QueryTypes.SELECT,
     replacements: { workspaceId, userId },
   });
-  if (!row) return { membership: null, workspace: null };
-  const { workspaceName, workspaceCreatedBy, workspaceCreatedAt, workspaceUpdatedAt, ...membership } = row;
-  return {
-    membership: Membership.build(membership, { isNewRecord: false, raw: true }),
-    workspace: Workspace.build(
-      {
-        id: workspaceId,
-        name: workspaceName,
-        createdBy: workspaceCreatedBy,
-        createdAt: workspaceCreatedAt,
-        updatedAt: workspaceUpdatedAt,
-      },
-      { isNewRecord: false, raw: true },
-    ),
-  };
+  return membershipFromRow(row);
 }
 
 async function touchActivity(membership: Membership) {

@@ -10,6 +10,7 @@ import {
   type ThickSphereInput,
 } from "./thick-wall";
 import { thinCylinder, thinSphere } from "./thin-wall";
+import { vonMises } from "../tensor/invariants";
 
 // Lamé formulas: Timoshenko & Goodier, Theory of Elasticity, and Roark's Formulas for Stress and
 // Strain, thick-walled cylinders and spheres (recalled from memory; see thick-wall.ts).
@@ -44,6 +45,9 @@ const sphereInput = fc
 /** A radius inside the wall, 2h from each face, so that r ± h stays inside after rounding. */
 const insideWall = (ri: number, ro: number, h: number, u: number) => ri + 2 * h + u * (ro - ri - 4 * h);
 
+const near = (got: number, want: number, tol: number) =>
+  expect(Math.abs(got - want)).toBeLessThanOrEqual(tol);
+
 /** Composite Simpson's rule over evenly spaced samples (an odd number of them). */
 function simpson(values: readonly number[], step: number): number {
   let sum = values[0] + values[values.length - 1];
@@ -52,7 +56,7 @@ function simpson(values: readonly number[], step: number): number {
 }
 
 describe("thick-walled cylinder (Lamé)", () => {
-  it("when ri = 1, ro = 2, p = 100 with closed ends, then σr = −100 and σθ = 166.67 at the bore, σθ = 66.67 and σr = 0 outside, σz = 33.33 (Lamé: 5p/3, 2p/3, p/3, hand arithmetic)", () => {
+  it("when ri = 1, ro = 2, p = 100 with closed ends, then σr = −100 and σθ = 166.67 at the bore, σθ = 66.67 and σr = 0 outside, σz = 33.33 (Lamé formulas of Timoshenko & Goodier, recalled from memory: 5p/3, 2p/3, p/3 by hand)", () => {
     const input: ThickCylinderInput = { innerRadius: 1, outerRadius: 2, innerPressure: 100, ends: "closed" };
     const bore = thickCylinder(input);
     expect(bore.radius).toBe(1);
@@ -147,6 +151,21 @@ describe("thick-walled cylinder (Lamé)", () => {
     );
   });
 
+  it("when the ends are closed, then the von Mises stress is √3·|B|/r² at every radius, largest at the bore (Lamé: σz = A drops out of every stress difference)", () => {
+    fc.assert(
+      fc.property(cylinderInput, fraction, (input, u) => {
+        const closed = { ...input, ends: "closed" as const };
+        const r = input.innerRadius + u * (input.outerRadius - input.innerRadius);
+        const at = thickCylinder(closed, r);
+        const bore = thickCylinder(closed);
+        const scale = Math.abs(at.lameA) + Math.abs(at.lameB) / (r * r) + 1e-300;
+        near(vonMises(at.tensor), (Math.sqrt(3) * Math.abs(at.lameB)) / (r * r), 1e-12 * scale);
+        expect(vonMises(bore.tensor)).toBeGreaterThanOrEqual(vonMises(at.tensor) - 1e-12 * scale);
+      }),
+      { seed: 138, numRuns: 300 },
+    );
+  });
+
   it("when the same pressure acts inside and out, then σr = σθ = −p through the wall (a uniform in-plane pressure, common practice, no source)", () => {
     const s = thickCylinder(
       { innerRadius: 30, outerRadius: 45, innerPressure: 12, outerPressure: 12, ends: "closed" },
@@ -220,7 +239,7 @@ describe("thick-walled cylinder (Lamé)", () => {
 });
 
 describe("thick-walled sphere (Lamé)", () => {
-  it("when ri = 1, ro = 2, pi = 100, then σr = −100, σθ = 500/7 = 71.43 inside and σθ = 150/7 = 21.43, σr = 0 outside (Lamé: A = 100/7, B = 800/7, hand arithmetic)", () => {
+  it("when ri = 1, ro = 2, pi = 100, then σr = −100, σθ = 500/7 = 71.43 inside and σθ = 150/7 = 21.43, σr = 0 outside (Lamé sphere formulas of Timoshenko & Goodier, recalled from memory: A = 100/7, B = 800/7 by hand)", () => {
     const input: ThickSphereInput = { innerRadius: 1, outerRadius: 2, innerPressure: 100 };
     const inside = thickSphere(input);
     expect(inside.radial).toBeCloseTo(-100, 12);

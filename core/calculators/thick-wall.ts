@@ -185,8 +185,9 @@ function cylinderAt(c: Checked & { ends: CylinderEnds; nu: number }, r: number):
  * Stresses in a thick-walled cylinder (Lamé; see the file comment for the formulas, their source and
  * the conventions) at one radius.
  * @param input radii, pressures (po defaults to 0), end condition and, for plane strain, ν
- * @param radius where in the wall, ri ≤ r ≤ ro; default the bore ri, where σθ and every stress
- *   difference are largest in magnitude
+ * @param radius where in the wall, ri ≤ r ≤ ro; default the bore ri, where σθ − σr = 2B/r² is largest
+ *   in magnitude (so is the von Mises stress with closed ends, √3·|B|/r², and, under internal pressure
+ *   alone, σθ itself; with both pressures |σθ| can be larger outside — see the profile)
  * @returns σr, σθ, σz, the tensor in x = axial, y = hoop, z = radial, and the Lamé constants
  * @throws TypeError/RangeError naming the input when it is missing or not finite, ri ≤ 0, ro ≤ ri,
  *   r outside the wall, the end condition is unknown, or ν is missing (plane strain) or out of range
@@ -235,7 +236,8 @@ function sphereAt(c: Checked, r: number): ThickSphereStresses {
  * Stresses in a thick-walled sphere (Lamé; see the file comment for the formulas, their source and the
  * conventions) at one radius.
  * @param input radii and pressures (po defaults to 0)
- * @param radius where in the wall, ri ≤ r ≤ ro; default the inside ri, where σθ is largest in magnitude
+ * @param radius where in the wall, ri ≤ r ≤ ro; default the inside ri, where σθ − σr = 3B/(2r³) and so
+ *   the von Mises stress are largest in magnitude
  * @returns σr, σθ = σφ, the tensor in x, y tangential and z radial, and the Lamé constants
  * @throws TypeError/RangeError naming the input when it is missing or not finite, ri ≤ 0, ro ≤ ri or
  *   r lies outside the wall

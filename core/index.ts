@@ -186,7 +186,7 @@ export type {
   ShaftSurface,
   ShaftSurfacePoint,
 } from "./calculators/combined-shaft";
-export { hollowShaftStress } from "./calculators/combined-shaft";
+export { bendingTowards, hollowShaftStress } from "./calculators/combined-shaft";
 
 export type { EnvelopeProbe, EnvelopeProbeHit } from "./criteria/envelope-probe";
 export { probeEnvelopes } from "./criteria/envelope-probe";

@@ -2,6 +2,7 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { vonMises } from "../tensor/invariants";
 import {
+  bendingTowards,
   hollowShaftStress,
   type CombinedShaftLoads,
   type ShaftSection,
@@ -267,6 +268,24 @@ describe("solid or hollow shaft under combined load", () => {
     expect(p.transverseShear).toBe(plain.transverseShear);
     expect(kt.kt).toEqual({ bending: 2, torsion: 1.5, axial: 3 });
     expect(kt.nominal).toEqual(hollowShaftStress(sec, l).nominal);
+  });
+
+  it("when one moment is given with the angle of the fibre it stretches, then that fibre carries +Mc/I and the opposite one −Mc/I (σ = Mc/I, any strength-of-materials text)", () => {
+    fc.assert(
+      fc.property(section, load, fc.double({ min: -360, max: 360, noNaN: true }), (sec, M, phi) => {
+        const r = hollowShaftStress(sec, bendingTowards(M, phi), { point: { surface: "outer", angle: phi } });
+        const c = sec.outerDiameter / 2;
+        near(r.point!.bending, (M * c) / r.section.secondMoment, 1e-12);
+        const opposite = hollowShaftStress(sec, bendingTowards(M, phi), {
+          point: { surface: "outer", angle: phi + 180 },
+        });
+        near(opposite.point!.bending, (-M * c) / r.section.secondMoment, 1e-12);
+      }),
+      { seed: 157, numRuns: 200 },
+    );
+    expect(bendingTowards(7, 90)).toEqual({ momentY: 7, momentZ: 0 });
+    expect(() => bendingTowards(Number.NaN, 0)).toThrow(/moment/);
+    expect(() => bendingTowards(1, Number.POSITIVE_INFINITY)).toThrow(/tensileFibreAngle/);
   });
 
   it("when an input is missing, not finite or impossible, then the error names it", () => {

@@ -29,7 +29,8 @@
  * Geometry and signs: x along the shaft axis, y and z across the section, right-handed. A surface
  * point is given by its angle θ from +y towards +z: it sits at (y, z) = ρ(cos θ, sin θ). Loads act on
  * the cut face whose outward normal is +x: My, Mz, T are the components of its moment vector (right-hand
- * rule), Vy, Vz of its shear force, P its axial force (tension positive). The frame at the point, as in
+ * rule), Vy, Vz of its shear force, P its axial force (tension positive). {@link bendingTowards} turns
+ * one moment and the angle of the fibre it stretches into My, Mz. The frame at the point, as in
  * shaft.ts: x along the shaft, y tangential (t̂ = (−sin θ, cos θ), the way the point moves under a
  * positive rotation about +x), z radial, pointing inward. In that frame only σx and τxy are non-zero.
  * The point at θ = 90° under My = M is the fibre shaft.ts stretches with M, and there the two functions
@@ -434,4 +435,25 @@ export function hollowShaftStress(
       point === undefined ? undefined : stateAt(point.surface === "outer" ? faces[0] : faces[1], point.angle),
     critical,
   };
+}
+
+/**
+ * One bending moment and its direction, as the two components {@link hollowShaftStress} takes: the
+ * moment M stretches most the surface fibre at angle φ (from +y towards +z), where the bending stress
+ * is +M·c/I, and compresses most the fibre opposite. With the sign rule of the file comment
+ * (σx = (My·z − Mz·y)/I) that is My = M·sin φ, Mz = −M·cos φ, so that σx = M·ρ·cos(θ − φ)/I.
+ * @param moment magnitude M of the bending moment (force × length; a negative M swaps the fibres)
+ * @param tensileFibreAngle φ, degrees from +y towards +z
+ * @returns `momentY` and `momentZ`, to spread into the loads
+ * @throws TypeError/RangeError naming the argument when it is not a finite number
+ */
+export function bendingTowards(
+  moment: number,
+  tensileFibreAngle: number,
+): Required<Pick<CombinedShaftLoads, "momentY" | "momentZ">> {
+  assertFinite(moment, "moment");
+  assertFinite(tensileFibreAngle, "tensileFibreAngle");
+  const [c, s] = cosSinDeg(tensileFibreAngle);
+  // 0 · M stays a plain zero, not −0
+  return { momentY: s === 0 ? 0 : moment * s, momentZ: c === 0 ? 0 : -moment * c };
 }

@@ -159,6 +159,34 @@ export {
 } from "./calculators/rosette";
 export type { ShaftLoads, ShaftSurfaceStress } from "./calculators/shaft";
 export { solidShaftStress } from "./calculators/shaft";
+export type {
+  CylinderEnds,
+  ThickCylinderInput,
+  ThickCylinderStresses,
+  ThickSphereInput,
+  ThickSphereStresses,
+} from "./calculators/thick-wall";
+export {
+  DEFAULT_PROFILE_POINTS,
+  thickCylinder,
+  thickCylinderProfile,
+  thickSphere,
+  thickSphereProfile,
+} from "./calculators/thick-wall";
+export type { ThinWallAdequacy, VesselShape } from "./calculators/thin-wall-limit";
+export { THIN_WALL_LIMIT, thinWallAdequacy } from "./calculators/thin-wall-limit";
+export type {
+  CombinedShaftLoads,
+  CombinedShaftStress,
+  ShaftKt,
+  ShaftNominalStresses,
+  ShaftPointStress,
+  ShaftSection,
+  ShaftSectionProperties,
+  ShaftSurface,
+  ShaftSurfacePoint,
+} from "./calculators/combined-shaft";
+export { bendingTowards, hollowShaftStress } from "./calculators/combined-shaft";
 
 export type { EnvelopeProbe, EnvelopeProbeHit } from "./criteria/envelope-probe";
 export { probeEnvelopes } from "./criteria/envelope-probe";

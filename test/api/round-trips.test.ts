@@ -8,12 +8,14 @@ afterAll(close);
 /** Every statement the app sends to PostgreSQL while `run` runs (Sequelize's logging hook). */
 async function statementsDuring(run: () => Promise<unknown>): Promise<string[]> {
   const statements: string[] = [];
-  const before = context.sequelize.options.logging;
-  context.sequelize.options.logging = (sql: string) => void statements.push(sql);
+  // Sequelize reads `options.logging` on every query; its typings do not declare `options`.
+  const options = (context.sequelize as unknown as { options: { logging: unknown } }).options;
+  const before = options.logging;
+  options.logging = (sql: string) => void statements.push(sql);
   try {
     await run();
   } finally {
-    context.sequelize.options.logging = before;
+    options.logging = before;
   }
   return statements;
 }

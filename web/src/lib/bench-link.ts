@@ -1,3 +1,4 @@
+import { COMPONENTS } from "../../../core";
 import type { Components } from "../../../core/contract/load-cases";
 import type { StressUnitName } from "../../../core/contract/materials";
 
@@ -7,8 +8,7 @@ export type BenchSource = { workspaceId: string; projectId: string; loadCaseId: 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 function stateParams(q: URLSearchParams, components: Components, unit: StressUnitName) {
-  const c = components;
-  q.set("s", [c.xx, c.yy, c.zz, c.xy, c.yz, c.zx].map((v) => Number(v.toPrecision(15))).join(","));
+  q.set("s", COMPONENTS.map((c) => Number(components[c].toPrecision(15))).join(","));
   q.set("u", unit);
 }
 

@@ -1,5 +1,5 @@
 // Lint rules that keep the architecture: one-way dependencies between folders, no import
-// cycles, a pure core/, features that do not reach into each other.
+// cycles, a pure core/, features that do not reach into each other, entities below features.
 import { readdirSync } from "node:fs";
 import js from "@eslint/js";
 import { createNodeResolver, flatConfigs as importX } from "eslint-plugin-import-x";
@@ -44,7 +44,21 @@ export default tseslint.config(
               from: ["./api", "./db", "./scripts", "./test"],
               message: "web/ may use core/ (and its shared schemas) only.",
             },
-            // Features do not import each other; web/src/app composes them.
+            // Server resources many features use live in web/src/entities (fetchers, one key factory,
+            // queries, mutations); they build on lib/ and core/ only, never on a page or the app.
+            {
+              target: "./web/src/entities",
+              from: ["./web/src/features", "./web/src/app", "./web/src/components"],
+              message: "web/src/entities may use web/src/lib and core/ only (and other entities).",
+            },
+            // Shared helpers and presentational pieces know no feature, entity or the app.
+            {
+              target: ["./web/src/lib", "./web/src/components"],
+              from: ["./web/src/features", "./web/src/entities", "./web/src/app"],
+              message: "web/src/lib and web/src/components serve every feature: they import none of them.",
+            },
+            // Features do not import each other (they share through web/src/entities, lib and
+            // components); web/src/app composes them.
             ...features.map((feature) => ({
               target: `./web/src/features/${feature}`,
               from: "./web/src/features",

@@ -21,7 +21,7 @@ import {
 import { solidShaftStress } from "./calculators/shaft";
 import { thinCylinder, thinSphere, type ThinWallOptions } from "./calculators/thin-wall";
 import { safetyFactor, type Material } from "./criteria/safety-factor";
-import { principalStresses } from "./eigen/principal";
+import { principalStresses } from "./tensor/principal";
 import {
   BASIS_WORDS,
   REFERENCE_CASES,

@@ -1,4 +1,4 @@
-import { principalValues } from "../eigen/principal";
+import { principalValues } from "../tensor/principal";
 import { vonMisesOf } from "../eigen/sym3";
 import type { StressTensor } from "../tensor/types";
 import { assertTensor } from "../tensor/validate";

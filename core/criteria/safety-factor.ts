@@ -1,19 +1,10 @@
+import { CRITERIA, type Criterion } from "../constants/criteria";
 import { principalValues } from "../tensor/principal";
 import { vonMisesOf } from "../eigen/sym3";
 import type { StressTensor } from "../tensor/types";
 import { assertTensor } from "../tensor/validate";
 
-/** A yield or fracture criterion. */
-export type Criterion = "von-mises" | "tresca" | "max-principal" | "mohr-coulomb" | "modified-mohr";
-
-/** Every accepted criterion. */
-export const CRITERIA: readonly Criterion[] = [
-  "von-mises",
-  "tresca",
-  "max-principal",
-  "mohr-coulomb",
-  "modified-mohr",
-];
+export { CRITERIA, type Criterion };
 
 /** How a material fails: by yielding (ductile) or by fracture without much yielding (brittle). */
 export type MaterialBehaviour = "ductile" | "brittle";

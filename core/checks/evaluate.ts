@@ -167,7 +167,8 @@ function checkOne(
 /**
  * Evaluates N stress states given as 6N components (xx yy zz xy yz zx per state, one stress unit)
  * through the batch kernel `principalBatch` (principal stresses, von Mises and Tresca in one
- * pass), then rates each state against its material and requirements. The single-state
+ * pass: one eigen-solve per state, whatever the number of criteria; evaluate-once.test.ts counts
+ * it), then rates each state against its material and requirements. The single-state
  * `evaluateState`, the comparison and finite-element point tables all come through here.
  * A state the kernel reports as unreadable (NaN outputs) has every check "not-evaluated" with the
  * reason, so one bad row never stops the others.

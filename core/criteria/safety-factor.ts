@@ -59,11 +59,12 @@ function strength(material: Material, key: StrengthKey, criterion: Criterion): n
  *   a material modified Mohr does not apply to (Suc < Sut)
  */
 export function safetyFactor(s: StressTensor, criterion: Criterion, material: Material): number {
-  assertTensor(s);
   if (criterion === "von-mises") {
+    assertTensor(s);
     const sy = strengthsFor(criterion, material).yield!;
     return sy / vonMisesOf(s.xx, s.yy, s.zz, s.xy, s.yz, s.zx);
   }
+  // principalValues validates the tensor (once) and solves it (once).
   const [s1, , s3] = principalValues(s);
   return factorFromPrincipals(criterion, material, s1, s3, NaN);
 }

@@ -11,6 +11,58 @@ const features = readdirSync(new URL("./web/src/features", import.meta.url), { w
   .filter((entry) => entry.isDirectory())
   .map((entry) => entry.name);
 
+const coreImportsNothingOutside = {
+  target: "./core",
+  from: ["./web", "./api", "./db", "./test", "./scripts"],
+  message: "core/ imports nothing from other folders.",
+};
+
+// core/'s folders in layers, bottom first. A folder imports its own files and the layers below
+// it, never a folder of its own layer or above, so core's folders cannot form a cycle
+// (import-x/no-cycle sees files only). What sits above the last layer — calculators/, diagrams/,
+// demo-data/, index.ts and any new folder — may import every layer. Test files are not held to it:
+// nothing imports a test, so a test closes no cycle, and a test may check a layer against a higher one.
+const CORE_LAYERS = [
+  ["constants"], // the lists and bounds the wire schemas share with the engine; imports nothing
+  ["tolerances.ts", "units"],
+  ["eigen"], // the symmetric 3×3 eigen-solver on flat arrays
+  ["tensor"], // the stress tensor: validation, principal stresses, invariants, rotation, traction
+  ["plane", "parse", "batch", "materials", "testing"],
+  ["criteria", "frames"],
+  ["checks"],
+];
+const coreZones = [
+  ...CORE_LAYERS.flatMap((layer, i) => {
+    const below = CORE_LAYERS.slice(0, i).flat();
+    return layer.map((folder) => ({
+      target: `./core/${folder}`,
+      from: "./core",
+      except: [folder, ...below].map((f) => `./${f}`),
+      message: `core/${folder} may import ${below.length === 0 ? "nothing in core" : below.map((f) => `core/${f}`).join(", ")} (the layers in eslint.config.js).`,
+    }));
+  }),
+  { target: "./core/constants", from: "./node_modules", message: "core/constants imports no package." },
+  // The engine never imports the demo data or the wire schemas.
+  {
+    target: ["./core/*.ts", "./core/!(demo-data|contract)/**"],
+    from: ["./core/demo-data", "./core/contract"],
+    message: "The engine imports neither core/demo-data (demo data) nor core/contract (wire schemas).",
+  },
+  // The wire schemas go to the browser: zod and core's dependency-free constants only, never the engine.
+  {
+    target: "./core/contract",
+    from: "./core",
+    except: ["./contract", "./constants"],
+    message: "core/contract imports only zod and core/constants (it ships to the browser).",
+  },
+  {
+    target: "./core/contract",
+    from: "./node_modules",
+    except: ["./zod"],
+    message: "core/contract imports only zod and core/constants (it ships to the browser).",
+  },
+];
+
 export default tseslint.config(
   { ignores: ["node_modules", "dist", ".data", "test-results", "coverage"] },
   js.configs.recommended,
@@ -32,11 +84,7 @@ export default tseslint.config(
         {
           zones: [
             // core/ ← db/ ← api/; web/ uses core/ only.
-            {
-              target: "./core",
-              from: ["./web", "./api", "./db", "./test", "./scripts"],
-              message: "core/ imports nothing from other folders.",
-            },
+            coreImportsNothingOutside,
             { target: "./db", from: ["./api", "./web", "./test"], message: "db/ may use core/ only." },
             { target: "./api", from: ["./web", "./test"], message: "api/ may use db/ and core/ only." },
             {
@@ -76,6 +124,8 @@ export default tseslint.config(
     ignores: ["core/**/*.test.ts"],
     languageOptions: { globals: {} },
     rules: {
+      // Replaces the zones above for core's own files: the outside rule again, plus core's layers.
+      "import-x/no-restricted-paths": ["error", { zones: [coreImportsNothingOutside, ...coreZones] }],
       "no-restricted-imports": [
         "error",
         {

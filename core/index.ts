@@ -44,8 +44,8 @@ export {
   TRIG_REFINE_THRESHOLD,
 } from "./tolerances";
 
-export type { Principal } from "./eigen/principal";
-export { principalStresses, principalValues } from "./eigen/principal";
+export type { Principal } from "./tensor/principal";
+export { principalStresses, principalValues } from "./tensor/principal";
 export type { Invariants } from "./tensor/invariants";
 export {
   invariants,
@@ -94,7 +94,7 @@ export {
   angleAboutZ,
   frameWithFirstAxis,
 } from "./tensor/rotation-tools";
-export { principalFrame, maxShearFrame } from "./tensor/special-frames";
+export { principalFrame, maxShearFrame } from "./frames/special-frames";
 export { envelopeInPlane, envelopeHit } from "./criteria/envelope";
 export type { PublishedMaterial } from "./materials/published";
 export { PUBLISHED_MATERIALS, FROM_MEMORY_NOTE, publishedMaterial } from "./materials/published";

@@ -22,7 +22,7 @@ import { solidShaftStress } from "./calculators/shaft";
 import { thickCylinder } from "./calculators/thick-wall";
 import { thinCylinder, thinSphere, type ThinWallOptions } from "./calculators/thin-wall";
 import { safetyFactor, type Material } from "./criteria/safety-factor";
-import { principalStresses } from "./eigen/principal";
+import { principalStresses } from "./tensor/principal";
 import {
   BASIS_WORDS,
   REFERENCE_CASES,

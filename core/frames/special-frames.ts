@@ -1,7 +1,7 @@
-import { principalStresses } from "../eigen/principal";
+import { principalStresses } from "../tensor/principal";
 import { planePrincipal } from "../plane/plane-principal";
 import { cosSinDeg } from "../units/angles";
-import type { Mat3, StressTensor, Vec3 } from "./types";
+import type { Mat3, StressTensor, Vec3 } from "../tensor/types";
 
 /**
  * The two frames an engineer snaps the element to. Both are right-handed rotations in core's

@@ -1,12 +1,12 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { principalValues } from "../eigen/principal";
+import { principalValues } from "../tensor/principal";
 import { rotationFromQuaternion, tensorWithPrincipal } from "../testing/fixtures";
 import { transformPlaneStress } from "../plane/plane-stress";
-import { axisAngleFromRotation, angleAboutZ } from "./rotation-tools";
-import { rotateTensor } from "./rotate";
+import { axisAngleFromRotation, angleAboutZ } from "../tensor/rotation-tools";
+import { rotateTensor } from "../tensor/rotate";
 import { maxShearFrame, principalFrame } from "./special-frames";
-import type { StressTensor } from "./types";
+import type { StressTensor } from "../tensor/types";
 
 const state = fc
   .tuple(

@@ -19,7 +19,9 @@
  * - agitator shaft: solid shaft at the surface point of maximum bending, σ = 32M/(πd³) + 4P/(πd²)
  *   with the thrust P tensile, τ = 16T/(πd³) ({@link solidShaftStress}); x along the shaft,
  *   y tangential.
- * The seeded demo projects and the bench's "Start from" examples both read this module.
+ * The seeded demo projects and the bench's "Start from" examples both read this module. It is long
+ * because it is data: four projects' inputs, cases and states written out where a reader can check
+ * them against the scenario.
  */
 import { microstrain, rectangularRosette, stressFromStrain } from "../calculators/rosette";
 import { solidShaftStress } from "../calculators/shaft";

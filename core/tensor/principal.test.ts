@@ -2,9 +2,9 @@ import fc from "fast-check";
 import { describe, expect, it } from "vitest";
 import { ACCURACY } from "../tolerances";
 import { principalBatch } from "../batch/principal-batch";
-import { invariants, vonMises } from "../tensor/invariants";
-import { rotateTensor } from "../tensor/rotate";
-import type { Mat3, StressTensor } from "../tensor/types";
+import { invariants, vonMises } from "./invariants";
+import { rotateTensor } from "./rotate";
+import type { Mat3, StressTensor } from "./types";
 import {
   cross,
   dot,

@@ -1,6 +1,6 @@
-import type { StressTensor, Vec3 } from "../tensor/types";
-import { assertTensor } from "../tensor/validate";
-import { eigSym3 } from "./sym3";
+import type { StressTensor, Vec3 } from "./types";
+import { assertTensor } from "./validate";
+import { eigSym3 } from "../eigen/sym3";
 
 /** Principal stresses σ1 ≥ σ2 ≥ σ3 and their unit directions. */
 export type Principal = { values: [number, number, number]; directions: [Vec3, Vec3, Vec3] };

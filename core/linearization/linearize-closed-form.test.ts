@@ -210,6 +210,28 @@ describe("linearize: notes and warnings (our choices, stated in path.ts)", () =>
     expect(even.notes.some((n) => n.includes("unevenly spaced"))).toBe(false);
   });
 
+  it("when the options are left at their defaults, then the result says Annex 5-A bending and von Mises, and that the method was recalled from memory; the other options say themselves", () => {
+    const plain = linearize(lameLine(11));
+    expect(plain.bendingRule).toBe("annex-5a");
+    expect(plain.bentComponents).toEqual([1, 2]);
+    expect(plain.equivalent.criterion).toBe("von-mises");
+    expect(plain.equivalent.label).toBe("von Mises");
+    expect(plain.notes.join(" ")).toContain("σyy and σzz only");
+    expect(plain.source).toContain("Annex 5-A");
+    expect(plain.source).toContain("recalled from memory, verify against the code edition you work to");
+    expect(plain.frameNote).toContain("Default frame");
+    const other = linearize({
+      ...lameLine(11),
+      bending: "all-components",
+      equivalent: "tresca",
+      secondAxis: [0, 0, 1],
+    });
+    expect(other.bentComponents).toEqual([0, 1, 2, 3, 4, 5]);
+    expect(other.notes.join(" ")).toContain("'bend every component' option");
+    expect(other.equivalent.label).toBe("Tresca stress intensity σ1 − σ3");
+    expect(other.frameNote).toContain("Caller's frame");
+  });
+
   it("when a point lies more than 1 % of the thickness off the line, then a warning names it; the distances are its projection", () => {
     const x = distancesTo(10, 11);
     const coordinates = pointsAlong([0, 0, 0], [1, 0, 0], x);

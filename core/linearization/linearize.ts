@@ -3,7 +3,7 @@ import { EQUIVALENT_LABEL, equivalentOf } from "./equivalent";
 import { membraneAndBending } from "./integrate";
 import { localFrame, toLocalFrame } from "./local-frame";
 import { MIN_POINTS, linePath } from "./path";
-import { BEND_ALL_NOTE, EQUIVALENT_SOURCE, METHOD_SOURCE } from "./sources";
+import { ANNEX_5A_NOTE, BEND_ALL_NOTE, EQUIVALENT_SOURCE, METHOD_SOURCE } from "./sources";
 import type {
   AtEnds,
   BendingRule,
@@ -140,7 +140,7 @@ export function linearize(input: LinearizationInput): LinearizationResult {
     ...path.notes,
     ...frame.notes,
   ];
-  if (bendingRule === "all-components") notes.push(BEND_ALL_NOTE);
+  notes.push(bendingRule === "all-components" ? BEND_ALL_NOTE : ANNEX_5A_NOTE);
   notes.push(`Equivalent stresses: ${EQUIVALENT_SOURCE[criterion]}.`);
 
   let checks: LinearizationResult["checks"] = [];

@@ -13,6 +13,13 @@ export const METHOD_SOURCE =
   "components perpendicular to the line only; peak = total − membrane − bending) — " +
   RECALLED;
 
+/** What Annex 5-A's rule leaves out of the bending, and what it asks of the frame. */
+export const ANNEX_5A_NOTE =
+  "Bending was taken for σyy and σzz only (the normal stresses perpendicular to the line, Annex 5-A): " +
+  "the linear parts of the through-thickness stress σxx and of the shears stay in the peak. The result " +
+  "therefore depends on the in-plane axes: give secondAxis as the hoop or meridional direction of the " +
+  "component when the default frame does not match them.";
+
 /** Bending every component, as some practices do; departs from Annex 5-A's rule. */
 export const BEND_ALL_NOTE =
   "Bending was taken for all six components (the 'bend every component' option), not only the two " +

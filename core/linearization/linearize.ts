@@ -75,6 +75,9 @@ function scalarsAtEnds(v: AtEnds, criterion: EquivalentCriterion): ScalarAtEnds 
  * 5. equivalent stresses (von Mises by default, or Tresca σ1 − σ3) of each of these TENSORS.
  * Integration assumes σ linear between neighbouring points (see ./integrate.ts). Reversing the order
  * of the points leaves the membrane unchanged and swaps the ends (so the bending changes sign).
+ * Units are the caller's and nothing is converted: one stress unit for the stresses and allowables,
+ * one length unit for distances or coordinates. At least RECOMMENDED_MIN_POINTS (11, path.ts) points are
+ * recommended; fewer give a warning.
  *
  * @param input stresses (6N), distances (N, with lineDirection) or coordinates (3N), options
  * @returns the parts, their equivalent stresses, the checks, and notes/warnings (see LinearizationResult)

@@ -190,3 +190,19 @@ export { bendingTowards, hollowShaftStress } from "./calculators/combined-shaft"
 
 export type { EnvelopeProbe, EnvelopeProbeHit } from "./criteria/envelope-probe";
 export { probeEnvelopes } from "./criteria/envelope-probe";
+
+export type {
+  AtEnds,
+  BendingRule,
+  EquivalentCriterion,
+  LineClassification,
+  LinearizationAllowables,
+  LinearizationCheck,
+  LinearizationCheckId,
+  LinearizationInput,
+  LinearizationResult,
+  ScalarAtEnds,
+} from "./linearization/types";
+export { linearize, ANNEX_5A_BENT_COMPONENTS, ALL_COMPONENTS } from "./linearization/linearize";
+export { MIN_POINTS, RECOMMENDED_MIN_POINTS, OFF_LINE_WARN_FRACTION } from "./linearization/path";
+export { spsLimit, SPS_YIELD_TO_ULTIMATE_LIMIT } from "./linearization/category-checks";

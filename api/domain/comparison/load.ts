@@ -1,4 +1,5 @@
-import { QueryTypes, type Sequelize } from "sequelize";
+import type { Sequelize } from "sequelize";
+import { preparedQuery } from "../../../db/prepared-query";
 import type { CategoryRequirement, Requirement } from "../../../core/contract/projects";
 import type { Material } from "../../../db/models/material";
 import type { StoredTerm } from "../../routes/combinations/superpose";
@@ -13,7 +14,7 @@ import { stateKey, type ComparisonInput, type ComparisonState } from "./build";
  * connections the comparison spent most of its time building, sending and hydrating queries
  * (a CPU profile put Sequelize, lodash and socket writes at over half the process), not computing.
  */
-const PROJECT_SQL = `
+export const PROJECT_SQL = `
 SELECT json_build_object(
   'requirements', p.requirements,
   'categoryRequirements', p.category_requirements,
@@ -50,7 +51,9 @@ SELECT json_build_object(
     WHERE s.is_current AND c.project_id = p.id), '[]')
 )::text AS source
 FROM projects p
-WHERE p.id = :projectId AND p.workspace_id = :workspaceId AND p.deleted_at IS NULL`;
+WHERE p.id = $1 AND p.workspace_id = $2 AND p.deleted_at IS NULL`;
+
+const PROJECT_STATEMENT = { name: "comparison-inputs", text: PROJECT_SQL };
 
 type ProjectRow = {
   requirements: Requirement[];
@@ -81,10 +84,10 @@ export async function loadComparisonSource(
   workspaceId: string,
   projectId: string,
 ): Promise<string | null> {
-  const [row] = await sequelize.query<{ source: string }>(PROJECT_SQL, {
-    type: QueryTypes.SELECT,
-    replacements: { workspaceId, projectId },
-  });
+  const [row] = await preparedQuery<{ source: string }>(sequelize, PROJECT_STATEMENT, [
+    projectId,
+    workspaceId,
+  ]);
   return row?.source ?? null;
 }
 

@@ -1,28 +1,22 @@
 import { useState, type FormEvent } from "react";
 import { Link } from "react-router-dom";
-import { LOAD_CASE_CATEGORY_SUGGESTIONS, type LoadCase } from "../../../../../core/contract/load-cases";
+import type { LoadCase } from "../../../../../core/contract/load-cases";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import type { Location } from "../../../../../core/contract/projects";
-import { ApiError, fieldErrorsOf } from "../../../lib/api-client";
+import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { Quantity, stressTone } from "../../../components/Quantity";
 import { ToolButton } from "../../../components/ToolButton";
 import { useLoadCaseMutations } from "../api/load-cases";
 import { benchLinkForState } from "../../../lib/bench-link";
+import { currentVersionOf, isVersionConflict } from "../model/errors";
+import { allowablesNote, categorySuggestions, cellTitle, isOpenCell, toggleCell } from "../model/load-cases";
+import { nonZeroComponents } from "../model/stress-components";
 import { formatStress } from "../model/units";
 import { StateForm } from "./StateForm";
 import { RenameForm } from "./RenameForm";
 import { StateHistory } from "./StateHistory";
-
-const SHOWN = [
-  ["xx", "σxx"],
-  ["yy", "σyy"],
-  ["zz", "σzz"],
-  ["xy", "τxy"],
-  ["yz", "τyz"],
-  ["zx", "τzx"],
-] as const;
 
 /** Load cases × locations: each cell is the saved state (non-zero components), with its source and revision. */
 export function LoadCasesPanel({
@@ -43,8 +37,6 @@ export function LoadCasesPanel({
   /** Categories the project gives factors of their own (the checks panel); others use the default. */
   allowableCategories?: string[];
 }) {
-  const ownFactors = (category: string) =>
-    allowableCategories.some((a) => a.trim().toLowerCase() === category.trim().toLowerCase());
   const m = useLoadCaseMutations(workspaceId, projectId);
   const [editing, setEditing] = useState<{ caseId: string; locationId: string } | null>(null);
   const [history, setHistory] = useState<{ caseId: string; locationId: string } | null>(null);
@@ -58,7 +50,8 @@ export function LoadCasesPanel({
   };
   const editingCase = editing && cases.find((c) => c.id === editing.caseId);
   const editingState = editingCase?.states.find((s) => s.locationId === editing?.locationId);
-  const conflict = m.saveState.error instanceof ApiError && m.saveState.error.status === 409;
+  const conflict = isVersionConflict(m.saveState.error);
+  const historyTitle = history && cellTitle(history, cases, locations);
 
   return (
     <Panel
@@ -104,9 +97,7 @@ export function LoadCasesPanel({
                     </span>
                   )}
                   <div className="text-[12px] font-normal text-graphite-soft" data-testid="case-allowables">
-                    {c.category && ownFactors(c.category)
-                      ? `checked with the “${c.category}” factors`
-                      : "checked with the project default factors"}
+                    {allowablesNote(c.category, allowableCategories)}
                   </div>
                   <div className="text-[12px] font-normal text-graphite-faint">version {c.version}</div>
                   {c.description && (
@@ -150,23 +141,20 @@ export function LoadCasesPanel({
                 </th>
                 {locations.map((l) => {
                   const s = c.states.find((x) => x.locationId === l.id);
+                  const cell = { caseId: c.id, locationId: l.id };
+                  const shown = s ? nonZeroComponents(s.componentsPa) : [];
                   return (
                     <td key={l.id} className="px-3 py-2">
                       {s ? (
                         <div className="space-y-0.5">
                           <div className="flex flex-wrap gap-x-3">
-                            {SHOWN.filter(([k]) => s.componentsPa[k] !== 0).map(([k, label]) => (
-                              <span key={k}>
+                            {shown.map(({ key, label, pa }) => (
+                              <span key={key}>
                                 <span className="text-[12px] text-graphite-soft">{label} </span>
-                                <Quantity
-                                  value={formatStress(s.componentsPa[k], unit)}
-                                  tone={stressTone(s.componentsPa[k])}
-                                />
+                                <Quantity value={formatStress(pa, unit)} tone={stressTone(pa)} />
                               </span>
                             ))}
-                            {SHOWN.every(([k]) => s.componentsPa[k] === 0) && (
-                              <span className="text-graphite-soft">zero state</span>
-                            )}
+                            {shown.length === 0 && <span className="text-graphite-soft">zero state</span>}
                           </div>
                           <div className="flex flex-wrap items-center gap-2 text-[12px] text-graphite-faint">
                             <span>
@@ -185,14 +173,8 @@ export function LoadCasesPanel({
                             {s.revision > 1 && (
                               <ToolButton
                                 aria-label={`Revisions of ${c.name} at ${l.name}`}
-                                pressed={history?.caseId === c.id && history.locationId === l.id}
-                                onClick={() =>
-                                  setHistory(
-                                    history?.caseId === c.id && history.locationId === l.id
-                                      ? null
-                                      : { caseId: c.id, locationId: l.id },
-                                  )
-                                }
+                                pressed={isOpenCell(history, cell)}
+                                onClick={() => setHistory(toggleCell(history, cell))}
                               >
                                 History
                               </ToolButton>
@@ -241,14 +223,14 @@ export function LoadCasesPanel({
           </tbody>
         </table>
       </div>
-      {history && cases.some((c) => c.id === history.caseId) && (
+      {history && historyTitle !== null && (
         <StateHistory
           workspaceId={workspaceId}
           projectId={projectId}
           loadCaseId={history.caseId}
           locationId={history.locationId}
           unit={unit}
-          title={`${cases.find((c) => c.id === history.caseId)!.name} at ${locations.find((l) => l.id === history.locationId)?.name ?? "a location"}`}
+          title={historyTitle}
         />
       )}
       {editing && editingCase && (
@@ -258,12 +240,8 @@ export function LoadCasesPanel({
           </p>
           {conflict && (
             <FormMessage>
-              Someone saved this load case meanwhile (now version{" "}
-              {
-                (m.saveState.error as ApiError & { details: { currentVersion: number } }).details
-                  .currentVersion
-              }
-              ). The table shows their values; save again to put yours over them.
+              Someone saved this load case meanwhile (now version {currentVersionOf(m.saveState.error)}). The
+              table shows their values; save again to put yours over them.
             </FormMessage>
           )}
           <StateForm
@@ -313,9 +291,7 @@ export function LoadCasesPanel({
             className="w-36 rounded-sm border border-rule-strong bg-panel px-2 py-1"
           />
           <datalist id="case-categories">
-            {[
-              ...new Set([...LOAD_CASE_CATEGORY_SUGGESTIONS, ...allowableCategories.map((a) => a.trim())]),
-            ].map((s) => (
+            {categorySuggestions(allowableCategories).map((s) => (
               <option key={s} value={s} />
             ))}
           </datalist>

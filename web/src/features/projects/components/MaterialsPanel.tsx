@@ -1,12 +1,13 @@
 import { useState, type FormEvent } from "react";
 import { FROM_MEMORY_NOTE } from "../../../../../core";
 import { STRESS_UNIT_NAMES, type StressUnitName } from "../../../../../core/contract/materials";
-import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { Quantity } from "../../../components/Quantity";
 import { useCreateMaterial, useDeleteMaterial, useMaterials } from "../api/materials";
 import { ToolButton } from "../../../components/ToolButton";
+import { fieldErrorSummary } from "../model/errors";
+import { newMaterialBody, type NewMaterialForm } from "../model/materials";
 import { formatStress } from "../model/units";
 import { MaterialEditor } from "./MaterialEditor";
 
@@ -24,27 +25,18 @@ export function MaterialsPanel({
   const create = useCreateMaterial(workspaceId);
   const remove = useDeleteMaterial(workspaceId);
   const [editingId, setEditingId] = useState<string | null>(null);
-  const [form, setForm] = useState({
+  const [form, setForm] = useState<NewMaterialForm>({
     name: "",
-    unit: unit as StressUnitName,
+    unit,
     yield: "",
     ultimateTension: "",
     reference: "",
   });
-  const errors = fieldErrorsOf(create.error);
-  const num = (v: string) => (v.trim() === "" ? null : Number(v));
   const submit = (e: FormEvent) => {
     e.preventDefault();
-    create.mutate(
-      {
-        name: form.name,
-        unit: form.unit,
-        yield: num(form.yield),
-        ultimateTension: num(form.ultimateTension),
-        reference: form.reference,
-      },
-      { onSuccess: () => setForm({ ...form, name: "", yield: "", ultimateTension: "", reference: "" }) },
-    );
+    create.mutate(newMaterialBody(form), {
+      onSuccess: () => setForm({ ...form, name: "", yield: "", ultimateTension: "", reference: "" }),
+    });
   };
   return (
     <Panel id="materials" index="5" title="Materials" subtitle={`strengths in ${unit}`}>
@@ -177,11 +169,7 @@ export function MaterialsPanel({
             Add to library
           </button>
           <div className="basis-full">
-            <FormMessage>
-              {Object.entries(errors)
-                .map(([path, message]) => `${path}: ${message}`)
-                .join("; ") || null}
-            </FormMessage>
+            <FormMessage>{fieldErrorSummary(create.error) || null}</FormMessage>
           </div>
         </form>
       )}

@@ -1,12 +1,12 @@
 import { CopyLinkButton } from "../../../components/CopyLinkButton";
 import { Link, useParams } from "react-router-dom";
-import { ApiError } from "../../../lib/api-client";
 import { FormMessage, quietButton } from "../../../lib/forms";
 import { useCombinations } from "../api/combinations";
 import { useLoadCases } from "../api/load-cases";
 import { useLocations } from "../api/locations";
 import { useProject } from "../api/projects";
 import { useWorkspaceRole } from "../api/workspace-role";
+import { isNotThere } from "../model/errors";
 import { displayUnit } from "../model/units";
 import { ActivityPanel } from "./ActivityPanel";
 import { CombinationsPanel } from "./CombinationsPanel";
@@ -26,7 +26,7 @@ export function ProjectPage() {
 
   if (project.isPending || role.isPending) return <p className="text-graphite-soft">Loading…</p>;
   if (project.error) {
-    if (project.error instanceof ApiError && [400, 404].includes(project.error.status)) {
+    if (isNotThere(project.error)) {
       return (
         <p className="py-12 text-center text-graphite-soft">
           No project here for you: it does not exist, is in the trash, or you are not a member.

@@ -1,9 +1,8 @@
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import { Quantity } from "../../../components/Quantity";
 import { useStateHistory } from "../api/state-history";
+import { STRESS_KEYS, STRESS_LABELS } from "../model/stress-components";
 import { formatStress } from "../model/units";
-
-const KEYS = ["xx", "yy", "zz", "xy", "yz", "zx"] as const;
 
 /** The revisions of one saved state, newest first: what a checker reads to see what changed and who changed it. */
 export function StateHistory(props: {
@@ -26,9 +25,9 @@ export function StateHistory(props: {
             <th className="pr-3">saved</th>
             <th className="pr-3">by</th>
             <th className="pr-3">source</th>
-            {KEYS.map((k) => (
+            {STRESS_KEYS.map((k) => (
               <th key={k} className="pr-3 text-right">
-                {k[0] === k[1] ? `σ${k}` : `τ${k}`}
+                {STRESS_LABELS[k]}
               </th>
             ))}
             <th className="pr-3">note</th>
@@ -43,7 +42,7 @@ export function StateHistory(props: {
               <td className="pr-3">
                 {r.source} ({r.unit})
               </td>
-              {KEYS.map((k) => (
+              {STRESS_KEYS.map((k) => (
                 <td key={k} className="pr-3 text-right">
                   <Quantity value={formatStress(r.componentsPa[k], props.unit)} />
                 </td>

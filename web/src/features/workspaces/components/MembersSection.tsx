@@ -11,7 +11,8 @@ import { useLeaveWorkspace } from "../api/leave-workspace";
 import { useMembers } from "../api/list-members";
 import { useRemoveMember } from "../api/remove-member";
 import { useUpdateMember } from "../api/update-member";
-import { formatActivity, formatDate } from "./format";
+import { formatActivity, formatDate } from "../model/dates";
+import { removeMemberQuestion } from "../model/roles";
 import { RoleBadge } from "./RoleBadge";
 
 /** `/workspaces/:id/members`: who is in, with which role; owners change roles and remove people; anyone leaves. */
@@ -91,7 +92,7 @@ export function MembersSection() {
                       type="button"
                       className={quietButton}
                       onClick={() =>
-                        window.confirm(`Remove ${m.name} from ${workspace.name}?`) &&
+                        window.confirm(removeMemberQuestion(m.name, workspace.name)) &&
                         remove.mutate({ workspaceId: workspace.id, memberId: m.id })
                       }
                     >

@@ -10,6 +10,7 @@ import {
 import { applyServerErrors, Field, FormMessage, primaryButton } from "../../../lib/forms";
 import { useDeleteWorkspace } from "../api/delete-workspace";
 import { useRenameWorkspace } from "../api/rename-workspace";
+import { deleteConfirmed } from "../model/roles";
 
 /** `/workspaces/:id/settings` (owners): rename the workspace, or delete it after typing its name. */
 export function SettingsSection() {
@@ -72,7 +73,7 @@ function DeleteWorkspace({ workspace }: { workspace: Workspace }) {
   const del = useDeleteWorkspace();
   const navigate = useNavigate();
   const [typed, setTyped] = useState("");
-  const matches = typed === workspace.name;
+  const matches = deleteConfirmed(typed, workspace.name);
   return (
     <section
       aria-labelledby="delete-heading"

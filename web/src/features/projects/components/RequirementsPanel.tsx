@@ -5,7 +5,6 @@ import { Panel } from "../../../components/Panel";
 import { useMaterials } from "../api/materials";
 import { useUpdateProject } from "../api/projects";
 import { fieldErrorSummary, isVersionConflict } from "../model/errors";
-import { materialName } from "../model/material-refs";
 import {
   canAddCategory,
   categoryBox,
@@ -16,11 +15,11 @@ import {
   setCategoryFactor,
   toCategoryDrafts,
   toDraft,
-  unitSystemLabel,
   type CategoryDraft,
   type FactorDraft,
 } from "../model/requirements";
 import { MaterialPicker } from "./MaterialPicker";
+import { RequirementsSummary } from "./RequirementsSummary";
 
 /**
  * What the project checks: the project-wide default factor per criterion, the factors per
@@ -81,75 +80,12 @@ export function RequirementsPanel({ project, canEdit }: { project: Project; canE
     >
       <div className="space-y-3 p-3 text-[15px]">
         {!editing ? (
-          <>
-            <p className="text-[13px] text-graphite-soft">
-              Project default (every load case whose category has no factors of its own):
-            </p>
-            <ul className="flex flex-wrap gap-x-6 gap-y-1" data-testid="default-requirements">
-              {project.requirements.map((r) => (
-                <li key={r.criterion}>
-                  {CRITERION_LABELS[r.criterion]}: n ≥ <span className="num">{r.requiredFactor}</span>
-                </li>
-              ))}
-            </ul>
-            {project.categoryRequirements.length > 0 && (
-              <table className="text-[14px]" data-testid="category-requirements">
-                <thead>
-                  <tr className="text-left text-[13px] text-graphite-soft">
-                    <th scope="col" className="pr-4 font-normal">
-                      load-case category
-                    </th>
-                    {project.requirements.map((r) => (
-                      <th key={r.criterion} scope="col" className="pr-4 text-right font-normal">
-                        {CRITERION_LABELS[r.criterion]}
-                      </th>
-                    ))}
-                  </tr>
-                </thead>
-                <tbody>
-                  {project.categoryRequirements.map((c) => (
-                    <tr key={c.category}>
-                      <th scope="row" className="pr-4 text-left font-normal">
-                        {c.category}
-                      </th>
-                      {project.requirements.map((r) => (
-                        <td key={r.criterion} className="pr-4 text-right">
-                          {c.factors[r.criterion] === undefined ? (
-                            <span className="text-graphite-soft">default</span>
-                          ) : (
-                            <>
-                              n ≥ <span className="num">{c.factors[r.criterion]}</span>
-                            </>
-                          )}
-                        </td>
-                      ))}
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
-            )}
-            <p className="text-[13px] text-graphite-soft">
-              {project.includeUnsuitedCriteria
-                ? "Criteria that do not suit a location's material (ductile vs brittle) are rated on request and can govern."
-                : "Criteria that do not suit a location's material (fracture criteria on a ductile metal, yield criteria on a brittle one) are shown as not applicable and left out of the governing search."}
-            </p>
-            <p>
-              Default material:{" "}
-              <strong>{materialName(project.defaultMaterial, materials.data) ?? "none chosen"}</strong>
-              {project.defaultMaterial?.kind === "published" && (
-                <span className="text-graphite-soft">
-                  {" "}
-                  — published minimum values; verify against your certificate.
-                </span>
-              )}
-            </p>
-            <p className="text-graphite-soft">Values shown in {unitSystemLabel(project.unitSystem)}.</p>
-            {canEdit && (
-              <button type="button" className={quietButton} onClick={start}>
-                Change checks
-              </button>
-            )}
-          </>
+          <RequirementsSummary
+            project={project}
+            materials={materials.data}
+            canEdit={canEdit}
+            onChange={start}
+          />
         ) : (
           <div className="space-y-3">
             <div className="grid gap-2 sm:grid-cols-[1fr_2fr]">

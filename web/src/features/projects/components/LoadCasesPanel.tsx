@@ -1,19 +1,16 @@
 import { useState, type FormEvent } from "react";
-import { Link } from "react-router-dom";
 import type { LoadCase } from "../../../../../core/contract/load-cases";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import type { Location } from "../../../../../core/contract/projects";
 import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
-import { Quantity, stressTone } from "../../../components/Quantity";
 import { ToolButton } from "../../../components/ToolButton";
 import { useLoadCaseMutations } from "../api/load-cases";
 import { benchLinkForState } from "../../../lib/bench-link";
 import { currentVersionOf, isVersionConflict } from "../model/errors";
 import { allowablesNote, categorySuggestions, cellTitle, isOpenCell, toggleCell } from "../model/load-cases";
-import { nonZeroComponents } from "../model/stress-components";
-import { formatStress } from "../model/units";
+import { SavedStateCell } from "./SavedStateCell";
 import { StateForm } from "./StateForm";
 import { RenameForm } from "./RenameForm";
 import { StateHistory } from "./StateHistory";
@@ -142,56 +139,23 @@ export function LoadCasesPanel({
                 {locations.map((l) => {
                   const s = c.states.find((x) => x.locationId === l.id);
                   const cell = { caseId: c.id, locationId: l.id };
-                  const shown = s ? nonZeroComponents(s.componentsPa) : [];
                   return (
                     <td key={l.id} className="px-3 py-2">
                       {s ? (
-                        <div className="space-y-0.5">
-                          <div className="flex flex-wrap gap-x-3">
-                            {shown.map(({ key, label, pa }) => (
-                              <span key={key}>
-                                <span className="text-[12px] text-graphite-soft">{label} </span>
-                                <Quantity value={formatStress(pa, unit)} tone={stressTone(pa)} />
-                              </span>
-                            ))}
-                            {shown.length === 0 && <span className="text-graphite-soft">zero state</span>}
-                          </div>
-                          <div className="flex flex-wrap items-center gap-2 text-[12px] text-graphite-faint">
-                            <span>
-                              {s.source} · rev. {s.revision}
-                            </span>
-                            <Link
-                              className="text-ink underline-offset-2 hover:underline"
-                              to={benchLinkForState(
-                                { workspaceId, projectId, loadCaseId: c.id, locationId: l.id },
-                                s.components,
-                                s.unit,
-                              )}
-                            >
-                              Open in bench
-                            </Link>
-                            {s.revision > 1 && (
-                              <ToolButton
-                                aria-label={`Revisions of ${c.name} at ${l.name}`}
-                                pressed={isOpenCell(history, cell)}
-                                onClick={() => setHistory(toggleCell(history, cell))}
-                              >
-                                History
-                              </ToolButton>
-                            )}
-                            {canEdit && (
-                              <ToolButton
-                                aria-label={`Edit ${c.name} at ${l.name}`}
-                                onClick={() => (
-                                  m.saveState.reset(),
-                                  setEditing({ caseId: c.id, locationId: l.id })
-                                )}
-                              >
-                                Edit
-                              </ToolButton>
-                            )}
-                          </div>
-                        </div>
+                        <SavedStateCell
+                          state={s}
+                          unit={unit}
+                          benchLink={benchLinkForState(
+                            { workspaceId, projectId, loadCaseId: c.id, locationId: l.id },
+                            s.components,
+                            s.unit,
+                          )}
+                          caseName={c.name}
+                          locationName={l.name}
+                          historyOpen={isOpenCell(history, cell)}
+                          onHistory={() => setHistory(toggleCell(history, cell))}
+                          onEdit={canEdit ? () => (m.saveState.reset(), setEditing(cell)) : undefined}
+                        />
                       ) : canEdit ? (
                         <ToolButton
                           aria-label={`Enter ${c.name} at ${l.name}`}

@@ -22,17 +22,10 @@ import { Quantity, stressTone } from "../../../components/Quantity";
 import { ToolButton } from "../../../components/ToolButton";
 import { Verdict } from "../../../components/Verdict";
 import { benchLinkForCombination, benchLinkForState } from "../../../lib/bench-link";
-import { fixed } from "../../../lib/number-format";
-import { checkOf, governingMarks, inUnit } from "../model/rows";
+import { editableStress, formatStress } from "../../../lib/stress";
+import { checkOf, governingMarks } from "../model/rows";
 
 const helper = createColumnHelper<ComparisonRowView>();
-
-/** A stress for the table: three significant decimals at most, as the sheet writes it. */
-function stress(pa: number, unit: StressUnitName): string {
-  const v = inUnit(pa, unit);
-  const a = Math.abs(v);
-  return fixed(v, a >= 100 ? 1 : a >= 10 ? 2 : 3, "-"); // the shared formatter: never "-0.000"
-}
 
 /** Sorts utilisation with "not evaluated" last. */
 const utilisationOf = (row: ComparisonRowView, c: CriterionName) => {
@@ -118,7 +111,7 @@ export function ComparisonTable({
           header: `σ${["₁", "₂", "₃"][k]}`,
           cell: (i) => (
             <Quantity
-              value={stress(i.getValue(), unit)}
+              value={formatStress(i.getValue(), unit)}
               tone={stressTone(i.getValue(), Math.max(...i.row.original.principalPa.map(Math.abs)))}
             />
           ),
@@ -127,17 +120,17 @@ export function ComparisonTable({
       ),
       helper.accessor("vonMisesPa", {
         header: "σvm",
-        cell: (i) => <Quantity value={stress(i.getValue(), unit)} />,
+        cell: (i) => <Quantity value={formatStress(i.getValue(), unit)} />,
         meta: { numeric: true },
       }),
       helper.accessor("trescaPa", {
         header: "σ₁−σ₃",
-        cell: (i) => <Quantity value={stress(i.getValue(), unit)} />,
+        cell: (i) => <Quantity value={formatStress(i.getValue(), unit)} />,
         meta: { numeric: true },
       }),
       helper.accessor("maxShearPa", {
         header: "τmax",
-        cell: (i) => <Quantity value={stress(i.getValue(), unit)} />,
+        cell: (i) => <Quantity value={formatStress(i.getValue(), unit)} />,
         meta: { numeric: true },
       }),
       ...criteria.map((c) =>
@@ -197,7 +190,7 @@ export function ComparisonTable({
         header: "",
         cell: (i) => {
           const r = i.row.original;
-          const toUnit = (x: number) => Number(inUnit(x, unit).toPrecision(12));
+          const toUnit = (x: number) => editableStress(x, unit);
           const values = Object.fromEntries(
             Object.entries(r.componentsPa).map(([k, v]) => [k, toUnit(v)]),
           ) as ComparisonRowView["componentsPa"];

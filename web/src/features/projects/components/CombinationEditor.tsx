@@ -7,7 +7,7 @@ import {
 import type { LoadCase } from "../../../../../core/contract/load-cases";
 import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
-import { useCombinationMutations } from "../api/combinations";
+import { useCombinationMutations } from "../../../entities/combination/mutations";
 import {
   draftOf,
   newTerm,

@@ -5,7 +5,7 @@ import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { ToolButton } from "../../../components/ToolButton";
-import { useCombinationMutations } from "../api/combinations";
+import { useCombinationMutations } from "../../../entities/combination/mutations";
 import { newTerm, patchTerm, termError, termsBody, type DraftTerm } from "../model/combinations";
 import { CombinationEditor } from "./CombinationEditor";
 

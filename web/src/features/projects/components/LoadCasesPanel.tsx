@@ -1,16 +1,15 @@
-import { useState, type FormEvent } from "react";
+import { useState } from "react";
 import type { LoadCase } from "../../../../../core/contract/load-cases";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import type { Location } from "../../../../../core/contract/projects";
-import { fieldErrorsOf } from "../../../lib/api-client";
-import { FormMessage, primaryButton } from "../../../lib/forms";
+import { useDeleteLoadCase, useSaveState, useUpdateLoadCase } from "../../../entities/load-case/mutations";
+import { FormMessage } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { ToolButton } from "../../../components/ToolButton";
-import { useLoadCaseMutations } from "../api/load-cases";
-import { benchLinkForState } from "../../../lib/bench-link";
 import { currentVersionOf, isVersionConflict } from "../model/errors";
-import { allowablesNote, categorySuggestions, cellTitle, isOpenCell, toggleCell } from "../model/load-cases";
-import { SavedStateCell } from "./SavedStateCell";
+import { allowablesNote, cellTitle, isOpenCell, toggleCell } from "../model/load-cases";
+import { LoadCaseStateCell } from "./LoadCaseStateCell";
+import { NewLoadCaseForm } from "./NewLoadCaseForm";
 import { StateForm } from "./StateForm";
 import { RenameForm } from "./RenameForm";
 import { StateHistory } from "./StateHistory";
@@ -34,20 +33,16 @@ export function LoadCasesPanel({
   /** Categories the project gives factors of their own (the checks panel); others use the default. */
   allowableCategories?: string[];
 }) {
-  const m = useLoadCaseMutations(workspaceId, projectId);
+  const update = useUpdateLoadCase(workspaceId, projectId);
+  const remove = useDeleteLoadCase(workspaceId, projectId);
+  const saveState = useSaveState(workspaceId, projectId);
   const [editing, setEditing] = useState<{ caseId: string; locationId: string } | null>(null);
   const [history, setHistory] = useState<{ caseId: string; locationId: string } | null>(null);
   const [renaming, setRenaming] = useState<string | null>(null);
-  const [name, setName] = useState("");
-  const [category, setCategory] = useState("");
 
-  const add = (e: FormEvent) => {
-    e.preventDefault();
-    m.create.mutate({ name, category }, { onSuccess: () => (setName(""), setCategory("")) });
-  };
   const editingCase = editing && cases.find((c) => c.id === editing.caseId);
   const editingState = editingCase?.states.find((s) => s.locationId === editing?.locationId);
-  const conflict = isVersionConflict(m.saveState.error);
+  const conflict = isVersionConflict(saveState.error);
   const historyTitle = history && cellTitle(history, cases, locations);
 
   return (
@@ -103,7 +98,7 @@ export function LoadCasesPanel({
                   {canEdit && renaming !== c.id && (
                     <ToolButton
                       aria-label={`Rename load case ${c.name}`}
-                      onClick={() => (m.update.reset(), setRenaming(c.id))}
+                      onClick={() => (update.reset(), setRenaming(c.id))}
                     >
                       Rename
                     </ToolButton>
@@ -116,11 +111,11 @@ export function LoadCasesPanel({
                         { key: "category", label: "category", value: c.category, list: "case-categories" },
                         { key: "description", label: "description", value: c.description },
                       ]}
-                      pending={m.update.isPending}
-                      error={m.update.error}
+                      pending={update.isPending}
+                      error={update.error}
                       onCancel={() => setRenaming(null)}
                       onSave={(v) =>
-                        m.update.mutate(
+                        update.mutate(
                           {
                             id: c.id,
                             body: {
@@ -136,48 +131,26 @@ export function LoadCasesPanel({
                     />
                   )}
                 </th>
-                {locations.map((l) => {
-                  const s = c.states.find((x) => x.locationId === l.id);
-                  const cell = { caseId: c.id, locationId: l.id };
-                  return (
-                    <td key={l.id} className="px-3 py-2">
-                      {s ? (
-                        <SavedStateCell
-                          state={s}
-                          unit={unit}
-                          benchLink={benchLinkForState(
-                            { workspaceId, projectId, loadCaseId: c.id, locationId: l.id },
-                            s.components,
-                            s.unit,
-                          )}
-                          caseName={c.name}
-                          locationName={l.name}
-                          historyOpen={isOpenCell(history, cell)}
-                          onHistory={() => setHistory(toggleCell(history, cell))}
-                          onEdit={canEdit ? () => (m.saveState.reset(), setEditing(cell)) : undefined}
-                        />
-                      ) : canEdit ? (
-                        <ToolButton
-                          aria-label={`Enter ${c.name} at ${l.name}`}
-                          onClick={() => (
-                            m.saveState.reset(),
-                            setEditing({ caseId: c.id, locationId: l.id })
-                          )}
-                        >
-                          Enter state
-                        </ToolButton>
-                      ) : (
-                        <span className="text-graphite-faint">—</span>
-                      )}
-                    </td>
-                  );
-                })}
+                {locations.map((l) => (
+                  <td key={l.id} className="px-3 py-2">
+                    <LoadCaseStateCell
+                      workspaceId={workspaceId}
+                      projectId={projectId}
+                      loadCase={c}
+                      location={l}
+                      unit={unit}
+                      canEdit={canEdit}
+                      historyOpen={isOpenCell(history, { caseId: c.id, locationId: l.id })}
+                      onToggleHistory={() =>
+                        setHistory(toggleCell(history, { caseId: c.id, locationId: l.id }))
+                      }
+                      onEdit={() => (saveState.reset(), setEditing({ caseId: c.id, locationId: l.id }))}
+                    />
+                  </td>
+                ))}
                 {canEdit && (
                   <td className="px-3 py-2 text-right">
-                    <ToolButton
-                      aria-label={`Delete load case ${c.name}`}
-                      onClick={() => m.remove.mutate(c.id)}
-                    >
+                    <ToolButton aria-label={`Delete load case ${c.name}`} onClick={() => remove.mutate(c.id)}>
                       Delete
                     </ToolButton>
                   </td>
@@ -204,7 +177,7 @@ export function LoadCasesPanel({
           </p>
           {conflict && (
             <FormMessage>
-              Someone saved this load case meanwhile (now version {currentVersionOf(m.saveState.error)}). The
+              Someone saved this load case meanwhile (now version {currentVersionOf(saveState.error)}). The
               table shows their values; save again to put yours over them.
             </FormMessage>
           )}
@@ -213,11 +186,11 @@ export function LoadCasesPanel({
             idPrefix="state"
             initial={editingState}
             defaultUnit={unit}
-            pending={m.saveState.isPending}
-            error={conflict ? null : m.saveState.error}
+            pending={saveState.isPending}
+            error={conflict ? null : saveState.error}
             onCancel={() => setEditing(null)}
             onSave={(stress, source) =>
-              m.saveState.mutate(
+              saveState.mutate(
                 {
                   caseId: editingCase.id,
                   locationId: editing.locationId,
@@ -232,40 +205,11 @@ export function LoadCasesPanel({
         </div>
       )}
       {canEdit && (
-        <form onSubmit={add} noValidate className="flex flex-wrap items-start gap-2 border-t border-rule p-3">
-          <label className="sr-only" htmlFor="new-case">
-            New load case name
-          </label>
-          <input
-            id="new-case"
-            placeholder="e.g. Hydrostatic test"
-            value={name}
-            onChange={(e) => setName(e.target.value)}
-            className="min-w-52 flex-1 rounded-sm border border-rule-strong bg-panel px-2 py-1"
-          />
-          <label className="sr-only" htmlFor="new-case-category">
-            Category
-          </label>
-          <input
-            id="new-case-category"
-            list="case-categories"
-            placeholder="category"
-            value={category}
-            onChange={(e) => setCategory(e.target.value)}
-            className="w-36 rounded-sm border border-rule-strong bg-panel px-2 py-1"
-          />
-          <datalist id="case-categories">
-            {categorySuggestions(allowableCategories).map((s) => (
-              <option key={s} value={s} />
-            ))}
-          </datalist>
-          <button type="submit" className={primaryButton} disabled={m.create.isPending}>
-            Add load case
-          </button>
-          <div className="basis-full">
-            <FormMessage>{fieldErrorsOf(m.create.error).name}</FormMessage>
-          </div>
-        </form>
+        <NewLoadCaseForm
+          workspaceId={workspaceId}
+          projectId={projectId}
+          allowableCategories={allowableCategories}
+        />
       )}
     </Panel>
   );

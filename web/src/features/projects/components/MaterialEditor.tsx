@@ -10,7 +10,7 @@ import {
 } from "../../../../../core/contract/materials";
 import { ApiError } from "../../../lib/api-client";
 import { applyServerErrors, Field, FormMessage, primaryButton, quietButton } from "../../../lib/forms";
-import { useUpdateMaterial } from "../api/materials";
+import { useUpdateMaterial } from "../../../entities/material/mutations";
 import { isVersionConflict, versionConflictOf } from "../model/errors";
 import { materialFormValues, optionalNumber } from "../model/materials";
 

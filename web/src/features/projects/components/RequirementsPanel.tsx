@@ -2,8 +2,8 @@ import { useState } from "react";
 import { CRITERION_LABELS, CRITERION_NAMES, type Project } from "../../../../../core/contract/projects";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
-import { useMaterials } from "../api/materials";
-import { useUpdateProject } from "../api/projects";
+import { useMaterials } from "../../../entities/material/queries";
+import { useUpdateProject } from "../../../entities/project/mutations";
 import { fieldErrorSummary, isVersionConflict } from "../model/errors";
 import {
   canAddCategory,

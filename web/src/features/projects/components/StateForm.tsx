@@ -7,16 +7,16 @@ import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { looksLikeSeveralNumbers } from "../../../lib/number-text";
 import { useDecimalPreference } from "../../../lib/paste-preferences";
-import type { StressBody } from "../api/load-cases";
+import { COMPONENT_SYMBOLS, STRESS_COMPONENTS } from "../../../lib/stress";
+import type { StressBody } from "../../../entities/load-case/mutations";
 import {
+  describePaste,
   fieldsFromTensor,
   initialFields,
   initialSource,
   pastedSource,
-  describePaste,
   readStateFields,
 } from "../model/state-form";
-import { STRESS_KEYS, STRESS_LABELS } from "../model/stress-components";
 
 /**
  * Six components in a unit, with the source of the numbers: how an editor types a state at
@@ -90,14 +90,14 @@ export function StateForm({
   return (
     <form onSubmit={submit} noValidate className="space-y-2 rounded-sm border border-rule bg-paper p-3">
       <div className="grid grid-cols-3 gap-2 sm:grid-cols-6">
-        {STRESS_KEYS.map((k) => {
+        {STRESS_COMPONENTS.map((k) => {
           const message = serverErrors[`stress.components.${k}`];
           return (
             <label key={k} className="text-[13px] text-graphite-soft">
-              {STRESS_LABELS[k]}
+              {COMPONENT_SYMBOLS[k].tensor}
               <input
                 id={`${idPrefix}-${k}`}
-                aria-label={`${STRESS_LABELS[k]} (${unit})`}
+                aria-label={`${COMPONENT_SYMBOLS[k].tensor} (${unit})`}
                 inputMode="decimal"
                 value={values[k]}
                 onChange={(e) => setValues({ ...values, [k]: e.target.value })}

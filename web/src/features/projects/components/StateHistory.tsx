@@ -1,8 +1,7 @@
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import { Quantity } from "../../../components/Quantity";
-import { useStateHistory } from "../api/state-history";
-import { STRESS_KEYS, STRESS_LABELS } from "../model/stress-components";
-import { formatStress } from "../model/units";
+import { useStateHistory } from "../../../entities/load-case/queries";
+import { COMPONENT_SYMBOLS, formatStress, STRESS_COMPONENTS as KEYS } from "../../../lib/stress";
 
 /** The revisions of one saved state, newest first: what a checker reads to see what changed and who changed it. */
 export function StateHistory(props: {
@@ -25,9 +24,9 @@ export function StateHistory(props: {
             <th className="pr-3">saved</th>
             <th className="pr-3">by</th>
             <th className="pr-3">source</th>
-            {STRESS_KEYS.map((k) => (
+            {KEYS.map((k) => (
               <th key={k} className="pr-3 text-right">
-                {STRESS_LABELS[k]}
+                {COMPONENT_SYMBOLS[k].tensor}
               </th>
             ))}
             <th className="pr-3">note</th>
@@ -42,7 +41,7 @@ export function StateHistory(props: {
               <td className="pr-3">
                 {r.source} ({r.unit})
               </td>
-              {STRESS_KEYS.map((k) => (
+              {KEYS.map((k) => (
                 <td key={k} className="pr-3 text-right">
                   <Quantity value={formatStress(r.componentsPa[k], props.unit)} />
                 </td>

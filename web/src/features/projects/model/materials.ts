@@ -1,12 +1,13 @@
 import type { Material, StressUnitName, UpdateMaterialBody } from "../../../../../core/contract/materials";
-import { fromPa } from "./units";
+import { editableStress } from "../../../lib/stress";
 
 /**
  * A stored material as the edit form shows it: strengths and E back in the unit they were entered
- * in, cut to twelve significant figures so the Pa round trip does not show as 354.99999999999994.
+ * in, cut to twelve significant figures (editableStress) so the Pa round trip does not show as
+ * 60.699999999999996.
  */
 export function materialFormValues(m: Material): UpdateMaterialBody {
-  const inUnit = (pa: number | null) => (pa === null ? null : Number(fromPa(pa, m.unit).toPrecision(12)));
+  const inUnit = (pa: number | null) => (pa === null ? null : editableStress(pa, m.unit));
   return {
     version: m.version,
     name: m.name,

@@ -1,11 +1,11 @@
-import { stressInputProblem, type ParseTensorResult } from "../../../../../core";
+import { stressInputProblem, type Component, type ParseTensorResult } from "../../../../../core";
 import type { StateSource, StressState } from "../../../../../core/contract/load-cases";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import { readNumberText } from "../../../lib/number-text";
-import { STRESS_KEYS, STRESS_LABELS, type StressKey } from "./stress-components";
+import { COMPONENT_SYMBOLS, STRESS_COMPONENTS } from "../../../lib/stress";
 
 /** The six boxes of the state form, as typed. */
-export type StateFields = Record<StressKey, string>;
+export type StateFields = Record<Component, string>;
 
 /**
  * The boxes a form opens with: a saved state's values in its own unit, cut to ten significant
@@ -13,7 +13,7 @@ export type StateFields = Record<StressKey, string>;
  */
 export function initialFields(initial?: StressState): StateFields {
   return Object.fromEntries(
-    STRESS_KEYS.map((k) => [k, initial ? String(Number(initial.components[k].toPrecision(10))) : "0"]),
+    STRESS_COMPONENTS.map((k) => [k, initial ? String(Number(initial.components[k].toPrecision(10))) : "0"]),
   ) as StateFields;
 }
 
@@ -28,18 +28,18 @@ export const initialSource = (initial?: StressState): StateSource =>
  */
 export function readStateFields(
   fields: StateFields,
-): { ok: true; components: Record<StressKey, number> } | { ok: false; message: string } {
-  const parsed: Partial<Record<StressKey, number>> = {};
-  for (const k of STRESS_KEYS) {
+): { ok: true; components: Record<Component, number> } | { ok: false; message: string } {
+  const parsed: Partial<Record<Component, number>> = {};
+  for (const k of STRESS_COMPONENTS) {
     const read = readNumberText(fields[k]);
-    if ("refused" in read) return { ok: false, message: `${STRESS_LABELS[k]}: ${read.refused}.` };
+    if ("refused" in read) return { ok: false, message: `${COMPONENT_SYMBOLS[k].tensor}: ${read.refused}.` };
     if (fields[k].trim() === "" || !Number.isFinite(read.value))
-      return { ok: false, message: `${STRESS_LABELS[k]} must be a number.` };
+      return { ok: false, message: `${COMPONENT_SYMBOLS[k].tensor} must be a number.` };
     const problem = stressInputProblem(read.value);
-    if (problem !== undefined) return { ok: false, message: `${STRESS_LABELS[k]} ${problem}.` };
+    if (problem !== undefined) return { ok: false, message: `${COMPONENT_SYMBOLS[k].tensor} ${problem}.` };
     parsed[k] = read.value;
   }
-  return { ok: true, components: parsed as Record<StressKey, number> };
+  return { ok: true, components: parsed as Record<Component, number> };
 }
 
 /** A paste core could read. */
@@ -47,7 +47,7 @@ type ReadTensor = Extract<ParseTensorResult, { ok: true }>;
 
 /** The six boxes filled from a pasted tensor. */
 export const fieldsFromTensor = (result: ReadTensor): StateFields =>
-  Object.fromEntries(STRESS_KEYS.map((k) => [k, String(result.tensor[k])])) as StateFields;
+  Object.fromEntries(STRESS_COMPONENTS.map((k) => [k, String(result.tensor[k])])) as StateFields;
 
 /** Where pasted numbers came from: a finite-element listing row, or a plain paste. */
 export const pastedSource = (result: ReadTensor): StateSource =>

@@ -1,12 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { nonZeroComponents, STRESS_KEYS, STRESS_LABELS } from "./stress-components";
-
-describe("stress component labels", () => {
-  it("when the six components are listed, then normals come first as σ and shears follow as τ (common practice, no source)", () => {
-    expect(STRESS_KEYS).toEqual(["xx", "yy", "zz", "xy", "yz", "zx"]);
-    expect(STRESS_KEYS.map((k) => STRESS_LABELS[k])).toEqual(["σxx", "σyy", "σzz", "τxy", "τyz", "τzx"]);
-  });
-});
+import { nonZeroComponents } from "./stress-components";
 
 describe("non-zero components", () => {
   it("when some components are zero, then only the others are listed, in order, with their values", () => {

@@ -1,6 +1,6 @@
 import { NavLink, Outlet, useParams } from "react-router-dom";
 import { FormMessage } from "../../../lib/forms";
-import { useWorkspace } from "../api/get-workspace";
+import { useWorkspace } from "../../../entities/workspace/queries";
 import { CopyLinkButton } from "../../../components/CopyLinkButton";
 import { isNotThere } from "../model/errors";
 import { membersWord, workspaceTabs } from "../model/roles";

@@ -5,30 +5,19 @@ import {
   type Combination,
 } from "../../../../../core/contract/combinations";
 import type { LoadCase } from "../../../../../core/contract/load-cases";
-import { ApiError, fieldErrorsOf } from "../../../lib/api-client";
+import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { useCombinationMutations } from "../../../entities/combination/mutations";
-
-type DraftTerm = { loadCaseId: string; factor: string };
-type Draft = { name: string; description: string; terms: DraftTerm[] };
-
-const draftOf = (c: Combination): Draft => ({
-  name: c.name,
-  description: c.description,
-  terms: c.terms.map((t) => ({ loadCaseId: t.loadCaseId, factor: String(t.factor) })),
-});
-
-/** What a stale save was refused with: the version now stored and that record. */
-type Conflict = { currentVersion: number; current: Combination };
-
-function conflictOf(error: unknown): Conflict | null {
-  if (!(error instanceof ApiError) || error.status !== 409) return null;
-  const details = error.details as { currentVersion?: unknown; current?: unknown } | undefined;
-  const current = combinationSchema.safeParse(details?.current);
-  return typeof details?.currentVersion === "number" && current.success
-    ? { currentVersion: details.currentVersion, current: current.data }
-    : null;
-}
+import {
+  draftOf,
+  newTerm,
+  patchTerm,
+  termError,
+  termsBody,
+  type CombinationDraft,
+  type DraftTerm,
+} from "../model/combinations";
+import { versionConflictOf } from "../model/errors";
 
 /**
  * Edits one combination's name, description and terms over the version it was opened at. A
@@ -49,12 +38,12 @@ export function CombinationEditor({
   onDone: () => void;
 }) {
   const { update } = useCombinationMutations(workspaceId, projectId);
-  const [draft, setDraft] = useState<Draft>(() => draftOf(combination));
+  const [draft, setDraft] = useState<CombinationDraft>(() => draftOf(combination));
   const [version, setVersion] = useState(combination.version);
   const errors = fieldErrorsOf(update.error);
-  const conflict = conflictOf(update.error);
+  const conflict = versionConflictOf(update.error, combinationSchema);
   const setTerm = (i: number, patch: Partial<DraftTerm>) =>
-    setDraft({ ...draft, terms: draft.terms.map((t, j) => (j === i ? { ...t, ...patch } : t)) });
+    setDraft({ ...draft, terms: patchTerm(draft.terms, i, patch) });
 
   const save = (basedOn: number) =>
     update.mutate(
@@ -63,12 +52,7 @@ export function CombinationEditor({
         version: basedOn,
         name: draft.name,
         description: draft.description,
-        terms: draft.terms
-          .filter((t) => t.loadCaseId)
-          .map((t) => ({
-            loadCaseId: t.loadCaseId,
-            factor: t.factor.trim() === "" ? NaN : Number(t.factor),
-          })),
+        terms: termsBody(draft.terms, NaN),
       },
       { onSuccess: onDone },
     );
@@ -136,18 +120,14 @@ export function CombinationEditor({
           >
             Remove
           </button>
-          {(errors[`terms.${i}.factor`] || errors[`terms.${i}.loadCaseId`]) && (
-            <span className="text-[13px] text-fail">
-              ✗ {errors[`terms.${i}.factor`] ?? errors[`terms.${i}.loadCaseId`]}
-            </span>
-          )}
+          {termError(errors, i) && <span className="text-[13px] text-fail">✗ {termError(errors, i)}</span>}
         </div>
       ))}
       <div className="flex flex-wrap items-center gap-2">
         <button
           type="button"
           className={quietButton}
-          onClick={() => setDraft({ ...draft, terms: [...draft.terms, { loadCaseId: "", factor: "1.0" }] })}
+          onClick={() => setDraft({ ...draft, terms: [...draft.terms, newTerm()] })}
         >
           Add a term
         </button>

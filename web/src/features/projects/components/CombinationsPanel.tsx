@@ -6,9 +6,8 @@ import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { ToolButton } from "../../../components/ToolButton";
 import { useCombinationMutations } from "../../../entities/combination/mutations";
+import { newTerm, patchTerm, termError, termsBody, type DraftTerm } from "../model/combinations";
 import { CombinationEditor } from "./CombinationEditor";
-
-type DraftTerm = { loadCaseId: string; factor: string };
 
 /** Named linear combinations of the load cases, with the superposition caution beside them. */
 export function CombinationsPanel({
@@ -26,7 +25,7 @@ export function CombinationsPanel({
 }) {
   const m = useCombinationMutations(workspaceId, projectId);
   const [name, setName] = useState("");
-  const [terms, setTerms] = useState<DraftTerm[]>([{ loadCaseId: "", factor: "1.0" }]);
+  const [terms, setTerms] = useState<DraftTerm[]>(() => [newTerm()]);
   const [editingId, setEditingId] = useState<string | null>(null);
   const errors = fieldErrorsOf(m.create.error);
 
@@ -35,11 +34,9 @@ export function CombinationsPanel({
     m.create.mutate(
       {
         name,
-        terms: terms
-          .filter((t) => t.loadCaseId)
-          .map((t) => ({ loadCaseId: t.loadCaseId, factor: Number(t.factor) })),
+        terms: termsBody(terms, 0),
       },
-      { onSuccess: () => (setName(""), setTerms([{ loadCaseId: "", factor: "1.0" }])) },
+      { onSuccess: () => (setName(""), setTerms([newTerm()])) },
     );
   };
 
@@ -103,18 +100,14 @@ export function CombinationsPanel({
                 aria-label={`Factor ${i + 1}`}
                 inputMode="decimal"
                 value={t.factor}
-                onChange={(e) =>
-                  setTerms(terms.map((x, j) => (j === i ? { ...x, factor: e.target.value } : x)))
-                }
+                onChange={(e) => setTerms(patchTerm(terms, i, { factor: e.target.value }))}
                 className="num w-20 rounded-sm border border-rule-strong bg-panel px-2 py-1 text-right"
               />
               ×
               <select
                 aria-label={`Load case ${i + 1}`}
                 value={t.loadCaseId}
-                onChange={(e) =>
-                  setTerms(terms.map((x, j) => (j === i ? { ...x, loadCaseId: e.target.value } : x)))
-                }
+                onChange={(e) => setTerms(patchTerm(terms, i, { loadCaseId: e.target.value }))}
                 className="rounded-sm border border-rule-strong bg-panel px-1 py-1"
               >
                 <option value="">choose a load case</option>
@@ -124,19 +117,13 @@ export function CombinationsPanel({
                   </option>
                 ))}
               </select>
-              {(errors[`terms.${i}.factor`] || errors[`terms.${i}.loadCaseId`]) && (
-                <span className="text-[13px] text-fail">
-                  ✗ {errors[`terms.${i}.factor`] ?? errors[`terms.${i}.loadCaseId`]}
-                </span>
+              {termError(errors, i) && (
+                <span className="text-[13px] text-fail">✗ {termError(errors, i)}</span>
               )}
             </div>
           ))}
           <div className="flex gap-2">
-            <button
-              type="button"
-              className={quietButton}
-              onClick={() => setTerms([...terms, { loadCaseId: "", factor: "1.0" }])}
-            >
+            <button type="button" className={quietButton} onClick={() => setTerms([...terms, newTerm()])}>
               Add a term
             </button>
             <button type="submit" className={primaryButton} disabled={m.create.isPending}>

@@ -5,7 +5,8 @@ import type { Location } from "../../../../../core/contract/projects";
 import { Quantity, stressTone } from "../../../components/Quantity";
 import { ToolButton } from "../../../components/ToolButton";
 import { benchLinkForState } from "../../../lib/bench-link";
-import { COMPONENT_SYMBOLS, formatStress, STRESS_COMPONENTS } from "../../../lib/stress";
+import { formatStress } from "../../../lib/stress";
+import { nonZeroComponents } from "../model/stress-components";
 
 /**
  * One cell of the load-case table: the saved state of `loadCase` at `location` (its non-zero
@@ -43,14 +44,14 @@ export function LoadCaseStateCell({
       <span className="text-graphite-faint">—</span>
     );
   }
-  const shown = STRESS_COMPONENTS.filter((k) => s.componentsPa[k] !== 0);
+  const shown = nonZeroComponents(s.componentsPa);
   return (
     <div className="space-y-0.5">
       <div className="flex flex-wrap gap-x-3">
-        {shown.map((k) => (
-          <span key={k}>
-            <span className="text-[12px] text-graphite-soft">{COMPONENT_SYMBOLS[k].tensor} </span>
-            <Quantity value={formatStress(s.componentsPa[k], unit)} tone={stressTone(s.componentsPa[k])} />
+        {shown.map(({ key, label, pa }) => (
+          <span key={key}>
+            <span className="text-[12px] text-graphite-soft">{label} </span>
+            <Quantity value={formatStress(pa, unit)} tone={stressTone(pa)} />
           </span>
         ))}
         {shown.length === 0 && <span className="text-graphite-soft">zero state</span>}

@@ -3,10 +3,11 @@ import type { LoadCase } from "../../../../../core/contract/load-cases";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import type { Location } from "../../../../../core/contract/projects";
 import { useDeleteLoadCase, useSaveState, useUpdateLoadCase } from "../../../entities/load-case/mutations";
-import { ApiError } from "../../../lib/api-client";
 import { FormMessage } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { ToolButton } from "../../../components/ToolButton";
+import { currentVersionOf, isVersionConflict } from "../model/errors";
+import { allowablesNote, cellTitle, isOpenCell, toggleCell } from "../model/load-cases";
 import { LoadCaseStateCell } from "./LoadCaseStateCell";
 import { NewLoadCaseForm } from "./NewLoadCaseForm";
 import { StateForm } from "./StateForm";
@@ -32,8 +33,6 @@ export function LoadCasesPanel({
   /** Categories the project gives factors of their own (the checks panel); others use the default. */
   allowableCategories?: string[];
 }) {
-  const ownFactors = (category: string) =>
-    allowableCategories.some((a) => a.trim().toLowerCase() === category.trim().toLowerCase());
   const update = useUpdateLoadCase(workspaceId, projectId);
   const remove = useDeleteLoadCase(workspaceId, projectId);
   const saveState = useSaveState(workspaceId, projectId);
@@ -43,7 +42,8 @@ export function LoadCasesPanel({
 
   const editingCase = editing && cases.find((c) => c.id === editing.caseId);
   const editingState = editingCase?.states.find((s) => s.locationId === editing?.locationId);
-  const conflict = saveState.error instanceof ApiError && saveState.error.status === 409;
+  const conflict = isVersionConflict(saveState.error);
+  const historyTitle = history && cellTitle(history, cases, locations);
 
   return (
     <Panel
@@ -89,9 +89,7 @@ export function LoadCasesPanel({
                     </span>
                   )}
                   <div className="text-[12px] font-normal text-graphite-soft" data-testid="case-allowables">
-                    {c.category && ownFactors(c.category)
-                      ? `checked with the “${c.category}” factors`
-                      : "checked with the project default factors"}
+                    {allowablesNote(c.category, allowableCategories)}
                   </div>
                   <div className="text-[12px] font-normal text-graphite-faint">version {c.version}</div>
                   {c.description && (
@@ -142,13 +140,9 @@ export function LoadCasesPanel({
                       location={l}
                       unit={unit}
                       canEdit={canEdit}
-                      historyOpen={history?.caseId === c.id && history.locationId === l.id}
+                      historyOpen={isOpenCell(history, { caseId: c.id, locationId: l.id })}
                       onToggleHistory={() =>
-                        setHistory(
-                          history?.caseId === c.id && history.locationId === l.id
-                            ? null
-                            : { caseId: c.id, locationId: l.id },
-                        )
+                        setHistory(toggleCell(history, { caseId: c.id, locationId: l.id }))
                       }
                       onEdit={() => (saveState.reset(), setEditing({ caseId: c.id, locationId: l.id }))}
                     />
@@ -166,14 +160,14 @@ export function LoadCasesPanel({
           </tbody>
         </table>
       </div>
-      {history && cases.some((c) => c.id === history.caseId) && (
+      {history && historyTitle !== null && (
         <StateHistory
           workspaceId={workspaceId}
           projectId={projectId}
           loadCaseId={history.caseId}
           locationId={history.locationId}
           unit={unit}
-          title={`${cases.find((c) => c.id === history.caseId)!.name} at ${locations.find((l) => l.id === history.locationId)?.name ?? "a location"}`}
+          title={historyTitle}
         />
       )}
       {editing && editingCase && (
@@ -183,9 +177,8 @@ export function LoadCasesPanel({
           </p>
           {conflict && (
             <FormMessage>
-              Someone saved this load case meanwhile (now version{" "}
-              {(saveState.error as ApiError & { details: { currentVersion: number } }).details.currentVersion}
-              ). The table shows their values; save again to put yours over them.
+              Someone saved this load case meanwhile (now version {currentVersionOf(saveState.error)}). The
+              table shows their values; save again to put yours over them.
             </FormMessage>
           )}
           <StateForm

@@ -6,7 +6,8 @@ import { Panel } from "../../../components/Panel";
 import { ToolButton } from "../../../components/ToolButton";
 import { useLocationMutations } from "../../../entities/location/mutations";
 import { useMaterials } from "../../../entities/material/queries";
-import { MaterialPicker, materialName } from "./MaterialPicker";
+import { materialName } from "../model/material-refs";
+import { MaterialPicker } from "./MaterialPicker";
 import { RenameForm } from "./RenameForm";
 
 /** The named points of the structure, each optionally with its own material. */

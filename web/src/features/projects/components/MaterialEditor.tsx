@@ -11,7 +11,8 @@ import {
 import { ApiError } from "../../../lib/api-client";
 import { applyServerErrors, Field, FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { useUpdateMaterial } from "../../../entities/material/mutations";
-import { editableStress } from "../../../lib/stress";
+import { isVersionConflict, versionConflictOf } from "../model/errors";
+import { materialFormValues, optionalNumber } from "../model/materials";
 
 /** Fields the form edits, and the ones a 400 may name. */
 const FIELDS = [
@@ -25,26 +26,6 @@ const FIELDS = [
   "reference",
   "note",
 ] as const;
-
-/** A stored material as the form shows it: strengths and E back in the unit they were entered in. */
-function valuesOf(m: Material): UpdateMaterialBody {
-  const inUnit = (pa: number | null) => (pa === null ? null : editableStress(pa, m.unit));
-  return {
-    version: m.version,
-    name: m.name,
-    unit: m.unit,
-    yield: inUnit(m.yieldPa),
-    ultimateTension: inUnit(m.ultimateTensionPa),
-    ultimateCompression: inUnit(m.ultimateCompressionPa),
-    elasticModulus: inUnit(m.elasticModulusPa),
-    poissonRatio: m.poissonRatio,
-    reference: m.reference,
-    note: m.note,
-  };
-}
-
-/** An empty box means "not given" (null); anything else is read as a number for the schema to judge. */
-const asNumber = (v: unknown) => (v === "" || v === null || v === undefined ? null : Number(v));
 
 /**
  * Edits a library material with the shared update schema (errors beside each field, from the
@@ -63,7 +44,7 @@ export function MaterialEditor({
   const update = useUpdateMaterial(workspaceId);
   const form = useForm<UpdateMaterialBody>({
     resolver: zodResolver(updateMaterialBodySchema),
-    defaultValues: valuesOf(material),
+    defaultValues: materialFormValues(material),
   });
   const [conflict, setConflict] = useState<{ currentVersion: number; current: Material } | null>(null);
   const errors = form.formState.errors;
@@ -76,11 +57,9 @@ export function MaterialEditor({
       {
         onSuccess: onDone,
         onError: (error) => {
-          if (error instanceof ApiError && error.status === 409) {
-            const details = error.details as { currentVersion?: number; current?: unknown } | undefined;
-            const current = materialSchema.safeParse(details?.current);
-            if (typeof details?.currentVersion === "number" && current.success)
-              setConflict({ currentVersion: details.currentVersion, current: current.data });
+          if (isVersionConflict(error)) {
+            const stored = versionConflictOf(error, materialSchema);
+            if (stored) setConflict(stored);
             return;
           }
           applyServerErrors(error, form.setError, [...FIELDS]);
@@ -97,7 +76,7 @@ export function MaterialEditor({
       label={label}
       inputMode="decimal"
       error={errors[field]?.message}
-      {...form.register(field, { setValueAs: asNumber })}
+      {...form.register(field, { setValueAs: optionalNumber })}
     />
   );
 
@@ -133,7 +112,7 @@ export function MaterialEditor({
           label="Poisson's ratio ν"
           inputMode="decimal"
           error={errors.poissonRatio?.message}
-          {...form.register("poissonRatio", { setValueAs: asNumber })}
+          {...form.register("poissonRatio", { setValueAs: optionalNumber })}
         />
         <Field
           id={id("reference")}
@@ -169,7 +148,7 @@ export function MaterialEditor({
               type="button"
               className={quietButton}
               onClick={() => {
-                form.reset(valuesOf(conflict.current));
+                form.reset(materialFormValues(conflict.current));
                 setConflict(null);
               }}
             >

@@ -1,7 +1,6 @@
 import { useState, type FormEvent } from "react";
 import { FROM_MEMORY_NOTE } from "../../../../../core";
 import { STRESS_UNIT_NAMES, type StressUnitName } from "../../../../../core/contract/materials";
-import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { Quantity } from "../../../components/Quantity";
@@ -9,6 +8,8 @@ import { useCreateMaterial, useDeleteMaterial } from "../../../entities/material
 import { useMaterials } from "../../../entities/material/queries";
 import { ToolButton } from "../../../components/ToolButton";
 import { formatStress } from "../../../lib/stress";
+import { fieldErrorSummary } from "../model/errors";
+import { newMaterialBody, type NewMaterialForm } from "../model/materials";
 import { MaterialEditor } from "./MaterialEditor";
 
 /** The workspace's material library and the built-in published list (read-only, with its standard). */
@@ -25,27 +26,18 @@ export function MaterialsPanel({
   const create = useCreateMaterial(workspaceId);
   const remove = useDeleteMaterial(workspaceId);
   const [editingId, setEditingId] = useState<string | null>(null);
-  const [form, setForm] = useState({
+  const [form, setForm] = useState<NewMaterialForm>({
     name: "",
-    unit: unit as StressUnitName,
+    unit,
     yield: "",
     ultimateTension: "",
     reference: "",
   });
-  const errors = fieldErrorsOf(create.error);
-  const num = (v: string) => (v.trim() === "" ? null : Number(v));
   const submit = (e: FormEvent) => {
     e.preventDefault();
-    create.mutate(
-      {
-        name: form.name,
-        unit: form.unit,
-        yield: num(form.yield),
-        ultimateTension: num(form.ultimateTension),
-        reference: form.reference,
-      },
-      { onSuccess: () => setForm({ ...form, name: "", yield: "", ultimateTension: "", reference: "" }) },
-    );
+    create.mutate(newMaterialBody(form), {
+      onSuccess: () => setForm({ ...form, name: "", yield: "", ultimateTension: "", reference: "" }),
+    });
   };
   return (
     <Panel id="materials" index="5" title="Materials" subtitle={`strengths in ${unit}`}>
@@ -178,11 +170,7 @@ export function MaterialsPanel({
             Add to library
           </button>
           <div className="basis-full">
-            <FormMessage>
-              {Object.entries(errors)
-                .map(([path, message]) => `${path}: ${message}`)
-                .join("; ") || null}
-            </FormMessage>
+            <FormMessage>{fieldErrorSummary(create.error) || null}</FormMessage>
           </div>
         </form>
       )}

@@ -1,8 +1,8 @@
 import { useState, type FormEvent } from "react";
-import { LOAD_CASE_CATEGORY_SUGGESTIONS } from "../../../../../core/contract/load-cases";
 import { useCreateLoadCase } from "../../../entities/load-case/mutations";
 import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton } from "../../../lib/forms";
+import { categorySuggestions } from "../model/load-cases";
 
 /**
  * Adds a load case by name and category. The category list offers the usual ones and those the
@@ -48,11 +48,9 @@ export function NewLoadCaseForm({
         className="w-36 rounded-sm border border-rule-strong bg-panel px-2 py-1"
       />
       <datalist id="case-categories">
-        {[...new Set([...LOAD_CASE_CATEGORY_SUGGESTIONS, ...allowableCategories.map((a) => a.trim())])].map(
-          (s) => (
-            <option key={s} value={s} />
-          ),
-        )}
+        {categorySuggestions(allowableCategories).map((s) => (
+          <option key={s} value={s} />
+        ))}
       </datalist>
       <button type="submit" className={primaryButton} disabled={create.isPending}>
         Add load case

@@ -1,6 +1,5 @@
 import { CopyLinkButton } from "../../../components/CopyLinkButton";
 import { Link, useParams } from "react-router-dom";
-import { ApiError } from "../../../lib/api-client";
 import { FormMessage, quietButton } from "../../../lib/forms";
 import { useCombinations } from "../../../entities/combination/queries";
 import { useLoadCases } from "../../../entities/load-case/queries";
@@ -8,6 +7,7 @@ import { useLocations } from "../../../entities/location/queries";
 import { useProject } from "../../../entities/project/queries";
 import { useWorkspaceRole } from "../../../entities/workspace/queries";
 import { displayUnit } from "../../../lib/stress";
+import { isNotThere } from "../model/errors";
 import { ActivityPanel } from "./ActivityPanel";
 import { CombinationsPanel } from "./CombinationsPanel";
 import { LoadCasesPanel } from "./LoadCasesPanel";
@@ -26,7 +26,7 @@ export function ProjectPage() {
 
   if (project.isPending || role.isPending) return <p className="text-graphite-soft">Loading…</p>;
   if (project.error) {
-    if (project.error instanceof ApiError && [400, 404].includes(project.error.status)) {
+    if (isNotThere(project.error)) {
       return (
         <p className="py-12 text-center text-graphite-soft">
           No project here for you: it does not exist, is in the trash, or you are not a member.

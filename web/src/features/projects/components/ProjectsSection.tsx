@@ -1,6 +1,6 @@
 import { useState, type ChangeEvent, type FormEvent } from "react";
 import { Link, useParams } from "react-router-dom";
-import { ApiError, fieldErrorsOf } from "../../../lib/api-client";
+import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { ToolButton } from "../../../components/ToolButton";
@@ -10,6 +10,8 @@ import { useRestore } from "../../../entities/trash/mutations";
 import { useTrash } from "../../../entities/trash/queries";
 import { useWorkspaceRole } from "../../../entities/workspace/queries";
 import { PurgeButton } from "./PurgeButton";
+import { importRefusalText, readExportText } from "../model/project-import";
+import { trashNote } from "../model/trash";
 import { ActivityPanel } from "./ActivityPanel";
 
 /** `/workspaces/:workspaceId/projects`: the workspace's projects, a new one, an import, the trash. */
@@ -103,17 +105,12 @@ function ImportButton({ workspaceId }: { workspaceId: string }) {
     const file = e.target.files?.[0];
     e.target.value = "";
     if (!file) return;
-    try {
-      setReadError(null);
-      importProject.mutate(JSON.parse(await file.text()));
-    } catch {
-      setReadError("That file is not JSON; choose a Sigmacube project export.");
-    }
+    setReadError(null);
+    // A file the browser cannot read gets the same answer as one that is not JSON.
+    const read = readExportText(await file.text().catch(() => ""));
+    if (read.ok) importProject.mutate(read.body);
+    else setReadError(read.message);
   };
-  const reasons =
-    importProject.error instanceof ApiError && Array.isArray(importProject.error.details)
-      ? (importProject.error.details as { path: string; message: string }[])
-      : [];
   return (
     <>
       <label className={`${quietButton} cursor-pointer`}>
@@ -124,10 +121,7 @@ function ImportButton({ workspaceId }: { workspaceId: string }) {
         <FormMessage>{readError}</FormMessage>
         {importProject.error && (
           <FormMessage>
-            The file was not imported (nothing was written).{" "}
-            {reasons.length > 0
-              ? reasons.map((r) => `${r.path}: ${r.message}`).join("; ")
-              : importProject.error.message}
+            The file was not imported (nothing was written). {importRefusalText(importProject.error)}
           </FormMessage>
         )}
         {importProject.data && (
@@ -154,10 +148,7 @@ function TrashPanel({ workspaceId, isOwner }: { workspaceId: string; isOwner: bo
             <span className="rounded-sm bg-paper-deep px-1 text-[12px] text-graphite-soft">{item.kind}</span>
             <span className="font-semibold">{item.name}</span>
             {item.project && <span className="text-graphite-soft">in {item.project.name}</span>}
-            <span className="text-[12px] text-graphite-faint">
-              deleted {new Date(item.deletedAt).toLocaleDateString()} by {item.deletedBy?.name ?? "someone"} ·
-              goes for good {new Date(item.purgeAt).toLocaleDateString()}
-            </span>
+            <span className="text-[12px] text-graphite-faint">{trashNote(item)}</span>
             <button
               type="button"
               className={`${quietButton} ml-auto`}

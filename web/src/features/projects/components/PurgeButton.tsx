@@ -2,6 +2,7 @@ import { useState } from "react";
 import type { TrashKind } from "../../../../../core/contract/projects";
 import { FormMessage, quietButton } from "../../../lib/forms";
 import { usePurge } from "../../../entities/trash/mutations";
+import { purgeConfirmed } from "../model/trash";
 
 /**
  * Deletes one trashed item for good (owners only). Nothing goes on a single click: the owner
@@ -25,7 +26,7 @@ export function PurgeButton({
       </button>
     );
   }
-  const matches = typed.trim() === item.name.trim();
+  const matches = purgeConfirmed(typed, item.name);
   return (
     <form
       aria-label={label}

@@ -1,6 +1,7 @@
 import { useState, type FormEvent } from "react";
-import { ApiError, fieldErrorsOf } from "../../../lib/api-client";
+import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
+import { isVersionConflict } from "../model/errors";
 
 /**
  * Inline edit of a record's text fields, sent with the version it started from; a 409 says
@@ -27,7 +28,7 @@ export function RenameForm({
     onSave(values);
   };
   const errors = fieldErrorsOf(error);
-  const conflict = error instanceof ApiError && error.status === 409;
+  const conflict = isVersionConflict(error);
   return (
     <form onSubmit={submit} noValidate aria-label={label} className="flex flex-wrap items-start gap-2 py-1">
       {fields.map((f) => (

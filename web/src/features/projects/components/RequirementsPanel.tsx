@@ -1,22 +1,25 @@
 import { useState } from "react";
-import {
-  ALLOWABLE_CATEGORY_SUGGESTIONS,
-  CRITERION_LABELS,
-  CRITERION_NAMES,
-  type CategoryRequirement,
-  type CriterionName,
-  type Project,
-  type Requirement,
-} from "../../../../../core/contract/projects";
-import { ApiError, fieldErrorsOf } from "../../../lib/api-client";
+import { CRITERION_LABELS, CRITERION_NAMES, type Project } from "../../../../../core/contract/projects";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { useMaterials } from "../../../entities/material/queries";
 import { useUpdateProject } from "../../../entities/project/mutations";
-import { MaterialPicker, materialName } from "./MaterialPicker";
-
-/** One category's factors as typed (empty: use the default's). */
-type CategoryDraft = { category: string; factors: Record<CriterionName, string> };
+import { fieldErrorSummary, isVersionConflict } from "../model/errors";
+import {
+  canAddCategory,
+  categoryBox,
+  categoryRequirementsFromDrafts,
+  emptyCategory,
+  isRemovableCategory,
+  requirementsFromDraft,
+  setCategoryFactor,
+  toCategoryDrafts,
+  toDraft,
+  type CategoryDraft,
+  type FactorDraft,
+} from "../model/requirements";
+import { MaterialPicker } from "./MaterialPicker";
+import { RequirementsSummary } from "./RequirementsSummary";
 
 /**
  * What the project checks: the project-wide default factor per criterion, the factors per
@@ -27,7 +30,7 @@ export function RequirementsPanel({ project, canEdit }: { project: Project; canE
   const materials = useMaterials(project.workspaceId);
   const update = useUpdateProject(project.workspaceId, project.id);
   const [editing, setEditing] = useState(false);
-  const [draft, setDraft] = useState<Record<CriterionName, string>>(() => toDraft(project.requirements));
+  const [draft, setDraft] = useState<FactorDraft>(() => toDraft(project.requirements));
   const [categories, setCategories] = useState<CategoryDraft[]>(() =>
     toCategoryDrafts(project.categoryRequirements),
   );
@@ -50,26 +53,8 @@ export function RequirementsPanel({ project, canEdit }: { project: Project; canE
     setEditing(true);
   };
   const save = () => {
-    const requirements: Requirement[] = CRITERION_NAMES.filter((c) => draft[c].trim() !== "").map(
-      (criterion) => ({
-        criterion,
-        requiredFactor: Number(draft[criterion]),
-      }),
-    );
-    const checked = new Set(requirements.map((r) => r.criterion));
-    // Categories with no factor of their own are left out (they use the default anyway); a factor
-    // for a criterion no longer checked is dropped with it, as the form shows it greyed.
-    const categoryRequirements: CategoryRequirement[] = categories
-      .map((c) => ({
-        category: c.category.trim(),
-        factors: Object.fromEntries(
-          CRITERION_NAMES.filter((k) => checked.has(k) && c.factors[k].trim() !== "").map((k) => [
-            k,
-            Number(c.factors[k]),
-          ]),
-        ),
-      }))
-      .filter((c) => Object.keys(c.factors).length > 0);
+    const requirements = requirementsFromDraft(draft);
+    const categoryRequirements = categoryRequirementsFromDrafts(categories, requirements);
     update.mutate(
       {
         version: project.version,
@@ -84,7 +69,7 @@ export function RequirementsPanel({ project, canEdit }: { project: Project; canE
       { onSuccess: () => setEditing(false) },
     );
   };
-  const conflict = update.error instanceof ApiError && update.error.status === 409;
+  const conflict = isVersionConflict(update.error);
 
   return (
     <Panel
@@ -95,77 +80,12 @@ export function RequirementsPanel({ project, canEdit }: { project: Project; canE
     >
       <div className="space-y-3 p-3 text-[15px]">
         {!editing ? (
-          <>
-            <p className="text-[13px] text-graphite-soft">
-              Project default (every load case whose category has no factors of its own):
-            </p>
-            <ul className="flex flex-wrap gap-x-6 gap-y-1" data-testid="default-requirements">
-              {project.requirements.map((r) => (
-                <li key={r.criterion}>
-                  {CRITERION_LABELS[r.criterion]}: n ≥ <span className="num">{r.requiredFactor}</span>
-                </li>
-              ))}
-            </ul>
-            {project.categoryRequirements.length > 0 && (
-              <table className="text-[14px]" data-testid="category-requirements">
-                <thead>
-                  <tr className="text-left text-[13px] text-graphite-soft">
-                    <th scope="col" className="pr-4 font-normal">
-                      load-case category
-                    </th>
-                    {project.requirements.map((r) => (
-                      <th key={r.criterion} scope="col" className="pr-4 text-right font-normal">
-                        {CRITERION_LABELS[r.criterion]}
-                      </th>
-                    ))}
-                  </tr>
-                </thead>
-                <tbody>
-                  {project.categoryRequirements.map((c) => (
-                    <tr key={c.category}>
-                      <th scope="row" className="pr-4 text-left font-normal">
-                        {c.category}
-                      </th>
-                      {project.requirements.map((r) => (
-                        <td key={r.criterion} className="pr-4 text-right">
-                          {c.factors[r.criterion] === undefined ? (
-                            <span className="text-graphite-soft">default</span>
-                          ) : (
-                            <>
-                              n ≥ <span className="num">{c.factors[r.criterion]}</span>
-                            </>
-                          )}
-                        </td>
-                      ))}
-                    </tr>
-                  ))}
-                </tbody>
-              </table>
-            )}
-            <p className="text-[13px] text-graphite-soft">
-              {project.includeUnsuitedCriteria
-                ? "Criteria that do not suit a location's material (ductile vs brittle) are rated on request and can govern."
-                : "Criteria that do not suit a location's material (fracture criteria on a ductile metal, yield criteria on a brittle one) are shown as not applicable and left out of the governing search."}
-            </p>
-            <p>
-              Default material:{" "}
-              <strong>{materialName(project.defaultMaterial, materials.data) ?? "none chosen"}</strong>
-              {project.defaultMaterial?.kind === "published" && (
-                <span className="text-graphite-soft">
-                  {" "}
-                  — published minimum values; verify against your certificate.
-                </span>
-              )}
-            </p>
-            <p className="text-graphite-soft">
-              Values shown in {project.unitSystem === "US" ? "ksi (US customary)" : "MPa (SI)"}.
-            </p>
-            {canEdit && (
-              <button type="button" className={quietButton} onClick={start}>
-                Change checks
-              </button>
-            )}
-          </>
+          <RequirementsSummary
+            project={project}
+            materials={materials.data}
+            canEdit={canEdit}
+            onChange={start}
+          />
         ) : (
           <div className="space-y-3">
             <div className="grid gap-2 sm:grid-cols-[1fr_2fr]">
@@ -232,25 +152,17 @@ export function RequirementsPanel({ project, canEdit }: { project: Project; canE
                           <input
                             aria-label={`Required factor for ${cat.category}, ${CRITERION_LABELS[c]}`}
                             inputMode="decimal"
-                            disabled={draft[c].trim() === ""}
-                            title={
-                              draft[c].trim() === "" ? "the project does not check this criterion" : undefined
-                            }
-                            placeholder={draft[c].trim() === "" ? "—" : draft[c]}
+                            {...categoryBox(draft, c)}
                             value={cat.factors[c]}
                             onChange={(e) =>
-                              setCategories(
-                                categories.map((x, j) =>
-                                  j === i ? { ...x, factors: { ...x.factors, [c]: e.target.value } } : x,
-                                ),
-                              )
+                              setCategories(setCategoryFactor(categories, i, c, e.target.value))
                             }
                             className="num w-16 rounded-sm border border-rule-strong bg-panel px-1 py-0.5 text-right disabled:opacity-50"
                           />
                         </td>
                       ))}
                       <td>
-                        {!(ALLOWABLE_CATEGORY_SUGGESTIONS as readonly string[]).includes(cat.category) && (
+                        {isRemovableCategory(cat.category) && (
                           <button
                             type="button"
                             className={quietButton}
@@ -276,10 +188,7 @@ export function RequirementsPanel({ project, canEdit }: { project: Project; canE
                 <button
                   type="button"
                   className={quietButton}
-                  disabled={
-                    newCategory.trim() === "" ||
-                    categories.some((c) => c.category.toLowerCase() === newCategory.trim().toLowerCase())
-                  }
+                  disabled={!canAddCategory(categories, newCategory)}
                   onClick={() => {
                     setCategories([...categories, emptyCategory(newCategory.trim())]);
                     setNewCategory("");
@@ -329,9 +238,8 @@ export function RequirementsPanel({ project, canEdit }: { project: Project; canE
               </FormMessage>
             ) : (
               <FormMessage>
-                {Object.entries(fieldErrorsOf(update.error))
-                  .map(([path, message]) => `${path}: ${message}`)
-                  .join("; ") || (update.error instanceof Error ? update.error.message : null)}
+                {fieldErrorSummary(update.error) ||
+                  (update.error instanceof Error ? update.error.message : null)}
               </FormMessage>
             )}
             <div className="flex gap-2">
@@ -347,37 +255,4 @@ export function RequirementsPanel({ project, canEdit }: { project: Project; canE
       </div>
     </Panel>
   );
-}
-
-function toDraft(requirements: Requirement[]): Record<CriterionName, string> {
-  return Object.fromEntries(
-    CRITERION_NAMES.map((c) => [
-      c,
-      String(requirements.find((r) => r.criterion === c)?.requiredFactor ?? ""),
-    ]),
-  ) as Record<CriterionName, string>;
-}
-
-function emptyCategory(category: string): CategoryDraft {
-  return {
-    category,
-    factors: Object.fromEntries(CRITERION_NAMES.map((c) => [c, ""])) as Record<CriterionName, string>,
-  };
-}
-
-/** The stored categories as drafts, with the usual four offered first even when they have no factors. */
-function toCategoryDrafts(stored: CategoryRequirement[]): CategoryDraft[] {
-  const drafts: CategoryDraft[] = ALLOWABLE_CATEGORY_SUGGESTIONS.map((c) => emptyCategory(c));
-  for (const s of stored) {
-    let d = drafts.find((x) => x.category.toLowerCase() === s.category.trim().toLowerCase());
-    if (!d) {
-      d = emptyCategory(s.category);
-      drafts.push(d);
-    }
-    for (const c of CRITERION_NAMES) {
-      const v = s.factors[c];
-      if (v !== undefined) d.factors[c] = String(v);
-    }
-  }
-  return drafts;
 }

@@ -1,17 +1,22 @@
 import { useId, useState, type ClipboardEvent, type FormEvent } from "react";
-import { parseTensor, stressInputProblem, type Component, type ParseProblem } from "../../../../../core";
+import { parseTensor, type Component, type ParseProblem } from "../../../../../core";
 import { STATE_SOURCES, type StateSource, type StressState } from "../../../../../core/contract/load-cases";
 import { STRESS_UNIT_NAMES, type StressUnitName } from "../../../../../core/contract/materials";
 import { DecimalMarkSelect, PasteProblemChoices } from "../../../components/PasteChoices";
 import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
-import { looksLikeSeveralNumbers, readNumberText } from "../../../lib/number-text";
+import { looksLikeSeveralNumbers } from "../../../lib/number-text";
 import { useDecimalPreference } from "../../../lib/paste-preferences";
 import { COMPONENT_SYMBOLS, STRESS_COMPONENTS } from "../../../lib/stress";
 import type { StressBody } from "../../../entities/load-case/mutations";
-
-const KEYS = STRESS_COMPONENTS;
-const LABEL = (k: Component) => COMPONENT_SYMBOLS[k].tensor;
+import {
+  describePaste,
+  fieldsFromTensor,
+  initialFields,
+  initialSource,
+  pastedSource,
+  readStateFields,
+} from "../model/state-form";
 
 /**
  * Six components in a unit, with the source of the numbers: how an editor types a state at
@@ -37,12 +42,8 @@ export function StateForm({
   error: unknown;
 }) {
   const [unit, setUnit] = useState<StressUnitName>(initial?.unit ?? defaultUnit);
-  const [values, setValues] = useState<Record<string, string>>(() =>
-    Object.fromEntries(
-      KEYS.map((k) => [k, initial ? String(Number(initial.components[k].toPrecision(10))) : "0"]),
-    ),
-  );
-  const [source, setSource] = useState<StateSource>(initial?.source === "measured" ? "measured" : "typed");
+  const [values, setValues] = useState(() => initialFields(initial));
+  const [source, setSource] = useState<StateSource>(() => initialSource(initial));
   const [localError, setLocalError] = useState<string | null>(null);
   const [decimal, setDecimal] = useDecimalPreference();
   const [pasteText, setPasteText] = useState("");
@@ -61,14 +62,10 @@ export function StateForm({
       return;
     }
     setPaste(null);
-    setValues(Object.fromEntries(KEYS.map((k) => [k, String(result.tensor[k])])));
+    setValues(fieldsFromTensor(result));
     if (result.unit) setUnit(result.unit);
-    setSource(result.point ? "finite-element point" : "pasted");
-    setPasteNote(
-      `Read ${result.form === "matrix" ? "a 3×3 matrix" : result.form === "plane" ? "plane stress σx σy τxy" : "six components"}` +
-        `${result.point ? ` of ${result.point.kind} ${result.point.number}` : ""}` +
-        `${result.unit ? `, in ${result.unit}` : ` (no unit written: ${unit})`}.`,
-    );
+    setSource(pastedSource(result));
+    setPasteNote(describePaste(result, unit));
   };
 
   const onFieldPaste = (event: ClipboardEvent<HTMLInputElement>) => {
@@ -81,39 +78,26 @@ export function StateForm({
 
   const submit = (e: FormEvent) => {
     e.preventDefault();
-    const parsed: Record<string, number> = {};
-    for (const k of KEYS) {
-      const read = readNumberText(values[k]);
-      if ("refused" in read) {
-        setLocalError(`${LABEL(k)}: ${read.refused}.`);
-        return;
-      }
-      if (values[k].trim() === "" || !Number.isFinite(read.value)) {
-        setLocalError(`${LABEL(k)} must be a number.`);
-        return;
-      }
-      const problem = stressInputProblem(read.value);
-      if (problem !== undefined) {
-        setLocalError(`${LABEL(k)} ${problem}.`);
-        return;
-      }
-      parsed[k] = read.value;
+    const read = readStateFields(values);
+    if (!read.ok) {
+      setLocalError(read.message);
+      return;
     }
     setLocalError(null);
-    onSave({ unit, components: parsed as StressBody["components"] }, source);
+    onSave({ unit, components: read.components }, source);
   };
 
   return (
     <form onSubmit={submit} noValidate className="space-y-2 rounded-sm border border-rule bg-paper p-3">
       <div className="grid grid-cols-3 gap-2 sm:grid-cols-6">
-        {KEYS.map((k) => {
+        {STRESS_COMPONENTS.map((k) => {
           const message = serverErrors[`stress.components.${k}`];
           return (
             <label key={k} className="text-[13px] text-graphite-soft">
-              {LABEL(k)}
+              {COMPONENT_SYMBOLS[k].tensor}
               <input
                 id={`${idPrefix}-${k}`}
-                aria-label={`${LABEL(k)} (${unit})`}
+                aria-label={`${COMPONENT_SYMBOLS[k].tensor} (${unit})`}
                 inputMode="decimal"
                 value={values[k]}
                 onChange={(e) => setValues({ ...values, [k]: e.target.value })}

@@ -6,21 +6,19 @@ import {
   type CreateInvitationBody,
 } from "../../../../../core/contract/invitations";
 import { ROLES, type Workspace } from "../../../../../core/contract/workspaces";
-import { ApiError } from "../../../lib/api-client";
 import { applyServerErrors, Field, FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { useCreateInvitation } from "../api/create-invitation";
 import { useInvitations } from "../api/list-invitations";
 import { useResendInvitation } from "../api/resend-invitation";
 import { useRevokeInvitation } from "../api/revoke-invitation";
-import { formatDate } from "./format";
+import { formatDate } from "../model/dates";
+import {
+  canResendOrRevoke,
+  INVITATION_STATE_WORDS,
+  invitationErrorAboveTable,
+  isAlreadyInvited,
+} from "../model/invitations";
 import { RoleBadge } from "./RoleBadge";
-
-const STATE_WORDS = {
-  pending: "○ pending",
-  accepted: "✓ accepted",
-  revoked: "✗ revoked",
-  expired: "◌ expired",
-} as const;
 
 /** `/workspaces/:id/invitations` (owners): invite by e-mail, see each invitation's state, resend or revoke. */
 export function InvitationsSection() {
@@ -39,15 +37,13 @@ export function InvitationsSection() {
       {
         onSuccess: () => form.reset({ email: "", role: body.role }),
         onError: (error) => {
-          if (error instanceof ApiError && error.status === 409)
-            form.setError("email", { type: "server", message: error.message });
+          if (isAlreadyInvited(error)) form.setError("email", { type: "server", message: error.message });
           else applyServerErrors(error, form.setError, ["email", "role"]);
         },
       },
     ),
   );
-  const createError =
-    create.error instanceof ApiError && ![400, 409].includes(create.error.status) ? create.error : null;
+  const createError = invitationErrorAboveTable(create.error);
   return (
     <section aria-labelledby="invitations-heading" className="space-y-4">
       <h2 id="invitations-heading" className="text-lg font-semibold">
@@ -124,10 +120,10 @@ export function InvitationsSection() {
               <td className="px-4 py-3">
                 <RoleBadge role={i.role} />
               </td>
-              <td className="px-4 py-3">{STATE_WORDS[i.state]}</td>
+              <td className="px-4 py-3">{INVITATION_STATE_WORDS[i.state]}</td>
               <td className="num px-4 py-3 text-sm">{formatDate(i.expiresAt)}</td>
               <td className="space-x-2 px-4 py-3 text-right">
-                {(i.state === "pending" || i.state === "expired") && (
+                {canResendOrRevoke(i.state) && (
                   <>
                     <button
                       type="button"

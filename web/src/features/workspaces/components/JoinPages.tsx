@@ -1,20 +1,14 @@
 import { Link, useLocation, useNavigate, useParams } from "react-router-dom";
-import { ApiError } from "../../../lib/api-client";
 import { FormMessage, primaryButton } from "../../../lib/forms";
 import { useSession } from "../../../lib/session";
 import { useAcceptInvitation } from "../api/accept-invitation";
 import { useInvitationPreview } from "../api/get-invitation-preview";
 import { useShareLinkPreview } from "../api/get-share-link-preview";
 import { useJoinShareLink } from "../api/join-share-link";
-import { formatDate } from "./format";
+import { formatDate } from "../model/dates";
+import { isNotFound } from "../model/errors";
+import { shareLinkStateNote, signInLinks, UNUSABLE } from "../model/join";
 import { RoleBadge } from "./RoleBadge";
-
-const UNUSABLE: Record<string, string> = {
-  accepted: "This invitation has been used already.",
-  revoked: "This invitation was withdrawn.",
-  expired: "This invitation has expired; ask the workspace's owner to send it again.",
-  used_up: "This link has been used as many times as it allows.",
-};
 
 function Sheet({ title, children }: { title: string; children: React.ReactNode }) {
   return (
@@ -28,17 +22,13 @@ function Sheet({ title, children }: { title: string; children: React.ReactNode }
 /** Sign-in and sign-up links that come back to this page afterwards. */
 function SignInFirst({ email }: { email?: string }) {
   const location = useLocation();
-  const next = encodeURIComponent(location.pathname);
-  const mail = email ? `&email=${encodeURIComponent(email)}` : "";
+  const links = signInLinks(location.pathname, email);
   return (
     <div className="flex gap-3">
-      <Link to={`/sign-up?next=${next}${mail}`} className={primaryButton}>
+      <Link to={links.signUp} className={primaryButton}>
         Create an account
       </Link>
-      <Link
-        to={`/sign-in?next=${next}${mail}`}
-        className="rounded border border-rule-strong px-4 py-2 font-semibold text-ink"
-      >
+      <Link to={links.signIn} className="rounded border border-rule-strong px-4 py-2 font-semibold text-ink">
         Sign in
       </Link>
     </div>
@@ -57,7 +47,7 @@ export function AcceptInvitationPage() {
     return (
       <Sheet title="This invitation link does not work">
         <p>
-          {preview.error instanceof ApiError && preview.error.status === 404
+          {isNotFound(preview.error)
             ? "It may have been replaced by a newer mail; open the latest one, or ask for a new invitation."
             : preview.error.message}
         </p>
@@ -133,8 +123,7 @@ export function JoinShareLinkPage() {
         <>
           {p.state !== "active" && (
             <p className="text-graphite-soft">
-              {UNUSABLE[p.state] ?? `This link is ${p.state}.`} If you are a member already, you can still
-              open the workspace.
+              {shareLinkStateNote(p.state)} If you are a member already, you can still open the workspace.
             </p>
           )}
           <FormMessage error={join.error} />

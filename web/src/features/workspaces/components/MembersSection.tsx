@@ -9,7 +9,8 @@ import {
 import { FormMessage, quietButton } from "../../../lib/forms";
 import { useLeaveWorkspace, useRemoveMember, useUpdateMember } from "../../../entities/workspace/mutations";
 import { useMembers } from "../../../entities/workspace/queries";
-import { formatActivity, formatDate } from "./format";
+import { formatActivity, formatDate } from "../model/dates";
+import { removeMemberQuestion } from "../model/roles";
 import { RoleBadge } from "./RoleBadge";
 
 /** `/workspaces/:id/members`: who is in, with which role; owners change roles and remove people; anyone leaves. */
@@ -89,7 +90,7 @@ export function MembersSection() {
                       type="button"
                       className={quietButton}
                       onClick={() =>
-                        window.confirm(`Remove ${m.name} from ${workspace.name}?`) &&
+                        window.confirm(removeMemberQuestion(m.name, workspace.name)) &&
                         remove.mutate({ workspaceId: workspace.id, memberId: m.id })
                       }
                     >

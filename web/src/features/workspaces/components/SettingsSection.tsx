@@ -9,6 +9,7 @@ import {
 } from "../../../../../core/contract/workspaces";
 import { applyServerErrors, Field, FormMessage, primaryButton } from "../../../lib/forms";
 import { useDeleteWorkspace, useRenameWorkspace } from "../../../entities/workspace/mutations";
+import { deleteConfirmed } from "../model/roles";
 
 /** `/workspaces/:id/settings` (owners): rename the workspace, or delete it after typing its name. */
 export function SettingsSection() {
@@ -71,7 +72,7 @@ function DeleteWorkspace({ workspace }: { workspace: Workspace }) {
   const del = useDeleteWorkspace();
   const navigate = useNavigate();
   const [typed, setTyped] = useState("");
-  const matches = typed === workspace.name;
+  const matches = deleteConfirmed(typed, workspace.name);
   return (
     <section
       aria-labelledby="delete-heading"

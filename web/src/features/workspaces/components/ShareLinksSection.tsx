@@ -1,29 +1,23 @@
 import { useState } from "react";
 import { useForm } from "react-hook-form";
 import { useOutletContext } from "react-router-dom";
-import {
-  createShareLinkBodySchema,
-  SHARE_LINK_MAX_DAYS,
-  SHARE_LINK_ROLES,
-  type ShareLinkRole,
-} from "../../../../../core/contract/share-links";
+import { SHARE_LINK_MAX_DAYS, SHARE_LINK_ROLES } from "../../../../../core/contract/share-links";
 import type { Workspace } from "../../../../../core/contract/workspaces";
 import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { useCreateShareLink } from "../api/create-share-link";
 import { useShareLinks } from "../api/list-share-links";
 import { useRevokeShareLink } from "../api/revoke-share-link";
-import { formatDate } from "./format";
+import { formatDate } from "../model/dates";
+import {
+  canRevokeShareLink,
+  checkShareLinkForm,
+  SHARE_LINK_FORM_DEFAULTS,
+  SHARE_LINK_STATE_WORDS,
+  shareLinkUses,
+  type ShareLinkFormValues,
+} from "../model/share-links";
 import { RoleBadge } from "./RoleBadge";
-
-const STATE_WORDS = {
-  active: "✓ active",
-  expired: "◌ expired",
-  revoked: "✗ revoked",
-  used_up: "● used up",
-} as const;
-
-type FormValues = { role: ShareLinkRole; label: string; expiresInDays: string; maxUses: string };
 
 /** `/workspaces/:id/share-links` (editors, owners): links that let a signed-in person join with a role. */
 export function ShareLinksSection() {
@@ -32,27 +26,19 @@ export function ShareLinksSection() {
   const create = useCreateShareLink(workspace.id);
   const revoke = useRevokeShareLink(workspace.id);
   const [copied, setCopied] = useState(false);
-  const form = useForm<FormValues>({
-    defaultValues: { role: "viewer", label: "", expiresInDays: "7", maxUses: "" },
-  });
+  const form = useForm<ShareLinkFormValues>({ defaultValues: SHARE_LINK_FORM_DEFAULTS });
   // The inputs hold text; the body is checked with the same shared schema the server uses,
   // here before sending and there again, and either side's field errors appear beside the field.
   const [clientErrors, setClientErrors] = useState<Record<string, string>>({});
   const serverErrors = { ...fieldErrorsOf(create.error), ...clientErrors };
   const onSubmit = form.handleSubmit((v) => {
-    const body = {
-      role: v.role,
-      label: v.label || undefined,
-      expiresInDays: v.expiresInDays.trim() === "" ? Number.NaN : Number(v.expiresInDays),
-      maxUses: v.maxUses.trim() === "" ? null : Number(v.maxUses),
-    };
-    const checked = createShareLinkBodySchema.safeParse(body);
-    if (!checked.success) {
-      setClientErrors(Object.fromEntries(checked.error.issues.map((i) => [String(i.path[0]), i.message])));
+    const checked = checkShareLinkForm(v);
+    if (!checked.ok) {
+      setClientErrors(checked.errors);
       return;
     }
     setClientErrors({});
-    create.mutate({ workspaceId: workspace.id, body });
+    create.mutate({ workspaceId: workspace.id, body: checked.body });
   });
   const fieldError = (name: string) =>
     serverErrors[name] && (
@@ -200,14 +186,11 @@ export function ShareLinksSection() {
               <td className="px-4 py-3">
                 <RoleBadge role={l.role} />
               </td>
-              <td className="px-4 py-3">{STATE_WORDS[l.state]}</td>
-              <td className="num px-4 py-3 text-sm">
-                {l.useCount}
-                {l.maxUses !== null ? ` / ${l.maxUses}` : ""}
-              </td>
+              <td className="px-4 py-3">{SHARE_LINK_STATE_WORDS[l.state]}</td>
+              <td className="num px-4 py-3 text-sm">{shareLinkUses(l)}</td>
               <td className="num px-4 py-3 text-sm">{formatDate(l.expiresAt)}</td>
               <td className="px-4 py-3 text-right">
-                {l.state !== "revoked" && (
+                {canRevokeShareLink(l.state) && (
                   <button
                     type="button"
                     className={quietButton}

@@ -1,9 +1,9 @@
 import { NavLink, Outlet, useParams } from "react-router-dom";
-import { roleAtLeast } from "../../../../../core/contract/workspaces";
-import { ApiError } from "../../../lib/api-client";
 import { FormMessage } from "../../../lib/forms";
 import { useWorkspace } from "../../../entities/workspace/queries";
 import { CopyLinkButton } from "../../../components/CopyLinkButton";
+import { isNotThere } from "../model/errors";
+import { membersWord, workspaceTabs } from "../model/roles";
 import { RoleBadge } from "./RoleBadge";
 
 /** `/workspaces/:workspaceId/*`: the workspace's header and tabs; pages inside render below. */
@@ -12,7 +12,7 @@ export function WorkspacePage() {
   const workspace = useWorkspace(workspaceId);
   if (workspace.isPending) return <p className="text-graphite-soft">Loading…</p>;
   if (workspace.error) {
-    const notFound = workspace.error instanceof ApiError && [400, 404].includes(workspace.error.status);
+    const notFound = isNotThere(workspace.error);
     return notFound ? (
       <section className="mx-auto max-w-xl py-12 text-center">
         <h1 className="text-2xl font-semibold">No workspace here for you</h1>
@@ -25,13 +25,7 @@ export function WorkspacePage() {
     );
   }
   const w = workspace.data;
-  const tabs = [
-    { to: "projects", label: "Projects", show: true },
-    { to: "members", label: "Members", show: true },
-    { to: "invitations", label: "Invitations", show: roleAtLeast(w.role, "owner") },
-    { to: "share-links", label: "Share links", show: roleAtLeast(w.role, "editor") },
-    { to: "settings", label: "Settings", show: roleAtLeast(w.role, "owner") },
-  ].filter((t) => t.show);
+  const tabs = workspaceTabs(w.role);
   return (
     <div className="space-y-6">
       <header className="flex flex-wrap items-end justify-between gap-4 border-b border-rule pb-4">
@@ -40,7 +34,7 @@ export function WorkspacePage() {
           <h1 className="text-3xl font-semibold tracking-tight">{w.name}</h1>
           <p className="mt-1 text-graphite-soft">
             You are <RoleBadge role={w.role} /> · <span className="num">{w.memberCount}</span>{" "}
-            {w.memberCount === 1 ? "member" : "members"}
+            {membersWord(w.memberCount)}
           </p>
         </div>
         <CopyLinkButton />

@@ -5,6 +5,7 @@ import { createWorkspaceBodySchema, type CreateWorkspaceBody } from "../../../..
 import { applyServerErrors, Field, FormMessage, primaryButton } from "../../../lib/forms";
 import { useCreateWorkspace } from "../../../entities/workspace/mutations";
 import { useWorkspaces } from "../../../entities/workspace/queries";
+import { membersWord } from "../model/roles";
 import { RoleBadge } from "./RoleBadge";
 
 /** `/workspaces`: the caller's workspaces and their role in each. */
@@ -38,7 +39,7 @@ export function WorkspacesPage() {
               </Link>
               <span className="flex items-center gap-4 text-sm text-graphite-soft">
                 <span>
-                  <span className="num">{w.memberCount}</span> {w.memberCount === 1 ? "member" : "members"}
+                  <span className="num">{w.memberCount}</span> {membersWord(w.memberCount)}
                 </span>
                 <RoleBadge role={w.role} />
               </span>

@@ -6,10 +6,13 @@ export function formatDate(iso: string | null): string {
   return `${d.getFullYear()}-${pad(d.getMonth() + 1)}-${pad(d.getDate())}`;
 }
 
-/** "3 min ago", "5 h ago", or the date. */
-export function formatActivity(iso: string | null): string {
+/**
+ * "3 min ago", "5 h ago", or the date: how recently a member was active, rounded to the minute.
+ * @param now the time it is (milliseconds since 1970), the clock's by default
+ */
+export function formatActivity(iso: string | null, now: number = Date.now()): string {
   if (!iso) return "not yet";
-  const minutes = Math.round((Date.now() - new Date(iso).getTime()) / 60_000);
+  const minutes = Math.round((now - new Date(iso).getTime()) / 60_000);
   if (minutes < 1) return "just now";
   if (minutes < 60) return `${minutes} min ago`;
   if (minutes < 24 * 60) return `${Math.round(minutes / 60)} h ago`;

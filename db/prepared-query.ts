@@ -24,6 +24,10 @@ export async function preparedQuery<Row>(
   statement: PreparedStatement,
   values: unknown[],
 ): Promise<Row[]> {
+  // Logged like Sequelize's own statements, so a SQL log (createSequelize's `log`) still shows every one.
+  const log = (sequelize as unknown as { options: { logging?: false | ((sql: string) => void) } }).options
+    .logging;
+  if (typeof log === "function") log(`Executing (prepared "${statement.name}"): ${statement.text}`);
   // Sequelize's pg dialect hands out node-postgres clients; its typings call them Connection.
   const connection = await sequelize.connectionManager.getConnection({ type: "read" });
   try {

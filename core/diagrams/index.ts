@@ -26,7 +26,8 @@ export type {
   MohrZoom,
   PrincipalMark,
 } from "./mohr";
-export { MOHR_FRAME, MOHR_LABEL_FONT, mohrCirclesOf, mohrGeometry } from "./mohr";
+export { MOHR_FRAME, mohrCirclesOf, mohrGeometry } from "./mohr";
+export { MOHR_LABEL_FONT } from "./mohr-labels";
 export type { EnvelopeGeometry, EnvelopeInput } from "./envelope";
 export {
   ENVELOPE_FRAME,

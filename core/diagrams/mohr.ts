@@ -10,13 +10,8 @@
  */
 import { fixed, decimalsFor } from "./fixed-decimals";
 import { plotArea, type Frame } from "./frame";
-import {
-  placeLabels,
-  monoTextSize,
-  type LabelRequest,
-  type LabelSpot,
-  type PlacedLabel,
-} from "./label-placement";
+import { placeLabels, type LabelRequest, type LabelSpot, type PlacedLabel } from "./label-placement";
+import { maxShearLabelRequest, pointLabelRequest, principalLabelRequest, staggered } from "./mohr-labels";
 import { linearScale, type LinearScale } from "./linear-scale";
 import { axisTicks, type AxisTicks } from "./tick-format";
 
@@ -26,9 +21,6 @@ export const MOHR_FRAME: Frame = {
   height: 246,
   margin: { left: 50, right: 14, top: 14, bottom: 36 },
 };
-
-/** Font size of the labels inside the plot (SVG units). */
-export const MOHR_LABEL_FONT = 12;
 
 /** Ticks asked of the σ and τ axes. */
 const TICKS = { sigma: 7, tau: 6 } as const;
@@ -142,38 +134,6 @@ function fittedScales(
   };
 }
 
-/** Label width on the σ axis (SVG units) under which two centred names would touch. */
-const NAME_GAP = 20;
-
-/**
- * The natural place of each σ-axis name: centred under its dot, or, when it would touch a
- * neighbour's name, pushed to the outer side (the lower value's name to the left, the higher one's
- * to the right). The collision pass then resolves what this simple rule cannot (three names on one spot).
- */
-function staggered<T extends { cx: number }>(
-  marks: readonly T[],
-): (T & { anchor: LabelSpot["anchor"]; dx: number })[] {
-  const out = [...marks]
-    .sort((a, b) => a.cx - b.cx)
-    .map((m) => ({ ...m, anchor: "middle" as LabelSpot["anchor"], dx: 0 }));
-  for (let i = 1; i < out.length; i++) {
-    if (Math.abs(out[i].cx - out[i - 1].cx) >= NAME_GAP) continue;
-    if (out[i - 1].anchor === "middle") Object.assign(out[i - 1], { anchor: "end", dx: -3 });
-    Object.assign(out[i], { anchor: "start", dx: 3 });
-  }
-  return out;
-}
-
-/** Spots for a point's label: beside it up and right, lifted a line or two, then to its left. */
-function pointLabelSpots(cx: number, cy: number, dx: number, dy: number): LabelSpot[] {
-  return [
-    { x: cx + dx, y: cy - dy, anchor: "start" },
-    { x: cx + dx, y: cy - dy - 16, anchor: "start" },
-    { x: cx + dx, y: cy - dy - 32, anchor: "start" },
-    { x: cx - dx, y: cy - dy, anchor: "end" },
-  ];
-}
-
 /**
  * The whole picture's geometry.
  * @param input principal stresses, faces, plane data and zoom, in one stress unit
@@ -232,29 +192,14 @@ export function mohrGeometry(input: MohrInput): MohrGeometry {
         : [];
   const marks = staggered(markData.map((m) => ({ ...m, cx: X(m.sigma), cy: Y(0) })));
 
-  const font = MOHR_LABEL_FONT;
-  const requests: LabelRequest[] = [];
-  for (const m of marks) {
-    // In the plane picture the in-plane pair sits above the axis, σz below it; in 3D all below.
-    const above = mode === "plane" && !m.outOfPlane;
-    const ly = above ? m.cy - 6 : m.cy + 14;
-    const natural: LabelSpot = { x: m.cx + m.dx, y: ly, anchor: m.anchor };
-    requests.push({
-      id: `principal-${m.key}`,
-      size: monoTextSize(font, "σ", m.name, m.outOfPlane ? " (z)" : " "),
-      candidates: [natural, { x: m.cx - 3, y: ly, anchor: "end" }, { x: m.cx + 3, y: ly, anchor: "start" }],
-      step: above ? -1 : 1,
-    });
-  }
+  // Labels in order of importance: principal names, face points, then τmax.
+  const requests: LabelRequest[] = marks.map((m) =>
+    principalLabelRequest(m, mode === "plane" && !m.outOfPlane),
+  );
 
   const facePoints = mode === "3d" ? faces.map((f) => ({ f, cx: X(f.normal), cy: Y(f.shear) })) : [];
   for (const { f, cx, cy } of facePoints)
-    requests.push({
-      id: `face-${f.face}`,
-      size: monoTextSize(font, f.face),
-      candidates: pointLabelSpots(cx, cy, 7, 6),
-      step: -1,
-    });
+    requests.push(pointLabelRequest(`face-${f.face}`, f.face, cx, cy, 7, 6));
 
   const planeXY =
     plane && plane.theta !== null
@@ -265,12 +210,7 @@ export function mohrGeometry(input: MohrInput): MohrGeometry {
       : null;
   if (planeXY)
     for (const k of ["x", "y"] as const)
-      requests.push({
-        id: `point-${k}′`,
-        size: monoTextSize(font, `${k}′`),
-        candidates: pointLabelSpots(planeXY[k].cx, planeXY[k].cy, 9, 7),
-        step: -1,
-      });
+      requests.push(pointLabelRequest(`point-${k}′`, `${k}′`, planeXY[k].cx, planeXY[k].cy, 9, 7));
 
   const maxShearValue = plane ? plane.circle.radius : mode === "3d" ? circles[0].radius : null;
   const maxShearText = maxShearValue === null ? "" : short(maxShearValue);
@@ -278,12 +218,7 @@ export function mohrGeometry(input: MohrInput): MohrGeometry {
     const spot: LabelSpot = plane
       ? { x: X(plane.circle.center), y: Y(-plane.circle.radius) + 16, anchor: "middle" }
       : { x: X(circles[0].center) + 4, y: Y(circles[0].radius) - 5, anchor: "start" };
-    requests.push({
-      id: "max-shear",
-      size: monoTextSize(font, "τ", plane ? "max, in-plane" : "max", ` = ${maxShearText}`),
-      candidates: [spot],
-      step: plane ? 1 : -1,
-    });
+    requests.push(maxShearLabelRequest(spot, plane ? "max, in-plane" : "max", maxShearText, plane ? 1 : -1));
   }
 
   const labels = placeLabels(requests, plot);

@@ -44,8 +44,8 @@ export {
   TRIG_REFINE_THRESHOLD,
 } from "./tolerances";
 
-export type { Principal } from "./eigen/principal";
-export { principalStresses, principalValues } from "./eigen/principal";
+export type { Principal } from "./tensor/principal";
+export { principalStresses, principalValues } from "./tensor/principal";
 export type { Invariants } from "./tensor/invariants";
 export {
   invariants,
@@ -94,7 +94,7 @@ export {
   angleAboutZ,
   frameWithFirstAxis,
 } from "./tensor/rotation-tools";
-export { principalFrame, maxShearFrame } from "./tensor/special-frames";
+export { principalFrame, maxShearFrame } from "./frames/special-frames";
 export { envelopeInPlane, envelopeHit } from "./criteria/envelope";
 export type { PublishedMaterial } from "./materials/published";
 export { PUBLISHED_MATERIALS, FROM_MEMORY_NOTE, publishedMaterial } from "./materials/published";
@@ -159,6 +159,50 @@ export {
 } from "./calculators/rosette";
 export type { ShaftLoads, ShaftSurfaceStress } from "./calculators/shaft";
 export { solidShaftStress } from "./calculators/shaft";
+export type {
+  CylinderEnds,
+  ThickCylinderInput,
+  ThickCylinderStresses,
+  ThickSphereInput,
+  ThickSphereStresses,
+} from "./calculators/thick-wall";
+export {
+  DEFAULT_PROFILE_POINTS,
+  thickCylinder,
+  thickCylinderProfile,
+  thickSphere,
+  thickSphereProfile,
+} from "./calculators/thick-wall";
+export type { ThinWallAdequacy, VesselShape } from "./calculators/thin-wall-limit";
+export { THIN_WALL_LIMIT, thinWallAdequacy } from "./calculators/thin-wall-limit";
+export type {
+  CombinedShaftLoads,
+  CombinedShaftStress,
+  ShaftKt,
+  ShaftNominalStresses,
+  ShaftPointStress,
+  ShaftSection,
+  ShaftSectionProperties,
+  ShaftSurface,
+  ShaftSurfacePoint,
+} from "./calculators/combined-shaft";
+export { bendingTowards, hollowShaftStress } from "./calculators/combined-shaft";
 
 export type { EnvelopeProbe, EnvelopeProbeHit } from "./criteria/envelope-probe";
 export { probeEnvelopes } from "./criteria/envelope-probe";
+
+export type {
+  AtEnds,
+  BendingRule,
+  EquivalentCriterion,
+  LineClassification,
+  LinearizationAllowables,
+  LinearizationCheck,
+  LinearizationCheckId,
+  LinearizationInput,
+  LinearizationResult,
+  ScalarAtEnds,
+} from "./linearization/types";
+export { linearize, ANNEX_5A_BENT_COMPONENTS, ALL_COMPONENTS } from "./linearization/linearize";
+export { MIN_POINTS, RECOMMENDED_MIN_POINTS, OFF_LINE_WARN_FRACTION } from "./linearization/path";
+export { spsLimit, SPS_YIELD_TO_ULTIMATE_LIMIT } from "./linearization/category-checks";

@@ -17,11 +17,8 @@ export const TRIG_REFINE_THRESHOLD = 0.99;
  */
 export const HYDROSTATIC_DEVIATOR_REL = 2 ** -960;
 
-/**
- * Default relative tolerance for the symmetry check of a pasted 3×3 matrix: |σij − σji| may be up
- * to this fraction of the largest absolute entry.
- */
-export const SYMMETRY_REL_TOL = 1e-6;
+/** Default relative symmetry tolerance of an entered 3×3 matrix (declared with the API's bound). */
+export { SYMMETRY_REL_TOL } from "./constants/input-bounds";
 
 /**
  * Largest entry of |R Rᵀ − I| accepted for a matrix passed as a rotation (rows must be orthonormal).

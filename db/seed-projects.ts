@@ -1,5 +1,5 @@
 import type { Transaction } from "sequelize";
-import { CT7_SHAFT_BAR, ct7Projects, type DemoProject } from "../core/demo/ct7-scenario";
+import { CT7_SHAFT_BAR, ct7Projects, type DemoProject } from "../core/demo-data/ct7-scenario";
 import { AuditEvent } from "./models/audit-event";
 import { Combination } from "./models/combination";
 import { CombinationTerm } from "./models/combination-term";

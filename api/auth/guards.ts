@@ -1,10 +1,17 @@
 import type { Response } from "express";
 import type { User } from "lucia";
-import { Op } from "sequelize";
+import { Op, QueryTypes } from "sequelize";
 import { roleAtLeast, type Role } from "../../core/contract/workspaces";
 import { Membership } from "../../db/models/membership";
 import { Workspace } from "../../db/models/workspace";
 import { errors } from "../errors";
+import {
+  MEMBERSHIP_COLUMNS,
+  membershipFromRow,
+  type FoundMembership,
+  type MembershipRow,
+} from "./membership-row";
+import type { SessionLocals } from "./session-middleware";
 
 /** The caller's membership in the workspace named by the route, loaded by `loadMembership`. */
 export type MembershipLocals = { membership: Membership; workspace: Workspace };
@@ -39,13 +46,9 @@ export async function loadMembership(
   minimum: Role,
 ): Promise<MembershipLocals> {
   const user = currentUser(res);
-  // The membership and its workspace in one statement (every workspace request runs it).
-  const membership = await Membership.findOne({
-    where: { workspaceId, userId: user.id },
-    include: [{ model: Workspace, as: "workspace", required: true }],
-  });
-  const workspace = (membership?.get("workspace") as Workspace | undefined) ?? null;
-  if (!membership || !workspace) throw errors.notFound("This workspace");
+  const found = await findMembership(res, workspaceId, user.id);
+  if (!found) throw errors.notFound("This workspace");
+  const { membership, workspace } = found;
   if (!roleAtLeast(membership.role, minimum)) {
     throw errors.forbidden(`This needs the ${minimum} role or higher; you are ${article(membership.role)}.`);
   }
@@ -53,6 +56,29 @@ export async function loadMembership(
   res.locals.membership = membership;
   res.locals.workspace = workspace;
   return { membership, workspace };
+}
+
+const MEMBERSHIP_SQL = `
+SELECT ${MEMBERSHIP_COLUMNS}
+FROM memberships m JOIN workspaces w ON w.id = m.workspace_id
+WHERE m.workspace_id = :workspaceId AND m.user_id = :userId`;
+
+/**
+ * The caller's membership of `workspaceId`: the one the session statement read along (when the
+ * path named this workspace), else read now.
+ */
+async function findMembership(
+  res: Response,
+  workspaceId: string,
+  userId: string,
+): Promise<FoundMembership | null> {
+  const prefetched = (res.locals as SessionLocals).prefetchedMembership;
+  if (prefetched?.workspaceId === workspaceId && prefetched.found !== undefined) return prefetched.found;
+  const [row] = await Membership.sequelize!.query<MembershipRow>(MEMBERSHIP_SQL, {
+    type: QueryTypes.SELECT,
+    replacements: { workspaceId, userId },
+  });
+  return membershipFromRow(row);
 }
 
 async function touchActivity(membership: Membership) {

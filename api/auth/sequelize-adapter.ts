@@ -1,14 +1,23 @@
 import type { Adapter, DatabaseSession, DatabaseUser } from "lucia";
 import { Op, QueryTypes } from "sequelize";
 import { Session } from "../../db/models/session";
+import { membershipPrefetch } from "./membership-prefetch";
+import { MEMBERSHIP_COLUMNS, membershipFromRow, type MembershipRow } from "./membership-row";
 import { hashToken } from "./tokens";
 
+/**
+ * The session, its user and (when the request's path names a workspace) the user's
+ * membership of it with the workspace: `:workspaceId` NULL matches no membership.
+ */
 const SESSION_AND_USER_SQL = `
-SELECT s.user_id AS "userId", s.expires_at AS "expiresAt", u.name, u.email, u.created_at AS "createdAt"
+SELECT s.user_id AS "userId", s.expires_at AS "expiresAt", u.name, u.email, u.created_at AS "createdAt",
+  ${MEMBERSHIP_COLUMNS}
 FROM sessions s JOIN users u ON u.id = s.user_id
+LEFT JOIN memberships m ON m.user_id = s.user_id AND m.workspace_id = :workspaceId
+LEFT JOIN workspaces w ON w.id = m.workspace_id
 WHERE s.id = :id`;
 
-type SessionUserRow = {
+type SessionUserRow = MembershipRow & {
   userId: string;
   expiresAt: Date | string;
   name: string;
@@ -25,11 +34,13 @@ export class SequelizeSessionAdapter implements Adapter {
   async getSessionAndUser(sessionId: string): Promise<[DatabaseSession | null, DatabaseUser | null]> {
     // One statement for both (every signed-in request runs it): two model queries here were
     // a third of the database round trips of a small comparison under load.
+    const prefetch = membershipPrefetch.getStore();
     const [row] = await Session.sequelize!.query<SessionUserRow>(SESSION_AND_USER_SQL, {
       type: QueryTypes.SELECT,
-      replacements: { id: hashToken(sessionId) },
+      replacements: { id: hashToken(sessionId), workspaceId: prefetch?.workspaceId ?? null },
     });
     if (!row) return [null, null];
+    if (prefetch) prefetch.found = membershipFromRow(row);
     return [
       { id: sessionId, userId: row.userId, expiresAt: new Date(row.expiresAt), attributes: {} },
       {

@@ -1,9 +1,17 @@
 import type { RequestHandler, Response } from "express";
 import type { Session, User } from "lucia";
 import type { Auth } from "./lucia";
+import { membershipPrefetch, workspaceIdInPath, type MembershipPrefetch } from "./membership-prefetch";
 
-/** What the session middleware leaves in `res.locals` for every /api request. */
-export type SessionLocals = { user: User | null; session: Session | null };
+/**
+ * What the session middleware leaves in `res.locals` for every /api request; `prefetchedMembership`
+ * when the path names a workspace (see membership-prefetch.ts).
+ */
+export type SessionLocals = {
+  user: User | null;
+  session: Session | null;
+  prefetchedMembership?: MembershipPrefetch;
+};
 
 /**
  * Reads the session cookie, validates it against PostgreSQL and puts the user and the
@@ -16,7 +24,11 @@ export function sessionMiddleware(auth: Auth): RequestHandler {
     res.locals.session = null;
     const sessionId = auth.readSessionCookie(req.headers.cookie ?? "");
     if (!sessionId) return next();
-    const { session, user } = await auth.validateSession(sessionId);
+    const workspaceId = workspaceIdInPath(req.path);
+    const prefetch: MembershipPrefetch | undefined = workspaceId ? { workspaceId } : undefined;
+    const { session, user } = prefetch
+      ? await membershipPrefetch.run(prefetch, () => auth.validateSession(sessionId))
+      : await auth.validateSession(sessionId);
     if (!session) {
       appendCookie(res, auth.createBlankSessionCookie().serialize());
       return next();
@@ -24,6 +36,7 @@ export function sessionMiddleware(auth: Auth): RequestHandler {
     if (session.fresh) appendCookie(res, auth.createSessionCookie(session.id).serialize());
     res.locals.user = user;
     res.locals.session = session;
+    res.locals.prefetchedMembership = prefetch;
     next();
   };
 }

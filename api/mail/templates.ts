@@ -78,7 +78,7 @@ export function invitationMail(options: {
     greeting: "Hello,",
     paragraphs: [
       `${options.inviterName} invited you to join the workspace "${options.workspaceName}" on ${PRODUCT} as ${options.role}.`,
-      `${PRODUCT} is where the team checks stress states and keeps the calculation record. Follow the link to sign in or create an account with this address; you join the workspace straight after.`,
+      `${PRODUCT} is where the team checks stress states and keeps the calculation record. Follow the link, sign in or create an account with this address, then choose “Accept” on the page that opens to join the workspace.`,
     ],
     action: { label: `Join ${options.workspaceName}`, url: options.url },
     footnote: `The invitation expires on ${expires} (UTC). If you were not expecting it, ignore this mail.`,

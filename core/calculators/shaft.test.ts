@@ -1,6 +1,6 @@
 import fc from "fast-check";
 import { describe, expect, it } from "vitest";
-import { principalValues } from "../eigen/principal";
+import { principalValues } from "../tensor/principal";
 import { planeStress } from "../plane/plane-stress";
 import { vonMises } from "../tensor/invariants";
 import { solidShaftStress } from "./shaft";

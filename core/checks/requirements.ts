@@ -1,3 +1,4 @@
+import { categoryKey } from "../constants/categories";
 import type { Criterion, Material, StrengthKey } from "../criteria/safety-factor";
 
 /** A criterion to check and the safety factor the design must reach with it. */
@@ -55,13 +56,7 @@ export type Allowables = {
   categories: readonly CategoryFactors[];
 };
 
-/**
- * How a category is matched: trimmed and case-insensitive, so "Test" on a load case finds the
- * factors given for "test". The empty category (a case with none) always takes the defaults.
- */
-export function categoryKey(category: string): string {
-  return category.trim().toLowerCase();
-}
+export { categoryKey };
 
 /**
  * The requirements a state of `category` is checked against: every criterion of the defaults,

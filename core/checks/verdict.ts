@@ -1,9 +1,11 @@
+import type { Verdict } from "../constants/verdicts";
+
 /**
  * Verdict of one check. A utilisation u = n_required / n compares the safety factor n found
  * with the one required: u ≤ 1 passes. "close" flags a passing check whose factor is less than
  * `CLOSE_BAND` (10 %) above the required one, so an engineer looks twice before relying on it.
  */
-export type Verdict = "pass" | "close" | "fail";
+export type { Verdict };
 
 /** A passing check is "close" when n_required ≤ n < (1 + CLOSE_BAND)·n_required. */
 export const CLOSE_BAND = 0.1;

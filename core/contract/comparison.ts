@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { VERDICTS } from "../constants/verdicts";
 import { COMPARISON_PAGE } from "./limits";
 import {
   CRITERION_LABELS,
@@ -13,10 +14,11 @@ import {
  * location's material and the project's required factors, with the governing row named.
  * The server computes it with core (evaluateState, combineLoadCases, findGoverning); these
  * schemas carry it. Stresses in Pa. A factor of null means the state never reaches the
- * criterion's surface (an infinite factor, which JSON cannot carry). Imports only zod.
+ * criterion's surface (an infinite factor, which JSON cannot carry). Imports only zod and core's
+ * dependency-free constants.
  */
 
-export const verdictSchema = z.enum(["pass", "close", "fail"]);
+export const verdictSchema = z.enum(VERDICTS);
 export type VerdictName = z.infer<typeof verdictSchema>;
 
 /** The load-case category whose factor a check used, or null for the project-wide default. */

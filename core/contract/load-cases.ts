@@ -1,4 +1,6 @@
 import { z } from "zod";
+import { COMPONENTS } from "../constants/components";
+import { SYMMETRY_REL_TOL } from "../constants/input-bounds";
 import { uuidInput } from "./ids";
 import { stressUnitSchema, stressValue, versionSchema } from "./materials";
 import { personRefSchema, projectParamsSchema } from "./projects";
@@ -6,7 +8,8 @@ import { personRefSchema, projectParamsSchema } from "./projects";
 /**
  * Load cases and the stress state each one gives at each location. States travel in the
  * unit they were entered in and are stored in Pa; every saved state is a numbered,
- * immutable revision (a later sign-off can freeze exactly what it checked). Imports only zod.
+ * immutable revision (a later sign-off can freeze exactly what it checked). Imports only zod and
+ * core's dependency-free constants.
  */
 
 /** Categories the form suggests; any short tag is accepted. */
@@ -26,31 +29,26 @@ export const stateSourceSchema = z.enum(STATE_SOURCES, {
 });
 export type StateSource = z.infer<typeof stateSourceSchema>;
 
-const COMPONENT_KEYS = ["xx", "yy", "zz", "xy", "yz", "zx"] as const;
+/** The six component names (core's COMPONENTS). */
+const COMPONENT_KEYS = COMPONENTS;
+
+/** One schema per component name, in COMPONENTS order. */
+function eachComponent<T extends z.ZodType>(schema: () => T): Record<(typeof COMPONENT_KEYS)[number], T> {
+  return Object.fromEntries(COMPONENT_KEYS.map((key) => [key, schema()])) as Record<
+    (typeof COMPONENT_KEYS)[number],
+    T
+  >;
+}
 
 /** Six tensor components (σxy is the tensor shear, not an engineering strain). */
-export const componentsSchema = z.object({
-  xx: stressValue(),
-  yy: stressValue(),
-  zz: stressValue(),
-  xy: stressValue(),
-  yz: stressValue(),
-  zx: stressValue(),
-});
+export const componentsSchema = z.object(eachComponent(() => stressValue()));
 export type Components = z.infer<typeof componentsSchema>;
 
 /** Six components as the server sends them (already checked when they came in; not bounded again). */
-export const componentsOutSchema = z.object({
-  xx: z.number(),
-  yy: z.number(),
-  zz: z.number(),
-  xy: z.number(),
-  yz: z.number(),
-  zx: z.number(),
-});
+export const componentsOutSchema = z.object(eachComponent(() => z.number()));
 
-/** Relative symmetry tolerance of a 3×3 matrix, as a fraction of its largest entry (as core's parser). */
-export const MATRIX_SYMMETRY_TOLERANCE = 1e-6;
+/** Relative symmetry tolerance of a 3×3 matrix, as a fraction of its largest entry (core's parser's). */
+export const MATRIX_SYMMETRY_TOLERANCE = SYMMETRY_REL_TOL;
 
 const matrixSchema = z
   .array(z.array(stressValue()).length(3, "each row has 3 numbers"), {

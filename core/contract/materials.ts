@@ -1,16 +1,18 @@
 import { z } from "zod";
+import { MAX_INPUT_STRESS } from "../constants/input-bounds";
+import { STRESS_UNITS } from "../constants/stress-units";
 import { uuidInput } from "./ids";
 
 /**
  * Materials: a workspace's own library and references to the read-only built-in list of
- * published minimum values. Shared by the API and the web forms: imports only zod, so the
- * unit list is restated here (a unit test keeps it equal to core's STRESS_UNITS).
+ * published minimum values. Shared by the API and the web forms: imports only zod and core's
+ * dependency-free constants, so the unit list is core's own.
  */
 
-/** Stress units accepted at the API (the same list as core's STRESS_UNITS). */
-export const STRESS_UNIT_NAMES = ["Pa", "kPa", "MPa", "GPa", "psi", "ksi"] as const;
+/** Stress units accepted at the API (core's STRESS_UNITS). */
+export const STRESS_UNIT_NAMES = STRESS_UNITS;
 export const stressUnitSchema = z.enum(STRESS_UNIT_NAMES, {
-  error: "must be one of Pa, kPa, MPa, GPa, psi, ksi",
+  error: `must be one of ${STRESS_UNIT_NAMES.join(", ")}`,
 });
 export type StressUnitName = z.infer<typeof stressUnitSchema>;
 
@@ -19,11 +21,10 @@ export const finiteNumber = (what = "a number") =>
   z.number({ error: `must be ${what}` }).refine(Number.isFinite, { message: `must be a finite number` });
 
 /**
- * The largest stress magnitude accepted, in the unit it is entered in. No real stress is near
- * it (1e12 GPa); it exists so that converting to Pa, superposing and squaring (von Mises) can
- * never overflow to Infinity, which would otherwise be stored or fail a later evaluation.
+ * The largest stress magnitude accepted, in the unit it is entered in (core's MAX_INPUT_STRESS,
+ * where the reason for it is given).
  */
-export const MAX_STRESS_MAGNITUDE = 1e12;
+export const MAX_STRESS_MAGNITUDE = MAX_INPUT_STRESS;
 
 /**
  * The same bound for values already in Pa (exports): the largest accepted value in any unit,

@@ -1,21 +1,17 @@
 import { z } from "zod";
+import { categoryKey } from "../constants/categories";
+import { CRITERIA } from "../constants/criteria";
 import { materialRefSchema, versionSchema } from "./materials";
 
 /**
  * Projects and their locations (the named points of a structure that every load case is
- * checked at). Shared by the API and the web: imports only zod.
+ * checked at). Shared by the API and the web: imports only zod and core's dependency-free constants.
  */
 
-/** The yield and fracture criteria (the same list as core's CRITERIA). */
-export const CRITERION_NAMES = [
-  "von-mises",
-  "tresca",
-  "max-principal",
-  "mohr-coulomb",
-  "modified-mohr",
-] as const;
+/** The yield and fracture criteria (core's CRITERIA). */
+export const CRITERION_NAMES = CRITERIA;
 export const criterionSchema = z.enum(CRITERION_NAMES, {
-  error: "must be one of von-mises, tresca, max-principal, mohr-coulomb, modified-mohr",
+  error: `must be one of ${CRITERION_NAMES.join(", ")}`,
 });
 export type CriterionName = z.infer<typeof criterionSchema>;
 
@@ -83,7 +79,7 @@ export const categoryRequirementSchema = z.object({
 });
 export type CategoryRequirement = z.infer<typeof categoryRequirementSchema>;
 
-const sameCategory = (a: string, b: string) => a.trim().toLowerCase() === b.trim().toLowerCase();
+const sameCategory = (a: string, b: string) => categoryKey(a) === categoryKey(b);
 
 export const categoryRequirementsSchema = z
   .array(categoryRequirementSchema)

@@ -1,19 +1,10 @@
-import { principalValues } from "../eigen/principal";
+import { CRITERIA, type Criterion } from "../constants/criteria";
+import { principalValues } from "../tensor/principal";
 import { vonMisesOf } from "../eigen/sym3";
 import type { StressTensor } from "../tensor/types";
 import { assertTensor } from "../tensor/validate";
 
-/** A yield or fracture criterion. */
-export type Criterion = "von-mises" | "tresca" | "max-principal" | "mohr-coulomb" | "modified-mohr";
-
-/** Every accepted criterion. */
-export const CRITERIA: readonly Criterion[] = [
-  "von-mises",
-  "tresca",
-  "max-principal",
-  "mohr-coulomb",
-  "modified-mohr",
-];
+export { CRITERIA, type Criterion };
 
 /** How a material fails: by yielding (ductile) or by fracture without much yielding (brittle). */
 export type MaterialBehaviour = "ductile" | "brittle";
@@ -68,11 +59,12 @@ function strength(material: Material, key: StrengthKey, criterion: Criterion): n
  *   a material modified Mohr does not apply to (Suc < Sut)
  */
 export function safetyFactor(s: StressTensor, criterion: Criterion, material: Material): number {
-  assertTensor(s);
   if (criterion === "von-mises") {
+    assertTensor(s);
     const sy = strengthsFor(criterion, material).yield!;
     return sy / vonMisesOf(s.xx, s.yy, s.zz, s.xy, s.yz, s.zx);
   }
+  // principalValues validates the tensor (once) and solves it (once).
   const [s1, , s3] = principalValues(s);
   return factorFromPrincipals(criterion, material, s1, s3, NaN);
 }

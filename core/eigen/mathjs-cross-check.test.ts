@@ -2,7 +2,7 @@ import { eigs } from "mathjs";
 import { describe, expect, it } from "vitest";
 import { principalBatch } from "../batch/principal-batch";
 import { frobenius, seededRandom } from "../testing/fixtures";
-import { principalStresses } from "./principal";
+import { principalStresses } from "../tensor/principal";
 
 const COUNT = 10_000;
 

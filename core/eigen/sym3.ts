@@ -48,6 +48,9 @@ function farRoot(r: number): number {
  * @param vecs output for the three unit directions (dimensionless), or null to skip them
  * @param dvo offset in `vecs`
  * @returns false (and writes nothing) when a component is NaN or ±Infinity
+ *
+ * One long function on purpose: every intermediate stays in a local variable, where helpers would
+ * need arrays or objects to hand a dozen values between them, and the kernel allocates nothing.
  */
 export function eigSym3(
   inp: Float64Array,

@@ -6,6 +6,9 @@ import { componentOf, parseNumberToken, tokenize, unitOf, type DecimalMark, type
 
 export type { DecimalMark } from "./tokens";
 
+// One file for the forms a paste can take (matrix, six or three components, listing row): they
+// share the rows, the header and the error shape; the lexical part lives in tokens.ts.
+
 /**
  * The two orders in which six bare components usually come: normal stresses first, then the shears
  * in one of two orders (common practice, no source). Offered by name where a plain row of six

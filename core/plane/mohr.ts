@@ -1,4 +1,4 @@
-import { principalValues } from "../eigen/principal";
+import { principalValues } from "../tensor/principal";
 import type { StressTensor } from "../tensor/types";
 
 /** One Mohr circle: centre on the σ axis and radius (both in the stress unit). */

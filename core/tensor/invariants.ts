@@ -1,4 +1,4 @@
-import { principalValues } from "../eigen/principal";
+import { principalValues } from "./principal";
 import { vonMisesOf } from "../eigen/sym3";
 import { deg, radToDeg, type Degrees } from "../units/angles";
 import type { StressTensor } from "./types";

@@ -14,8 +14,4 @@ export type Vec3 = readonly [number, number, number];
 /** A 3×3 matrix as three rows. */
 export type Mat3 = readonly [Vec3, Vec3, Vec3];
 
-/** The six component names in the batch storage order: xx yy zz xy yz zx. */
-export const COMPONENTS = ["xx", "yy", "zz", "xy", "yz", "zx"] as const;
-
-/** One of the six component names. */
-export type Component = (typeof COMPONENTS)[number];
+export { COMPONENTS, type Component } from "../constants/components";

@@ -1,3 +1,4 @@
+import { MAX_INPUT_STRESS } from "../constants/input-bounds";
 import { COMPONENTS, type Mat3, type StressTensor, type Vec3 } from "./types";
 
 /** Throws TypeError/RangeError unless `x` is a finite number. @param x value @param name what it is, for the message */
@@ -25,16 +26,7 @@ export function assertMat3(m: unknown, name: string): asserts m is Mat3 {
   for (let i = 0; i < 3; i++) assertVec3(m[i], `${name}[${i}]`);
 }
 
-/**
- * The largest stress magnitude accepted where a person or a file enters a stress (the paste parser,
- * the bench's cells, the API's stress input: `MAX_STRESS_MAGNITUDE` in core/contract/materials.ts,
- * kept equal by a test), in the unit it is written in. No real stress is near it (1e12 GPa); it
- * exists so that converting to Pa (× 6.9e6 at most, from ksi), superposing and squaring (von Mises,
- * invariants) stay far below the overflow of doubles (σ² overflows above about 1.3e154), and so that a
- * stray exponent (1e300 typed for 1e3) is refused instead of silently flattening every other
- * component to zero beside it.
- */
-export const MAX_INPUT_STRESS = 1e12;
+export { MAX_INPUT_STRESS };
 
 /**
  * Why a stress value cannot be accepted as input, or undefined when it can: it must be a finite

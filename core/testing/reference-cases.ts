@@ -22,7 +22,10 @@
  * - rosette: gauge readings (µε) at angles_deg or ex, ey, gxy, with E, nu → strains and stresses
  * - strain_transform: ex, ey, gxy (engineering shear, µε) rotated by theta_deg → en
  * - thin_vessel: p, r (or d_i), t, shape → hoop, axial, allowable pressures, factors
- * - asme_ug27, lame: kinds core has no calculator for (their tests are listed as skipped)
+ * - lame: thick-walled cylinder pi, ri, ro, closed_end (and Sy, n_design) → hoop st_inner/st_outer, radial
+ *   sr_inner/sr_outer, axial sl (also per unit pi), allowable pi by Tresca (p_allow_MSS) and von Mises
+ *   (p_allow_DE)
+ * - asme_ug27: a kind core has no calculator for (its tests are listed as skipped)
  * - shaft: solid shaft d, M, T, P at the point of maximum bending → sigma, tau, s1, s2, sigma_vm, n_DE
  * - fact: rules of the trade, `which` names the rule
  * Conventions: tension positive; τxy positive when it acts in +y on the +x face; angles

@@ -1,10 +1,7 @@
 /** Stress units and exact conversions between them. */
+import { STRESS_UNITS, type StressUnit } from "../constants/stress-units";
 
-/** A stress unit accepted at the API. */
-export type StressUnit = "Pa" | "kPa" | "MPa" | "GPa" | "psi" | "ksi";
-
-/** Every accepted stress unit, in display order. */
-export const STRESS_UNITS: readonly StressUnit[] = ["Pa", "kPa", "MPa", "GPa", "psi", "ksi"];
+export { STRESS_UNITS, type StressUnit };
 
 /** 1 lbf in newtons, exact by definition (1 lb = 0.45359237 kg, g₀ = 9.80665 m/s²). */
 export const NEWTONS_PER_POUND_FORCE = 4.4482216152605;

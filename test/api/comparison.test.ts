@@ -197,4 +197,38 @@ describe("the comparison", () => {
     });
     expect(after.summary).toMatch(/^governs: Operating at mid-shell/);
   });
+
+  it("when a workspace material's yield is edited, then the next comparison's factors follow it (answers are never reused across changed inputs)", async () => {
+    const created = await team.editor.agent
+      .post(wsPath(team, "/materials"))
+      .send({ name: "Shell plate, heat 20", unit: "MPa", yield: 300, ultimateTension: 500 })
+      .expect(201);
+    const materialId = created.body.material.id;
+    const made = await projectWithLocations(
+      team,
+      { name: "Library edit", requirements, defaultMaterial: { kind: "workspace", id: materialId } },
+      ["plate"],
+    );
+    const p = wsPath(team, `/projects/${made.projectId}`);
+    await team.editor.agent
+      .post(`${p}/load-cases`)
+      .send({ name: "Uniaxial", states: [{ locationId: made.locationIds[0], stress: mpa(100, 0) }] })
+      .expect(201);
+    const factorOf = async () => {
+      const result = comparisonSchema.parse(
+        (await team.viewer.agent.get(`${p}/comparison`).expect(200)).body,
+      );
+      const check = result.rows[0].checks.find((c) => c.criterion === "von-mises")!;
+      return check.status === "evaluated" ? check.factor : undefined;
+    };
+    // Uniaxial 100 MPa: von Mises = 100 MPa, so the factor is Sy / 100 MPa (the definition of
+    // the von Mises safety factor; common practice, no source).
+    expect(await factorOf()).toBeCloseTo(3, 12);
+    expect(await factorOf()).toBeCloseTo(3, 12); // the same inputs answer the same
+    await team.editor.agent
+      .patch(wsPath(team, `/materials/${materialId}`))
+      .send({ version: 1, unit: "MPa", yield: 250 })
+      .expect(200);
+    expect(await factorOf()).toBeCloseTo(2.5, 12);
+  });
 });

@@ -34,6 +34,9 @@ describe("invitations end to end through the fake SMTP server", () => {
     const { mail, token } = await invite();
     expect(mail.subject).toBe("Mira Castellan invited you to Quillon Engineering on Sigmacube");
     expect(mail.text).toContain('join the workspace "Quillon Engineering" on Sigmacube as reviewer');
+    // The words match the flow: the invitation page asks for one "Accept" after signing in.
+    expect(mail.text).toContain("then choose “Accept” on the page that opens");
+    expect(mail.text).not.toMatch(/straight after/);
     expect(mail.text).toContain(`${TEST_ORIGIN}/invitations/${token}`);
     expect(mail.html).toContain(`href="${TEST_ORIGIN}/invitations/${token}"`);
     expect(mail.html).toContain("Sigma");

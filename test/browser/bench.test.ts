@@ -19,7 +19,7 @@ import {
   CT7_JUNCTION_BENDING_PER_PRESSURE,
   CT7_SHELL,
   CT7_SHELL_LOAD_CASES,
-} from "../../core/demo/ct7-scenario";
+} from "../../core/demo-data/ct7-scenario";
 import { launchChromium, screenshotDir, signUpInContext, type BrowserAccount } from "../support/browser";
 import { startTestServer } from "../support/server";
 

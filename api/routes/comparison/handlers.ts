@@ -1,10 +1,10 @@
 import type { ComparisonQuery } from "../../../core/contract/comparison";
 import { currentMembership } from "../../auth/guards";
 import type { AppContext } from "../../context";
+import { comparisonAnswer } from "../../domain/comparison/answer";
+import { loadComparisonSource } from "../../domain/comparison/load";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
-import { loadComparisonInput } from "./load";
-import { comparisonPage } from "./paging";
 
 type ProjectParams = { workspaceId: string; projectId: string };
 
@@ -15,8 +15,11 @@ export function comparisonHandler(
   return async (_req, res) => {
     const { workspace } = currentMembership(res);
     const { params, query } = res.locals.input;
-    const input = await loadComparisonInput(context.sequelize, workspace.id, params.projectId);
-    if (!input) throw errors.notFound("This project");
-    res.set("Cache-Control", "no-store").json(await comparisonPage(input, query));
+    const source = await loadComparisonSource(context.sequelize, workspace.id, params.projectId);
+    if (source === null) throw errors.notFound("This project");
+    res
+      .set("Cache-Control", "no-store")
+      .type("json")
+      .send(await comparisonAnswer(params.projectId, source, query));
   };
 }

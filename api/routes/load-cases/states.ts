@@ -17,7 +17,9 @@ import { personOf, type PersonRef } from "../projects/people";
 const KEYS = ["xx", "yy", "zz", "xy", "yz", "zx"] as const;
 
 /** A stored row's six components in Pa. */
-export function componentsPaOf(s: StressState): Components {
+export function componentsPaOf(
+  s: Pick<StressState, "xxPa" | "yyPa" | "zzPa" | "xyPa" | "yzPa" | "zxPa">,
+): Components {
   return { xx: s.xxPa, yy: s.yyPa, zz: s.zzPa, xy: s.xyPa, yz: s.yzPa, zx: s.zxPa };
 }
 

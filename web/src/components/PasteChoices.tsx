@@ -1,18 +1,7 @@
 import { useId } from "react";
 import { COMMON_SIX_ORDERS, type Component, type ParseProblem } from "../../../core";
 import { DECIMAL_CHOICE_LABELS, type DecimalPreference } from "../lib/paste-preferences";
-
-const SYMBOL: Readonly<Record<Component, string>> = {
-  xx: "σx",
-  yy: "σy",
-  zz: "σz",
-  xy: "τxy",
-  yz: "τyz",
-  zx: "τxz",
-};
-
-/** A component order in σ/τ symbols: "σx σy σz τxy τyz τxz". */
-export const orderInSymbols = (order: readonly Component[]) => order.map((c) => SYMBOL[c]).join(" ");
+import { orderInSymbols } from "../lib/stress";
 
 /** The decimal mark pastes are read with, as a compact select (the choice is remembered per user). */
 export function DecimalMarkSelect({

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { benchLinkForState, parseBenchSource } from "./bench-link";
+import { benchLinkForState, parseBenchSource, readStressParam, stressParam } from "./bench-link";
 
 const ids = {
   workspaceId: "11111111-1111-4111-8111-111111111111",
@@ -21,5 +21,15 @@ describe("bench links", () => {
     expect(parseBenchSource("?s=1,2,3,4,5,6")).toBeNull();
     expect(parseBenchSource("?source=a/b/c/d")).toBeNull();
     expect(parseBenchSource(`?source=${ids.workspaceId}/${ids.projectId}`)).toBeNull();
+  });
+
+  it("when six components are written as the s parameter and read back, then the same numbers come out in core's order; a malformed one is null", () => {
+    const tensor = { xx: 1 / 3, yy: -87.75, zz: 0, xy: 12.5, yz: -1e-7, zx: 2e8 };
+    const text = stressParam(tensor);
+    expect(text.split(",")).toHaveLength(6);
+    expect(readStressParam(text)).toEqual({ ...tensor, xx: Number((1 / 3).toPrecision(15)) });
+    expect(readStressParam("1,2,3,4,5")).toBeNull();
+    expect(readStressParam("1,2,3,4,5,x")).toBeNull();
+    expect(readStressParam(null)).toBeNull();
   });
 });

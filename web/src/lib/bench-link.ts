@@ -1,3 +1,4 @@
+import { COMPONENTS, type StressTensor } from "../../../core";
 import type { Components } from "../../../core/contract/load-cases";
 import type { StressUnitName } from "../../../core/contract/materials";
 
@@ -6,9 +7,24 @@ export type BenchSource = { workspaceId: string; projectId: string; loadCaseId: 
 
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
+/**
+ * The bench's `s` parameter: the six components in core's order (xx yy zz xy yz zx), each to 15
+ * significant figures so a link gives back the very numbers shown. The bench's own address and
+ * every link into it write it here.
+ */
+export const stressParam = (components: Components) =>
+  COMPONENTS.map((c) => Number(components[c].toPrecision(15))).join(",");
+
+/** Reads `s` back: six finite numbers in core's order, or null when absent or malformed. */
+export function readStressParam(text: string | null): StressTensor | null {
+  if (text === null) return null;
+  const values = text.split(",").map(Number);
+  if (values.length !== COMPONENTS.length || values.some((v) => !Number.isFinite(v))) return null;
+  return Object.fromEntries(COMPONENTS.map((c, i) => [c, values[i]])) as StressTensor;
+}
+
 function stateParams(q: URLSearchParams, components: Components, unit: StressUnitName) {
-  const c = components;
-  q.set("s", [c.xx, c.yy, c.zz, c.xy, c.yz, c.zx].map((v) => Number(v.toPrecision(15))).join(","));
+  q.set("s", stressParam(components));
   q.set("u", unit);
 }
 

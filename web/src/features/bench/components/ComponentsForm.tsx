@@ -1,16 +1,13 @@
 import { NumberField } from "../../../components/NumberField";
+import { COMPONENT_SYMBOLS, STRESS_COMPONENTS } from "../../../lib/stress";
 import { stressInputProblem, type Component } from "../../../../../core";
 import { editable } from "../model/format";
 import { useBenchStore } from "../model/store";
 
-const SIX: readonly { c: Component; label: string }[] = [
-  { c: "xx", label: "σx" },
-  { c: "yy", label: "σy" },
-  { c: "zz", label: "σz" },
-  { c: "xy", label: "τxy" },
-  { c: "yz", label: "τyz" },
-  { c: "zx", label: "τzx" },
-];
+const SIX: readonly { c: Component; label: string }[] = STRESS_COMPONENTS.map((c) => ({
+  c,
+  label: COMPONENT_SYMBOLS[c].short,
+}));
 
 /**
  * The six-component form, or the plane-stress form (σx, σy, τxy) which also sets σz = τyz = τzx = 0.

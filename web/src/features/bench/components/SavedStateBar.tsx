@@ -1,15 +1,16 @@
-import { useMutation, useQuery } from "@tanstack/react-query";
-import { useEffect, useMemo, useRef, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import { Link } from "react-router-dom";
-import { z } from "zod";
 import { convertStress } from "../../../../../core";
 import { SUPERPOSITION_CAUTION } from "../../../../../core/contract/combinations";
 import { loadCaseResponseSchema, type LoadCase } from "../../../../../core/contract/load-cases";
-import { materialListSchema } from "../../../../../core/contract/materials";
-import { locationResponseSchema, projectResponseSchema } from "../../../../../core/contract/projects";
-import { roleAtLeast, workspaceSchema } from "../../../../../core/contract/workspaces";
 import { ToolButton } from "../../../components/ToolButton";
-import { ApiError, apiGet, apiSend } from "../../../lib/api-client";
+import { useSaveState } from "../../../entities/load-case/mutations";
+import { useLoadCase } from "../../../entities/load-case/queries";
+import { useLocation } from "../../../entities/location/queries";
+import { useMaterials } from "../../../entities/material/queries";
+import { useProject } from "../../../entities/project/queries";
+import { useWorkspaceRole } from "../../../entities/workspace/queries";
+import { ApiError } from "../../../lib/api-client";
 import {
   parseBenchSource,
   parseCombinationSource,
@@ -17,6 +18,7 @@ import {
   type CombinationSource,
 } from "../../../lib/bench-link";
 import { FormMessage } from "../../../lib/forms";
+import { STRESS_COMPONENTS } from "../../../lib/stress";
 import { useBenchStore } from "../model/store";
 import { selectInputValid, type BenchState } from "../model/bench-state";
 import {
@@ -25,9 +27,6 @@ import {
   combinationRequirementsFor,
   projectRequirementsFor,
 } from "../model/project-requirements";
-
-const workspaceResponse = z.object({ workspace: workspaceSchema });
-const KEYS = ["xx", "yy", "zz", "xy", "yz", "zx"] as const;
 
 /** A copy's basis: the case version it started from, and the values and revision saved at it. */
 type Basis = { version: number; saved: Pick<BenchState, "tensor" | "unit">; revision: number };
@@ -41,7 +40,7 @@ function basisOf(loadCase: LoadCase, locationId: string): Basis | null {
 /** Whether the bench's tensor differs from the saved one (compared in Pa, to 1e-9 relative). */
 function differs(a: Pick<BenchState, "tensor" | "unit">, b: Pick<BenchState, "tensor" | "unit">): boolean {
   const pa = (x: Pick<BenchState, "tensor" | "unit">) =>
-    KEYS.map((k) => convertStress(x.tensor[k], x.unit, "Pa"));
+    STRESS_COMPONENTS.map((k) => convertStress(x.tensor[k], x.unit, "Pa"));
   const [pa1, pa2] = [pa(a), pa(b)];
   const scale = Math.max(1, ...pa1.map(Math.abs), ...pa2.map(Math.abs));
   return pa1.some((v, i) => Math.abs(v - pa2[i]) > 1e-9 * scale);
@@ -97,23 +96,10 @@ function CombinationNote({ name, from }: { name: string; from: CombinationSource
 
 /** Applies the check the comparison made of the combination there: the project's default factors and the location's material. */
 function CombinationCheck({ from }: { from: CombinationSource }) {
-  const base = `/workspaces/${from.workspaceId}/projects/${from.projectId}`;
   const act = useBenchStore((s) => s.act);
-  const project = useQuery({
-    queryKey: ["bench-combination", from, "project"],
-    queryFn: () => apiGet(base, projectResponseSchema).then((r) => r.project),
-    retry: false,
-  });
-  const location = useQuery({
-    queryKey: ["bench-combination", from, "location"],
-    queryFn: () =>
-      apiGet(`${base}/locations/${from.locationId}`, locationResponseSchema).then((r) => r.location),
-    retry: false,
-  });
-  const materials = useQuery({
-    queryKey: ["bench-combination", from, "materials"],
-    queryFn: () => apiGet(`/workspaces/${from.workspaceId}/materials`, materialListSchema),
-  });
+  const project = useProject(from.workspaceId, from.projectId);
+  const location = useLocation(from.workspaceId, from.projectId, from.locationId);
+  const materials = useMaterials(from.workspaceId);
   useEffect(() => {
     if (!project.data || !location.data || !materials.data) return;
     const material = benchMaterialOf(location.data.material ?? project.data.defaultMaterial, materials.data);
@@ -134,43 +120,21 @@ function CombinationCheck({ from }: { from: CombinationSource }) {
 }
 
 function SavedState({ source }: { source: BenchSource }) {
-  const base = `/workspaces/${source.workspaceId}/projects/${source.projectId}`;
+  const { workspaceId, projectId, loadCaseId, locationId } = source;
   const act = useBenchStore((s) => s.act);
   const tensor = useBenchStore((s) => s.tensor);
   const unit = useBenchStore((s) => s.unit);
-  const workspace = useQuery({
-    queryKey: ["bench-source", source, "workspace"],
-    queryFn: () => apiGet(`/workspaces/${source.workspaceId}`, workspaceResponse).then((r) => r.workspace),
-    retry: false,
-  });
-  const project = useQuery({
-    queryKey: ["bench-source", source, "project"],
-    queryFn: () => apiGet(base, projectResponseSchema).then((r) => r.project),
-    retry: false,
-  });
-  const location = useQuery({
-    queryKey: ["bench-source", source, "location"],
-    queryFn: () =>
-      apiGet(`${base}/locations/${source.locationId}`, locationResponseSchema).then((r) => r.location),
-    retry: false,
-  });
-  const materials = useQuery({
-    queryKey: ["bench-source", source, "materials"],
-    queryFn: () => apiGet(`/workspaces/${source.workspaceId}/materials`, materialListSchema),
-  });
-  const loadCase = useQuery({
-    queryKey: ["bench-source", source, "case"],
-    queryFn: () =>
-      apiGet(`${base}/load-cases/${source.loadCaseId}`, loadCaseResponseSchema).then((r) => r.loadCase),
-    retry: false,
-    // Fetched fresh on every opening: a cached copy would hand the bench an old version to save over.
-    gcTime: 0,
-  });
-  // The version this copy is based on, and the values saved at it: first as loaded, then as saved or reloaded here.
-  const loadedBasis = useMemo(
-    () => (loadCase.data ? basisOf(loadCase.data, source.locationId) : null),
-    [loadCase.data, source.locationId],
-  );
+  const workspace = useWorkspaceRole(workspaceId);
+  const project = useProject(workspaceId, projectId);
+  const location = useLocation(workspaceId, projectId, locationId);
+  const materials = useMaterials(workspaceId);
+  // Fetched fresh on every opening: a cached copy would hand the bench an old version to save over.
+  const loadCase = useLoadCase(workspaceId, projectId, loadCaseId, true);
+  // The version this copy is based on, and the values saved at it: first as loaded (kept when a
+  // save refreshes the case), then as saved or reloaded here.
+  const [loadedBasis, setLoadedBasis] = useState<Basis | null>(null);
+  const arrived = loadCase.data ? basisOf(loadCase.data, locationId) : null;
+  if (!loadedBasis && arrived) setLoadedBasis(arrived);
   const [laterBasis, setBasis] = useState<Basis | null>(null);
   const basis = laterBasis ?? loadedBasis;
   const [conflict, setConflict] = useState<{ currentVersion: number; current: LoadCase } | null>(null);
@@ -187,27 +151,23 @@ function SavedState({ source }: { source: BenchSource }) {
 
   // The check the project makes: its required factor per criterion for the case's category (the
   // comparison's lookup), its choice on unsuited criteria, and the location's (or project's) material.
+  // (Keyed on the case's category, not the record: a save here refreshes the record, and that
+  // must not put back a material or factors changed on the bench since.)
+  const category = loadCase.data?.category;
   useEffect(() => {
-    if (!project.data || !location.data || !materials.data || !loadCase.data) return;
+    if (!project.data || !location.data || !materials.data || category === undefined) return;
     const material = benchMaterialOf(location.data.material ?? project.data.defaultMaterial, materials.data);
     act.applyShared({
       ...(material ? { material } : {}),
-      projectRequirements: projectRequirementsFor(project.data, loadCase.data.category),
+      projectRequirements: projectRequirementsFor(project.data, category),
       behaviour: "from-data",
       includeUnsuited: project.data.includeUnsuitedCriteria,
     });
-  }, [project.data, location.data, materials.data, loadCase.data, act]);
+  }, [project.data, location.data, materials.data, category, act]);
 
-  const save = useMutation({
-    mutationFn: (version: number) =>
-      apiSend(
-        "PUT",
-        `${base}/load-cases/${source.loadCaseId}/states/${source.locationId}`,
-        { version, stress: { unit, components: tensor }, source: "typed", note: "edited in the bench" },
-        loadCaseResponseSchema,
-      ).then((r) => r.loadCase),
+  const save = useSaveState(workspaceId, projectId, {
     onSuccess: (saved) => {
-      const next = basisOf(saved, source.locationId)!;
+      const next = basisOf(saved, locationId)!;
       setBasis(next);
       const revision = next.revision;
       setConflict(null);
@@ -223,6 +183,15 @@ function SavedState({ source }: { source: BenchSource }) {
       }
     },
   });
+  const saveOver = (version: number) =>
+    save.mutate({
+      caseId: loadCaseId,
+      locationId,
+      version,
+      stress: { unit, components: tensor },
+      source: "typed",
+      note: "edited in the bench",
+    });
 
   const failed = [workspace, project, location, loadCase].find((q) => q.error);
   if (failed) {
@@ -236,7 +205,7 @@ function SavedState({ source }: { source: BenchSource }) {
   if (!workspace.data || !project.data || !location.data || !loadCase.data || !basis) {
     return <p className="text-[13px] text-graphite-soft">Loading the saved state…</p>;
   }
-  const canEdit = roleAtLeast(workspace.data.role, "editor");
+  const canEdit = workspace.canEdit;
   const changed = differs({ tensor, unit }, basis.saved);
 
   return (
@@ -247,7 +216,7 @@ function SavedState({ source }: { source: BenchSource }) {
       <span>
         Saved state: <strong>{loadCase.data.name}</strong> at <strong>{location.data.name}</strong> in{" "}
         <Link
-          to={`/workspaces/${source.workspaceId}/projects/${source.projectId}`}
+          to={`/workspaces/${workspaceId}/projects/${projectId}`}
           className="text-ink underline-offset-2 hover:underline"
         >
           {project.data.name}
@@ -256,7 +225,7 @@ function SavedState({ source }: { source: BenchSource }) {
         <span className="num">{basis.version}</span>
       </span>
       <Link
-        to={`/workspaces/${source.workspaceId}/projects/${source.projectId}/comparison`}
+        to={`/workspaces/${workspaceId}/projects/${projectId}/comparison`}
         className="text-ink underline-offset-2 hover:underline"
       >
         Comparison
@@ -271,7 +240,7 @@ function SavedState({ source }: { source: BenchSource }) {
       {canEdit ? (
         <>
           <ToolButton
-            onClick={() => (setSavedNote(null), save.mutate(basis.version))}
+            onClick={() => (setSavedNote(null), saveOver(basis.version))}
             disabled={!changed || save.isPending || !!conflict || !inputValid}
           >
             Save to project
@@ -295,10 +264,10 @@ function SavedState({ source }: { source: BenchSource }) {
           <div className="flex gap-2">
             <ToolButton
               onClick={() => {
-                const fields = benchFieldsOf(conflict.current, source.locationId);
+                const fields = benchFieldsOf(conflict.current, locationId);
                 if (fields) act.applyShared(fields);
                 const revision =
-                  conflict.current.states.find((s) => s.locationId === source.locationId)?.revision ??
+                  conflict.current.states.find((s) => s.locationId === locationId)?.revision ??
                   basis.revision;
                 if (fields) setBasis({ version: conflict.currentVersion, saved: fields, revision });
                 setConflict(null);
@@ -309,7 +278,7 @@ function SavedState({ source }: { source: BenchSource }) {
             <ToolButton
               onClick={() => {
                 setConflict(null);
-                save.mutate(conflict.currentVersion);
+                saveOver(conflict.currentVersion);
               }}
             >
               Keep my copy and save over version {conflict.currentVersion}

@@ -3,6 +3,7 @@
  * buttons and the pointer reducers all call these; none of them does mechanics beyond asking core.
  */
 import {
+  COMPONENTS,
   IDENTITY_ROTATION,
   convertStress,
   maxShearFrame,
@@ -22,6 +23,7 @@ import {
   type StressUnit,
   type Vec3,
 } from "../../../../../core";
+import { orderInSymbols } from "../../../lib/stress";
 import {
   HISTORY_LIMIT,
   type BenchState,
@@ -35,7 +37,7 @@ import {
 } from "./bench-state";
 import { EXAMPLE_STATES } from "./examples";
 
-const SIX: readonly Component[] = ["xx", "yy", "zz", "xy", "yz", "zx"];
+const SIX = COMPONENTS;
 
 /** Records the current tensor and unit for undo, then applies the change. */
 function withHistory(state: BenchState, tensor: StressTensor, unit: StressUnit = state.unit): BenchState {
@@ -116,10 +118,7 @@ export function applyPaste(
     result.form
   ];
   const point = result.point ? ` of ${result.point.kind} ${result.point.number}` : "";
-  const order =
-    choice.order && result.form === "components"
-      ? ` (${choice.order.map((c) => (c[0] === c[1] ? `σ${c[0]}` : `τ${c === "zx" ? "xz" : c}`)).join(" ")})`
-      : "";
+  const order = choice.order && result.form === "components" ? ` (${orderInSymbols(choice.order)})` : "";
   return {
     ...next,
     pasteError: null,

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { ct7Projects } from "../../../../../core/demo/ct7-scenario";
+import { ct7Projects } from "../../../../../core/demo-data/ct7-scenario";
 import { EXAMPLE_STATES } from "./examples";
 
 describe("the bench's example states", () => {

@@ -5,7 +5,7 @@ import {
   CT7_SHELL_LOAD_CASES,
   ct7State,
   type Ct7ShellCaseName,
-} from "../../../../../core/demo/ct7-scenario";
+} from "../../../../../core/demo-data/ct7-scenario";
 
 /** A stress state to start from, from the CT-7 demo scenario (invented; every number is fictional). */
 export type ExampleState = {

@@ -17,6 +17,7 @@ import {
   type StressUnit,
   type Vec3,
 } from "../../../../../core";
+import { readStressParam, stressParam } from "../../../lib/bench-link";
 import { EULER_SEQUENCES, type BenchState, type EulerSequence } from "./bench-state";
 
 const CRITERION_CODE: Readonly<Record<Criterion, string>> = {
@@ -42,8 +43,7 @@ function numbers(text: string | null, count: number): number[] | null {
 /** The shareable part of the state as a query string (without "?"). */
 export function encodeBenchState(state: BenchState): string {
   const q = new URLSearchParams();
-  const t = state.tensor;
-  q.set("s", [t.xx, t.yy, t.zz, t.xy, t.yz, t.zx].map(num).join(","));
+  q.set("s", stressParam(state.tensor));
   q.set("u", state.unit);
   const { axis, angleDeg } = axisAngleFromRotation(state.rotation);
   if (angleDeg !== 0) q.set("r", [...axis, angleDeg].map(num).join(","));
@@ -74,10 +74,9 @@ export function encodeBenchState(state: BenchState): string {
 export function decodeBenchState(search: string): Partial<BenchState> {
   const q = new URLSearchParams(search);
   const out: Partial<BenchState> = {};
-  const s = numbers(q.get("s"), 6);
+  const s = readStressParam(q.get("s"));
   // A link is an entry point too: a stress beyond the input range is ignored like any malformed value.
-  if (s && s.every((v) => stressInputProblem(v) === undefined))
-    out.tensor = { xx: s[0], yy: s[1], zz: s[2], xy: s[3], yz: s[4], zx: s[5] };
+  if (s && Object.values(s).every((v) => stressInputProblem(v) === undefined)) out.tensor = s;
   const u = q.get("u");
   if (u !== null && (STRESS_UNITS as readonly string[]).includes(u)) out.unit = u as StressUnit;
   const r = numbers(q.get("r"), 4);

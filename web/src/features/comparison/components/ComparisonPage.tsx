@@ -10,7 +10,10 @@ import { Verdict } from "../../../components/Verdict";
 import { ToolButton } from "../../../components/ToolButton";
 import { downloadText, toCsv } from "../../../lib/csv";
 import { FormMessage } from "../../../lib/forms";
-import { useComparedProject, useComparedWorkspace, useComparison } from "../api/get-comparison";
+import { useComparison } from "../../../entities/comparison/queries";
+import { useProject } from "../../../entities/project/queries";
+import { useWorkspace } from "../../../entities/workspace/queries";
+import { displayUnit } from "../../../lib/stress";
 import { comparisonTable } from "../model/rows";
 import { ComparisonTable } from "./ComparisonTable";
 import { UtilisationChart } from "./UtilisationChart";
@@ -18,8 +21,8 @@ import { UtilisationChart } from "./UtilisationChart";
 /** `/workspaces/:workspaceId/projects/:projectId/comparison`: which case governs, and by how much. */
 export function ComparisonPage() {
   const { workspaceId = "", projectId = "" } = useParams();
-  const workspace = useComparedWorkspace(workspaceId);
-  const project = useComparedProject(workspaceId, projectId);
+  const workspace = useWorkspace(workspaceId);
+  const project = useProject(workspaceId, projectId);
   const [page, setPage] = useState(1);
   const comparison = useComparison(workspaceId, projectId, page);
   const [chartCriterion, setChartCriterion] = useState<CriterionName | null>(null);
@@ -29,7 +32,7 @@ export function ComparisonPage() {
   if (comparison.error || project.error) return <FormMessage error={comparison.error ?? project.error} />;
   const c = comparison.data;
   const p = project.data;
-  const unit = p.unitSystem === "US" ? "ksi" : "MPa";
+  const unit = displayUnit(p.unitSystem);
   const criterion = chartCriterion ?? c.requirements[0]?.criterion ?? "von-mises";
   // The server's evaluator picked it (core's one governing rule); nothing is re-ranked here.
   const top = c.governingOverall;

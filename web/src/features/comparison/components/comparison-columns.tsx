@@ -14,7 +14,8 @@ import { Quantity, stressTone } from "../../../components/Quantity";
 import { Verdict } from "../../../components/Verdict";
 import { benchLinkForCombination, benchLinkForState } from "../../../lib/bench-link";
 import { checkOf, type GoverningMarks } from "../model/rows";
-import { benchComponents, matchesEquals, tableStress, type ColumnSpec } from "../model/table-model";
+import { formatStress } from "../../../lib/stress";
+import { benchComponents, matchesEquals, type ColumnSpec } from "../model/table-model";
 
 type Row = ComparisonRowView;
 const helper = createColumnHelper<Row>();
@@ -143,7 +144,7 @@ function cellOf(spec: ColumnSpec, row: Row, ctx: CellContext): ReactNode {
       const pa = spec.value!(row) as number;
       return (
         <Quantity
-          value={tableStress(pa, ctx.unit)}
+          value={formatStress(pa, ctx.unit)}
           tone={stressTone(pa, Math.max(...row.principalPa.map(Math.abs)))}
         />
       );
@@ -151,7 +152,7 @@ function cellOf(spec: ColumnSpec, row: Row, ctx: CellContext): ReactNode {
     case "vonMisesPa":
     case "trescaPa":
     case "maxShearPa":
-      return <Quantity value={tableStress(spec.value!(row) as number, ctx.unit)} />;
+      return <Quantity value={formatStress(spec.value!(row) as number, ctx.unit)} />;
     case "bench":
       return <BenchCell row={row} ctx={ctx} />;
     default:

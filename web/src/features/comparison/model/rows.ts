@@ -1,7 +1,7 @@
-import { convertStress } from "../../../../../core";
 import type { Comparison, ComparisonCheck, ComparisonRowView } from "../../../../../core/contract/comparison";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import { CRITERION_LABELS, type CriterionName } from "../../../../../core/contract/projects";
+import { stressInUnit as inUnit } from "../../../lib/stress";
 
 /** How a row governs: for which criteria overall, and for which at its own location. */
 export type GoverningMarks = { overall: CriterionName[]; atLocation: CriterionName[] };
@@ -22,9 +22,6 @@ export function governingMarks(comparison: Comparison): Map<string, GoverningMar
 /** The check of `criterion` on a row, if the project requires it. */
 export const checkOf = (row: ComparisonRowView, criterion: CriterionName): ComparisonCheck | undefined =>
   row.checks.find((c) => c.criterion === criterion);
-
-/** A stress of the row in the display unit. */
-export const inUnit = (pa: number, unit: StressUnitName) => convertStress(pa, "Pa", unit);
 
 /** Significant figures of the stresses in the CSV, counted from the row's largest principal stress. */
 export const CSV_STRESS_FIGURES = 6;

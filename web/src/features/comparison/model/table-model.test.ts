@@ -7,7 +7,6 @@ import {
   matchesEquals,
   matchesText,
   rowHighlight,
-  tableStress,
   utilisationOf,
   worstVerdict,
 } from "./table-model";
@@ -179,14 +178,6 @@ describe("the comparison table's filters", () => {
 });
 
 describe("the comparison table's cells", () => {
-  it("when a stress is written, then it has three decimals below 10, two below 100, one above, an ASCII minus and no negative zero", () => {
-    expect(tableStress(-4.06e6, "MPa")).toBe("-4.060");
-    expect(tableStress(79.06e6, "MPa")).toBe("79.06");
-    expect(tableStress(154.06e6, "MPa")).toBe("154.1");
-    expect(tableStress(-1e-10, "MPa")).toBe("0.000");
-    expect(tableStress(1e6, "kPa")).toBe("1000.0");
-  });
-
   it("when a row governs overall or at its location, then it is washed in ink or paper, and only the overall one says so in data-governs", () => {
     expect(rowHighlight({ overall: ["tresca"], atLocation: ["tresca"] })).toEqual({
       className: "bg-ink-wash",

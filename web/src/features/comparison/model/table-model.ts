@@ -1,14 +1,14 @@
 /**
  * The comparison table's model, without React: which columns there are (header, numeric or not,
  * the value each sorts and filters by), how rows are filtered (free text, kind, location, worst
- * verdict) and how a stress is written in a cell. ComparisonTable hands these to TanStack Table,
- * which keeps the sort and filter state; every rule lives here.
+ * verdict) and what a row carries to the bench. ComparisonTable hands these to TanStack Table,
+ * which keeps the sort and filter state; every rule lives here (stresses are written by lib/stress).
  */
 import type { ComparisonRowView } from "../../../../../core/contract/comparison";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import { CRITERION_LABELS, type CriterionName } from "../../../../../core/contract/projects";
-import { fixed } from "../../../lib/number-format";
-import { checkOf, inUnit } from "./rows";
+import { editableStress } from "../../../lib/stress";
+import { checkOf } from "./rows";
 
 type Row = ComparisonRowView;
 
@@ -32,13 +32,6 @@ export type ColumnSpec = {
   /** the criterion of a utilisation column */
   criterion?: CriterionName;
 };
-
-/** A stress for the table: three significant decimals at most, as the sheet writes it; ASCII minus, never "-0.000". */
-export function tableStress(pa: number, unit: StressUnitName): string {
-  const v = inUnit(pa, unit);
-  const a = Math.abs(v);
-  return fixed(v, a >= 100 ? 1 : a >= 10 ? 2 : 3, "-");
-}
 
 /** The utilisation a column of `criterion` sorts by, with "not evaluated" (−1) after every rated row. */
 export function utilisationOf(row: Row, criterion: CriterionName): number {
@@ -149,8 +142,7 @@ export function rowHighlight(
 
 /** The row's components in `unit`, to twelve significant figures, for the bench link (a link carries no float noise). */
 export function benchComponents(row: Row, unit: StressUnitName): Row["componentsPa"] {
-  const toUnit = (x: number) => Number(inUnit(x, unit).toPrecision(12));
   return Object.fromEntries(
-    Object.entries(row.componentsPa).map(([k, v]) => [k, toUnit(v)]),
+    Object.entries(row.componentsPa).map(([k, v]) => [k, editableStress(v, unit)]),
   ) as Row["componentsPa"];
 }

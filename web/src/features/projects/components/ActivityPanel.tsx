@@ -1,5 +1,5 @@
 import { Panel } from "../../../components/Panel";
-import { useAudit } from "../api/trash-and-audit";
+import { useAudit } from "../../../entities/audit/queries";
 
 /** The most recent changes (the audit trail), readable by every member. */
 export function ActivityPanel({

@@ -7,7 +7,7 @@ import {
 import type { LoadCase } from "../../../../../core/contract/load-cases";
 import { ApiError, fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
-import { useCombinationMutations } from "../api/combinations";
+import { useCombinationMutations } from "../../../entities/combination/mutations";
 
 type DraftTerm = { loadCaseId: string; factor: string };
 type Draft = { name: string; description: string; terms: DraftTerm[] };

@@ -5,7 +5,7 @@ import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { ToolButton } from "../../../components/ToolButton";
-import { useCombinationMutations } from "../api/combinations";
+import { useCombinationMutations } from "../../../entities/combination/mutations";
 import { CombinationEditor } from "./CombinationEditor";
 
 type DraftTerm = { loadCaseId: string; factor: string };

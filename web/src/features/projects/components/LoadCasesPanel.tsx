@@ -1,28 +1,17 @@
-import { useState, type FormEvent } from "react";
-import { Link } from "react-router-dom";
-import { LOAD_CASE_CATEGORY_SUGGESTIONS, type LoadCase } from "../../../../../core/contract/load-cases";
+import { useState } from "react";
+import type { LoadCase } from "../../../../../core/contract/load-cases";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import type { Location } from "../../../../../core/contract/projects";
-import { ApiError, fieldErrorsOf } from "../../../lib/api-client";
-import { FormMessage, primaryButton } from "../../../lib/forms";
+import { useDeleteLoadCase, useSaveState, useUpdateLoadCase } from "../../../entities/load-case/mutations";
+import { ApiError } from "../../../lib/api-client";
+import { FormMessage } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
-import { Quantity, stressTone } from "../../../components/Quantity";
 import { ToolButton } from "../../../components/ToolButton";
-import { useLoadCaseMutations } from "../api/load-cases";
-import { benchLinkForState } from "../../../lib/bench-link";
-import { formatStress } from "../model/units";
+import { LoadCaseStateCell } from "./LoadCaseStateCell";
+import { NewLoadCaseForm } from "./NewLoadCaseForm";
 import { StateForm } from "./StateForm";
 import { RenameForm } from "./RenameForm";
 import { StateHistory } from "./StateHistory";
-
-const SHOWN = [
-  ["xx", "σxx"],
-  ["yy", "σyy"],
-  ["zz", "σzz"],
-  ["xy", "τxy"],
-  ["yz", "τyz"],
-  ["zx", "τzx"],
-] as const;
 
 /** Load cases × locations: each cell is the saved state (non-zero components), with its source and revision. */
 export function LoadCasesPanel({
@@ -45,20 +34,16 @@ export function LoadCasesPanel({
 }) {
   const ownFactors = (category: string) =>
     allowableCategories.some((a) => a.trim().toLowerCase() === category.trim().toLowerCase());
-  const m = useLoadCaseMutations(workspaceId, projectId);
+  const update = useUpdateLoadCase(workspaceId, projectId);
+  const remove = useDeleteLoadCase(workspaceId, projectId);
+  const saveState = useSaveState(workspaceId, projectId);
   const [editing, setEditing] = useState<{ caseId: string; locationId: string } | null>(null);
   const [history, setHistory] = useState<{ caseId: string; locationId: string } | null>(null);
   const [renaming, setRenaming] = useState<string | null>(null);
-  const [name, setName] = useState("");
-  const [category, setCategory] = useState("");
 
-  const add = (e: FormEvent) => {
-    e.preventDefault();
-    m.create.mutate({ name, category }, { onSuccess: () => (setName(""), setCategory("")) });
-  };
   const editingCase = editing && cases.find((c) => c.id === editing.caseId);
   const editingState = editingCase?.states.find((s) => s.locationId === editing?.locationId);
-  const conflict = m.saveState.error instanceof ApiError && m.saveState.error.status === 409;
+  const conflict = saveState.error instanceof ApiError && saveState.error.status === 409;
 
   return (
     <Panel
@@ -115,7 +100,7 @@ export function LoadCasesPanel({
                   {canEdit && renaming !== c.id && (
                     <ToolButton
                       aria-label={`Rename load case ${c.name}`}
-                      onClick={() => (m.update.reset(), setRenaming(c.id))}
+                      onClick={() => (update.reset(), setRenaming(c.id))}
                     >
                       Rename
                     </ToolButton>
@@ -128,11 +113,11 @@ export function LoadCasesPanel({
                         { key: "category", label: "category", value: c.category, list: "case-categories" },
                         { key: "description", label: "description", value: c.description },
                       ]}
-                      pending={m.update.isPending}
-                      error={m.update.error}
+                      pending={update.isPending}
+                      error={update.error}
                       onCancel={() => setRenaming(null)}
                       onSave={(v) =>
-                        m.update.mutate(
+                        update.mutate(
                           {
                             id: c.id,
                             body: {
@@ -148,90 +133,30 @@ export function LoadCasesPanel({
                     />
                   )}
                 </th>
-                {locations.map((l) => {
-                  const s = c.states.find((x) => x.locationId === l.id);
-                  return (
-                    <td key={l.id} className="px-3 py-2">
-                      {s ? (
-                        <div className="space-y-0.5">
-                          <div className="flex flex-wrap gap-x-3">
-                            {SHOWN.filter(([k]) => s.componentsPa[k] !== 0).map(([k, label]) => (
-                              <span key={k}>
-                                <span className="text-[12px] text-graphite-soft">{label} </span>
-                                <Quantity
-                                  value={formatStress(s.componentsPa[k], unit)}
-                                  tone={stressTone(s.componentsPa[k])}
-                                />
-                              </span>
-                            ))}
-                            {SHOWN.every(([k]) => s.componentsPa[k] === 0) && (
-                              <span className="text-graphite-soft">zero state</span>
-                            )}
-                          </div>
-                          <div className="flex flex-wrap items-center gap-2 text-[12px] text-graphite-faint">
-                            <span>
-                              {s.source} · rev. {s.revision}
-                            </span>
-                            <Link
-                              className="text-ink underline-offset-2 hover:underline"
-                              to={benchLinkForState(
-                                { workspaceId, projectId, loadCaseId: c.id, locationId: l.id },
-                                s.components,
-                                s.unit,
-                              )}
-                            >
-                              Open in bench
-                            </Link>
-                            {s.revision > 1 && (
-                              <ToolButton
-                                aria-label={`Revisions of ${c.name} at ${l.name}`}
-                                pressed={history?.caseId === c.id && history.locationId === l.id}
-                                onClick={() =>
-                                  setHistory(
-                                    history?.caseId === c.id && history.locationId === l.id
-                                      ? null
-                                      : { caseId: c.id, locationId: l.id },
-                                  )
-                                }
-                              >
-                                History
-                              </ToolButton>
-                            )}
-                            {canEdit && (
-                              <ToolButton
-                                aria-label={`Edit ${c.name} at ${l.name}`}
-                                onClick={() => (
-                                  m.saveState.reset(),
-                                  setEditing({ caseId: c.id, locationId: l.id })
-                                )}
-                              >
-                                Edit
-                              </ToolButton>
-                            )}
-                          </div>
-                        </div>
-                      ) : canEdit ? (
-                        <ToolButton
-                          aria-label={`Enter ${c.name} at ${l.name}`}
-                          onClick={() => (
-                            m.saveState.reset(),
-                            setEditing({ caseId: c.id, locationId: l.id })
-                          )}
-                        >
-                          Enter state
-                        </ToolButton>
-                      ) : (
-                        <span className="text-graphite-faint">—</span>
-                      )}
-                    </td>
-                  );
-                })}
+                {locations.map((l) => (
+                  <td key={l.id} className="px-3 py-2">
+                    <LoadCaseStateCell
+                      workspaceId={workspaceId}
+                      projectId={projectId}
+                      loadCase={c}
+                      location={l}
+                      unit={unit}
+                      canEdit={canEdit}
+                      historyOpen={history?.caseId === c.id && history.locationId === l.id}
+                      onToggleHistory={() =>
+                        setHistory(
+                          history?.caseId === c.id && history.locationId === l.id
+                            ? null
+                            : { caseId: c.id, locationId: l.id },
+                        )
+                      }
+                      onEdit={() => (saveState.reset(), setEditing({ caseId: c.id, locationId: l.id }))}
+                    />
+                  </td>
+                ))}
                 {canEdit && (
                   <td className="px-3 py-2 text-right">
-                    <ToolButton
-                      aria-label={`Delete load case ${c.name}`}
-                      onClick={() => m.remove.mutate(c.id)}
-                    >
+                    <ToolButton aria-label={`Delete load case ${c.name}`} onClick={() => remove.mutate(c.id)}>
                       Delete
                     </ToolButton>
                   </td>
@@ -259,10 +184,7 @@ export function LoadCasesPanel({
           {conflict && (
             <FormMessage>
               Someone saved this load case meanwhile (now version{" "}
-              {
-                (m.saveState.error as ApiError & { details: { currentVersion: number } }).details
-                  .currentVersion
-              }
+              {(saveState.error as ApiError & { details: { currentVersion: number } }).details.currentVersion}
               ). The table shows their values; save again to put yours over them.
             </FormMessage>
           )}
@@ -271,11 +193,11 @@ export function LoadCasesPanel({
             idPrefix="state"
             initial={editingState}
             defaultUnit={unit}
-            pending={m.saveState.isPending}
-            error={conflict ? null : m.saveState.error}
+            pending={saveState.isPending}
+            error={conflict ? null : saveState.error}
             onCancel={() => setEditing(null)}
             onSave={(stress, source) =>
-              m.saveState.mutate(
+              saveState.mutate(
                 {
                   caseId: editingCase.id,
                   locationId: editing.locationId,
@@ -290,42 +212,11 @@ export function LoadCasesPanel({
         </div>
       )}
       {canEdit && (
-        <form onSubmit={add} noValidate className="flex flex-wrap items-start gap-2 border-t border-rule p-3">
-          <label className="sr-only" htmlFor="new-case">
-            New load case name
-          </label>
-          <input
-            id="new-case"
-            placeholder="e.g. Hydrostatic test"
-            value={name}
-            onChange={(e) => setName(e.target.value)}
-            className="min-w-52 flex-1 rounded-sm border border-rule-strong bg-panel px-2 py-1"
-          />
-          <label className="sr-only" htmlFor="new-case-category">
-            Category
-          </label>
-          <input
-            id="new-case-category"
-            list="case-categories"
-            placeholder="category"
-            value={category}
-            onChange={(e) => setCategory(e.target.value)}
-            className="w-36 rounded-sm border border-rule-strong bg-panel px-2 py-1"
-          />
-          <datalist id="case-categories">
-            {[
-              ...new Set([...LOAD_CASE_CATEGORY_SUGGESTIONS, ...allowableCategories.map((a) => a.trim())]),
-            ].map((s) => (
-              <option key={s} value={s} />
-            ))}
-          </datalist>
-          <button type="submit" className={primaryButton} disabled={m.create.isPending}>
-            Add load case
-          </button>
-          <div className="basis-full">
-            <FormMessage>{fieldErrorsOf(m.create.error).name}</FormMessage>
-          </div>
-        </form>
+        <NewLoadCaseForm
+          workspaceId={workspaceId}
+          projectId={projectId}
+          allowableCategories={allowableCategories}
+        />
       )}
     </Panel>
   );

@@ -4,8 +4,8 @@ import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { ToolButton } from "../../../components/ToolButton";
-import { useLocationMutations } from "../api/locations";
-import { useMaterials } from "../api/materials";
+import { useLocationMutations } from "../../../entities/location/mutations";
+import { useMaterials } from "../../../entities/material/queries";
 import { MaterialPicker, materialName } from "./MaterialPicker";
 import { RenameForm } from "./RenameForm";
 

@@ -10,8 +10,8 @@ import {
 } from "../../../../../core/contract/materials";
 import { ApiError } from "../../../lib/api-client";
 import { applyServerErrors, Field, FormMessage, primaryButton, quietButton } from "../../../lib/forms";
-import { useUpdateMaterial } from "../api/materials";
-import { fromPa } from "../model/units";
+import { useUpdateMaterial } from "../../../entities/material/mutations";
+import { editableStress } from "../../../lib/stress";
 
 /** Fields the form edits, and the ones a 400 may name. */
 const FIELDS = [
@@ -28,7 +28,7 @@ const FIELDS = [
 
 /** A stored material as the form shows it: strengths and E back in the unit they were entered in. */
 function valuesOf(m: Material): UpdateMaterialBody {
-  const inUnit = (pa: number | null) => (pa === null ? null : Number(fromPa(pa, m.unit).toPrecision(12)));
+  const inUnit = (pa: number | null) => (pa === null ? null : editableStress(pa, m.unit));
   return {
     version: m.version,
     name: m.name,

@@ -5,9 +5,10 @@ import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { Quantity } from "../../../components/Quantity";
-import { useCreateMaterial, useDeleteMaterial, useMaterials } from "../api/materials";
+import { useCreateMaterial, useDeleteMaterial } from "../../../entities/material/mutations";
+import { useMaterials } from "../../../entities/material/queries";
 import { ToolButton } from "../../../components/ToolButton";
-import { formatStress } from "../model/units";
+import { formatStress } from "../../../lib/stress";
 import { MaterialEditor } from "./MaterialEditor";
 
 /** The workspace's material library and the built-in published list (read-only, with its standard). */

@@ -4,10 +4,12 @@ import { ApiError, fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
 import { ToolButton } from "../../../components/ToolButton";
-import { useCreateProject, useDeleteProject, useProjects } from "../api/projects";
-import { useImportProject, useRestore, useTrash } from "../api/trash-and-audit";
+import { useCreateProject, useDeleteProject, useImportProject } from "../../../entities/project/mutations";
+import { useProjects } from "../../../entities/project/queries";
+import { useRestore } from "../../../entities/trash/mutations";
+import { useTrash } from "../../../entities/trash/queries";
+import { useWorkspaceRole } from "../../../entities/workspace/queries";
 import { PurgeButton } from "./PurgeButton";
-import { useWorkspaceRole } from "../api/workspace-role";
 import { ActivityPanel } from "./ActivityPanel";
 
 /** `/workspaces/:workspaceId/projects`: the workspace's projects, a new one, an import, the trash. */
@@ -159,7 +161,7 @@ function TrashPanel({ workspaceId, isOwner }: { workspaceId: string; isOwner: bo
             <button
               type="button"
               className={`${quietButton} ml-auto`}
-              onClick={() => restore.mutate({ kind: item.kind, id: item.id })}
+              onClick={() => restore.mutate({ kind: item.kind, id: item.id, projectId: item.project?.id })}
             >
               Restore
             </button>

@@ -1,7 +1,7 @@
 import { useState } from "react";
 import type { TrashKind } from "../../../../../core/contract/projects";
 import { FormMessage, quietButton } from "../../../lib/forms";
-import { usePurge } from "../api/trash-and-audit";
+import { usePurge } from "../../../entities/trash/mutations";
 
 /**
  * Deletes one trashed item for good (owners only). Nothing goes on a single click: the owner

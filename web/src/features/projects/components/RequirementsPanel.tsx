@@ -11,8 +11,8 @@ import {
 import { ApiError, fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { Panel } from "../../../components/Panel";
-import { useMaterials } from "../api/materials";
-import { useUpdateProject } from "../api/projects";
+import { useMaterials } from "../../../entities/material/queries";
+import { useUpdateProject } from "../../../entities/project/mutations";
 import { MaterialPicker, materialName } from "./MaterialPicker";
 
 /** One category's factors as typed (empty: use the default's). */

@@ -7,17 +7,11 @@ import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { looksLikeSeveralNumbers, readNumberText } from "../../../lib/number-text";
 import { useDecimalPreference } from "../../../lib/paste-preferences";
-import type { StressBody } from "../api/load-cases";
+import { COMPONENT_SYMBOLS, STRESS_COMPONENTS } from "../../../lib/stress";
+import type { StressBody } from "../../../entities/load-case/mutations";
 
-const KEYS = ["xx", "yy", "zz", "xy", "yz", "zx"] as const;
-const LABEL: Record<(typeof KEYS)[number], string> = {
-  xx: "σxx",
-  yy: "σyy",
-  zz: "σzz",
-  xy: "τxy",
-  yz: "τyz",
-  zx: "τzx",
-};
+const KEYS = STRESS_COMPONENTS;
+const LABEL = (k: Component) => COMPONENT_SYMBOLS[k].tensor;
 
 /**
  * Six components in a unit, with the source of the numbers: how an editor types a state at
@@ -91,16 +85,16 @@ export function StateForm({
     for (const k of KEYS) {
       const read = readNumberText(values[k]);
       if ("refused" in read) {
-        setLocalError(`${LABEL[k]}: ${read.refused}.`);
+        setLocalError(`${LABEL(k)}: ${read.refused}.`);
         return;
       }
       if (values[k].trim() === "" || !Number.isFinite(read.value)) {
-        setLocalError(`${LABEL[k]} must be a number.`);
+        setLocalError(`${LABEL(k)} must be a number.`);
         return;
       }
       const problem = stressInputProblem(read.value);
       if (problem !== undefined) {
-        setLocalError(`${LABEL[k]} ${problem}.`);
+        setLocalError(`${LABEL(k)} ${problem}.`);
         return;
       }
       parsed[k] = read.value;
@@ -116,10 +110,10 @@ export function StateForm({
           const message = serverErrors[`stress.components.${k}`];
           return (
             <label key={k} className="text-[13px] text-graphite-soft">
-              {LABEL[k]}
+              {LABEL(k)}
               <input
                 id={`${idPrefix}-${k}`}
-                aria-label={`${LABEL[k]} (${unit})`}
+                aria-label={`${LABEL(k)} (${unit})`}
                 inputMode="decimal"
                 value={values[k]}
                 onChange={(e) => setValues({ ...values, [k]: e.target.value })}

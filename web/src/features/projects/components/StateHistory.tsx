@@ -1,9 +1,7 @@
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import { Quantity } from "../../../components/Quantity";
-import { useStateHistory } from "../api/state-history";
-import { formatStress } from "../model/units";
-
-const KEYS = ["xx", "yy", "zz", "xy", "yz", "zx"] as const;
+import { useStateHistory } from "../../../entities/load-case/queries";
+import { COMPONENT_SYMBOLS, formatStress, STRESS_COMPONENTS as KEYS } from "../../../lib/stress";
 
 /** The revisions of one saved state, newest first: what a checker reads to see what changed and who changed it. */
 export function StateHistory(props: {
@@ -28,7 +26,7 @@ export function StateHistory(props: {
             <th className="pr-3">source</th>
             {KEYS.map((k) => (
               <th key={k} className="pr-3 text-right">
-                {k[0] === k[1] ? `σ${k}` : `τ${k}`}
+                {COMPONENT_SYMBOLS[k].tensor}
               </th>
             ))}
             <th className="pr-3">note</th>

@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
 import { invitationSchema, type CreateInvitationBody } from "../../../../../core/contract/invitations";
 import { apiSend } from "../../../lib/api-client";
+import { workspaceKeys } from "../../../entities/workspace/keys";
 
 const responseSchema = z.object({ invitation: invitationSchema });
 
@@ -12,6 +13,6 @@ export function useCreateInvitation(workspaceId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: createInvitation,
-    onSuccess: () => queryClient.invalidateQueries({ queryKey: ["workspaces", workspaceId, "invitations"] }),
+    onSuccess: () => queryClient.invalidateQueries({ queryKey: workspaceKeys.invitations(workspaceId) }),
   });
 }

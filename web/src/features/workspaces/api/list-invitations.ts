@@ -1,13 +1,14 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { invitationListSchema } from "../../../../../core/contract/invitations";
 import { apiGet } from "../../../lib/api-client";
+import { workspaceKeys } from "../../../entities/workspace/keys";
 
 export const listInvitations = (workspaceId: string) =>
   apiGet(`/workspaces/${workspaceId}/invitations`, invitationListSchema).then((r) => r.invitations);
 
 export const invitationsQueryOptions = (workspaceId: string) =>
   queryOptions({
-    queryKey: ["workspaces", workspaceId, "invitations"],
+    queryKey: workspaceKeys.invitations(workspaceId),
     queryFn: () => listInvitations(workspaceId),
   });
 

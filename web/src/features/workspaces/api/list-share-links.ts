@@ -1,13 +1,14 @@
 import { queryOptions, useQuery } from "@tanstack/react-query";
 import { shareLinkListSchema } from "../../../../../core/contract/share-links";
 import { apiGet } from "../../../lib/api-client";
+import { workspaceKeys } from "../../../entities/workspace/keys";
 
 export const listShareLinks = (workspaceId: string) =>
   apiGet(`/workspaces/${workspaceId}/share-links`, shareLinkListSchema).then((r) => r.shareLinks);
 
 export const shareLinksQueryOptions = (workspaceId: string) =>
   queryOptions({
-    queryKey: ["workspaces", workspaceId, "share-links"],
+    queryKey: workspaceKeys.shareLinks(workspaceId),
     queryFn: () => listShareLinks(workspaceId),
   });
 

@@ -2,6 +2,7 @@ import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { z } from "zod";
 import { invitationSchema } from "../../../../../core/contract/invitations";
 import { apiSend } from "../../../lib/api-client";
+import { workspaceKeys } from "../../../entities/workspace/keys";
 
 const responseSchema = z.object({ invitation: invitationSchema });
 
@@ -17,6 +18,6 @@ export function useResendInvitation(workspaceId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: resendInvitation,
-    onSettled: () => queryClient.invalidateQueries({ queryKey: ["workspaces", workspaceId, "invitations"] }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: workspaceKeys.invitations(workspaceId) }),
   });
 }

@@ -1,5 +1,6 @@
 import { useMutation, useQueryClient } from "@tanstack/react-query";
 import { apiSend } from "../../../lib/api-client";
+import { workspaceKeys } from "../../../entities/workspace/keys";
 
 export const revokeInvitation = (v: { workspaceId: string; invitationId: string }) =>
   apiSend("DELETE", `/workspaces/${v.workspaceId}/invitations/${v.invitationId}`, undefined, null);
@@ -8,6 +9,6 @@ export function useRevokeInvitation(workspaceId: string) {
   const queryClient = useQueryClient();
   return useMutation({
     mutationFn: revokeInvitation,
-    onSettled: () => queryClient.invalidateQueries({ queryKey: ["workspaces", workspaceId, "invitations"] }),
+    onSettled: () => queryClient.invalidateQueries({ queryKey: workspaceKeys.invitations(workspaceId) }),
   });
 }

@@ -7,10 +7,8 @@ import {
   type Workspace,
 } from "../../../../../core/contract/workspaces";
 import { FormMessage, quietButton } from "../../../lib/forms";
-import { useLeaveWorkspace } from "../api/leave-workspace";
-import { useMembers } from "../api/list-members";
-import { useRemoveMember } from "../api/remove-member";
-import { useUpdateMember } from "../api/update-member";
+import { useLeaveWorkspace, useRemoveMember, useUpdateMember } from "../../../entities/workspace/mutations";
+import { useMembers } from "../../../entities/workspace/queries";
 import { formatActivity, formatDate } from "./format";
 import { RoleBadge } from "./RoleBadge";
 

@@ -8,8 +8,7 @@ import {
   type Workspace,
 } from "../../../../../core/contract/workspaces";
 import { applyServerErrors, Field, FormMessage, primaryButton } from "../../../lib/forms";
-import { useDeleteWorkspace } from "../api/delete-workspace";
-import { useRenameWorkspace } from "../api/rename-workspace";
+import { useDeleteWorkspace, useRenameWorkspace } from "../../../entities/workspace/mutations";
 
 /** `/workspaces/:id/settings` (owners): rename the workspace, or delete it after typing its name. */
 export function SettingsSection() {

@@ -2,7 +2,7 @@ import { NavLink, Outlet, useParams } from "react-router-dom";
 import { roleAtLeast } from "../../../../../core/contract/workspaces";
 import { ApiError } from "../../../lib/api-client";
 import { FormMessage } from "../../../lib/forms";
-import { useWorkspace } from "../api/get-workspace";
+import { useWorkspace } from "../../../entities/workspace/queries";
 import { CopyLinkButton } from "../../../components/CopyLinkButton";
 import { RoleBadge } from "./RoleBadge";
 

@@ -3,8 +3,8 @@ import { useForm } from "react-hook-form";
 import { Link, useNavigate } from "react-router-dom";
 import { createWorkspaceBodySchema, type CreateWorkspaceBody } from "../../../../../core/contract/workspaces";
 import { applyServerErrors, Field, FormMessage, primaryButton } from "../../../lib/forms";
-import { useCreateWorkspace } from "../api/create-workspace";
-import { useWorkspaces } from "../api/list-workspaces";
+import { useCreateWorkspace } from "../../../entities/workspace/mutations";
+import { useWorkspaces } from "../../../entities/workspace/queries";
 import { RoleBadge } from "./RoleBadge";
 
 /** `/workspaces`: the caller's workspaces and their role in each. */

@@ -1,0 +1,89 @@
+import { Link } from "react-router-dom";
+import type { LoadCase } from "../../../../../core/contract/load-cases";
+import type { StressUnitName } from "../../../../../core/contract/materials";
+import type { Location } from "../../../../../core/contract/projects";
+import { Quantity, stressTone } from "../../../components/Quantity";
+import { ToolButton } from "../../../components/ToolButton";
+import { benchLinkForState } from "../../../lib/bench-link";
+import { COMPONENT_SYMBOLS, formatStress, STRESS_COMPONENTS } from "../../../lib/stress";
+
+/**
+ * One cell of the load-case table: the saved state of `loadCase` at `location` (its non-zero
+ * components, source and revision, with links to the bench and its history), or for editors a
+ * button to enter one.
+ */
+export function LoadCaseStateCell({
+  workspaceId,
+  projectId,
+  loadCase: c,
+  location: l,
+  unit,
+  canEdit,
+  historyOpen,
+  onToggleHistory,
+  onEdit,
+}: {
+  workspaceId: string;
+  projectId: string;
+  loadCase: LoadCase;
+  location: Location;
+  unit: StressUnitName;
+  canEdit: boolean;
+  historyOpen: boolean;
+  onToggleHistory: () => void;
+  onEdit: () => void;
+}) {
+  const s = c.states.find((x) => x.locationId === l.id);
+  if (!s) {
+    return canEdit ? (
+      <ToolButton aria-label={`Enter ${c.name} at ${l.name}`} onClick={onEdit}>
+        Enter state
+      </ToolButton>
+    ) : (
+      <span className="text-graphite-faint">—</span>
+    );
+  }
+  const shown = STRESS_COMPONENTS.filter((k) => s.componentsPa[k] !== 0);
+  return (
+    <div className="space-y-0.5">
+      <div className="flex flex-wrap gap-x-3">
+        {shown.map((k) => (
+          <span key={k}>
+            <span className="text-[12px] text-graphite-soft">{COMPONENT_SYMBOLS[k].tensor} </span>
+            <Quantity value={formatStress(s.componentsPa[k], unit)} tone={stressTone(s.componentsPa[k])} />
+          </span>
+        ))}
+        {shown.length === 0 && <span className="text-graphite-soft">zero state</span>}
+      </div>
+      <div className="flex flex-wrap items-center gap-2 text-[12px] text-graphite-faint">
+        <span>
+          {s.source} · rev. {s.revision}
+        </span>
+        <Link
+          className="text-ink underline-offset-2 hover:underline"
+          to={benchLinkForState(
+            { workspaceId, projectId, loadCaseId: c.id, locationId: l.id },
+            s.components,
+            s.unit,
+          )}
+        >
+          Open in bench
+        </Link>
+        {s.revision > 1 && (
+          <ToolButton
+            aria-label={`Revisions of ${c.name} at ${l.name}`}
+            pressed={historyOpen}
+            onClick={onToggleHistory}
+          >
+            History
+          </ToolButton>
+        )}
+        {canEdit && (
+          <ToolButton aria-label={`Edit ${c.name} at ${l.name}`} onClick={onEdit}>
+            Edit
+          </ToolButton>
+        )}
+      </div>
+    </div>
+  );
+}

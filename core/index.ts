@@ -162,3 +162,7 @@ export { solidShaftStress } from "./calculators/shaft";
 
 export type { EnvelopeProbe, EnvelopeProbeHit } from "./criteria/envelope-probe";
 export { probeEnvelopes } from "./criteria/envelope-probe";
+
+// Finite-element point tables: a chunked delimited-text parser into Float64Arrays and a chunked
+// evaluator over the batch kernels (see core/point-tables/).
+export * from "./point-tables/index";

@@ -8,7 +8,7 @@ export type {
   PointTableOptions,
   PointTableSeparator,
 } from "./types";
-export { PointTableParser, parsePointTable } from "./parse-point-table";
+export { PointTableParser, estimateRows, parsePointTable } from "./parse-point-table";
 export { splitLine } from "./split-line";
 export { lineCuts, mergePointTables } from "./merge-point-tables";
 export type { ColumnGuess, LayoutGuess } from "./guess-layout";

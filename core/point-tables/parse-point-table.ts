@@ -15,6 +15,8 @@ const ROLE_KEYS = [...COMPONENTS, "x", "y", "z", "id"] as const;
 const BOM = 0xfeff;
 const CR = 13;
 const POINT = 46;
+/** The most rows allocated before any is read (2M rows: 160 MB with coordinates and ids). */
+const MAX_PREALLOCATED_ROWS = 2_000_000;
 const LF = "\n";
 
 /**
@@ -95,7 +97,11 @@ export class PointTableParser {
     this.hasCoords = [6, 7, 8].some((r) => this.roleOf.includes(r));
     this.hasIds = this.roleOf.includes(ROLE_ID);
     const expected = options.expectedRows ?? 0;
-    this.capacity = Math.max(1024, Number.isFinite(expected) ? Math.ceil(expected) : 0);
+    // allocated up front up to MAX_PREALLOCATED_ROWS; a larger table grows past it as it is read
+    this.capacity = Math.max(
+      1024,
+      Math.min(MAX_PREALLOCATED_ROWS, Number.isFinite(expected) ? Math.ceil(expected) : 0),
+    );
     this.components = new Float64Array(6 * this.capacity);
     this.coordinates = this.hasCoords ? new Float64Array(3 * this.capacity) : null;
     this.numericIds = this.hasIds && !this.textIds ? new Float64Array(this.capacity) : null;
@@ -291,9 +297,26 @@ function rolesOf(columns: PointTableOptions["columns"]): Int8Array {
   return roleOf;
 }
 
+/**
+ * About how many lines a text holds, from the line breaks in its first 64 kB (a few percent over,
+ * so the parser's arrays are allocated once instead of grown and copied about twenty times).
+ * @param text a whole table, or a file's first chunk with the file's length as `totalLength`
+ */
+export function estimateRows(text: string, totalLength = text.length): number {
+  const sample = Math.min(text.length, 65_536);
+  let breaks = 0;
+  for (let i = text.indexOf(LF); i >= 0 && i < sample; i = text.indexOf(LF, i + 1)) breaks++;
+  const estimate = Math.ceil(((breaks + 1) / Math.max(1, sample)) * totalLength * 1.05);
+  // a row holds at least six one-digit fields and their separators: 12 characters
+  return Math.min(estimate, Math.ceil(totalLength / 12) + 1);
+}
+
 /** Parses a whole text at once (see {@link PointTableParser}). */
 export function parsePointTable(text: string, options: PointTableOptions): PointTable {
-  const parser = new PointTableParser(options);
+  const parser = new PointTableParser({
+    ...options,
+    expectedRows: options.expectedRows ?? estimateRows(text),
+  });
   parser.push(text);
   return parser.finish();
 }

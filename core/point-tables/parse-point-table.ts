@@ -2,7 +2,7 @@ import { FIRST_BAD_ROWS_LIMIT } from "../batch/principal-batch";
 import { COMPONENTS } from "../tensor/types";
 import { MAX_INPUT_STRESS } from "../tensor/validate";
 import { pascalsPer } from "../units/stress";
-import { readNumber } from "./read-number";
+import { numberScan, readNumber, readNumberAt } from "./read-number";
 import { fieldEnd, fieldText, isQuoted, separatorCode, skipBlanks, splitLine } from "./split-line";
 import type { BadRow, PointTable, PointTableOptions, PointTableSeparator } from "./types";
 
@@ -178,26 +178,33 @@ export class PointTableParser {
     let col = 0;
     for (; col <= last; col++) {
       if (sep < 0 ? p >= end : p > end) break;
-      const fe = fieldEnd(text, p, end, sep);
       const role = roleOf[col];
-      if (role >= 0) {
-        if (role < ROLE_ID || !this.textIds) {
-          // numeric ids are integers or plain numbers: always read with the decimal point
-          const mark = role === ROLE_ID ? POINT : this.decimal;
-          let v = readNumber(text, p, fe, mark);
+      let fe: number;
+      if (role >= 0 && (role < ROLE_ID || !this.textIds)) {
+        // numeric ids are integers or plain numbers: always read with the decimal point
+        const mark = role === ROLE_ID ? POINT : this.decimal;
+        let v = readNumberAt(text, p, end, mark);
+        fe = numberScan.end;
+        const stop = fe < end ? text.charCodeAt(fe) : -2;
+        if (v !== v || !(stop === -2 || stop === sep || (sep < 0 && (stop === 32 || stop === 9)))) {
+          // not the common form: find the field's end, then read it with every rule
+          fe = fieldEnd(text, p, end, sep);
+          v = readNumber(text, p, fe, mark);
           if (v !== v && isQuoted(text, p, fe)) {
             const inner = fieldText(text, p, fe);
             if (inner !== null) v = readNumber(inner, 0, inner.length, mark);
           }
-          if (role < ROLE_X) {
-            if (!(v <= MAX_INPUT_STRESS && v >= -MAX_INPUT_STRESS))
-              return this.bad(line, col, text, p, fe, v);
-            comps[6 * n + role] = v * scale;
-          } else if (!(v - v === 0)) {
-            return this.bad(line, col, text, p, fe, v);
-          } else if (role === ROLE_ID) this.numericIds![n] = v;
-          else this.coordinates![3 * n + role - ROLE_X] = v;
-        } else {
+        }
+        if (role < ROLE_X) {
+          if (!(v <= MAX_INPUT_STRESS && v >= -MAX_INPUT_STRESS)) return this.bad(line, col, text, p, fe, v);
+          comps[6 * n + role] = v * scale;
+        } else if (!(v - v === 0)) {
+          return this.bad(line, col, text, p, fe, v);
+        } else if (role === ROLE_ID) this.numericIds![n] = v;
+        else this.coordinates![3 * n + role - ROLE_X] = v;
+      } else {
+        fe = fieldEnd(text, p, end, sep);
+        if (role === ROLE_ID) {
           const id = fieldText(text, p, fe);
           if (id === null || id === "") return this.bad(line, col, text, p, fe, Number.NaN);
           this.stringIds[n] = id;

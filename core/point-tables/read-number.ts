@@ -100,3 +100,74 @@ function slowNumber(text: string, start: number, end: number, decimal: number): 
   } else if (decimal !== POINT) return Number.NaN;
   return DECIMAL_FORM.test(s) ? Number(s) : Number.NaN;
 }
+
+/** Where {@link readNumberAt} stopped (an out-parameter, so the hot path allocates nothing). */
+export const numberScan = { end: 0 };
+
+/**
+ * The common case of {@link readNumber} in one pass with finding the field's end: reads a plain
+ * number (sign, up to 15 digits with one decimal mark, an optional exponent) starting exactly at
+ * `start`, and leaves in `numberScan.end` the index where it stopped. The caller accepts the value
+ * only when it stopped at the field's separator or the line's end; for anything else (NaN, or a
+ * stop elsewhere) it finds the field's end and calls {@link readNumber}, which also takes the rare
+ * forms. Scanning each field once instead of twice was about a third of the parse.
+ */
+export function readNumberAt(text: string, start: number, end: number, decimal: number): number {
+  let i = start;
+  let negative = false;
+  let c = text.charCodeAt(i);
+  if (c === MINUS) {
+    negative = true;
+    i++;
+  } else if (c === PLUS) i++;
+  let m = 0;
+  let digits = 0;
+  let frac = 0;
+  while (i < end) {
+    const d = text.charCodeAt(i) - 48;
+    if (d < 0 || d > 9) break;
+    m = m * 10 + d;
+    digits++;
+    i++;
+  }
+  if (i < end && text.charCodeAt(i) === decimal) {
+    i++;
+    while (i < end) {
+      const d = text.charCodeAt(i) - 48;
+      if (d < 0 || d > 9) break;
+      m = m * 10 + d;
+      digits++;
+      frac++;
+      i++;
+    }
+  }
+  let exp = 0;
+  if (i < end && ((c = text.charCodeAt(i)) === 101 || c === 69)) {
+    i++;
+    let expNegative = false;
+    c = text.charCodeAt(i);
+    if (c === MINUS) {
+      expNegative = true;
+      i++;
+    } else if (c === PLUS) i++;
+    let expDigits = 0;
+    while (i < end) {
+      const d = text.charCodeAt(i) - 48;
+      if (d < 0 || d > 9) break;
+      exp = exp * 10 + d;
+      expDigits++;
+      i++;
+    }
+    if (expDigits === 0 || expDigits > 4) return Number.NaN;
+    if (expNegative) exp = -exp;
+  }
+  numberScan.end = i;
+  if (digits === 0 || digits > 15) return Number.NaN;
+  const e10 = exp - frac;
+  let v: number;
+  if (e10 === 0) v = m;
+  else if (e10 < 0 && e10 >= -22) v = m / POW10[-e10];
+  else if (e10 > 0 && e10 <= 22) v = m * POW10[e10];
+  else return Number.NaN;
+  return negative ? -v : v;
+}

@@ -65,7 +65,12 @@ export type BadRow = { line: number; reason: string };
 /** The bad rows of a table: the first few in full, and how many there were in all. */
 export type BadRows = { count: number; first: BadRow[] };
 
-/** What a parsed point table holds; every array has exactly one entry (or stride) per point. */
+/**
+ * What a parsed point table holds; every array has exactly one entry (or stride) per point. The
+ * Float64Arrays start at offset 0 of their buffers but a buffer may be up to a quarter longer than
+ * its array (spare room the parser did not copy away); transferring one to another thread moves
+ * the whole buffer.
+ */
 export type PointTable = {
   /** points read (bad rows excluded) */
   count: number;

@@ -185,7 +185,13 @@ export class PointTableEvaluator {
       const factors = c.factor!;
       const us = c.utilisation!;
       const required = c.requiredFactor;
-      let gov = c.governing;
+      const criterion = c.criterion;
+      const material = this.material;
+      // the governing point is kept as two numbers in the loop and made an object once a chunk
+      let govIndex = c.governing === null ? -1 : c.governing.index;
+      let govU = c.governing === null ? Number.NEGATIVE_INFINITY : c.governing.utilisation;
+      let failing = 0;
+      let close = 0;
       for (let k = from; k < to; k++) {
         const s1 = principal[3 * k];
         if (s1 !== s1) {
@@ -193,18 +199,23 @@ export class PointTableEvaluator {
           us[k] = Number.NaN;
           continue;
         }
-        const n = factorFromPrincipals(c.criterion, this.material, s1, principal[3 * k + 2], vonMises[k]);
+        const n = factorFromPrincipals(criterion, material, s1, principal[3 * k + 2], vonMises[k]);
         const u = utilisation(n, required);
         factors[k] = n;
         us[k] = u;
-        if (gov === null || u > gov.utilisation) gov = { index: k, factor: n, utilisation: u };
+        if (govIndex < 0 || u > govU) {
+          govIndex = k;
+          govU = u;
+        }
         const verdict = verdictForUtilisation(u);
-        if (verdict === "fail") c.failing++;
-        else if (verdict === "close") c.close++;
+        if (verdict === "fail") failing++;
+        else if (verdict === "close") close++;
         // NaN (no criterion yet) loses every comparison, so the first rated one replaces it
         if (!(u <= worstU[k])) worstU[k] = u;
       }
-      c.governing = gov;
+      c.failing += failing;
+      c.close += close;
+      if (govIndex >= 0) c.governing = { index: govIndex, factor: factors[govIndex], utilisation: govU };
     }
     const bins = r.histogram.counts;
     const last = bins.length - 1;

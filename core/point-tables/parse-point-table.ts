@@ -175,14 +175,16 @@ export class PointTableParser {
     const last = roleOf.length - 1;
     const comps = this.components;
     const scale = this.scale;
+    const decimal = this.decimal;
+    const textIds = this.textIds;
     let col = 0;
     for (; col <= last; col++) {
       if (sep < 0 ? p >= end : p > end) break;
       const role = roleOf[col];
       let fe: number;
-      if (role >= 0 && (role < ROLE_ID || !this.textIds)) {
+      if (role >= 0 && (role < ROLE_ID || !textIds)) {
         // numeric ids are integers or plain numbers: always read with the decimal point
-        const mark = role === ROLE_ID ? POINT : this.decimal;
+        const mark = role === ROLE_ID ? POINT : decimal;
         let v = readNumberAt(text, p, end, mark);
         fe = numberScan.end;
         const stop = fe < end ? text.charCodeAt(fe) : -2;

@@ -2,7 +2,8 @@ import { FIRST_BAD_ROWS_LIMIT, principalBatch } from "../batch/principal-batch";
 import { evaluateState, type EvaluationOptions } from "../checks/evaluate";
 import type { CheckRequirement } from "../checks/requirements";
 import { utilisation, verdictForUtilisation } from "../checks/verdict";
-import { factorFromPrincipals, type Criterion, type Material } from "../criteria/safety-factor";
+import type { Criterion, Material } from "../criteria/safety-factor";
+import { factorBatch } from "./factor-batch";
 
 /** The material and the checks every point of a table is rated against (the load case's allowables). */
 export type PointTableSpec = { material: Material; requirements: readonly CheckRequirement[] };
@@ -87,8 +88,8 @@ export type PointTableEvaluation = {
 /**
  * Rates a point table a chunk at a time, so a worker can report progress and stop between chunks:
  * call {@link step} until it returns false (or use {@link evaluatePointTable}). Principal
- * stresses, von Mises and Tresca come from `principalBatch`, each factor from the same
- * `factorFromPrincipals` and `utilisation` the object API uses, and whether a criterion is rated at
+ * stresses, von Mises and Tresca come from `principalBatch`, each factor from `factorBatch` (the
+ * batch form of the object API's `factorFromPrincipals`, same doubles) and `utilisation`, and whether a criterion is rated at
  * all from `evaluateState` itself, so a point's figures equal what `evaluateState` gives its tensor.
  */
 export class PointTableEvaluator {
@@ -192,16 +193,14 @@ export class PointTableEvaluator {
       let govU = c.governing === null ? Number.NEGATIVE_INFINITY : c.governing.utilisation;
       let failing = 0;
       let close = 0;
+      factorBatch(criterion, material, principal, vonMises, from, to, factors);
       for (let k = from; k < to; k++) {
-        const s1 = principal[3 * k];
-        if (s1 !== s1) {
+        if (principal[3 * k] !== principal[3 * k]) {
           factors[k] = Number.NaN;
           us[k] = Number.NaN;
           continue;
         }
-        const n = factorFromPrincipals(criterion, material, s1, principal[3 * k + 2], vonMises[k]);
-        const u = utilisation(n, required);
-        factors[k] = n;
+        const u = utilisation(factors[k], required);
         us[k] = u;
         if (govIndex < 0 || u > govU) {
           govIndex = k;

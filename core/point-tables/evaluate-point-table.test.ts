@@ -4,7 +4,7 @@ import { evaluateState } from "../checks/evaluate";
 import type { CheckRequirement } from "../checks/requirements";
 import { verdictForUtilisation } from "../checks/verdict";
 import type { Material } from "../criteria/safety-factor";
-import { principalStresses } from "../eigen/principal";
+import { principalStresses } from "../tensor/principal";
 import { seededRandom } from "../testing/fixtures";
 import type { StressTensor } from "../tensor/types";
 import { evaluatePointTable, PointTableEvaluator } from "./evaluate-point-table";

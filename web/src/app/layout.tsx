@@ -9,6 +9,7 @@ import { useSession } from "../lib/session";
 const navigation = [
   { to: "/", label: "Overview", end: true },
   { to: "/bench", label: "Bench", end: false },
+  { to: "/calculators", label: "Calculators", end: false },
 ];
 
 /** Header with the mark and navigation, the page, and a footer with the caution and server state. */

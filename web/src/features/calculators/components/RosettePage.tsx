@@ -155,7 +155,7 @@ export function RosettePage() {
           </>
         )
       }
-      actions={r && <SendToBench tensor={r.stress.tensor} unit={unit} />}
+      actions={r && <SendToBench tensor={r.stress.tensor} units={units} />}
       formula={
         <Formula
           lines={[

@@ -1,27 +1,27 @@
 import { useState } from "react";
 import { Link } from "react-router-dom";
 import type { StressTensor } from "../../../../../core";
-import type { StressUnitName } from "../../../../../core/contract/materials";
-import { benchLinkForValues } from "../../../lib/bench-link";
+import { calculatorBenchLink } from "../model/bench-link";
+import type { UnitSet } from "../model/units";
 
 /**
- * "Send to bench" for a calculated state (the tensor in the calculator's frame, in its unit), and a
+ * "Send to bench" for a calculated state (the tensor in the calculator's frame, in its unit set's stress unit), and a
  * button that copies this page's address with every input in it.
  */
 export function SendToBench({
   tensor,
-  unit,
+  units,
   label = "Send to bench",
   testId = "send-to-bench",
 }: {
   tensor: StressTensor;
-  unit: StressUnitName;
+  units: UnitSet;
   label?: string;
   testId?: string;
 }) {
   return (
     <Link
-      to={benchLinkForValues(tensor, unit)}
+      to={calculatorBenchLink(tensor, units)}
       data-testid={testId}
       className="inline-block rounded border border-ink bg-ink px-3 py-1.5 text-sm font-semibold text-white no-underline hover:bg-ink-hover"
     >

@@ -139,7 +139,7 @@ export function ShaftPage() {
             </h3>
             <PointState p={r.point} unit={unit} prefix="" />
             <div className="flex flex-wrap gap-3">
-              <SendToBench tensor={r.point.tensor} unit={unit} label="Send this point to bench" />
+              <SendToBench tensor={r.point.tensor} units={units} label="Send this point to bench" />
             </div>
             <h3 className="text-[14px] font-semibold" data-testid="critical-point">
               Critical point (largest von Mises): {r.critical.surface === "outer" ? "outer surface" : "bore"},
@@ -160,7 +160,7 @@ export function ShaftPage() {
         r && (
           <SendToBench
             tensor={r.critical.tensor}
-            unit={unit}
+            units={units}
             label="Send the critical point to bench"
             testId="send-critical-to-bench"
           />

@@ -113,7 +113,7 @@ export function ThickCylinderPage() {
           </>
         )
       }
-      actions={r && <SendToBench tensor={r.tensor} unit={unit} />}
+      actions={r && <SendToBench tensor={r.tensor} units={units} />}
       formula={
         <Formula
           lines={[

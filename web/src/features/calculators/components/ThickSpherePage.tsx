@@ -79,7 +79,7 @@ export function ThickSpherePage() {
           </>
         )
       }
-      actions={r && <SendToBench tensor={r.tensor} unit={unit} />}
+      actions={r && <SendToBench tensor={r.tensor} units={units} />}
       formula={
         <Formula
           lines={[

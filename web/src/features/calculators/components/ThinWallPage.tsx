@@ -135,7 +135,7 @@ export function ThinWallPage() {
           </>
         )
       }
-      actions={r && <SendToBench tensor={r.tensor} unit={unit} />}
+      actions={r && <SendToBench tensor={r.tensor} units={units} />}
       formula={
         <Formula
           lines={

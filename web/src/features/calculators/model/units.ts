@@ -105,12 +105,13 @@ export function fromWorking(value: number, dimension: Dimension, set: UnitSet): 
 }
 
 /**
- * An entered value carried to another unit set: the same physical quantity, to 12 significant
- * figures so a conversion there and back gives the typed number again.
+ * An entered value carried to another unit set: the same physical quantity, to 15 significant
+ * figures (what the address keeps). There and back it returns the typed number to about 1e-14
+ * relative, which the fields (10 significant figures) show as the number typed.
  */
 export function convertInput(value: number, dimension: Dimension, from: UnitSet, to: UnitSet): number {
   if (from === to) return value;
-  return Number(fromWorking(toWorking(value, dimension, from), dimension, to).toPrecision(12));
+  return Number(fromWorking(toWorking(value, dimension, from), dimension, to).toPrecision(15));
 }
 
 /** The stress unit results are written in under a unit set. */

@@ -38,7 +38,13 @@ export function CalculatorPage({
         <p className="mt-1 max-w-3xl text-graphite-soft">{intro}</p>
       </div>
       <div className="grid gap-4 lg:grid-cols-[minmax(0,24rem)_minmax(0,1fr)]">
-        <Panel id="calc-inputs" index="1" title="Inputs" bodyClassName="space-y-3 px-3 py-3">
+        <Panel
+          id="calc-inputs"
+          index="1"
+          title="Inputs"
+          className="self-start"
+          bodyClassName="space-y-3 px-3 py-3"
+        >
           {inputs}
         </Panel>
         <div className="min-w-0 space-y-4">

@@ -14,6 +14,7 @@ import { StateTable } from "./StateTable";
 import { UnitSetPicker } from "./UnitSetPicker";
 
 function PointState({ p, unit, prefix }: { p: ShaftPointStress; unit: string; prefix: string }) {
+  const q = (v: number) => <Quantity value={sheetValue(v)} unit={unit} />;
   return (
     <StateTable
       caption={`Stress state at the ${p.surface} surface, θ = ${p.angle}°`}
@@ -22,13 +23,21 @@ function PointState({ p, unit, prefix }: { p: ShaftPointStress; unit: string; pr
         {
           id: `${prefix}xx`,
           symbol: <Sym base="σ" sub="x" />,
-          meaning: `along the shaft: bending ${sheetValue(p.bending)} + axial ${sheetValue(p.axial)}`,
+          meaning: (
+            <>
+              along the shaft: bending {q(p.bending)} + axial {q(p.axial)}
+            </>
+          ),
           value: p.sigma,
         },
         {
           id: `${prefix}xy`,
           symbol: <Sym base="τ" sub="xy" />,
-          meaning: `x–tangential: torsion ${sheetValue(p.torsion)} + transverse shear ${sheetValue(p.transverseShear)}`,
+          meaning: (
+            <>
+              x–tangential: torsion {q(p.torsion)} + transverse shear {q(p.transverseShear)}
+            </>
+          ),
           value: p.tau,
         },
         {

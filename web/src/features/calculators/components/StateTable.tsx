@@ -3,7 +3,7 @@ import { Quantity, stressTone } from "../../../components/Quantity";
 import { sheetValue } from "../../../lib/number-format";
 
 /** One stress of a result: its symbol, what it is and along which axis, and its value. */
-export type StateRow = { id: string; symbol: ReactNode; meaning: string; value: number };
+export type StateRow = { id: string; symbol: ReactNode; meaning: ReactNode; value: number };
 
 /**
  * The stresses a calculator produces, each with its symbol, the element's axis it acts on in words

@@ -1,5 +1,6 @@
 import { mkdir } from "node:fs/promises";
 import path from "node:path";
+import { AxeBuilder } from "@axe-core/playwright";
 import type { Browser, BrowserContext, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { RunningServer } from "../../api/server";
@@ -259,7 +260,20 @@ describe("the calculators in Chromium", () => {
     expect(errors).toEqual([]);
   });
 
-  it("when each calculator is shown at 390 px and 1280 px, then no page scrolls sideways and each carries the caution once", async () => {
+  it("when an input makes the formula impossible (outer radius below the bore), then the results give way to a refusal naming the field and nothing can be sent to the bench", async () => {
+    await page.goto(`${server.url}/calculators/thick-sphere?ri=50&ro=40&pi=10&po=0&r=50`, {
+      waitUntil: "networkidle",
+    });
+    const refusal = page.getByTestId("calc-error");
+    await refusal.waitFor();
+    expect(await refusal.innerText()).toMatch(/Outer radius rₒ must be larger than the inner radius/);
+    expect(await page.getByTestId("send-to-bench").count()).toBe(0);
+    await type(page, "Outer radius rₒ", "80");
+    await page.getByTestId("send-to-bench").waitFor();
+    expect(await refusal.count()).toBe(0);
+  });
+
+  it("when each calculator is shown at 390 px and 1280 px, then no page scrolls sideways, each carries the caution once and axe finds no serious or critical problem", async () => {
     for (const width of [390, 1280]) {
       await page.setViewportSize({ width, height: 900 });
       for (const slug of ["thin-wall", "thick-cylinder", "thick-sphere", "shaft", "rosette"]) {
@@ -272,6 +286,13 @@ describe("the calculators in Chromium", () => {
         const overflow = await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth);
         expect(overflow, `${slug} at ${width} px`).toBeLessThanOrEqual(0);
         expect(await page.getByTestId("results-caution").count()).toBe(1);
+        if (width === 1280) {
+          const results = await new AxeBuilder({ page }).analyze();
+          const serious = results.violations
+            .filter((v) => v.impact === "serious" || v.impact === "critical")
+            .map((v) => `${slug}: ${v.id}: ${v.help} (${v.nodes.length}) ${v.nodes[0]?.target}`);
+          expect(serious).toEqual([]);
+        }
       }
     }
     expect(errors).toEqual([]);

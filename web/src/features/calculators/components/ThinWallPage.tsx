@@ -93,7 +93,7 @@ export function ThinWallPage() {
           <>
             <p className="text-[13px] text-graphite-soft">
               Element axes: x {sphere ? "tangential" : "axial (along the vessel)"}, y{" "}
-              {sphere ? "tangential" : "hoop (circumferential)"}, z radial (outward). Inside radius used:{" "}
+              {sphere ? "tangential" : "hoop (circumferential)"}, z radial. Inside radius used:{" "}
               <span className="num">{Number(r.insideRadius.toPrecision(6))}</span>{" "}
               <span className="unit">{unitFor("length", units)}</span>.
             </p>

@@ -9,6 +9,7 @@ import { useSession } from "../lib/session";
 const navigation = [
   { to: "/", label: "Overview", end: true },
   { to: "/bench", label: "Bench", end: false },
+  { to: "/calculators", label: "Calculators", end: false },
 ];
 
 /** Header with the mark and navigation, the page, and a footer with the caution and server state. */
@@ -28,7 +29,7 @@ export function Layout() {
         Skip to content
       </a>
       <header className="border-b border-rule bg-panel">
-        <div className="mx-auto flex max-w-6xl items-center gap-8 px-6 py-3">
+        <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-8 gap-y-2 px-6 py-3">
           <NavLink
             to="/"
             className="flex items-center gap-2.5 text-graphite no-underline"
@@ -39,7 +40,7 @@ export function Layout() {
               Sigma<span className="text-ink">cube</span>
             </span>
           </NavLink>
-          <nav aria-label="Main" className="flex gap-1">
+          <nav aria-label="Main" className="flex flex-wrap gap-1">
             {links.map((item) => (
               <NavLink
                 key={item.to}
@@ -53,7 +54,7 @@ export function Layout() {
               </NavLink>
             ))}
           </nav>
-          <div className="ml-auto flex items-center gap-5">
+          <div className="ml-auto flex flex-wrap items-center gap-5">
             <MailboxLink />
             <UserMenu />
           </div>

@@ -10,6 +10,9 @@ import tseslint from "typescript-eslint";
 const features = readdirSync(new URL("./web/src/features", import.meta.url), { withFileTypes: true })
   .filter((entry) => entry.isDirectory())
   .map((entry) => entry.name);
+const routeFolders = readdirSync(new URL("./api/routes", import.meta.url), { withFileTypes: true })
+  .filter((entry) => entry.isDirectory())
+  .map((entry) => entry.name);
 
 export default tseslint.config(
   { ignores: ["node_modules", "dist", ".data", "test-results", "coverage"] },
@@ -43,6 +46,19 @@ export default tseslint.config(
               target: "./web",
               from: ["./api", "./db", "./scripts", "./test"],
               message: "web/ may use core/ (and its shared schemas) only.",
+            },
+            // Route folders keep schema, handlers and presenter; what two of them share lives in
+            // api/domain/<area>/ (or db/repositories/), and api/routes/*.ts files mount them.
+            ...routeFolders.map((folder) => ({
+              target: `./api/routes/${folder}`,
+              from: "./api/routes",
+              except: [`./${folder}`],
+              message: "Route folders do not import each other; move what they share to api/domain/<area>/.",
+            })),
+            {
+              target: "./api/domain",
+              from: "./api/routes",
+              message: "api/domain/ is used by routes, never the reverse.",
             },
             // Features do not import each other; web/src/app composes them.
             ...features.map((feature) => ({

@@ -8,7 +8,7 @@ import { deleteUnusedResetLinks } from "../../auth/reset-links";
 import { hashToken } from "../../auth/tokens";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
-import { presentUser } from "../auth/presenter";
+import { presentUser } from "../../domain/accounts/present-user";
 
 type NoInput = Record<string, never>;
 

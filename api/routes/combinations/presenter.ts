@@ -1,7 +1,7 @@
 import type { Combination as CombinationView } from "../../../core/contract/combinations";
 import type { Combination } from "../../../db/models/combination";
-import { personOf, type PersonRef } from "../projects/people";
-import type { StoredTerm } from "./superpose";
+import { personOf, type PersonRef } from "../../domain/projects/people";
+import type { StoredTerm } from "../../domain/combinations/superpose";
 
 /** A combination as the API sends it. */
 export function presentCombination(

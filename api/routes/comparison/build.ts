@@ -22,9 +22,9 @@ import {
 } from "../../../core/contract/comparison";
 import type { CategoryRequirement, Requirement } from "../../../core/contract/projects";
 import type { StressState } from "../../../db/models/stress-state";
-import type { StoredTerm } from "../combinations/superpose";
-import { componentsPaOf } from "../load-cases/states";
-import type { ResolvedMaterial } from "../materials/resolve";
+import type { StoredTerm } from "../../domain/combinations/superpose";
+import { componentsPaOf } from "../../domain/load-cases/states";
+import type { ResolvedMaterial } from "../../domain/materials/resolve";
 
 /** What the comparison is built from (plain data, already loaded). */
 export type ComparisonInput = {

@@ -2,9 +2,9 @@ import { QueryTypes, type Sequelize } from "sequelize";
 import type { CategoryRequirement, Requirement } from "../../../core/contract/projects";
 import type { Material } from "../../../db/models/material";
 import type { StressState } from "../../../db/models/stress-state";
-import type { StoredTerm } from "../combinations/superpose";
-import { stateIndex } from "../combinations/superpose";
-import { refFromColumns, resolveMaterial } from "../materials/resolve";
+import type { StoredTerm } from "../../domain/combinations/superpose";
+import { stateIndex } from "../../domain/combinations/superpose";
+import { refFromColumns, resolveMaterial } from "../../domain/materials/resolve";
 import type { ComparisonInput } from "./build";
 
 /**

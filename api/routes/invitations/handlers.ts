@@ -12,9 +12,10 @@ import type { AppContext } from "../../context";
 import { errors, HttpError } from "../../errors";
 import { invitationMail } from "../../mail/templates";
 import type { RouteHandler } from "../../openapi/registry";
-import { addMember } from "../members/join";
-import { lockWorkspace } from "../members/last-owner";
-import { invitationState, presentInvitation, presentInvitationPreview } from "./presenter";
+import { addMember } from "../../domain/members/join";
+import { lockWorkspace } from "../../domain/members/last-owner";
+import { invitationState } from "../../domain/invitations/state";
+import { presentInvitation, presentInvitationPreview } from "./presenter";
 
 type NoInput = Record<string, never>;
 type WorkspaceParams = { workspaceId: string };

@@ -2,8 +2,8 @@ import type { Transaction } from "sequelize";
 import type { LoadCase as LoadCaseView } from "../../../core/contract/load-cases";
 import type { LoadCase } from "../../../db/models/load-case";
 import type { StressState } from "../../../db/models/stress-state";
-import { peopleById, personOf, type PersonRef } from "../projects/people";
-import { currentStatesOf, presentState } from "./states";
+import { peopleById, personOf, type PersonRef } from "../../domain/projects/people";
+import { currentStatesOf, presentState } from "../../domain/load-cases/states";
 
 /** A load case with its current states as the API sends it. */
 export function presentLoadCase(

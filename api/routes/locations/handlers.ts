@@ -5,12 +5,12 @@ import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
-import { changedFields, recordAudit } from "../audit/record";
-import { moveToTrashHandler } from "../trash/move-to-trash";
-import { assertMaterialRef, columnsFromRef } from "../materials/resolve";
-import { assertWithinLimit } from "../projects/limits";
-import { findProject } from "../projects/scope";
-import { assertVersion } from "../projects/versioning";
+import { changedFields, recordAudit } from "../../domain/audit/record";
+import { moveToTrashHandler } from "../../domain/trash/move-to-trash";
+import { assertMaterialRef, columnsFromRef } from "../../domain/materials/resolve";
+import { assertWithinLimit } from "../../domain/projects/limits";
+import { findProject } from "../../domain/projects/scope";
+import { assertVersion } from "../../domain/projects/versioning";
 import { locationAuditFields, presentLocation } from "./presenter";
 
 type NoInput = Record<string, never>;

@@ -1,6 +1,6 @@
 import type { Location as LocationView } from "../../../core/contract/projects";
 import type { Location } from "../../../db/models/location";
-import { refFromColumns } from "../materials/resolve";
+import { refFromColumns } from "../../domain/materials/resolve";
 
 /** A location as the API sends it. */
 export function presentLocation(l: Location): LocationView {

@@ -5,9 +5,9 @@ import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
-import { changedFields, recordAudit } from "../audit/record";
-import { peopleById } from "../projects/people";
-import { assertVersion } from "../projects/versioning";
+import { changedFields, recordAudit } from "../../domain/audit/record";
+import { peopleById } from "../../domain/projects/people";
+import { assertVersion } from "../../domain/projects/versioning";
 import { presentMaterial, presentPublished } from "./presenter";
 
 type NoInput = Record<string, never>;

@@ -5,7 +5,7 @@ import type {
   StressUnitName,
 } from "../../../core/contract/materials";
 import type { Material } from "../../../db/models/material";
-import { personOf, type PersonRef } from "../projects/people";
+import { personOf, type PersonRef } from "../../domain/projects/people";
 
 const MPA = 1e6;
 

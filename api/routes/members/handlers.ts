@@ -5,7 +5,7 @@ import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
-import { assertKeepsAnOwner, lockWorkspace } from "./last-owner";
+import { assertKeepsAnOwner, lockWorkspace } from "../../domain/members/last-owner";
 import { presentMember } from "./presenter";
 
 type NoInput = Record<string, never>;

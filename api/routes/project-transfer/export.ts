@@ -10,9 +10,9 @@ import { Combination } from "../../../db/models/combination";
 import { LoadCase } from "../../../db/models/load-case";
 import { Location } from "../../../db/models/location";
 import type { Project } from "../../../db/models/project";
-import { termsOf } from "../combinations/terms";
-import { componentsPaOf, currentStatesOf } from "../load-cases/states";
-import { libraryOf, refFromColumns } from "../materials/resolve";
+import { termsOf } from "../../domain/combinations/terms";
+import { componentsPaOf, currentStatesOf } from "../../domain/load-cases/states";
+import { libraryOf, refFromColumns } from "../../domain/materials/resolve";
 
 /**
  * The export file of a project: live locations, load cases with their current states

@@ -10,9 +10,9 @@ import { Material } from "../../../db/models/material";
 import { Project } from "../../../db/models/project";
 import { StressState } from "../../../db/models/stress-state";
 import { PROJECT_LIMITS } from "../../../core/contract/limits";
-import { recordAudit } from "../audit/record";
-import { assertWithinLimit, projectLimitError } from "../projects/limits";
-import { columnsFromRef } from "../materials/resolve";
+import { recordAudit } from "../../domain/audit/record";
+import { assertWithinLimit, projectLimitError } from "../../domain/projects/limits";
+import { columnsFromRef } from "../../domain/materials/resolve";
 
 /** What an import made. */
 export type ImportCounts = { materials: number; locations: number; loadCases: number; combinations: number };

@@ -4,10 +4,9 @@ import type {
   Requirement,
 } from "../../../core/contract/projects";
 import type { Project } from "../../../db/models/project";
-import { refFromColumns } from "../materials/resolve";
-import { personOf, type PersonRef } from "./people";
-
-export type ProjectCounts = { locations: number; loadCases: number; combinations: number };
+import { refFromColumns } from "../../domain/materials/resolve";
+import type { ProjectCounts } from "../../domain/projects/counts";
+import { personOf, type PersonRef } from "../../domain/projects/people";
 
 /** A project as the API sends it. */
 export function presentProject(

@@ -9,7 +9,7 @@ import { hashToken, newLinkToken } from "../../auth/tokens";
 import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
-import { addMember } from "../members/join";
+import { addMember } from "../../domain/members/join";
 import { presentShareLink, presentShareLinkPreview, shareLinkState } from "./presenter";
 
 type NoInput = Record<string, never>;

@@ -11,10 +11,10 @@ import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
-import { recordAudit } from "../audit/record";
+import { recordAudit } from "../../domain/audit/record";
 import type { ProjectLimitName } from "../../../core/contract/limits";
-import { assertWithinLimit } from "../projects/limits";
-import { peopleById, personOf } from "../projects/people";
+import { assertWithinLimit } from "../../domain/projects/limits";
+import { peopleById, personOf } from "../../domain/projects/people";
 import { TRASH_MODELS, type TrashableRow } from "./kinds";
 
 type NoInput = Record<string, never>;

@@ -2,7 +2,9 @@ import { col, fn, type ModelStatic, type Model, type Transaction } from "sequeli
 import { Combination } from "../../../db/models/combination";
 import { LoadCase } from "../../../db/models/load-case";
 import { Location } from "../../../db/models/location";
-import type { ProjectCounts } from "./presenter";
+
+/** How many live locations, load cases and combinations a project holds. */
+export type ProjectCounts = { locations: number; loadCases: number; combinations: number };
 
 /** Live (not trashed) locations, load cases and combinations per project id. */
 export async function projectCounts(

@@ -14,7 +14,12 @@ import { assertWithinLimit } from "../../domain/projects/limits";
 import { findProject } from "../../domain/projects/scope";
 import { assertVersion } from "../../domain/projects/versioning";
 import { loadCaseAuditFields, presentLoadCases } from "./presenter";
-import { assertProjectLocations, presentState, removeState, saveStateRevision } from "../../domain/load-cases/states";
+import {
+  assertProjectLocations,
+  presentState,
+  removeState,
+  saveStateRevision,
+} from "../../domain/load-cases/states";
 
 type NoInput = Record<string, never>;
 type ProjectParams = { workspaceId: string; projectId: string };

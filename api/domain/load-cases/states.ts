@@ -1,76 +1,28 @@
-import { literal, Op, type Transaction } from "sequelize";
+import type { Transaction } from "sequelize";
 import type { User } from "lucia";
 import { convertStress, type StressUnit } from "../../../core";
-import type {
-  Components,
-  StateInput,
-  StateSource,
-  StressState as StateView,
-} from "../../../core/contract/load-cases";
-import type { StressUnitName } from "../../../core/contract/materials";
-import { Location } from "../../../db/models/location";
-import { StressState } from "../../../db/models/stress-state";
+import type { Components, StateInput } from "../../../core/contract/load-cases";
+import { liveLocationIdsAmong } from "../../../db/repositories/locations";
+import {
+  componentsPaOf,
+  retireCurrentState,
+  writeStressStates,
+  type StressStateRow,
+} from "../../../db/repositories/stress-states";
 import { errors } from "../../errors";
 import { recordAudit } from "../audit/record";
-import { personOf, type PersonRef } from "../projects/people";
 
-const KEYS = ["xx", "yy", "zz", "xy", "yz", "zx"] as const;
-
-/** A stored row's six components in Pa. */
-export function componentsPaOf(s: StressState): Components {
-  return { xx: s.xxPa, yy: s.yyPa, zz: s.zzPa, xy: s.xyPa, yz: s.yzPa, zx: s.zxPa };
-}
-
-/** Six components in `unit` as the Pa columns they are stored in. */
-export function paColumns(components: Components, unit: StressUnit) {
+/** Six components entered in `unit`, in Pa (as they are stored). */
+export function componentsInPa(components: Components, unit: StressUnit): Components {
   const pa = (v: number) => convertStress(v, unit, "Pa");
   return {
-    xxPa: pa(components.xx),
-    yyPa: pa(components.yy),
-    zzPa: pa(components.zz),
-    xyPa: pa(components.xy),
-    yzPa: pa(components.yz),
-    zxPa: pa(components.zx),
+    xx: pa(components.xx),
+    yy: pa(components.yy),
+    zz: pa(components.zz),
+    xy: pa(components.xy),
+    yz: pa(components.yz),
+    zx: pa(components.zx),
   };
-}
-
-/** A saved state revision as the API sends it: Pa as stored, and the same in the entered unit. */
-export function presentState(s: StressState, people: Map<string, PersonRef>): StateView {
-  const pa = componentsPaOf(s);
-  const unit = s.unit as StressUnitName;
-  const inUnit = Object.fromEntries(KEYS.map((k) => [k, convertStress(pa[k], "Pa", unit)])) as Components;
-  return {
-    id: s.id,
-    locationId: s.locationId,
-    revision: s.revision,
-    unit,
-    components: inUnit,
-    componentsPa: pa,
-    source: s.source as StateSource,
-    note: s.note,
-    savedAt: s.createdAt.toISOString(),
-    savedBy: personOf(people, s.createdBy),
-  };
-}
-
-/**
- * The current revision of every state of these cases at locations not in the trash, in
- * location order (one query: the location's liveness and position are read in it).
- */
-export async function currentStatesOf(caseIds: string[], transaction?: Transaction): Promise<StressState[]> {
-  if (caseIds.length === 0) return [];
-  return StressState.findAll({
-    where: {
-      loadCaseId: caseIds,
-      isCurrent: true,
-      locationId: { [Op.in]: literal("(SELECT id FROM locations WHERE deleted_at IS NULL)") },
-    },
-    order: [
-      [literal('(SELECT position FROM locations WHERE locations.id = "StressState"."location_id")'), "ASC"],
-      ["createdAt", "ASC"],
-    ],
-    transaction,
-  });
 }
 
 /**
@@ -84,12 +36,7 @@ export async function assertProjectLocations(
   transaction?: Transaction,
 ): Promise<void> {
   if (ids.length === 0) return;
-  const found = await Location.findAll({
-    attributes: ["id"],
-    where: { id: { [Op.in]: ids }, projectId, deletedAt: null },
-    transaction,
-  });
-  const known = new Set(found.map((l) => l.id));
+  const known = await liveLocationIdsAmong(projectId, ids, transaction);
   const problems = ids
     .map((id, i) =>
       known.has(id) ? null : { path: fields[i], message: "is not a location of this project" },
@@ -111,29 +58,20 @@ export async function saveStateRevision(
   loadCaseId: string,
   input: StateInput,
   scope: StateScope,
-): Promise<StressState> {
-  const previous = await StressState.findOne({
-    where: { loadCaseId, locationId: input.locationId, isCurrent: true },
+): Promise<StressStateRow> {
+  const [{ saved, previous }] = await writeStressStates(
+    [
+      {
+        loadCaseId,
+        locationId: input.locationId,
+        componentsPa: componentsInPa(input.stress.components, input.stress.unit),
+        unit: input.stress.unit,
+        source: input.source,
+        note: input.note,
+        createdBy: user.id,
+      },
+    ],
     transaction,
-  });
-  const last = (await StressState.max("revision", {
-    where: { loadCaseId, locationId: input.locationId },
-    transaction,
-  })) as number | null;
-  if (previous) await previous.update({ isCurrent: false }, { transaction });
-  const saved = await StressState.create(
-    {
-      loadCaseId,
-      locationId: input.locationId,
-      revision: (last ?? 0) + 1,
-      isCurrent: true,
-      ...paColumns(input.stress.components, input.stress.unit),
-      unit: input.stress.unit,
-      source: input.source,
-      note: input.note,
-      createdBy: user.id,
-    },
-    { transaction },
   );
   await recordAudit(transaction, user, {
     workspaceId: scope.workspaceId,
@@ -162,12 +100,8 @@ export async function removeState(
   locationId: string,
   scope: StateScope,
 ): Promise<boolean> {
-  const current = await StressState.findOne({
-    where: { loadCaseId, locationId, isCurrent: true },
-    transaction,
-  });
+  const current = await retireCurrentState(loadCaseId, locationId, transaction);
   if (!current) return false;
-  await current.update({ isCurrent: false }, { transaction });
   await recordAudit(transaction, user, {
     workspaceId: scope.workspaceId,
     projectId: scope.projectId,

@@ -23,7 +23,7 @@ import {
 import type { CategoryRequirement, Requirement } from "../../../core/contract/projects";
 import type { StressState } from "../../../db/models/stress-state";
 import type { StoredTerm } from "../../domain/combinations/superpose";
-import { componentsPaOf } from "../../domain/load-cases/states";
+import { componentsPaOf } from "../../../db/repositories/stress-states";
 import type { ResolvedMaterial } from "../../domain/materials/resolve";
 
 /** What the comparison is built from (plain data, already loaded). */

@@ -21,7 +21,7 @@ import { DEMO_WORKSPACE_NAME } from "./seed-accounts";
  */
 
 /** Creates one project with its locations, cases, states (revision 1, in MPa as entered) and combinations. */
-async function createDemoProject(
+export async function createDemoProject(
   transaction: Transaction,
   workspaceId: string,
   ownerId: string | null,

@@ -99,9 +99,11 @@ export async function writeStressStates(
   if (retire.length > 0) {
     await StressState.update({ isCurrent: false }, { where: { id: retire }, transaction });
   }
+  // individualHooks: a row's create hooks run as they would for StressState.create (the app
+  // defines none; a test adds one to fail an import halfway through).
   const created = await StressState.bulkCreate(
     pending.map((p) => p.values),
-    { transaction, returning: true },
+    { transaction, returning: true, individualHooks: true },
   );
   // A pair named twice: the later state's previous row is the earlier one, as stored.
   const saved = created.map(toPlain);

@@ -13,7 +13,7 @@ import { errors, HttpError } from "../../errors";
 import { invitationMail } from "../../mail/templates";
 import type { RouteHandler } from "../../openapi/registry";
 import { addMember } from "../../domain/members/join";
-import { lockWorkspace } from "../../domain/members/last-owner";
+import { lockWorkspace } from "../../../db/repositories/workspaces";
 import { invitationState } from "../../domain/invitations/state";
 import { presentInvitation, presentInvitationPreview } from "./presenter";
 

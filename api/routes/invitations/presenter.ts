@@ -1,5 +1,5 @@
 import type { Invitation, InvitationPreview } from "../../../core/contract/invitations";
-import type { Invitation as InvitationRow } from "../../../db/models/invitation";
+import type { InvitationRow } from "../../../db/repositories/invitations";
 import { invitationState } from "../../domain/invitations/state";
 
 /** What the owners' list shows (never the token or its hash). */

@@ -1,14 +1,14 @@
-import type { AppContext } from "../../context";
-import type { AnyRoute } from "../../openapi/registry";
-import { auditRoutes } from "../audit";
-import { combinationRoutes } from "../combinations";
-import { comparisonRoutes } from "../comparison";
-import { loadCaseRoutes } from "../load-cases";
-import { locationRoutes } from "../locations";
-import { materialRoutes } from "../materials";
-import { projectTransferRoutes } from "../project-transfer";
-import { trashRoutes } from "../trash";
-import { projectRoutes } from "./index";
+import type { AppContext } from "../context";
+import type { AnyRoute } from "../openapi/registry";
+import { auditRoutes } from "./audit";
+import { combinationRoutes } from "./combinations";
+import { comparisonRoutes } from "./comparison";
+import { loadCaseRoutes } from "./load-cases";
+import { locationRoutes } from "./locations";
+import { materialRoutes } from "./materials";
+import { projectTransferRoutes } from "./project-transfer";
+import { trashRoutes } from "./trash";
+import { projectRoutes } from "./projects";
 
 /**
  * Every route of the project area (projects, locations, load cases, combinations, materials,

@@ -1,5 +1,5 @@
 import type { Transaction } from "sequelize";
-import { Project } from "../../../db/models/project";
+import { findLiveProject, type ProjectRow } from "../../../db/repositories/projects";
 import { errors } from "../../errors";
 
 /**
@@ -11,12 +11,8 @@ export async function findProject(
   workspaceId: string,
   projectId: string,
   options: { transaction?: Transaction; lock?: boolean } = {},
-): Promise<Project> {
-  const project = await Project.findOne({
-    where: { id: projectId, workspaceId, deletedAt: null },
-    transaction: options.transaction,
-    lock: options.lock && options.transaction ? options.transaction.LOCK.UPDATE : undefined,
-  });
+): Promise<ProjectRow> {
+  const project = await findLiveProject(workspaceId, projectId, options);
   if (!project) throw errors.notFound("This project");
   return project;
 }

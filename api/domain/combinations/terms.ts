@@ -1,34 +1,27 @@
 import type { Transaction } from "sequelize";
-import type { Combination } from "../../../db/models/combination";
-import { CombinationTerm } from "../../../db/models/combination-term";
-import { LoadCase } from "../../../db/models/load-case";
+import { termRowsOf } from "../../../db/repositories/combinations";
+import { loadCaseNames } from "../../../db/repositories/load-cases";
 import type { StoredTerm } from "./superpose";
 
 /** The terms of these combinations in order, with their cases' names and whether each case is live, by combination id. */
 export async function termsOf(
-  combinations: Combination[],
+  combinations: { id: string }[],
   transaction?: Transaction,
 ): Promise<Map<string, StoredTerm[]>> {
   const byCombination = new Map<string, StoredTerm[]>(combinations.map((c) => [c.id, []]));
   if (combinations.length === 0) return byCombination;
-  const rows = await CombinationTerm.findAll({
-    where: { combinationId: combinations.map((c) => c.id) },
-    order: [["position", "ASC"]],
+  const rows = await termRowsOf(
+    combinations.map((c) => c.id),
     transaction,
-  });
-  const cases = await LoadCase.findAll({
-    attributes: ["id", "name", "deletedAt"],
-    where: { id: [...new Set(rows.map((r) => r.loadCaseId))] },
-    transaction,
-  });
-  const caseById = new Map(cases.map((c) => [c.id, c]));
+  );
+  const cases = await loadCaseNames([...new Set(rows.map((r) => r.loadCaseId))], transaction);
   for (const r of rows) {
-    const c = caseById.get(r.loadCaseId);
+    const c = cases.get(r.loadCaseId);
     byCombination.get(r.combinationId)!.push({
       loadCaseId: r.loadCaseId,
       loadCaseName: c?.name ?? "(deleted case)",
       factor: r.factor,
-      live: !!c && c.deletedAt === null,
+      live: !!c && c.live,
     });
   }
   return byCombination;

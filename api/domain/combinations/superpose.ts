@@ -1,6 +1,11 @@
 import { combineLoadCases, type StressTensor } from "../../../core";
-import type { StressState } from "../../../db/models/stress-state";
-import { componentsPaOf } from "../load-cases/states";
+import { componentsPaOf, type StressStateRow } from "../../../db/repositories/stress-states";
+
+/** What superposition reads of a current state: where it is and its six components in Pa. */
+type KeyedState = Pick<
+  StressStateRow,
+  "loadCaseId" | "locationId" | "xxPa" | "yyPa" | "zzPa" | "xyPa" | "yzPa" | "zxPa"
+>;
 
 /** One term as stored: a factor on a load case (with the case's name, and whether it is live). */
 export type StoredTerm = { loadCaseId: string; loadCaseName: string; factor: number; live: boolean };
@@ -19,7 +24,7 @@ export type Superposed =
 export function superposeAt(
   terms: StoredTerm[],
   locationId: string,
-  states: Map<string, StressState>,
+  states: Map<string, KeyedState>,
 ): Superposed {
   const missing = terms.filter((t) => !t.live || !states.has(`${t.loadCaseId}:${locationId}`));
   if (missing.length > 0) {
@@ -38,6 +43,6 @@ export function superposeAt(
 }
 
 /** Current states keyed "caseId:locationId". */
-export function stateIndex(states: StressState[]): Map<string, StressState> {
+export function stateIndex<S extends KeyedState>(states: S[]): Map<string, S> {
   return new Map(states.map((s) => [`${s.loadCaseId}:${s.locationId}`, s]));
 }

@@ -1,5 +1,5 @@
 import type { Transaction } from "sequelize";
-import type { AuditEntityType } from "../../../db/models/audit-event";
+import { markDeleted, TRASH_TABLES } from "../../../db/repositories/trash";
 import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import type { RouteHandler } from "../../openapi/registry";
@@ -8,28 +8,18 @@ import { findProject } from "../projects/scope";
 
 type NoInput = Record<string, never>;
 
-/** A row of a project that deleting moves to the trash (it keeps its data for 30 days). */
-type Trashable = {
-  id: string;
-  name: string;
-  update(
-    values: { deletedAt: Date; deletedBy: string },
-    options: { transaction: Transaction },
-  ): Promise<unknown>;
-};
-
 /**
  * `DELETE` for something inside a project (a location, a load case, a combination): marks it
  * deleted and audits the move in one transaction; the trash routes restore it.
- * @param item what it is (`entityType` for the audit trail, `noun` for its summary line) and
- *   how to find it in the project from the route's params (a 404 when it is not there)
+ * @param item what it is (its trash `kind`, and `noun` for its summary line) and how to find
+ *   it in the project from the route's params (a 404 when it is not there)
  */
 export function moveToTrashHandler<P extends { projectId: string }>(
   context: AppContext,
   item: {
-    entityType: AuditEntityType;
+    kind: "location" | "load-case" | "combination";
     noun: string;
-    find(projectId: string, params: P, transaction: Transaction): Promise<Trashable>;
+    find(projectId: string, params: P, transaction: Transaction): Promise<{ id: string; name: string }>;
   },
 ): RouteHandler<P, NoInput, NoInput> {
   return async (_req, res) => {
@@ -39,11 +29,11 @@ export function moveToTrashHandler<P extends { projectId: string }>(
     await context.sequelize.transaction(async (transaction) => {
       const project = await findProject(workspace.id, params.projectId, { transaction });
       const row = await item.find(project.id, params, transaction);
-      await row.update({ deletedAt: new Date(), deletedBy: user.id }, { transaction });
+      await markDeleted(item.kind, row.id, user.id, transaction);
       await recordAudit(transaction, user, {
         workspaceId: workspace.id,
         projectId: project.id,
-        entityType: item.entityType,
+        entityType: TRASH_TABLES[item.kind].entity,
         entityId: row.id,
         action: "delete",
         summary: `moved the ${item.noun} "${row.name}" of "${project.name}" to the trash`,

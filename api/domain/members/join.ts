@@ -1,6 +1,7 @@
 import type { Transaction } from "sequelize";
 import type { Role } from "../../../core/contract/workspaces";
-import { Membership, type JoinedVia } from "../../../db/models/membership";
+import type { JoinedVia } from "../../../db/models/membership";
+import { createMembership, findMembershipOf, type MembershipRow } from "../../../db/repositories/workspaces";
 
 /**
  * Adds `userId` to a workspace with `role`, unless they are a member already, in which
@@ -17,12 +18,9 @@ export async function addMember(
     addedBy?: string | null;
   },
   transaction: Transaction,
-): Promise<{ membership: Membership; alreadyMember: boolean }> {
-  const existing = await Membership.findOne({
-    where: { workspaceId: options.workspaceId, userId: options.userId },
-    transaction,
-  });
+): Promise<{ membership: MembershipRow; alreadyMember: boolean }> {
+  const existing = await findMembershipOf(options.workspaceId, options.userId, transaction);
   if (existing) return { membership: existing, alreadyMember: true };
-  const membership = await Membership.create({ ...options, lastActiveAt: new Date() }, { transaction });
+  const membership = await createMembership({ ...options, lastActiveAt: new Date() }, transaction);
   return { membership, alreadyMember: false };
 }

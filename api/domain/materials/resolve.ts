@@ -1,7 +1,7 @@
 import type { Transaction } from "sequelize";
 import { FROM_MEMORY_NOTE, publishedMaterial, type Material as Strengths } from "../../../core";
 import type { MaterialRef } from "../../../core/contract/materials";
-import { Material } from "../../../db/models/material";
+import { findLiveMaterial, listLiveMaterials, type MaterialRow } from "../../../db/repositories/materials";
 import { errors } from "../../errors";
 
 /** The two columns a material reference is stored in (at most one is set). */
@@ -41,7 +41,7 @@ export async function assertMaterialRef(
     }
     return;
   }
-  const found = await Material.findOne({ where: { id: ref.id, workspaceId, deletedAt: null }, transaction });
+  const found = await findLiveMaterial(workspaceId, ref.id, { transaction });
   if (!found) {
     throw errors.invalidInput([
       { path: `${field}.id`, message: "no material of this workspace's library has this id" },
@@ -79,11 +79,20 @@ function strengthsOf(
   return s;
 }
 
+/** What resolving reads of a library material. */
+export type LibraryStrengths = Pick<
+  MaterialRow,
+  "name" | "reference" | "yieldPa" | "ultimateTensionPa" | "ultimateCompressionPa"
+>;
+
 /**
  * Resolves a reference against the built-in list and the workspace library (`library`, by
  * id, trashed rows left out); a dangling reference resolves to "no material", said so.
  */
-export function resolveMaterial(ref: MaterialRef | null, library: Map<string, Material>): ResolvedMaterial {
+export function resolveMaterial(
+  ref: MaterialRef | null,
+  library: Map<string, LibraryStrengths>,
+): ResolvedMaterial {
   if (!ref) return NONE;
   if (ref.kind === "published") {
     const m = publishedMaterial(ref.id);
@@ -117,7 +126,7 @@ export function resolveMaterial(ref: MaterialRef | null, library: Map<string, Ma
 export async function libraryOf(
   workspaceId: string,
   transaction?: Transaction,
-): Promise<Map<string, Material>> {
-  const rows = await Material.findAll({ where: { workspaceId, deletedAt: null }, transaction });
+): Promise<Map<string, MaterialRow>> {
+  const rows = await listLiveMaterials(workspaceId, transaction);
   return new Map(rows.map((m) => [m.id, m]));
 }

@@ -1,6 +1,7 @@
 import type { Transaction } from "sequelize";
 import type { User } from "lucia";
-import { AuditEvent, type AuditAction, type AuditEntityType } from "../../../db/models/audit-event";
+import type { AuditAction, AuditEntityType } from "../../../db/models/audit-event";
+import { insertAuditEvent } from "../../../db/repositories/audit";
 
 /** What one change was: which record, what happened to it, and a line a person reads. */
 export type AuditEntry = {
@@ -18,10 +19,7 @@ export type AuditEntry = {
  * describes are committed (or rolled back) together.
  */
 export async function recordAudit(transaction: Transaction, actor: User, entry: AuditEntry): Promise<void> {
-  await AuditEvent.create(
-    { ...entry, changes: entry.changes ?? null, actorId: actor.id, actorName: actor.name },
-    { transaction },
-  );
+  await insertAuditEvent({ ...entry, actorId: actor.id, actorName: actor.name }, transaction);
 }
 
 /**

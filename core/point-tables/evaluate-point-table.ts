@@ -5,6 +5,9 @@ import { utilisation, verdictForUtilisation } from "../checks/verdict";
 import type { Criterion, Material } from "../criteria/safety-factor";
 import { factorBatch } from "./factor-batch";
 
+// Long because the chunked evaluator keeps one state across chunks (worst points, histogram,
+// governing point per criterion) that its summary reads; the types describing it come first.
+
 /** The material and the checks every point of a table is rated against (the load case's allowables). */
 export type PointTableSpec = { material: Material; requirements: readonly CheckRequirement[] };
 

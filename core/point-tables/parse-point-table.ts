@@ -6,6 +6,9 @@ import { numberScan, readNumber, readNumberAt } from "./read-number";
 import { fieldEnd, fieldText, isQuoted, separatorCode, skipBlanks, splitLine } from "./split-line";
 import type { BadRow, PointTable, PointTableOptions, PointTableSeparator } from "./types";
 
+// Long because the chunked parser's states (header, skipped rows, a line split across chunks,
+// quoting) share one loop; the field and number readers are in split-line.ts and read-number.ts.
+
 /** Roles 0–5 are the components in storage order, then the coordinates and the id. */
 const ROLE_X = 6;
 const ROLE_ID = 9;

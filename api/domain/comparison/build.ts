@@ -25,6 +25,9 @@ import { componentsPaOf } from "../../../db/repositories/stress-states";
 import type { StoredTerm } from "../combinations/superpose";
 import type { ResolvedMaterial } from "../materials/resolve";
 
+// Long because building the comparison's rows, its superposition over packed states and the
+// governing search share the input's indexes; paging.ts cuts the work into runs.
+
 /** A current stress state as the comparison reads it: its revision and six components in Pa. */
 export type ComparisonState = {
   loadCaseId: string;

@@ -1,15 +1,13 @@
-import { Sym } from "../../../components/Sym";
 import { useInputs } from "../hooks/use-inputs";
 import { THICK_CYLINDER_INPUTS, computeThickCylinder } from "../model/thick-wall";
-import { stressUnitOf, unitFor } from "../model/units";
+import { stressUnitOf } from "../model/units";
 import { CalculatorPage } from "./CalculatorPage";
 import { ChoiceField } from "./ChoiceField";
 import { Formula, Validity } from "./Formula";
 import { InputField } from "./InputField";
 import { SendToBench } from "./SendToBench";
-import { StateTable } from "./StateTable";
+import { LameResults } from "./LameResults";
 import { ThickWallInputs } from "./ThickWallInputs";
-import { ThroughWallPlot } from "./ThroughWallPlot";
 import { UnitSetPicker } from "./UnitSetPicker";
 
 const AXIAL_FORMULA: Record<string, string> = {
@@ -58,40 +56,15 @@ export function ThickCylinderPage() {
       results={
         r && (
           <>
-            <p className="text-[13px] text-graphite-soft">
-              At r = <span className="num">{Number(r.radius.toPrecision(6))}</span>{" "}
-              <span className="unit">{unitFor("length", units)}</span>. Element axes: x axial (along the
-              cylinder), y hoop (circumferential), z radial.
-            </p>
-            <StateTable
-              caption="Lamé stresses at the chosen radius"
-              unit={unit}
+            <LameResults
+              result={r}
+              units={units}
+              axes="Element axes: x axial (along the cylinder), y hoop (circumferential), z radial."
               rows={[
-                {
-                  id: "xx",
-                  symbol: <Sym base="σ" sub="z" />,
-                  meaning: "axial (element x)",
-                  value: r.tensor.xx,
-                },
-                {
-                  id: "yy",
-                  symbol: <Sym base="σ" sub="θ" />,
-                  meaning: "hoop (element y)",
-                  value: r.tensor.yy,
-                },
-                {
-                  id: "zz",
-                  symbol: <Sym base="σ" sub="r" />,
-                  meaning: "radial (element z)",
-                  value: r.tensor.zz,
-                },
+                { id: "xx", sub: "z", meaning: "axial (element x)" },
+                { id: "yy", sub: "θ", meaning: "hoop (element y)" },
+                { id: "zz", sub: "r", meaning: "radial (element z)" },
               ]}
-            />
-            <ThroughWallPlot
-              radii={r.profile.map((q) => q.radius)}
-              marked={r.radius}
-              lengthUnit={unitFor("length", units)}
-              stressUnit={unit}
               series={[
                 { id: "hoop", label: "σθ hoop", stroke: "#1d5a55", values: r.profile.map((q) => q.hoop) },
                 {

@@ -1,13 +1,11 @@
-import { Sym } from "../../../components/Sym";
 import { useInputs } from "../hooks/use-inputs";
 import { THICK_SPHERE_INPUTS, computeThickSphere } from "../model/thick-wall";
-import { stressUnitOf, unitFor } from "../model/units";
+import { stressUnitOf } from "../model/units";
 import { CalculatorPage } from "./CalculatorPage";
 import { Formula, Validity } from "./Formula";
 import { SendToBench } from "./SendToBench";
-import { StateTable } from "./StateTable";
+import { LameResults } from "./LameResults";
 import { ThickWallInputs } from "./ThickWallInputs";
-import { ThroughWallPlot } from "./ThroughWallPlot";
 import { UnitSetPicker } from "./UnitSetPicker";
 
 /** Thick-walled sphere under internal and external pressure (Lamé). */
@@ -31,40 +29,15 @@ export function ThickSpherePage() {
       results={
         r && (
           <>
-            <p className="text-[13px] text-graphite-soft">
-              At r = <span className="num">{Number(r.radius.toPrecision(6))}</span>{" "}
-              <span className="unit">{unitFor("length", units)}</span>. Element axes: x and y two tangents to
-              the sphere (meridional and circumferential), z radial.
-            </p>
-            <StateTable
-              caption="Lamé stresses at the chosen radius"
-              unit={unit}
+            <LameResults
+              result={r}
+              units={units}
+              axes="Element axes: x and y two tangents to the sphere (meridional and circumferential), z radial."
               rows={[
-                {
-                  id: "xx",
-                  symbol: <Sym base="σ" sub="θ" />,
-                  meaning: "tangential (element x)",
-                  value: r.tensor.xx,
-                },
-                {
-                  id: "yy",
-                  symbol: <Sym base="σ" sub="φ" />,
-                  meaning: "tangential (element y)",
-                  value: r.tensor.yy,
-                },
-                {
-                  id: "zz",
-                  symbol: <Sym base="σ" sub="r" />,
-                  meaning: "radial (element z)",
-                  value: r.tensor.zz,
-                },
+                { id: "xx", sub: "θ", meaning: "tangential (element x)" },
+                { id: "yy", sub: "φ", meaning: "tangential (element y)" },
+                { id: "zz", sub: "r", meaning: "radial (element z)" },
               ]}
-            />
-            <ThroughWallPlot
-              radii={r.profile.map((q) => q.radius)}
-              marked={r.radius}
-              lengthUnit={unitFor("length", units)}
-              stressUnit={unit}
               series={[
                 { id: "hoop", label: "σθ = σφ", stroke: "#1d5a55", values: r.profile.map((q) => q.hoop) },
                 {

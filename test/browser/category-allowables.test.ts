@@ -1,31 +1,13 @@
-import { mkdir } from "node:fs/promises";
 import path from "node:path";
-import type { Browser, BrowserContext } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { RunningServer } from "../../api/server";
-import { launchChromium, screenshotDir, signUpInContext } from "../support/browser";
-import { startTestServer } from "../support/server";
+import { describe, expect, it } from "vitest";
+import { screenshotDir } from "../support/browser";
+import { signedInBrowser } from "../support/signed-in-browser";
 
 describe("allowables per load-case category in Chromium", () => {
-  let server: RunningServer;
-  let browser: Browser;
-  let closeBrowser: () => Promise<void>;
-  let editor: BrowserContext;
-
-  beforeAll(async () => {
-    server = await startTestServer();
-    ({ browser, close: closeBrowser } = await launchChromium());
-    await mkdir(screenshotDir, { recursive: true });
-    editor = await browser.newContext({ viewport: { width: 1360, height: 900 } });
-    // Signed up and confirmed through the mailed link (sign-up itself signs no one in).
-    await signUpInContext(editor, server.url, "Teo Valdric");
-  });
-  afterAll(async () => {
-    await closeBrowser?.();
-    await server?.close();
-  });
+  const world = signedInBrowser("Teo Valdric");
 
   it("when an editor gives the test category its own Tresca factor on the project page, then the comparison checks the test case against it and says so, and the bench opened from that row shows the same factor and verdict", async () => {
+    const { server, editor } = world;
     const api = (p: string) => `${server.url}/api${p}`;
     const post = async (p: string, data: unknown) => {
       const r = await editor.request.post(api(p), { data, headers: { Origin: server.url } });

@@ -1,32 +1,15 @@
-import { mkdir } from "node:fs/promises";
 import path from "node:path";
-import type { Browser, BrowserContext } from "playwright-core";
-import { afterAll, beforeAll, describe, expect, it } from "vitest";
-import type { RunningServer } from "../../api/server";
-import { launchChromium, screenshotDir, signUpInContext } from "../support/browser";
-import { startTestServer } from "../support/server";
+import { describe, expect, it } from "vitest";
+import { screenshotDir } from "../support/browser";
+import { signedInBrowser } from "../support/signed-in-browser";
 
 // The pages share one query cache whose data counts as fresh for 10 s; a save must invalidate what
 // it changed, or the project page shows the old state for up to that long.
 describe("a state saved in the bench, back on the project page in Chromium", () => {
-  let server: RunningServer;
-  let browser: Browser;
-  let closeBrowser: () => Promise<void>;
-  let editor: BrowserContext;
-
-  beforeAll(async () => {
-    server = await startTestServer();
-    ({ browser, close: closeBrowser } = await launchChromium());
-    await mkdir(screenshotDir, { recursive: true });
-    editor = await browser.newContext({ viewport: { width: 1360, height: 900 } });
-    await signUpInContext(editor, server.url, "Teo Valdric");
-  });
-  afterAll(async () => {
-    await closeBrowser?.();
-    await server?.close();
-  });
+  const world = signedInBrowser("Teo Valdric");
 
   it("when a state is saved in the bench and the project is opened from the bench's link, then its load-case table shows the saved value within 2 s", async () => {
+    const { server, editor } = world;
     const api = (p: string) => `${server.url}/api${p}`;
     const send = async (method: "post" | "put", p: string, data: unknown) => {
       const response = await editor.request[method](api(p), { data, headers: { Origin: server.url } });

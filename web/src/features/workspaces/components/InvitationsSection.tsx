@@ -19,10 +19,18 @@ import {
   isAlreadyInvited,
 } from "../model/invitations";
 import { RoleBadge } from "./RoleBadge";
+import { sectionRefusal } from "../model/roles";
+import { SectionRefusal } from "./SectionRefusal";
 
 /** `/workspaces/:id/invitations` (owners): invite by e-mail, see each invitation's state, resend or revoke. */
 export function InvitationsSection() {
   const workspace = useOutletContext<Workspace>();
+  const refusal = sectionRefusal(workspace.role, "invitations");
+  if (refusal) return <SectionRefusal headingId="invitations-heading" title="Invitations" reason={refusal} />;
+  return <InvitationsControls workspace={workspace} />;
+}
+
+function InvitationsControls({ workspace }: { workspace: Workspace }) {
   const invitations = useInvitations(workspace.id, true);
   const create = useCreateInvitation(workspace.id);
   const resend = useResendInvitation(workspace.id);
@@ -58,7 +66,7 @@ export function InvitationsSection() {
           id="invite-email"
           label="E-mail address"
           type="email"
-          placeholder="ines.okafor-lund@quillon.example"
+          placeholder="name@example.com"
           error={form.formState.errors.email?.message}
           {...form.register("email")}
         />

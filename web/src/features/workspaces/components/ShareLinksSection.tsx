@@ -18,10 +18,18 @@ import {
   type ShareLinkFormValues,
 } from "../model/share-links";
 import { RoleBadge } from "./RoleBadge";
+import { sectionRefusal } from "../model/roles";
+import { SectionRefusal } from "./SectionRefusal";
 
 /** `/workspaces/:id/share-links` (editors, owners): links that let a signed-in person join with a role. */
 export function ShareLinksSection() {
   const workspace = useOutletContext<Workspace>();
+  const refusal = sectionRefusal(workspace.role, "share-links");
+  if (refusal) return <SectionRefusal headingId="links-heading" title="Share links" reason={refusal} />;
+  return <ShareLinksControls workspace={workspace} />;
+}
+
+function ShareLinksControls({ workspace }: { workspace: Workspace }) {
   const links = useShareLinks(workspace.id, true);
   const create = useCreateShareLink(workspace.id);
   const revoke = useRevokeShareLink(workspace.id);

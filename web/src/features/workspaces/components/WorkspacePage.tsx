@@ -43,7 +43,7 @@ export function WorkspacePage() {
         </div>
         <CopyLinkButton />
       </header>
-      <nav aria-label="Workspace" className="flex gap-1">
+      <nav aria-label="Workspace" className="flex flex-wrap gap-1">
         {tabs.map((t) => (
           <NavLink
             key={t.to}

@@ -96,5 +96,7 @@ describe("each role sees only the controls it may use", () => {
     // σxx = 10.9 ksi as typed, with its unit beside it.
     await page.getByText("10.9", { exact: false }).first().waitFor();
     expect(await page.getByText(/^version \d+$/).count()).toBe(0);
+    // Each "Open in bench" is announced with its visible words first, then the cell it opens.
+    await page.getByRole("link", { name: "Open in bench: Operating at mid-shell" }).waitFor();
   });
 });

@@ -66,6 +66,10 @@ export function LoadCaseStateCell({
           )}
         >
           Open in bench
+          {/* The name starts with the visible words (WCAG 2.5.3) and says which cell it opens. */}
+          <span className="sr-only">
+            : {c.name} at {l.name}
+          </span>
         </Link>
         {s.revision > 1 && (
           <ToolButton

@@ -108,6 +108,37 @@ describe("every page at phone width", () => {
     expect(await page.evaluate(() => document.activeElement?.id)).toBe("site-menu-button");
   });
 
+  it("when every signed-in page opens at 1280 × 800 and 1920 × 1080, then nothing scrolls sideways and the full navigation shows without a menu button", async () => {
+    const wide: string[] = [];
+    for (const viewport of [
+      { width: 1280, height: 800 },
+      { width: 1920, height: 1080 },
+    ]) {
+      const context = await browser.newContext({ viewport });
+      await context.addCookies(await team.contexts.owner.cookies());
+      const page = await context.newPage();
+      page.setDefaultTimeout(10_000);
+      for (const address of [
+        `${team.workspacePath}/members`,
+        team.projectPath,
+        `${team.projectPath}/comparison`,
+        "/bench",
+      ]) {
+        await page.goto(`${server.url}${address}`, { waitUntil: "networkidle" });
+        await page.locator("main h1").first().waitFor();
+        const extra = await overflow(page);
+        if (extra > 0)
+          wide.push(`${viewport.width}: ${address}: ${extra} px too wide (${await widest(page)})`);
+      }
+      expect(await page.getByRole("button", { name: "Menu" }).isVisible()).toBe(false);
+      expect(
+        await page.getByRole("banner").getByRole("button", { name: "Sign out", exact: true }).isVisible(),
+      ).toBe(true);
+      await context.close();
+    }
+    expect(wide).toEqual([]);
+  });
+
   it("when the bench opens at 390 px, then its panels read in order: state, element, diagrams, verdict", async () => {
     const page = await team.contexts.owner.newPage();
     page.setDefaultTimeout(10_000);

@@ -10,6 +10,9 @@ import tseslint from "typescript-eslint";
 const features = readdirSync(new URL("./web/src/features", import.meta.url), { withFileTypes: true })
   .filter((entry) => entry.isDirectory())
   .map((entry) => entry.name);
+const routeFolders = readdirSync(new URL("./api/routes", import.meta.url), { withFileTypes: true })
+  .filter((entry) => entry.isDirectory())
+  .map((entry) => entry.name);
 
 const coreImportsNothingOutside = {
   target: "./core",
@@ -91,6 +94,28 @@ export default tseslint.config(
               target: "./web",
               from: ["./api", "./db", "./scripts", "./test"],
               message: "web/ may use core/ (and its shared schemas) only.",
+            },
+            // Route folders keep schema, handlers and presenter; what two of them share lives in
+            // api/domain/<area>/ (or db/repositories/), and api/routes/*.ts files mount them.
+            ...routeFolders.map((folder) => ({
+              target: `./api/routes/${folder}`,
+              from: "./api/routes",
+              except: [`./${folder}`],
+              message: "Route folders do not import each other; move what they share to api/domain/<area>/.",
+            })),
+            // Routes read and write through db/repositories/ (plain rows). Still on the models, to move
+            // next: auth (users, verification and reset tokens).
+            ...routeFolders
+              .filter((folder) => folder !== "auth")
+              .map((folder) => ({
+                target: `./api/routes/${folder}`,
+                from: "./db/models",
+                message: "Routes use db/repositories/, not the models.",
+              })),
+            {
+              target: "./api/domain",
+              from: "./api/routes",
+              message: "api/domain/ is used by routes, never the reverse.",
             },
             // Server resources many features use live in web/src/entities (fetchers, one key factory,
             // queries, mutations); they build on lib/ and core/ only, never on a page or the app.

@@ -1,3 +1,5 @@
+// Long because the private cluster's life is one sequence (find the binaries, choose and prepare
+// the data directory, start, connect, stop, remove) whose steps share paths and error handling.
 /**
  * A private PostgreSQL cluster on 127.0.0.1, owned by this project.
  *

@@ -1,14 +1,13 @@
 import type { Transaction } from "sequelize";
 import { CT7_SHAFT_BAR, ct7Projects, type DemoProject } from "../core/demo-data/ct7-scenario";
-import { AuditEvent } from "./models/audit-event";
-import { Combination } from "./models/combination";
-import { CombinationTerm } from "./models/combination-term";
-import { LoadCase } from "./models/load-case";
-import { Location } from "./models/location";
-import { Material } from "./models/material";
-import { Project } from "./models/project";
-import { StressState } from "./models/stress-state";
 import { Workspace } from "./models/workspace";
+import { insertAuditEvent } from "./repositories/audit";
+import { createCombination } from "./repositories/combinations";
+import { createLoadCase } from "./repositories/load-cases";
+import { createLocation } from "./repositories/locations";
+import { createMaterial } from "./repositories/materials";
+import { countProjects, createProject } from "./repositories/projects";
+import { writeStressStates } from "./repositories/stress-states";
 import { DEMO_WORKSPACE_NAME } from "./seed-accounts";
 
 /**
@@ -22,7 +21,7 @@ import { DEMO_WORKSPACE_NAME } from "./seed-accounts";
  */
 
 /** Creates one project with its locations, cases, states (revision 1, in MPa as entered) and combinations. */
-async function createProject(
+export async function createDemoProject(
   transaction: Transaction,
   workspaceId: string,
   ownerId: string | null,
@@ -30,28 +29,28 @@ async function createProject(
   libraryIds: Record<string, string>,
 ): Promise<void> {
   const who = { createdBy: ownerId, updatedBy: ownerId };
-  const project = await Project.create(
+  const project = await createProject(
     {
       workspaceId,
       name: spec.name,
       description: spec.description,
       unitSystem: "SI",
-      requirements: spec.requirements,
+      requirements: [...spec.requirements],
       defaultPublishedMaterial: "publishedId" in spec.material ? spec.material.publishedId : null,
       defaultMaterialId:
         "libraryMaterial" in spec.material ? libraryIds[spec.material.libraryMaterial] : null,
       ...who,
     },
-    { transaction },
+    transaction,
   );
   const locationIds = new Map<string, string>();
   for (const [position, name] of spec.locations.entries()) {
-    const l = await Location.create({ projectId: project.id, name, position, ...who }, { transaction });
+    const l = await createLocation({ projectId: project.id, name, position, ...who }, transaction);
     locationIds.set(name, l.id);
   }
   const caseIds = new Map<string, string>();
   for (const [position, c] of spec.cases.entries()) {
-    const row = await LoadCase.create(
+    const row = await createLoadCase(
       {
         projectId: project.id,
         name: c.name,
@@ -60,48 +59,30 @@ async function createProject(
         position,
         ...who,
       },
-      { transaction },
+      transaction,
     );
     caseIds.set(c.name, row.id);
-    for (const s of c.states) {
-      const t = s.tensor;
-      await StressState.create(
-        {
-          loadCaseId: row.id,
-          locationId: locationIds.get(s.location)!,
-          revision: 1,
-          isCurrent: true,
-          xxPa: t.xx,
-          yyPa: t.yy,
-          zzPa: t.zz,
-          xyPa: t.xy,
-          yzPa: t.yz,
-          zxPa: t.zx,
-          unit: "MPa",
-          source: s.source,
-          note: s.note,
-          createdBy: ownerId,
-        },
-        { transaction },
-      );
-    }
+    await writeStressStates(
+      c.states.map((s) => ({
+        loadCaseId: row.id,
+        locationId: locationIds.get(s.location)!,
+        componentsPa: s.tensor,
+        unit: "MPa",
+        source: s.source,
+        note: s.note,
+        createdBy: ownerId,
+      })),
+      transaction,
+    );
   }
   for (const [position, combo] of spec.combinations.entries()) {
-    const row = await Combination.create(
+    await createCombination(
       { projectId: project.id, name: combo.name, description: combo.description, position, ...who },
-      { transaction },
-    );
-    await CombinationTerm.bulkCreate(
-      combo.terms.map((t, i) => ({
-        combinationId: row.id,
-        loadCaseId: caseIds.get(t.caseName)!,
-        factor: t.factor,
-        position: i,
-      })),
-      { transaction },
+      combo.terms.map((t) => ({ loadCaseId: caseIds.get(t.caseName)!, factor: t.factor })),
+      transaction,
     );
   }
-  await AuditEvent.create(
+  await insertAuditEvent(
     {
       workspaceId,
       projectId: project.id,
@@ -112,7 +93,7 @@ async function createProject(
       actorName: "demo seed",
       summary: `created the demo project "${project.name}"`,
     },
-    { transaction },
+    transaction,
   );
 }
 
@@ -120,17 +101,17 @@ async function createProject(
 export async function seedDemoProjects(transaction: Transaction, log: (line: string) => void): Promise<void> {
   const workspace = await Workspace.findOne({ where: { name: DEMO_WORKSPACE_NAME }, transaction });
   if (!workspace) return;
-  if ((await Project.count({ where: { workspaceId: workspace.id }, transaction })) > 0) return;
+  if ((await countProjects(workspace.id, transaction)) > 0) return;
   const owner = workspace.createdBy;
 
   const { key, ...bar } = CT7_SHAFT_BAR;
-  const shaftBar = await Material.create(
+  const shaftBar = await createMaterial(
     { workspaceId: workspace.id, unit: "MPa", ...bar, createdBy: owner, updatedBy: owner },
-    { transaction },
+    transaction,
   );
   const projects = ct7Projects();
   for (const spec of projects) {
-    await createProject(transaction, workspace.id, owner, spec, { [key]: shaftBar.id });
+    await createDemoProject(transaction, workspace.id, owner, spec, { [key]: shaftBar.id });
   }
   log(`demo projects: ${projects.length} CT-7 projects in "${DEMO_WORKSPACE_NAME}"`);
 }

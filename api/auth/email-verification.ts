@@ -14,7 +14,7 @@ export const VERIFY_LINK_LIFETIME_HOURS = 48;
  */
 export async function sendVerificationMail(
   context: AppContext,
-  user: User,
+  user: Pick<User, "id" | "email" | "name">,
   nextPath: string | null,
 ): Promise<void> {
   const token = newLinkToken();

@@ -8,7 +8,7 @@ import { invitationRoutes } from "../routes/invitations";
 import { mailboxRoutes } from "../routes/mailbox";
 import { memberRoutes } from "../routes/members";
 import { openApiRoutes } from "../routes/openapi";
-import { projectAreaRoutes } from "../routes/projects/area";
+import { projectAreaRoutes } from "../routes/project-area";
 import { shareLinkRoutes } from "../routes/share-links";
 import { workspaceRoutes } from "../routes/workspaces";
 import { defineRoute, type AnyRoute } from "./registry";

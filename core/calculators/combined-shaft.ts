@@ -1,3 +1,5 @@
+// Long because one calculator's parts belong together: section properties, nominal stresses
+// with Kt, the state at a surface point and the search for the critical point share their types.
 /**
  * Solid or hollow circular shaft under combined load: bending about two axes, torque, axial force and
  * transverse shear. Gives the full stress state at any point of the outer (and, for a hollow shaft,

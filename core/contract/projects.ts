@@ -3,6 +3,9 @@ import { categoryKey } from "../constants/categories";
 import { CRITERIA } from "../constants/criteria";
 import { materialRefSchema, versionSchema } from "./materials";
 
+// Long because it holds every wire schema of a project (requirements, category factors,
+// materials, create/update/list bodies) that the API and the browser's forms share.
+
 /**
  * Projects and their locations (the named points of a structure that every load case is
  * checked at). Shared by the API and the web: imports only zod and core's dependency-free constants.

@@ -134,7 +134,24 @@ export function factorFromPrincipals(
   s3: number,
   vonMises: number,
 ): number {
-  const { yield: sy, ultimateTension: st, ultimateCompression: sc } = strengthsFor(criterion, material);
+  return factorFromStrengths(criterion, strengthsFor(criterion, material), s1, s3, vonMises);
+}
+
+/**
+ * The criteria's formulas, from strengths already checked by {@link strengthsFor}: the one
+ * place they are written. A batch that rates many states against one material checks the
+ * strengths once and calls this per state (checking them per state was more than half of
+ * rating a million finite-element points, scripts/bench/point-tables.ts).
+ * @param strengths what {@link strengthsFor} returned for `criterion`
+ */
+export function factorFromStrengths(
+  criterion: Criterion,
+  strengths: ReturnType<typeof strengthsFor>,
+  s1: number,
+  s3: number,
+  vonMises: number,
+): number {
+  const { yield: sy, ultimateTension: st, ultimateCompression: sc } = strengths;
   switch (criterion) {
     case "von-mises":
       return sy / vonMises;

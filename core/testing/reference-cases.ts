@@ -1,3 +1,5 @@
+// Long because it is a table: every reference case with its source, basis and tolerance in one
+// list, so a reviewer reads all the outside references the tests hold in one place.
 /**
  * Check values for core's computations, kept inside the repository so that `npm test` on a fresh
  * clone needs nothing beside it. Each case names where its numbers come from, by `basis`:

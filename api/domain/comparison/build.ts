@@ -21,9 +21,12 @@ import {
   type GoverningView,
 } from "../../../core/contract/comparison";
 import type { CategoryRequirement, Requirement } from "../../../core/contract/projects";
-import type { StoredTerm } from "../../routes/combinations/superpose";
-import { componentsPaOf } from "../../routes/load-cases/states";
-import type { ResolvedMaterial } from "../../routes/materials/resolve";
+import { componentsPaOf } from "../../../db/repositories/stress-states";
+import type { StoredTerm } from "../combinations/superpose";
+import type { ResolvedMaterial } from "../materials/resolve";
+
+// Long because building the comparison's rows, its superposition over packed states and the
+// governing search share the input's indexes; paging.ts cuts the work into runs.
 
 /** A current stress state as the comparison reads it: its revision and six components in Pa. */
 export type ComparisonState = {

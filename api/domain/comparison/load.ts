@@ -2,8 +2,8 @@ import type { Sequelize } from "sequelize";
 import { preparedQuery } from "../../../db/prepared-query";
 import type { CategoryRequirement, Requirement } from "../../../core/contract/projects";
 import type { Material } from "../../../db/models/material";
-import type { StoredTerm } from "../../routes/combinations/superpose";
-import { refFromColumns, resolveMaterial } from "../../routes/materials/resolve";
+import type { StoredTerm } from "../combinations/superpose";
+import { refFromColumns, resolveMaterial } from "../materials/resolve";
 import { stateKey, type ComparisonInput, type ComparisonState } from "./build";
 
 /**

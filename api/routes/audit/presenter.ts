@@ -1,8 +1,8 @@
 import type { AuditEventView } from "../../../core/contract/projects";
-import type { AuditEvent } from "../../../db/models/audit-event";
+import type { AuditEventRow } from "../../../db/repositories/audit";
 
 /** An audit event as the API sends it. */
-export function presentAuditEvent(e: AuditEvent): AuditEventView {
+export function presentAuditEvent(e: AuditEventRow): AuditEventView {
   return {
     id: String(e.id),
     at: e.createdAt.toISOString(),

@@ -22,8 +22,8 @@ import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import { accountExistsMail, passwordResetMail } from "../../mail/templates";
 import type { RouteHandler } from "../../openapi/registry";
-import { invitationState } from "../invitations/presenter";
-import { presentUser } from "./presenter";
+import { invitationState } from "../../domain/invitations/state";
+import { presentUser } from "../../domain/accounts/present-user";
 import { FORGOT_PASSWORD_NOTICE, RESET_LINK_LIFETIME_MS, SIGN_UP_NOTICE } from "./schema";
 
 type NoInput = Record<string, never>;

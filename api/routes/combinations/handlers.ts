@@ -4,24 +4,32 @@ import {
   type CreateCombinationBody,
   type UpdateCombinationBody,
 } from "../../../core/contract/combinations";
-import { Combination } from "../../../db/models/combination";
-import { CombinationTerm } from "../../../db/models/combination-term";
-import { LoadCase } from "../../../db/models/load-case";
-import { Location } from "../../../db/models/location";
+import {
+  countLiveCombinations,
+  createCombination,
+  findLiveCombination,
+  listLiveCombinations,
+  nextCombinationPosition,
+  replaceTerms,
+  updateCombination,
+  type CombinationRow,
+} from "../../../db/repositories/combinations";
+import { liveLoadCaseIdsAmong } from "../../../db/repositories/load-cases";
+import { listLiveLocations } from "../../../db/repositories/locations";
+import { currentStatesOf } from "../../../db/repositories/stress-states";
 import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
-import { changedFields, recordAudit } from "../audit/record";
-import { moveToTrashHandler } from "../trash/move-to-trash";
-import { currentStatesOf } from "../load-cases/states";
-import { peopleById } from "../projects/people";
-import { assertWithinLimit } from "../projects/limits";
-import { findProject } from "../projects/scope";
-import { assertVersion } from "../projects/versioning";
+import { changedFields, recordAudit } from "../../domain/audit/record";
+import { moveToTrashHandler } from "../../domain/trash/move-to-trash";
+import { peopleById } from "../../domain/projects/people";
+import { assertWithinLimit } from "../../domain/projects/limits";
+import { findProject } from "../../domain/projects/scope";
+import { assertVersion } from "../../domain/projects/versioning";
 import { combinationFormula, presentCombination } from "./presenter";
-import { stateIndex, superposeAt } from "./superpose";
-import { termsOf } from "./terms";
+import { stateIndex, superposeAt } from "../../domain/combinations/superpose";
+import { termsOf } from "../../domain/combinations/terms";
 
 type NoInput = Record<string, never>;
 type ProjectParams = { workspaceId: string; projectId: string };
@@ -29,23 +37,18 @@ type CombinationParams = ProjectParams & { combinationId: string };
 type TermInput = { loadCaseId: string; factor: number };
 
 async function findCombination(projectId: string, combinationId: string, transaction?: Transaction) {
-  const c = await Combination.findOne({
-    where: { id: combinationId, projectId, deletedAt: null },
-    transaction,
-    lock: transaction ? transaction.LOCK.UPDATE : undefined,
-  });
+  const c = await findLiveCombination(projectId, combinationId, { transaction, lock: true });
   if (!c) throw errors.notFound("This combination");
   return c;
 }
 
 /** Refuses (400 naming `terms.i.loadCaseId`) cases that are not live cases of the project. */
 async function assertProjectCases(projectId: string, terms: TermInput[], transaction: Transaction) {
-  const found = await LoadCase.findAll({
-    attributes: ["id"],
-    where: { id: terms.map((t) => t.loadCaseId), projectId, deletedAt: null },
+  const known = await liveLoadCaseIdsAmong(
+    projectId,
+    terms.map((t) => t.loadCaseId),
     transaction,
-  });
-  const known = new Set(found.map((c) => c.id));
+  );
   const problems = terms
     .map((t, i) =>
       known.has(t.loadCaseId)
@@ -56,15 +59,7 @@ async function assertProjectCases(projectId: string, terms: TermInput[], transac
   if (problems.length) throw errors.invalidInput(problems);
 }
 
-async function writeTerms(combinationId: string, terms: TermInput[], transaction: Transaction) {
-  await CombinationTerm.destroy({ where: { combinationId }, transaction });
-  await CombinationTerm.bulkCreate(
-    terms.map((t, position) => ({ combinationId, loadCaseId: t.loadCaseId, factor: t.factor, position })),
-    { transaction },
-  );
-}
-
-async function present(c: Combination, transaction?: Transaction) {
+async function present(c: CombinationRow, transaction?: Transaction) {
   const terms = (await termsOf([c], transaction)).get(c.id)!;
   return presentCombination(c, terms, await peopleById([c.updatedBy, c.createdBy], transaction));
 }
@@ -85,13 +80,7 @@ async function refuseStale(projectId: string, combinationId: string, sentVersion
 export const listCombinationsHandler: RouteHandler<ProjectParams, NoInput, NoInput> = async (_req, res) => {
   const { workspace } = currentMembership(res);
   const project = await findProject(workspace.id, res.locals.input.params.projectId);
-  const rows = await Combination.findAll({
-    where: { projectId: project.id, deletedAt: null },
-    order: [
-      ["position", "ASC"],
-      ["createdAt", "ASC"],
-    ],
-  });
+  const rows = await listLiveCombinations(project.id);
   const terms = await termsOf(rows);
   const people = await peopleById(rows.flatMap((c) => [c.updatedBy, c.createdBy]));
   res
@@ -115,10 +104,7 @@ export const combinationResultsHandler: RouteHandler<CombinationParams, NoInput,
   const project = await findProject(workspace.id, res.locals.input.params.projectId);
   const c = await findCombination(project.id, res.locals.input.params.combinationId);
   const terms = (await termsOf([c])).get(c.id)!;
-  const locations = await Location.findAll({
-    where: { projectId: project.id, deletedAt: null },
-    order: [["position", "ASC"]],
-  });
+  const locations = await listLiveLocations(project.id);
   const states = stateIndex(await currentStatesOf(terms.map((t) => t.loadCaseId)));
   const results = locations.map((l) => {
     const s = superposeAt(terms, l.id, states);
@@ -151,25 +137,20 @@ export function createCombinationHandler(
         lock: true,
       });
       await assertProjectCases(project.id, body.terms, transaction);
-      const live = await Combination.count({
-        where: { projectId: project.id, deletedAt: null },
-        transaction,
-      });
+      const live = await countLiveCombinations(project.id, transaction);
       assertWithinLimit("combinations", live, 1, "combinations");
-      const last = (await Combination.max("position", { where: { projectId: project.id }, transaction })) as
-        number | null;
-      const c = await Combination.create(
+      const c = await createCombination(
         {
           projectId: project.id,
           name: body.name,
           description: body.description,
-          position: (last ?? -1) + 1,
+          position: await nextCombinationPosition(project.id, transaction),
           createdBy: user.id,
           updatedBy: user.id,
         },
-        { transaction },
+        body.terms,
+        transaction,
       );
-      await writeTerms(c.id, body.terms, transaction);
       const view = await present(c, transaction);
       await recordAudit(transaction, user, {
         workspaceId: workspace.id,
@@ -196,17 +177,21 @@ export function updateCombinationHandler(
     const { projectId, combinationId } = res.locals.input.params;
     const updated = await context.sequelize.transaction(async (transaction) => {
       const project = await findProject(workspace.id, projectId, { transaction });
-      const c = await findCombination(project.id, combinationId, transaction);
-      if (c.version !== version) return STALE;
-      const current = await present(c, transaction);
+      const found = await findCombination(project.id, combinationId, transaction);
+      if (found.version !== version) return STALE;
+      const current = await present(found, transaction);
       if (terms) await assertProjectCases(project.id, terms, transaction);
       const before = {
-        name: c.name,
-        description: c.description,
+        name: found.name,
+        description: found.description,
         terms: current.terms.map(({ loadCaseId, factor }) => ({ loadCaseId, factor })),
       };
-      await c.update({ ...fields, version: c.version + 1, updatedBy: user.id }, { transaction });
-      if (terms) await writeTerms(c.id, terms, transaction);
+      const c = await updateCombination(
+        found.id,
+        { ...fields, version: found.version + 1, updatedBy: user.id },
+        transaction,
+      );
+      if (terms) await replaceTerms(c.id, terms, transaction);
       const view = await present(c, transaction);
       await recordAudit(transaction, user, {
         workspaceId: workspace.id,
@@ -227,7 +212,7 @@ export function updateCombinationHandler(
 /** `DELETE`: the combination goes to the trash. */
 export const deleteCombinationHandler = (context: AppContext) =>
   moveToTrashHandler<CombinationParams>(context, {
-    entityType: "combination",
+    kind: "combination",
     noun: "combination",
     find: (projectId, params, transaction) => findCombination(projectId, params.combinationId, transaction),
   });

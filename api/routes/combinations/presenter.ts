@@ -1,11 +1,11 @@
 import type { Combination as CombinationView } from "../../../core/contract/combinations";
-import type { Combination } from "../../../db/models/combination";
-import { personOf, type PersonRef } from "../projects/people";
-import type { StoredTerm } from "./superpose";
+import type { CombinationRow } from "../../../db/repositories/combinations";
+import { personOf, type PersonRef } from "../../domain/projects/people";
+import type { StoredTerm } from "../../domain/combinations/superpose";
 
 /** A combination as the API sends it. */
 export function presentCombination(
-  c: Combination,
+  c: CombinationRow,
   terms: StoredTerm[],
   people: Map<string, PersonRef>,
 ): CombinationView {

@@ -1,9 +1,17 @@
 import type { Transaction } from "sequelize";
 import { INVITATION_LIFETIME_DAYS, type CreateInvitationBody } from "../../../core/contract/invitations";
-import { Invitation } from "../../../db/models/invitation";
-import { Membership } from "../../../db/models/membership";
-import { User } from "../../../db/models/user";
-import { Workspace } from "../../../db/models/workspace";
+import {
+  createInvitation,
+  findInvitation as findInvitationRow,
+  findInvitationByToken,
+  listInvitations,
+  lockInvitation,
+  openInvitations,
+  updateInvitation,
+  type InvitationRow,
+} from "../../../db/repositories/invitations";
+import { findUser } from "../../../db/repositories/users";
+import { findMembershipOf, type WorkspaceRow } from "../../../db/repositories/workspaces";
 import { sendVerificationMail } from "../../auth/email-verification";
 import { currentMembership, currentUser } from "../../auth/guards";
 import { hashToken, newLinkToken } from "../../auth/tokens";
@@ -12,9 +20,10 @@ import type { AppContext } from "../../context";
 import { errors, HttpError } from "../../errors";
 import { invitationMail } from "../../mail/templates";
 import type { RouteHandler } from "../../openapi/registry";
-import { addMember } from "../members/join";
-import { lockWorkspace } from "../members/last-owner";
-import { invitationState, presentInvitation, presentInvitationPreview } from "./presenter";
+import { addMember } from "../../domain/members/join";
+import { lockWorkspace } from "../../../db/repositories/workspaces";
+import { invitationState } from "../../domain/invitations/state";
+import { presentInvitation, presentInvitationPreview } from "./presenter";
 
 type NoInput = Record<string, never>;
 type WorkspaceParams = { workspaceId: string };
@@ -23,14 +32,13 @@ type TokenParams = { token: string };
 
 const DAY_MS = 24 * 60 * 60 * 1000;
 const newExpiry = () => new Date(Date.now() + INVITATION_LIFETIME_DAYS * DAY_MS);
-const withInviter = [{ model: User, as: "inviter" }];
 
 /** Mails the invitation link; a failing mail server becomes a 502 that says the invitation exists. */
 async function sendInvitation(
   context: AppContext,
-  invitation: Invitation,
+  invitation: InvitationRow,
   token: string,
-  workspace: Workspace,
+  workspace: Pick<WorkspaceRow, "name">,
   inviterName: string,
 ) {
   try {
@@ -50,11 +58,7 @@ async function sendInvitation(
 }
 
 export const listInvitationsHandler: RouteHandler<WorkspaceParams, NoInput, NoInput> = async (_req, res) => {
-  const rows = await Invitation.findAll({
-    where: { workspaceId: currentMembership(res).workspace.id },
-    include: withInviter,
-    order: [["createdAt", "DESC"]],
-  });
+  const rows = await listInvitations(currentMembership(res).workspace.id);
   res.set("Cache-Control", "no-store").json({ invitations: rows.map(presentInvitation) });
 };
 
@@ -71,13 +75,7 @@ export function createInvitationHandler(
     const invitation = await context.sequelize.transaction(async (transaction) => {
       await lockWorkspace(workspace.id, transaction);
       const existingUser = await findUserByEmail(email, transaction);
-      if (
-        existingUser &&
-        (await Membership.count({
-          where: { workspaceId: workspace.id, userId: existingUser.id },
-          transaction,
-        }))
-      ) {
+      if (existingUser && (await findMembershipOf(workspace.id, existingUser.id, transaction))) {
         throw errors.conflictWithId(
           "already_member",
           `${existingUser.name} is a member of this workspace already.`,
@@ -91,8 +89,9 @@ export function createInvitationHandler(
         );
       }
       // An expired invitation still holds the "one open invitation per address" slot: retire it.
-      if (open) await open.update({ revokedAt: new Date(), revokedBy: inviter.id }, { transaction });
-      return Invitation.create(
+      if (open)
+        await updateInvitation(open.id, { revokedAt: new Date(), revokedBy: inviter.id }, transaction);
+      return createInvitation(
         {
           workspaceId: workspace.id,
           email,
@@ -101,27 +100,23 @@ export function createInvitationHandler(
           expiresAt: newExpiry(),
           createdBy: inviter.id,
         },
-        { transaction },
+        transaction,
       );
     });
     await sendInvitation(context, invitation, token, workspace, inviter.name);
-    await invitation.reload({ include: withInviter });
-    res.status(201).json({ invitation: presentInvitation(invitation) });
+    const stored = (await findInvitationRow(workspace.id, invitation.id))!;
+    res.status(201).json({ invitation: presentInvitation(stored) });
   };
 }
 
 function openInvitationFor(workspaceId: string, email: string, transaction: Transaction) {
-  return Invitation.findAll({
-    where: { workspaceId, acceptedAt: null, revokedAt: null },
-    transaction,
-  }).then((rows) => rows.find((row) => sameEmail(row.email, email)) ?? null);
+  return openInvitations(workspaceId, transaction).then(
+    (rows) => rows.find((row) => sameEmail(row.email, email)) ?? null,
+  );
 }
 
-async function findInvitation(workspaceId: string, invitationId: string): Promise<Invitation> {
-  const invitation = await Invitation.findOne({
-    where: { id: invitationId, workspaceId },
-    include: withInviter,
-  });
+async function findInvitation(workspaceId: string, invitationId: string): Promise<InvitationRow> {
+  const invitation = await findInvitationRow(workspaceId, invitationId);
   if (!invitation) throw errors.notFound("This invitation");
   return invitation;
 }
@@ -141,14 +136,17 @@ export function resendInvitationHandler(
       );
     }
     const token = newLinkToken();
-    await invitation.update({
-      tokenHash: hashToken(token),
-      expiresAt: newExpiry(),
-      lastSentAt: new Date(),
-      sendCount: invitation.sendCount + 1,
-    });
-    await sendInvitation(context, invitation, token, workspace, currentUser(res).name);
-    res.json({ invitation: presentInvitation(invitation) });
+    const resent = {
+      ...(await updateInvitation(invitation.id, {
+        tokenHash: hashToken(token),
+        expiresAt: newExpiry(),
+        lastSentAt: new Date(),
+        sendCount: invitation.sendCount + 1,
+      })),
+      inviter: invitation.inviter,
+    };
+    await sendInvitation(context, resent, token, workspace, currentUser(res).name);
+    res.json({ invitation: presentInvitation(resent) });
   };
 }
 
@@ -162,16 +160,12 @@ export const revokeInvitationHandler: RouteHandler<InvitationParams, NoInput, No
   if (state === "accepted" || state === "revoked") {
     throw errors.conflictWithId(`invitation_${state}`, `This invitation was ${state} already.`);
   }
-  await invitation.update({ revokedAt: new Date(), revokedBy: currentUser(res).id });
+  await updateInvitation(invitation.id, { revokedAt: new Date(), revokedBy: currentUser(res).id });
   res.status(204).end();
 };
 
-async function invitationByToken(token: string, transaction?: Transaction): Promise<Invitation> {
-  const invitation = await Invitation.findOne({
-    where: { tokenHash: hashToken(token) },
-    include: [...withInviter, { model: Workspace, as: "workspace", required: true }],
-    transaction,
-  });
+async function invitationByToken(token: string, transaction?: Transaction): Promise<InvitationRow> {
+  const invitation = await findInvitationByToken(hashToken(token), transaction);
   if (!invitation) {
     throw errors.notFound("This invitation (the link may have been replaced by a newer one)");
   }
@@ -202,7 +196,7 @@ export function acceptInvitationHandler(context: AppContext): RouteHandler<Token
     const result = await context.sequelize.transaction(async (transaction) => {
       const found = await invitationByToken(token, transaction);
       // Lock the row: two tabs accepting at once must not both succeed.
-      const invitation = await Invitation.findByPk(found.id, { transaction, lock: transaction.LOCK.UPDATE });
+      const invitation = await lockInvitation(found.id, transaction);
       if (!invitation) throw errors.notFound("This invitation");
       const state = invitationState(invitation);
       if (state !== "pending") throw errors.conflictWithId(`invitation_${state}`, UNUSABLE[state]);
@@ -213,7 +207,8 @@ export function acceptInvitationHandler(context: AppContext): RouteHandler<Token
           `This invitation was sent to ${invitation.email}; sign in with that address to accept it.`,
         );
       }
-      const account = await User.findByPk(user.id, { transaction, rejectOnEmpty: true });
+      const account = await findUser(user.id, transaction);
+      if (!account) throw new Error(`the signed-in account ${user.id} has no row`);
       if (!account.emailVerifiedAt) return { kind: "unverified" as const, account };
       const joined = await addMember(
         {
@@ -226,7 +221,7 @@ export function acceptInvitationHandler(context: AppContext): RouteHandler<Token
         },
         transaction,
       );
-      await invitation.update({ acceptedAt: new Date(), acceptedBy: user.id }, { transaction });
+      await updateInvitation(invitation.id, { acceptedAt: new Date(), acceptedBy: user.id }, transaction);
       return { kind: "joined" as const, joined };
     });
     if (result.kind === "unverified") {

@@ -1,13 +1,6 @@
-import type { Invitation, InvitationPreview, InvitationState } from "../../../core/contract/invitations";
-import type { Invitation as InvitationRow } from "../../../db/models/invitation";
-
-/** An invitation's state, derived from its timestamps at `now`. */
-export function invitationState(invitation: InvitationRow, now = new Date()): InvitationState {
-  if (invitation.acceptedAt) return "accepted";
-  if (invitation.revokedAt) return "revoked";
-  if (invitation.expiresAt.getTime() <= now.getTime()) return "expired";
-  return "pending";
-}
+import type { Invitation, InvitationPreview } from "../../../core/contract/invitations";
+import type { InvitationRow } from "../../../db/repositories/invitations";
+import { invitationState } from "../../domain/invitations/state";
 
 /** What the owners' list shows (never the token or its hash). */
 export function presentInvitation(invitation: InvitationRow): Invitation {

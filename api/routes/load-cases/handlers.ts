@@ -1,20 +1,28 @@
 import type { Transaction } from "sequelize";
 import type { CreateLoadCaseBody, PutStateBody, UpdateLoadCaseBody } from "../../../core/contract/load-cases";
-import { LoadCase } from "../../../db/models/load-case";
-import { Location } from "../../../db/models/location";
-import { StressState } from "../../../db/models/stress-state";
+import {
+  countLiveLoadCases,
+  createLoadCase,
+  findLiveLoadCase,
+  listLiveLoadCases,
+  nextLoadCasePosition,
+  updateLoadCase,
+  type LoadCaseRow,
+} from "../../../db/repositories/load-cases";
+import { locationNames } from "../../../db/repositories/locations";
+import { stateRevisions } from "../../../db/repositories/stress-states";
 import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
-import { changedFields, recordAudit } from "../audit/record";
-import { moveToTrashHandler } from "../trash/move-to-trash";
-import { peopleById } from "../projects/people";
-import { assertWithinLimit } from "../projects/limits";
-import { findProject } from "../projects/scope";
-import { assertVersion } from "../projects/versioning";
-import { loadCaseAuditFields, presentLoadCases } from "./presenter";
-import { assertProjectLocations, presentState, removeState, saveStateRevision } from "./states";
+import { changedFields, recordAudit } from "../../domain/audit/record";
+import { moveToTrashHandler } from "../../domain/trash/move-to-trash";
+import { peopleById } from "../../domain/projects/people";
+import { assertWithinLimit } from "../../domain/projects/limits";
+import { findProject } from "../../domain/projects/scope";
+import { assertVersion } from "../../domain/projects/versioning";
+import { loadCaseAuditFields, presentLoadCases, presentState } from "./presenter";
+import { assertProjectLocations, removeState, saveStateRevision } from "../../domain/load-cases/states";
 
 type NoInput = Record<string, never>;
 type ProjectParams = { workspaceId: string; projectId: string };
@@ -23,22 +31,12 @@ type StateParams = CaseParams & { locationId: string };
 
 /** The live load case, or 404; with a transaction it is locked FOR UPDATE (versions are compared under the lock). */
 async function findLoadCase(projectId: string, loadCaseId: string, transaction?: Transaction) {
-  const c = await LoadCase.findOne({
-    where: { id: loadCaseId, projectId, deletedAt: null },
-    transaction,
-    lock: transaction ? transaction.LOCK.UPDATE : undefined,
-  });
+  const c = await findLiveLoadCase(projectId, loadCaseId, { transaction, lock: true });
   if (!c) throw errors.notFound("This load case");
   return c;
 }
 
-async function locationNames(ids: string[], transaction?: Transaction) {
-  if (ids.length === 0) return new Map<string, string>();
-  const rows = await Location.findAll({ attributes: ["id", "name"], where: { id: ids }, transaction });
-  return new Map(rows.map((l) => [l.id, l.name]));
-}
-
-async function presentOne(c: LoadCase, transaction?: Transaction) {
+async function presentOne(c: LoadCaseRow, transaction?: Transaction) {
   return (await presentLoadCases([c], transaction))[0];
 }
 
@@ -62,13 +60,7 @@ async function refuseStale(projectId: string, loadCaseId: string, sentVersion: n
 export const listLoadCasesHandler: RouteHandler<ProjectParams, NoInput, NoInput> = async (_req, res) => {
   const { workspace } = currentMembership(res);
   const project = await findProject(workspace.id, res.locals.input.params.projectId);
-  const cases = await LoadCase.findAll({
-    where: { projectId: project.id, deletedAt: null },
-    order: [
-      ["position", "ASC"],
-      ["createdAt", "ASC"],
-    ],
-  });
+  const cases = await listLiveLoadCases(project.id);
   res.set("Cache-Control", "no-store").json({ loadCases: await presentLoadCases(cases) });
 };
 
@@ -98,21 +90,18 @@ export function createLoadCaseHandler(
         body.states.map((_, i) => `states.${i}.locationId`),
         transaction,
       );
-      const live = await LoadCase.count({ where: { projectId: project.id, deletedAt: null }, transaction });
-      assertWithinLimit("loadCases", live, 1, "loadCases");
-      const last = (await LoadCase.max("position", { where: { projectId: project.id }, transaction })) as
-        number | null;
-      const c = await LoadCase.create(
+      assertWithinLimit("loadCases", await countLiveLoadCases(project.id, transaction), 1, "loadCases");
+      const c = await createLoadCase(
         {
           projectId: project.id,
           name: body.name,
           category: body.category,
           description: body.description,
-          position: (last ?? -1) + 1,
+          position: await nextLoadCasePosition(project.id, transaction),
           createdBy: user.id,
           updatedBy: user.id,
         },
-        { transaction },
+        transaction,
       );
       await recordAudit(transaction, user, {
         workspaceId: workspace.id,
@@ -148,8 +137,8 @@ export function updateLoadCaseHandler(
     const { projectId, loadCaseId } = res.locals.input.params;
     const updated = await context.sequelize.transaction(async (transaction) => {
       const project = await findProject(workspace.id, projectId, { transaction });
-      const c = await findLoadCase(project.id, loadCaseId, transaction);
-      if (c.version !== version) return STALE;
+      const found = await findLoadCase(project.id, loadCaseId, transaction);
+      if (found.version !== version) return STALE;
       const ids = [...states.map((s) => s.locationId), ...removeStates];
       await assertProjectLocations(
         project.id,
@@ -160,8 +149,12 @@ export function updateLoadCaseHandler(
         ],
         transaction,
       );
-      const before = loadCaseAuditFields(c);
-      await c.update({ ...fields, version: c.version + 1, updatedBy: user.id }, { transaction });
+      const before = loadCaseAuditFields(found);
+      const c = await updateLoadCase(
+        found.id,
+        { ...fields, version: found.version + 1, updatedBy: user.id },
+        transaction,
+      );
       const changes = changedFields(before, loadCaseAuditFields(c));
       if (Object.keys(changes).length > 0) {
         await recordAudit(transaction, user, {
@@ -201,11 +194,15 @@ export function putStateHandler(context: AppContext): RouteHandler<StateParams, 
     const { projectId, loadCaseId, locationId } = res.locals.input.params;
     const updated = await context.sequelize.transaction(async (transaction) => {
       const project = await findProject(workspace.id, projectId, { transaction });
-      const c = await findLoadCase(project.id, loadCaseId, transaction);
-      if (c.version !== version) return STALE;
+      const found = await findLoadCase(project.id, loadCaseId, transaction);
+      if (found.version !== version) return STALE;
       await assertProjectLocations(project.id, [locationId], ["params.locationId"], transaction);
       const names = await locationNames([locationId], transaction);
-      await c.update({ version: c.version + 1, updatedBy: user.id }, { transaction });
+      const c = await updateLoadCase(
+        found.id,
+        { version: found.version + 1, updatedBy: user.id },
+        transaction,
+      );
       await saveStateRevision(
         transaction,
         user,
@@ -230,10 +227,7 @@ export const stateHistoryHandler: RouteHandler<StateParams, NoInput, NoInput> = 
   const { projectId, loadCaseId, locationId } = res.locals.input.params;
   const project = await findProject(workspace.id, projectId);
   const c = await findLoadCase(project.id, loadCaseId);
-  const rows = await StressState.findAll({
-    where: { loadCaseId: c.id, locationId },
-    order: [["revision", "DESC"]],
-  });
+  const rows = await stateRevisions(c.id, locationId);
   const people = await peopleById(rows.map((r) => r.createdBy));
   res.set("Cache-Control", "no-store").json({ revisions: rows.map((r) => presentState(r, people)) });
 };
@@ -241,7 +235,7 @@ export const stateHistoryHandler: RouteHandler<StateParams, NoInput, NoInput> = 
 /** `DELETE`: the load case goes to the trash. */
 export const deleteLoadCaseHandler = (context: AppContext) =>
   moveToTrashHandler<CaseParams>(context, {
-    entityType: "load-case",
+    kind: "load-case",
     noun: "load case",
     find: (projectId, params, transaction) => findLoadCase(projectId, params.loadCaseId, transaction),
   });

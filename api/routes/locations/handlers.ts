@@ -1,16 +1,23 @@
 import type { Transaction } from "sequelize";
 import type { CreateLocationBody, UpdateLocationBody } from "../../../core/contract/projects";
-import { Location } from "../../../db/models/location";
+import {
+  countLiveLocations,
+  createLocation,
+  findLiveLocation,
+  listLiveLocations,
+  nextLocationPosition,
+  updateLocation,
+} from "../../../db/repositories/locations";
 import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
-import { changedFields, recordAudit } from "../audit/record";
-import { moveToTrashHandler } from "../trash/move-to-trash";
-import { assertMaterialRef, columnsFromRef } from "../materials/resolve";
-import { assertWithinLimit } from "../projects/limits";
-import { findProject } from "../projects/scope";
-import { assertVersion } from "../projects/versioning";
+import { changedFields, recordAudit } from "../../domain/audit/record";
+import { moveToTrashHandler } from "../../domain/trash/move-to-trash";
+import { assertMaterialRef, columnsFromRef } from "../../domain/materials/resolve";
+import { assertWithinLimit } from "../../domain/projects/limits";
+import { findProject } from "../../domain/projects/scope";
+import { assertVersion } from "../../domain/projects/versioning";
 import { locationAuditFields, presentLocation } from "./presenter";
 
 type NoInput = Record<string, never>;
@@ -18,11 +25,7 @@ type ProjectParams = { workspaceId: string; projectId: string };
 type LocationParams = ProjectParams & { locationId: string };
 
 async function findLocation(projectId: string, locationId: string, transaction?: Transaction) {
-  const l = await Location.findOne({
-    where: { id: locationId, projectId, deletedAt: null },
-    transaction,
-    lock: transaction ? transaction.LOCK.UPDATE : undefined,
-  });
+  const l = await findLiveLocation(projectId, locationId, { transaction, lock: true });
   if (!l) throw errors.notFound("This location");
   return l;
 }
@@ -30,13 +33,7 @@ async function findLocation(projectId: string, locationId: string, transaction?:
 export const listLocationsHandler: RouteHandler<ProjectParams, NoInput, NoInput> = async (_req, res) => {
   const { workspace } = currentMembership(res);
   const project = await findProject(workspace.id, res.locals.input.params.projectId);
-  const rows = await Location.findAll({
-    where: { projectId: project.id, deletedAt: null },
-    order: [
-      ["position", "ASC"],
-      ["createdAt", "ASC"],
-    ],
-  });
+  const rows = await listLiveLocations(project.id);
   res.set("Cache-Control", "no-store").json({ locations: rows.map(presentLocation) });
 };
 
@@ -62,23 +59,20 @@ export function createLocationHandler(
         lock: true,
       });
       await assertMaterialRef(workspace.id, body.material, "material", transaction);
-      const live = await Location.count({ where: { projectId: project.id, deletedAt: null }, transaction });
-      assertWithinLimit("locations", live, 1, "locations");
-      const last = (await Location.max("position", { where: { projectId: project.id }, transaction })) as
-        number | null;
+      assertWithinLimit("locations", await countLiveLocations(project.id, transaction), 1, "locations");
       const columns = columnsFromRef(body.material);
-      const created = await Location.create(
+      const created = await createLocation(
         {
           projectId: project.id,
           name: body.name,
           note: body.note,
           materialId: columns.materialId,
           publishedMaterial: columns.publishedMaterial,
-          position: (last ?? -1) + 1,
+          position: await nextLocationPosition(project.id, transaction),
           createdBy: user.id,
           updatedBy: user.id,
         },
-        { transaction },
+        transaction,
       );
       await recordAudit(transaction, user, {
         workspaceId: workspace.id,
@@ -115,17 +109,21 @@ export function updateLocationHandler(
               materialId: columnsFromRef(material).materialId,
               publishedMaterial: columnsFromRef(material).publishedMaterial,
             };
-      await l.update({ ...body, ...columns, version: l.version + 1, updatedBy: user.id }, { transaction });
+      const updated = await updateLocation(
+        l.id,
+        { ...body, ...columns, version: l.version + 1, updatedBy: user.id },
+        transaction,
+      );
       await recordAudit(transaction, user, {
         workspaceId: workspace.id,
         projectId: project.id,
         entityType: "location",
         entityId: l.id,
         action: "update",
-        summary: `changed the location "${l.name}" in "${project.name}"`,
-        changes: changedFields(before, locationAuditFields(l)),
+        summary: `changed the location "${updated.name}" in "${project.name}"`,
+        changes: changedFields(before, locationAuditFields(updated)),
       });
-      return l;
+      return updated;
     });
     res.json({ location: presentLocation(location) });
   };
@@ -134,7 +132,7 @@ export function updateLocationHandler(
 /** `DELETE`: the location goes to the trash. */
 export const deleteLocationHandler = (context: AppContext) =>
   moveToTrashHandler<LocationParams>(context, {
-    entityType: "location",
+    kind: "location",
     noun: "location",
     find: (projectId, params, transaction) => findLocation(projectId, params.locationId, transaction),
   });

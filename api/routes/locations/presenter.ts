@@ -1,9 +1,9 @@
 import type { Location as LocationView } from "../../../core/contract/projects";
-import type { Location } from "../../../db/models/location";
-import { refFromColumns } from "../materials/resolve";
+import type { LocationRow } from "../../../db/repositories/locations";
+import { refFromColumns } from "../../domain/materials/resolve";
 
 /** A location as the API sends it. */
-export function presentLocation(l: Location): LocationView {
+export function presentLocation(l: LocationRow): LocationView {
   return {
     id: l.id,
     projectId: l.projectId,
@@ -18,6 +18,6 @@ export function presentLocation(l: Location): LocationView {
 }
 
 /** The fields the audit trail compares for a location. */
-export function locationAuditFields(l: Location) {
+export function locationAuditFields(l: LocationRow) {
   return { name: l.name, note: l.note, material: refFromColumns(l.materialId, l.publishedMaterial) };
 }

@@ -1,7 +1,7 @@
 import type { MailMessage, MailSummary } from "../../../core/contract/mailbox";
-import type { DevMailMessage } from "../../../db/models/dev-mail-message";
+import type { DevMailRow } from "../../../db/repositories/dev-mail";
 
-export function presentMailSummary(message: DevMailMessage): MailSummary {
+export function presentMailSummary(message: DevMailRow): MailSummary {
   return {
     id: message.id,
     from: message.fromAddress,
@@ -11,6 +11,6 @@ export function presentMailSummary(message: DevMailMessage): MailSummary {
   };
 }
 
-export function presentMailMessage(message: DevMailMessage): MailMessage {
+export function presentMailMessage(message: DevMailRow): MailMessage {
   return { ...presentMailSummary(message), text: message.textBody, html: message.htmlBody };
 }

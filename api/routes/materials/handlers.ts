@@ -1,13 +1,21 @@
+import type { Transaction } from "sequelize";
 import { convertStress, type StressUnit } from "../../../core";
 import type { CreateMaterialBody, MaterialInput, UpdateMaterialBody } from "../../../core/contract/materials";
-import { Material } from "../../../db/models/material";
+import {
+  createMaterial,
+  findLiveMaterial,
+  listLiveMaterials,
+  updateMaterial,
+  type MaterialRow,
+} from "../../../db/repositories/materials";
+import { markDeleted } from "../../../db/repositories/trash";
 import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
-import { changedFields, recordAudit } from "../audit/record";
-import { peopleById } from "../projects/people";
-import { assertVersion } from "../projects/versioning";
+import { changedFields, recordAudit } from "../../domain/audit/record";
+import { peopleById } from "../../domain/projects/people";
+import { assertVersion } from "../../domain/projects/versioning";
 import { presentMaterial, presentPublished } from "./presenter";
 
 type NoInput = Record<string, never>;
@@ -28,7 +36,7 @@ function columnsFor(input: Partial<MaterialInput>, unit: StressUnit) {
 }
 
 /** The fields the audit trail compares for a material. */
-function auditFields(m: Material) {
+function auditFields(m: MaterialRow) {
   return {
     name: m.name,
     unit: m.unit,
@@ -42,30 +50,19 @@ function auditFields(m: Material) {
   };
 }
 
-async function findMaterial(
-  workspaceId: string,
-  materialId: string,
-  transaction?: import("sequelize").Transaction,
-) {
-  const m = await Material.findOne({
-    where: { id: materialId, workspaceId, deletedAt: null },
-    transaction,
-    lock: transaction ? transaction.LOCK.UPDATE : undefined,
-  });
+async function findMaterial(workspaceId: string, materialId: string, transaction?: Transaction) {
+  const m = await findLiveMaterial(workspaceId, materialId, { transaction, lock: true });
   if (!m) throw errors.notFound("This material");
   return m;
 }
 
-async function present(m: Material) {
+async function present(m: MaterialRow) {
   return presentMaterial(m, await peopleById([m.updatedBy, m.createdBy]));
 }
 
 export const listMaterialsHandler: RouteHandler<WorkspaceParams, NoInput, NoInput> = async (_req, res) => {
   const { workspace } = currentMembership(res);
-  const rows = await Material.findAll({
-    where: { workspaceId: workspace.id, deletedAt: null },
-    order: [["name", "ASC"]],
-  });
+  const rows = await listLiveMaterials(workspace.id);
   const people = await peopleById(rows.flatMap((m) => [m.updatedBy, m.createdBy]));
   res.set("Cache-Control", "no-store").json({
     materials: rows.map((m) => presentMaterial(m, people)),
@@ -87,7 +84,7 @@ export function createMaterialHandler(
     const { workspace } = currentMembership(res);
     const body = res.locals.input.body;
     const material = await context.sequelize.transaction(async (transaction) => {
-      const created = await Material.create(
+      const created = await createMaterial(
         {
           workspaceId: workspace.id,
           name: body.name,
@@ -99,7 +96,7 @@ export function createMaterialHandler(
           createdBy: user.id,
           updatedBy: user.id,
         },
-        { transaction },
+        transaction,
       );
       await recordAudit(transaction, user, {
         workspaceId: workspace.id,
@@ -131,7 +128,8 @@ export function updateMaterialHandler(
       // Values sent without a unit are in the unit the material already has; strengths not sent keep their Pa values.
       const unit = (body.unit ?? m.unit) as StressUnit;
       const strengths = columnsFor(body, unit);
-      await m.update(
+      const updated = await updateMaterial(
+        m.id,
         {
           ...(body.name !== undefined && { name: body.name }),
           ...(body.unit !== undefined && { unit: body.unit }),
@@ -142,7 +140,7 @@ export function updateMaterialHandler(
           version: m.version + 1,
           updatedBy: user.id,
         },
-        { transaction },
+        transaction,
       );
       await recordAudit(transaction, user, {
         workspaceId: workspace.id,
@@ -150,10 +148,10 @@ export function updateMaterialHandler(
         entityType: "material",
         entityId: m.id,
         action: "update",
-        summary: `changed the material "${m.name}"`,
-        changes: changedFields(before, auditFields(m)),
+        summary: `changed the material "${updated.name}"`,
+        changes: changedFields(before, auditFields(updated)),
       });
-      return m;
+      return updated;
     });
     res.json({ material: await present(material) });
   };
@@ -165,7 +163,7 @@ export function deleteMaterialHandler(context: AppContext): RouteHandler<Materia
     const { workspace } = currentMembership(res);
     await context.sequelize.transaction(async (transaction) => {
       const m = await findMaterial(workspace.id, res.locals.input.params.materialId, transaction);
-      await m.update({ deletedAt: new Date(), deletedBy: user.id }, { transaction });
+      await markDeleted("material", m.id, user.id, transaction);
       await recordAudit(transaction, user, {
         workspaceId: workspace.id,
         projectId: null,

@@ -4,13 +4,13 @@ import type {
   PublishedMaterialView,
   StressUnitName,
 } from "../../../core/contract/materials";
-import type { Material } from "../../../db/models/material";
-import { personOf, type PersonRef } from "../projects/people";
+import type { MaterialRow } from "../../../db/repositories/materials";
+import { personOf, type PersonRef } from "../../domain/projects/people";
 
 const MPA = 1e6;
 
 /** A library material as the API sends it (values in Pa, with the unit entered). */
-export function presentMaterial(m: Material, people: Map<string, PersonRef>): MaterialView {
+export function presentMaterial(m: MaterialRow, people: Map<string, PersonRef>): MaterialView {
   return {
     id: m.id,
     workspaceId: m.workspaceId,

@@ -1,26 +1,28 @@
 import type { UpdateMemberBody } from "../../../core/contract/workspaces";
-import { Membership } from "../../../db/models/membership";
-import { User } from "../../../db/models/user";
+import {
+  deleteMembership,
+  findMember,
+  findMembershipById,
+  membersOf,
+  updateMembership,
+  lockWorkspace,
+} from "../../../db/repositories/workspaces";
 import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
-import { assertKeepsAnOwner, lockWorkspace } from "./last-owner";
+import { assertKeepsAnOwner } from "../../domain/members/last-owner";
 import { presentMember } from "./presenter";
 
 type NoInput = Record<string, never>;
 type WorkspaceParams = { workspaceId: string };
 type MemberParams = WorkspaceParams & { memberId: string };
-type MemberWithUser = Membership & { user: User };
 
 const ROLE_ORDER = { owner: 0, editor: 1, reviewer: 2, viewer: 3 } as const;
 
 export const listMembersHandler: RouteHandler<WorkspaceParams, NoInput, NoInput> = async (_req, res) => {
   const { workspace } = currentMembership(res);
-  const rows = (await Membership.findAll({
-    where: { workspaceId: workspace.id },
-    include: [{ model: User, as: "user", required: true }],
-  })) as MemberWithUser[];
+  const rows = await membersOf(workspace.id);
   rows.sort((a, b) => ROLE_ORDER[a.role] - ROLE_ORDER[b.role] || a.user.name.localeCompare(b.user.name));
   res
     .set("Cache-Control", "no-store")
@@ -36,15 +38,11 @@ export function updateMemberHandler(
     const { role } = res.locals.input.body;
     const updated = await context.sequelize.transaction(async (transaction) => {
       await lockWorkspace(workspace.id, transaction);
-      const target = (await Membership.findOne({
-        where: { id: memberId, workspaceId: workspace.id },
-        include: [{ model: User, as: "user", required: true }],
-        transaction,
-      })) as MemberWithUser | null;
+      const target = await findMember(workspace.id, memberId, transaction);
       if (!target) throw errors.notFound("This member");
       await assertKeepsAnOwner(target, role, transaction);
-      await target.update({ role }, { transaction });
-      return target;
+      const changed = await updateMembership(target.id, { role }, transaction);
+      return { ...changed, user: target.user };
     });
     res.json({ member: presentMember(updated, currentUser(res).id) });
   };
@@ -55,13 +53,10 @@ export function removeMemberHandler(context: AppContext): RouteHandler<MemberPar
     const { workspace } = currentMembership(res);
     await context.sequelize.transaction(async (transaction) => {
       await lockWorkspace(workspace.id, transaction);
-      const target = await Membership.findOne({
-        where: { id: res.locals.input.params.memberId, workspaceId: workspace.id },
-        transaction,
-      });
+      const target = await findMember(workspace.id, res.locals.input.params.memberId, transaction);
       if (!target) throw errors.notFound("This member");
       await assertKeepsAnOwner(target, null, transaction);
-      await target.destroy({ transaction });
+      await deleteMembership(target.id, transaction);
     });
     res.status(204).end();
   };
@@ -72,10 +67,10 @@ export function leaveWorkspaceHandler(context: AppContext): RouteHandler<Workspa
     const { membership } = currentMembership(res);
     await context.sequelize.transaction(async (transaction) => {
       await lockWorkspace(membership.workspaceId, transaction);
-      const mine = await Membership.findByPk(membership.id, { transaction });
+      const mine = await findMembershipById(membership.id, transaction);
       if (!mine) return;
       await assertKeepsAnOwner(mine, null, transaction);
-      await mine.destroy({ transaction });
+      await deleteMembership(mine.id, transaction);
     });
     res.status(204).end();
   };

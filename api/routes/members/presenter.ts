@@ -1,9 +1,8 @@
 import type { Member } from "../../../core/contract/workspaces";
-import type { Membership } from "../../../db/models/membership";
-import type { User } from "../../../db/models/user";
+import type { MemberRow } from "../../../db/repositories/workspaces";
 
 /** One row of the members table. */
-export function presentMember(membership: Membership & { user: User }, callerId: string): Member {
+export function presentMember(membership: MemberRow, callerId: string): Member {
   return {
     id: membership.id,
     userId: membership.userId,

@@ -6,28 +6,24 @@ import {
 import type { StressUnitName, MaterialRef } from "../../../core/contract/materials";
 import type { StateSource } from "../../../core/contract/load-cases";
 import type { CategoryRequirement, Requirement } from "../../../core/contract/projects";
-import { Combination } from "../../../db/models/combination";
-import { LoadCase } from "../../../db/models/load-case";
-import { Location } from "../../../db/models/location";
-import type { Project } from "../../../db/models/project";
-import { termsOf } from "../combinations/terms";
-import { componentsPaOf, currentStatesOf } from "../load-cases/states";
-import { libraryOf, refFromColumns } from "../materials/resolve";
+import { listLiveCombinations } from "../../../db/repositories/combinations";
+import { listLiveLoadCases } from "../../../db/repositories/load-cases";
+import { listLiveLocations } from "../../../db/repositories/locations";
+import type { ProjectRow } from "../../../db/repositories/projects";
+import { componentsPaOf, currentStatesOf } from "../../../db/repositories/stress-states";
+import { termsOf } from "../../domain/combinations/terms";
+import { libraryOf, refFromColumns } from "../../domain/materials/resolve";
 
 /**
  * The export file of a project: live locations, load cases with their current states
  * (Pa as stored), combinations whose cases are all live, and the library materials the
  * project refers to. Keys are short labels ("m1", "l1", "c1") made for the file.
  */
-export async function exportProject(project: Project): Promise<ProjectExport> {
-  const order: [string, string][] = [
-    ["position", "ASC"],
-    ["createdAt", "ASC"],
-  ];
+export async function exportProject(project: ProjectRow): Promise<ProjectExport> {
   const [locations, cases, combinations, library] = await Promise.all([
-    Location.findAll({ where: { projectId: project.id, deletedAt: null }, order }),
-    LoadCase.findAll({ where: { projectId: project.id, deletedAt: null }, order }),
-    Combination.findAll({ where: { projectId: project.id, deletedAt: null }, order }),
+    listLiveLocations(project.id),
+    listLiveLoadCases(project.id),
+    listLiveCombinations(project.id),
     libraryOf(project.workspaceId),
   ]);
   const materialKeys = new Map<string, string>();

@@ -2,7 +2,7 @@ import type { ProjectExport } from "../../../core/contract/project-export";
 import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import type { RouteHandler } from "../../openapi/registry";
-import { findProject } from "../projects/scope";
+import { findProject } from "../../domain/projects/scope";
 import { exportProject } from "./export";
 import { importProject } from "./import";
 

@@ -2,17 +2,16 @@ import type { Transaction } from "sequelize";
 import type { User } from "lucia";
 import type { MaterialRef } from "../../../core/contract/materials";
 import type { ProjectExport } from "../../../core/contract/project-export";
-import { Combination } from "../../../db/models/combination";
-import { CombinationTerm } from "../../../db/models/combination-term";
-import { LoadCase } from "../../../db/models/load-case";
-import { Location } from "../../../db/models/location";
-import { Material } from "../../../db/models/material";
-import { Project } from "../../../db/models/project";
-import { StressState } from "../../../db/models/stress-state";
+import { createCombination } from "../../../db/repositories/combinations";
+import { createLoadCase } from "../../../db/repositories/load-cases";
+import { createLocation } from "../../../db/repositories/locations";
+import { createMaterial } from "../../../db/repositories/materials";
+import { createProject, type ProjectRow } from "../../../db/repositories/projects";
+import { writeStressStates } from "../../../db/repositories/stress-states";
 import { PROJECT_LIMITS } from "../../../core/contract/limits";
-import { recordAudit } from "../audit/record";
-import { assertWithinLimit, projectLimitError } from "../projects/limits";
-import { columnsFromRef } from "../materials/resolve";
+import { recordAudit } from "../../domain/audit/record";
+import { assertWithinLimit, projectLimitError } from "../../domain/projects/limits";
+import { columnsFromRef } from "../../domain/materials/resolve";
 
 /** What an import made. */
 export type ImportCounts = { materials: number; locations: number; loadCases: number; combinations: number };
@@ -42,21 +41,21 @@ export async function importProject(
   user: User,
   workspaceId: string,
   file: ProjectExport,
-): Promise<{ project: Project; counts: ImportCounts }> {
+): Promise<{ project: ProjectRow; counts: ImportCounts }> {
   assertFileWithinLimits(file);
   const materialIds = new Map<string, string>();
   for (const m of file.materials) {
     const { key, ...values } = m;
-    const created = await Material.create(
+    const created = await createMaterial(
       { ...values, workspaceId, createdBy: user.id, updatedBy: user.id },
-      { transaction },
+      transaction,
     );
     materialIds.set(key, created.id);
   }
   const ref = (r: ProjectExport["project"]["defaultMaterial"]): MaterialRef | null =>
     !r ? null : r.kind === "published" ? r : { kind: "workspace", id: materialIds.get(r.key)! };
   const projectMaterial = columnsFromRef(ref(file.project.defaultMaterial));
-  const project = await Project.create(
+  const project = await createProject(
     {
       workspaceId,
       name: file.project.name,
@@ -70,12 +69,12 @@ export async function importProject(
       createdBy: user.id,
       updatedBy: user.id,
     },
-    { transaction },
+    transaction,
   );
   const locationIds = new Map<string, string>();
   for (const [position, l] of file.locations.entries()) {
     const columns = columnsFromRef(ref(l.material));
-    const created = await Location.create(
+    const created = await createLocation(
       {
         projectId: project.id,
         name: l.name,
@@ -85,13 +84,13 @@ export async function importProject(
         createdBy: user.id,
         updatedBy: user.id,
       },
-      { transaction },
+      transaction,
     );
     locationIds.set(l.key, created.id);
   }
   const caseIds = new Map<string, string>();
   for (const [position, c] of file.loadCases.entries()) {
-    const created = await LoadCase.create(
+    const created = await createLoadCase(
       {
         projectId: project.id,
         name: c.name,
@@ -101,34 +100,24 @@ export async function importProject(
         createdBy: user.id,
         updatedBy: user.id,
       },
-      { transaction },
+      transaction,
     );
     caseIds.set(c.key, created.id);
-    for (const s of c.states) {
-      const pa = s.componentsPa;
-      await StressState.create(
-        {
-          loadCaseId: created.id,
-          locationId: locationIds.get(s.location)!,
-          revision: 1,
-          isCurrent: true,
-          xxPa: pa.xx,
-          yyPa: pa.yy,
-          zzPa: pa.zz,
-          xyPa: pa.xy,
-          yzPa: pa.yz,
-          zxPa: pa.zx,
-          unit: s.unit,
-          source: s.source,
-          note: s.note,
-          createdBy: user.id,
-        },
-        { transaction },
-      );
-    }
+    await writeStressStates(
+      c.states.map((s) => ({
+        loadCaseId: created.id,
+        locationId: locationIds.get(s.location)!,
+        componentsPa: s.componentsPa,
+        unit: s.unit,
+        source: s.source,
+        note: s.note,
+        createdBy: user.id,
+      })),
+      transaction,
+    );
   }
   for (const [position, c] of file.combinations.entries()) {
-    const created = await Combination.create(
+    await createCombination(
       {
         projectId: project.id,
         name: c.name,
@@ -137,16 +126,8 @@ export async function importProject(
         createdBy: user.id,
         updatedBy: user.id,
       },
-      { transaction },
-    );
-    await CombinationTerm.bulkCreate(
-      c.terms.map((t, i) => ({
-        combinationId: created.id,
-        loadCaseId: caseIds.get(t.loadCase)!,
-        factor: t.factor,
-        position: i,
-      })),
-      { transaction },
+      c.terms.map((t) => ({ loadCaseId: caseIds.get(t.loadCase)!, factor: t.factor })),
+      transaction,
     );
   }
   const counts = {

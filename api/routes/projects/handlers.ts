@@ -5,34 +5,37 @@ import {
   type Requirement,
   type UpdateProjectBody,
 } from "../../../core/contract/projects";
-import { Project } from "../../../db/models/project";
+import {
+  createProject,
+  listLiveProjects,
+  projectCounts,
+  updateProject,
+  type ProjectRow,
+} from "../../../db/repositories/projects";
+import { markDeleted } from "../../../db/repositories/trash";
 import { currentMembership, currentUser } from "../../auth/guards";
 import { errors } from "../../errors";
 import type { AppContext } from "../../context";
 import type { RouteHandler } from "../../openapi/registry";
-import { changedFields, recordAudit } from "../audit/record";
-import { assertMaterialRef, columnsFromRef } from "../materials/resolve";
-import { projectCounts } from "./counts";
-import { peopleById } from "./people";
+import { changedFields, recordAudit } from "../../domain/audit/record";
+import { assertMaterialRef, columnsFromRef } from "../../domain/materials/resolve";
+import { peopleById } from "../../domain/projects/people";
 import { presentProject, projectAuditFields } from "./presenter";
-import { findProject } from "./scope";
-import { assertVersion } from "./versioning";
+import { findProject } from "../../domain/projects/scope";
+import { assertVersion } from "../../domain/projects/versioning";
 
 type NoInput = Record<string, never>;
 type WorkspaceParams = { workspaceId: string };
 type ProjectParams = WorkspaceParams & { projectId: string };
 
-async function present(p: Project) {
+async function present(p: ProjectRow) {
   const counts = await projectCounts([p.id]);
   return presentProject(p, counts.get(p.id)!, await peopleById([p.createdBy, p.updatedBy]));
 }
 
 export const listProjectsHandler: RouteHandler<WorkspaceParams, NoInput, NoInput> = async (_req, res) => {
   const { workspace } = currentMembership(res);
-  const rows = await Project.findAll({
-    where: { workspaceId: workspace.id, deletedAt: null },
-    order: [["name", "ASC"]],
-  });
+  const rows = await listLiveProjects(workspace.id);
   const counts = await projectCounts(rows.map((p) => p.id));
   const people = await peopleById(rows.flatMap((p) => [p.createdBy, p.updatedBy]));
   res
@@ -56,7 +59,7 @@ export function createProjectHandler(
     const project = await context.sequelize.transaction(async (transaction) => {
       await assertMaterialRef(workspace.id, body.defaultMaterial, "defaultMaterial", transaction);
       const columns = columnsFromRef(body.defaultMaterial);
-      const created = await Project.create(
+      const created = await createProject(
         {
           workspaceId: workspace.id,
           name: body.name,
@@ -70,7 +73,7 @@ export function createProjectHandler(
           createdBy: user.id,
           updatedBy: user.id,
         },
-        { transaction },
+        transaction,
       );
       await recordAudit(transaction, user, {
         workspaceId: workspace.id,
@@ -121,17 +124,21 @@ export function updateProjectHandler(
               defaultMaterialId: columnsFromRef(defaultMaterial).materialId,
               defaultPublishedMaterial: columnsFromRef(defaultMaterial).publishedMaterial,
             };
-      await p.update({ ...body, ...material, version: p.version + 1, updatedBy: user.id }, { transaction });
+      const updated = await updateProject(
+        p.id,
+        { ...body, ...material, version: p.version + 1, updatedBy: user.id },
+        transaction,
+      );
       await recordAudit(transaction, user, {
         workspaceId: workspace.id,
         projectId: p.id,
         entityType: "project",
         entityId: p.id,
         action: "update",
-        summary: `changed the project "${p.name}"`,
-        changes: changedFields(before, projectAuditFields(p)),
+        summary: `changed the project "${updated.name}"`,
+        changes: changedFields(before, projectAuditFields(updated)),
       });
-      return p;
+      return updated;
     });
     res.json({ project: await present(project) });
   };
@@ -146,7 +153,7 @@ export function deleteProjectHandler(context: AppContext): RouteHandler<ProjectP
         transaction,
         lock: true,
       });
-      await p.update({ deletedAt: new Date(), deletedBy: user.id }, { transaction });
+      await markDeleted("project", p.id, user.id, transaction);
       await recordAudit(transaction, user, {
         workspaceId: workspace.id,
         projectId: p.id,

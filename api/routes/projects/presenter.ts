@@ -3,15 +3,13 @@ import type {
   Project as ProjectView,
   Requirement,
 } from "../../../core/contract/projects";
-import type { Project } from "../../../db/models/project";
-import { refFromColumns } from "../materials/resolve";
-import { personOf, type PersonRef } from "./people";
-
-export type ProjectCounts = { locations: number; loadCases: number; combinations: number };
+import type { ProjectCounts, ProjectRow } from "../../../db/repositories/projects";
+import { refFromColumns } from "../../domain/materials/resolve";
+import { personOf, type PersonRef } from "../../domain/projects/people";
 
 /** A project as the API sends it. */
 export function presentProject(
-  p: Project,
+  p: ProjectRow,
   counts: ProjectCounts,
   people: Map<string, PersonRef>,
 ): ProjectView {
@@ -35,7 +33,7 @@ export function presentProject(
 }
 
 /** The fields the audit trail compares for a project. */
-export function projectAuditFields(p: Project) {
+export function projectAuditFields(p: ProjectRow) {
   return {
     name: p.name,
     description: p.description,

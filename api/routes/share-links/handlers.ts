@@ -1,15 +1,22 @@
 import type { z } from "zod";
 import type { createShareLinkBodySchema } from "../../../core/contract/share-links";
-import { Membership } from "../../../db/models/membership";
-import { ShareLink } from "../../../db/models/share-link";
-import { User } from "../../../db/models/user";
-import { Workspace } from "../../../db/models/workspace";
+import {
+  countShareLinkUse,
+  createShareLink,
+  findShareLink,
+  findShareLinkByToken,
+  listShareLinks,
+  lockShareLink,
+  updateShareLink,
+  type ShareLinkRow,
+} from "../../../db/repositories/share-links";
+import { findMembershipOf } from "../../../db/repositories/workspaces";
 import { currentMembership, currentUser } from "../../auth/guards";
 import { hashToken, newLinkToken } from "../../auth/tokens";
 import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
-import { addMember } from "../members/join";
+import { addMember } from "../../domain/members/join";
 import { presentShareLink, presentShareLinkPreview, shareLinkState } from "./presenter";
 
 type NoInput = Record<string, never>;
@@ -19,14 +26,9 @@ type TokenParams = { token: string };
 type CreateBody = z.output<typeof createShareLinkBodySchema>;
 
 const DAY_MS = 24 * 60 * 60 * 1000;
-const withCreator = [{ model: User, as: "creator" }];
 
 export const listShareLinksHandler: RouteHandler<WorkspaceParams, NoInput, NoInput> = async (_req, res) => {
-  const rows = await ShareLink.findAll({
-    where: { workspaceId: currentMembership(res).workspace.id },
-    include: withCreator,
-    order: [["createdAt", "DESC"]],
-  });
+  const rows = await listShareLinks(currentMembership(res).workspace.id);
   res.set("Cache-Control", "no-store").json({ shareLinks: rows.map(presentShareLink) });
 };
 
@@ -38,7 +40,7 @@ export function createShareLinkHandler(
     const { workspace } = currentMembership(res);
     const { role, label, expiresInDays, maxUses } = res.locals.input.body;
     const token = newLinkToken();
-    const link = await ShareLink.create({
+    const link = await createShareLink({
       workspaceId: workspace.id,
       role,
       label: label || null,
@@ -47,28 +49,22 @@ export function createShareLinkHandler(
       maxUses: maxUses ?? null,
       createdBy: currentUser(res).id,
     });
-    await link.reload({ include: withCreator });
     res.status(201).json({ shareLink: presentShareLink(link), url: `${context.publicOrigin}/join/${token}` });
   };
 }
 
 export const revokeShareLinkHandler: RouteHandler<LinkParams, NoInput, NoInput> = async (_req, res) => {
   const { workspace } = currentMembership(res);
-  const link = await ShareLink.findOne({
-    where: { id: res.locals.input.params.linkId, workspaceId: workspace.id },
-  });
+  const link = await findShareLink(workspace.id, res.locals.input.params.linkId);
   if (!link) throw errors.notFound("This share link");
   if (link.revokedAt)
     throw errors.conflictWithId("share_link_revoked", "This share link was revoked already.");
-  await link.update({ revokedAt: new Date(), revokedBy: currentUser(res).id });
+  await updateShareLink(link.id, { revokedAt: new Date(), revokedBy: currentUser(res).id });
   res.status(204).end();
 };
 
-async function linkByToken(token: string): Promise<ShareLink> {
-  const link = await ShareLink.findOne({
-    where: { tokenHash: hashToken(token) },
-    include: [{ model: Workspace, as: "workspace", required: true }],
-  });
+async function linkByToken(token: string): Promise<ShareLinkRow> {
+  const link = await findShareLinkByToken(hashToken(token));
   if (!link) throw errors.notFound("This share link");
   return link;
 }
@@ -92,13 +88,10 @@ export function joinShareLinkHandler(context: AppContext): RouteHandler<TokenPar
     const found = await linkByToken(res.locals.input.params.token);
     const result = await context.sequelize.transaction(async (transaction) => {
       // Locked so the use limit holds when several people join at the same moment.
-      const link = await ShareLink.findByPk(found.id, { transaction, lock: transaction.LOCK.UPDATE });
+      const link = await lockShareLink(found.id, transaction);
       if (!link) throw errors.notFound("This share link");
       // A member opening any of the workspace's links is simply sent on, whatever the link's state.
-      const existing = await Membership.findOne({
-        where: { workspaceId: link.workspaceId, userId: user.id },
-        transaction,
-      });
+      const existing = await findMembershipOf(link.workspaceId, user.id, transaction);
       if (existing) return { membership: existing, alreadyMember: true };
       const state = shareLinkState(link);
       if (state !== "active") throw errors.conflictWithId(`share_link_${state}`, UNUSABLE[state]);
@@ -113,7 +106,7 @@ export function joinShareLinkHandler(context: AppContext): RouteHandler<TokenPar
         },
         transaction,
       );
-      if (!joined.alreadyMember) await link.increment("useCount", { transaction });
+      if (!joined.alreadyMember) await countShareLinkUse(link.id, transaction);
       return joined;
     });
     res.json({

@@ -1,5 +1,5 @@
 import type { ShareLink, ShareLinkPreview, ShareLinkState } from "../../../core/contract/share-links";
-import type { ShareLink as ShareLinkRow } from "../../../db/models/share-link";
+import type { ShareLinkRow } from "../../../db/repositories/share-links";
 
 /** A link's state at `now`: revoked wins over expired, expired over used up. */
 export function shareLinkState(link: ShareLinkRow, now = new Date()): ShareLinkState {

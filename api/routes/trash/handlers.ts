@@ -5,17 +5,24 @@ import {
   type TrashItem,
   type TrashKind,
 } from "../../../core/contract/projects";
-import { AuditEvent } from "../../../db/models/audit-event";
-import { Project } from "../../../db/models/project";
+import { insertAuditEvent } from "../../../db/repositories/audit";
+import { lockProject, projectNamesOf } from "../../../db/repositories/projects";
+import {
+  countLiveOfKind,
+  destroyForGood,
+  markRestored,
+  trashableRows,
+  TRASH_TABLES,
+  type TrashableRow,
+} from "../../../db/repositories/trash";
 import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
-import { recordAudit } from "../audit/record";
+import { recordAudit } from "../../domain/audit/record";
 import type { ProjectLimitName } from "../../../core/contract/limits";
-import { assertWithinLimit } from "../projects/limits";
-import { peopleById, personOf } from "../projects/people";
-import { TRASH_MODELS, type TrashableRow } from "./kinds";
+import { assertWithinLimit } from "../../domain/projects/limits";
+import { peopleById, personOf } from "../../domain/projects/people";
 
 type NoInput = Record<string, never>;
 type ItemParams = { workspaceId: string; kind: TrashKind; itemId: string };
@@ -25,25 +32,8 @@ const retentionCutoff = () => new Date(Date.now() - TRASH_RETENTION_DAYS * DAY_M
 
 /** Every project of the workspace (trashed or not), by id. */
 async function projectsOf(workspaceId: string, transaction?: Transaction) {
-  const rows = await Project.findAll({
-    attributes: ["id", "name", "deletedAt"],
-    where: { workspaceId },
-    transaction,
-  });
+  const rows = await projectNamesOf(workspaceId, transaction);
   return new Map(rows.map((p) => [p.id, p]));
-}
-
-/** The deleted rows of one kind in the workspace; `where` narrows them further. */
-async function deletedRows(
-  kind: TrashKind,
-  workspaceId: string,
-  projectIds: string[],
-  where: Record<string, unknown>,
-  transaction?: Transaction,
-): Promise<TrashableRow[]> {
-  const spec = TRASH_MODELS[kind];
-  const scope = spec.scope === "workspace" ? { workspaceId } : { projectId: projectIds };
-  return spec.model.findAll({ where: { ...scope, ...where }, transaction });
 }
 
 /**
@@ -53,7 +43,7 @@ async function deletedRows(
 async function purgeExpired(workspaceId: string, transaction: Transaction) {
   const projects = await projectsOf(workspaceId, transaction);
   for (const kind of TRASH_KINDS) {
-    const expired = await deletedRows(
+    const expired = await trashableRows(
       kind,
       workspaceId,
       [...projects.keys()],
@@ -61,20 +51,20 @@ async function purgeExpired(workspaceId: string, transaction: Transaction) {
       transaction,
     );
     for (const row of expired) {
-      await AuditEvent.create(
+      await insertAuditEvent(
         {
           workspaceId,
           projectId: kind === "project" ? row.id : (row.projectId ?? null),
-          entityType: TRASH_MODELS[kind].entity,
+          entityType: TRASH_TABLES[kind].entity,
           entityId: row.id,
           action: "purge",
           actorId: null,
           actorName: "trash retention",
-          summary: `deleted the ${TRASH_MODELS[kind].label} "${row.name}" for good after ${TRASH_RETENTION_DAYS} days in the trash`,
+          summary: `deleted the ${TRASH_TABLES[kind].label} "${row.name}" for good after ${TRASH_RETENTION_DAYS} days in the trash`,
         },
-        { transaction },
+        transaction,
       );
-      await row.destroy({ transaction });
+      await destroyForGood(kind, row.id, transaction);
     }
   }
 }
@@ -89,7 +79,7 @@ export function listTrashHandler(
       const projects = await projectsOf(workspace.id, transaction);
       const found: { kind: TrashKind; row: TrashableRow }[] = [];
       for (const kind of TRASH_KINDS) {
-        const rows = await deletedRows(
+        const rows = await trashableRows(
           kind,
           workspace.id,
           [...projects.keys()],
@@ -125,19 +115,19 @@ export function listTrashHandler(
 
 async function findTrashed(workspaceId: string, kind: TrashKind, itemId: string, transaction: Transaction) {
   const projects = await projectsOf(workspaceId, transaction);
-  const [row] = await deletedRows(
+  const [row] = await trashableRows(
     kind,
     workspaceId,
     [...projects.keys()],
     { id: itemId, deletedAt: { [Op.gte]: retentionCutoff() } },
     transaction,
   );
-  if (!row) throw errors.notFound(`This ${TRASH_MODELS[kind].label} in the trash`);
+  if (!row) throw errors.notFound(`This ${TRASH_TABLES[kind].label} in the trash`);
   return { row, project: row.projectId ? projects.get(row.projectId)! : null };
 }
 
 /** The project limit a restored row counts against (projects and materials have none). */
-const RESTORE_LIMITS: Partial<Record<keyof typeof TRASH_MODELS, ProjectLimitName>> = {
+const RESTORE_LIMITS: Partial<Record<keyof typeof TRASH_TABLES, ProjectLimitName>> = {
   location: "locations",
   "load-case": "loadCases",
   combination: "combinations",
@@ -159,21 +149,18 @@ export function restoreHandler(context: AppContext): RouteHandler<ItemParams, No
       const limit = RESTORE_LIMITS[kind];
       if (limit && row.projectId) {
         // Under the project's lock, as creates count, so a restore cannot slip past a limit beside a create.
-        await Project.findByPk(row.projectId, { transaction, lock: transaction.LOCK.UPDATE });
-        const live = await TRASH_MODELS[kind].model.count({
-          where: { projectId: row.projectId, deletedAt: null },
-          transaction,
-        });
+        await lockProject(row.projectId, transaction);
+        const live = await countLiveOfKind(kind, row.projectId, transaction);
         assertWithinLimit(limit, live, 1, "itemId");
       }
-      await row.update({ deletedAt: null, deletedBy: null }, { transaction });
+      await markRestored(kind, row.id, transaction);
       await recordAudit(transaction, user, {
         workspaceId: workspace.id,
         projectId: kind === "project" ? row.id : (row.projectId ?? null),
-        entityType: TRASH_MODELS[kind].entity,
+        entityType: TRASH_TABLES[kind].entity,
         entityId: row.id,
         action: "restore",
-        summary: `restored the ${TRASH_MODELS[kind].label} "${row.name}" from the trash`,
+        summary: `restored the ${TRASH_TABLES[kind].label} "${row.name}" from the trash`,
       });
     });
     res.status(204).end();
@@ -190,12 +177,12 @@ export function purgeHandler(context: AppContext): RouteHandler<ItemParams, NoIn
       await recordAudit(transaction, user, {
         workspaceId: workspace.id,
         projectId: kind === "project" ? row.id : (row.projectId ?? null),
-        entityType: TRASH_MODELS[kind].entity,
+        entityType: TRASH_TABLES[kind].entity,
         entityId: row.id,
         action: "purge",
-        summary: `deleted the ${TRASH_MODELS[kind].label} "${row.name}" for good`,
+        summary: `deleted the ${TRASH_TABLES[kind].label} "${row.name}" for good`,
       });
-      await row.destroy({ transaction });
+      await destroyForGood(kind, row.id, transaction);
     });
     res.status(204).end();
   };

@@ -1,7 +1,11 @@
-import { fn, col } from "sequelize";
 import type { CreateWorkspaceBody, UpdateWorkspaceBody } from "../../../core/contract/workspaces";
-import { Membership } from "../../../db/models/membership";
-import { Workspace } from "../../../db/models/workspace";
+import {
+  createWorkspaceWithOwner,
+  deleteWorkspace,
+  memberCounts,
+  updateWorkspace,
+  workspacesOfUser,
+} from "../../../db/repositories/workspaces";
 import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import type { RouteHandler } from "../../openapi/registry";
@@ -10,29 +14,13 @@ import { presentWorkspace } from "./presenter";
 type NoInput = Record<string, never>;
 type WorkspaceParams = { workspaceId: string };
 
-/** Number of members per workspace id. */
-async function memberCounts(workspaceIds: string[]): Promise<Map<string, number>> {
-  if (workspaceIds.length === 0) return new Map();
-  const rows = (await Membership.findAll({
-    attributes: ["workspaceId", [fn("count", col("id")), "count"]],
-    where: { workspaceId: workspaceIds },
-    group: ["workspaceId"],
-    raw: true,
-  })) as unknown as { workspaceId: string; count: string }[];
-  return new Map(rows.map((r) => [r.workspaceId, Number(r.count)]));
-}
-
 export const listWorkspacesHandler: RouteHandler<NoInput, NoInput, NoInput> = async (_req, res) => {
-  const memberships = await Membership.findAll({
-    where: { userId: currentUser(res).id },
-    include: [{ model: Workspace, as: "workspace", required: true }],
-  });
-  const counts = await memberCounts(memberships.map((m) => m.workspaceId));
+  const memberships = await workspacesOfUser(currentUser(res).id);
+  const counts = await memberCounts(memberships.map((m) => m.membership.workspaceId));
   const workspaces = memberships
-    .map((m) => {
-      const workspace = (m as Membership & { workspace: Workspace }).workspace;
-      return presentWorkspace(workspace, m.role, counts.get(m.workspaceId) ?? 1);
-    })
+    .map(({ membership, workspace }) =>
+      presentWorkspace(workspace, membership.role, counts.get(membership.workspaceId) ?? 1),
+    )
     .sort((a, b) => a.name.localeCompare(b.name));
   res.set("Cache-Control", "no-store").json({ workspaces });
 };
@@ -42,23 +30,9 @@ export function createWorkspaceHandler(
 ): RouteHandler<NoInput, NoInput, CreateWorkspaceBody> {
   return async (_req, res) => {
     const user = currentUser(res);
-    const workspace = await context.sequelize.transaction(async (transaction) => {
-      const created = await Workspace.create(
-        { name: res.locals.input.body.name, createdBy: user.id },
-        { transaction },
-      );
-      await Membership.create(
-        {
-          workspaceId: created.id,
-          userId: user.id,
-          role: "owner",
-          joinedVia: "created",
-          lastActiveAt: new Date(),
-        },
-        { transaction },
-      );
-      return created;
-    });
+    const workspace = await context.sequelize.transaction((transaction) =>
+      createWorkspaceWithOwner(res.locals.input.body.name, user.id, transaction),
+    );
     res.status(201).json({ workspace: presentWorkspace(workspace, "owner", 1) });
   };
 }
@@ -76,13 +50,13 @@ export const updateWorkspaceHandler: RouteHandler<WorkspaceParams, NoInput, Upda
   res,
 ) => {
   const { workspace, membership } = currentMembership(res);
-  await workspace.update({ name: res.locals.input.body.name });
+  const updated = await updateWorkspace(workspace.id, { name: res.locals.input.body.name });
   const counts = await memberCounts([workspace.id]);
-  res.json({ workspace: presentWorkspace(workspace, membership.role, counts.get(workspace.id) ?? 1) });
+  res.json({ workspace: presentWorkspace(updated, membership.role, counts.get(workspace.id) ?? 1) });
 };
 
 /** Deletes the workspace and, by the foreign keys' cascade, its memberships, invitations and links. */
 export const deleteWorkspaceHandler: RouteHandler<WorkspaceParams, NoInput, NoInput> = async (_req, res) => {
-  await currentMembership(res).workspace.destroy();
+  await deleteWorkspace(currentMembership(res).workspace.id);
   res.status(204).end();
 };

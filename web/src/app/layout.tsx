@@ -10,6 +10,7 @@ import { useSession } from "../lib/session";
 const navigation = [
   { to: "/", label: "Overview", end: true },
   { to: "/bench", label: "Bench", end: false },
+  { to: "/calculators", label: "Calculators", end: false },
 ];
 
 /**

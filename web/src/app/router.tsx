@@ -19,7 +19,8 @@ import { NotFoundPage } from "./not-found";
 import { RequireSession } from "./require-session";
 
 // Pages with heavy dependencies load as their own chunks, so the first page (often sign-in)
-// stays light: the bench (d3, and three.js inside it), projects and the comparison (d3, tables).
+// stays light: the bench (d3, and three.js inside it), projects, the comparison (d3, tables) and
+// the calculators (d3 for the through-wall plots).
 // (The mailbox page stays in the main chunk: the header's mailbox link lives in the same file.)
 // React Router's `lazy` loads the module before it renders the route.
 const BenchPage = lazy(() =>
@@ -40,6 +41,54 @@ export const router = createBrowserRouter([
             </Suspense>
           </RequireSession>
         ),
+      },
+      {
+        // The calculators need no account (they compute in the browser); "send to bench" asks for sign-in there.
+        path: "calculators",
+        children: [
+          {
+            index: true,
+            lazy: () =>
+              import("../features/calculators/components/CalculatorsPage").then((m) => ({
+                Component: m.CalculatorsPage,
+              })),
+          },
+          {
+            path: "thin-wall",
+            lazy: () =>
+              import("../features/calculators/components/ThinWallPage").then((m) => ({
+                Component: m.ThinWallPage,
+              })),
+          },
+          {
+            path: "thick-cylinder",
+            lazy: () =>
+              import("../features/calculators/components/ThickCylinderPage").then((m) => ({
+                Component: m.ThickCylinderPage,
+              })),
+          },
+          {
+            path: "thick-sphere",
+            lazy: () =>
+              import("../features/calculators/components/ThickSpherePage").then((m) => ({
+                Component: m.ThickSpherePage,
+              })),
+          },
+          {
+            path: "shaft",
+            lazy: () =>
+              import("../features/calculators/components/ShaftPage").then((m) => ({
+                Component: m.ShaftPage,
+              })),
+          },
+          {
+            path: "rosette",
+            lazy: () =>
+              import("../features/calculators/components/RosettePage").then((m) => ({
+                Component: m.RosettePage,
+              })),
+          },
+        ],
       },
       // Accounts (open to everyone; invitation and share-link pages handle signed-out visitors themselves).
       { path: "sign-in", element: <SignInPage /> },

@@ -20,6 +20,9 @@ import { decimalsFor, editable, factor, fixed } from "../model/format";
 import { useBenchStore } from "../model/store";
 import { useOutOfDate } from "../hooks/use-out-of-date";
 
+// Long because the panel's rows, its material and required-factor controls and the source line
+// of a project's factors read the same store values; the results come from model/derive.ts.
+
 /** Panel 5: the verdict that matters — every criterion against the material and the required factor. */
 export function CriteriaPanel() {
   const outOfDate = useOutOfDate();

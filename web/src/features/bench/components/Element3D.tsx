@@ -1,3 +1,5 @@
+// Long because the 3D element's meshes, arrows, face labels and camera share one scene graph
+// and its memoised geometry; splitting them would pass the same refs through several files.
 /**
  * The 3D stress element (react-three-fiber, loaded as its own chunk). It draws the cube in the
  * element's frame with arrows for the normal and shear components of σ′ on its three visible

@@ -72,7 +72,6 @@ export function MohrPanel() {
       <MohrDiagram
         unit={unit}
         mode={planeMode ? "plane" : "3d"}
-        circles={summary.circles}
         principal={summary.principal.values}
         faces={faces}
         plane={plane}

@@ -1,3 +1,5 @@
+// Long because it is the bench store's complete list of pure actions (edit, paste, units,
+// undo/redo, examples, rotation): one reducer-like file that tests read as the bench's rules.
 /**
  * The bench's named pure actions: `(state, input) → state`. The store, the keyboard, the toolbar
  * buttons and the pointer reducers all call these; none of them does mechanics beyond asking core.

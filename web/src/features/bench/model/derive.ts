@@ -1,3 +1,5 @@
+// Long because it is the bench's one place for what the panels show from the state: the
+// criteria's results, principal naming and axes, all plain functions tested together.
 /**
  * Everything the bench shows, derived from its state by asking core. Pure functions; the hooks
  * memoise them so that a drag (which changes only the rotation) recomputes only what depends on it.

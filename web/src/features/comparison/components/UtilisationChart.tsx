@@ -1,15 +1,16 @@
-import { scaleBand } from "d3";
 import type { Comparison } from "../../../../../core/contract/comparison";
 import { CRITERION_LABELS, type CriterionName } from "../../../../../core/contract/projects";
-import { CHART, chartAxis, chartBars } from "../model/chart";
+import { utilisationChartGeometry } from "../../../../../core/diagrams";
+import { chartBars } from "../model/chart";
 
 const VERDICT_FILL = { pass: "fill-pass", close: "fill-close", fail: "fill-fail" } as const;
 const VERDICT_MARK = { pass: "✓", close: "≈", fail: "✗" } as const;
 
 /**
  * Utilisation u = n_required / n of every row for one criterion, as horizontal bars, with the
- * allowable line at u = 1 and the "close" band edge at CLOSE_UTILISATION (n 10 % above the required factor). d3 supplies the scales;
- * React draws. Every bar carries its value and verdict mark, so colour is never the only cue.
+ * allowable line at u = 1 and the "close" band edge at CLOSE_UTILISATION (n 10 % above the required
+ * factor). The geometry comes from core/diagrams/utilisation-chart.ts; React draws. Every bar carries
+ * its value and verdict mark, so colour is never the only cue.
  */
 export function UtilisationChart({
   comparison,
@@ -23,80 +24,72 @@ export function UtilisationChart({
     return (
       <p className="p-3 text-graphite-soft">No row could be evaluated with {CRITERION_LABELS[criterion]}.</p>
     );
-  const { labelWidth, width } = CHART;
-  const rowHeight = 22;
-  const height = bars.length * rowHeight + 34;
-  const { x, closeEdgeX, allowableX } = chartAxis(bars);
-  const y = scaleBand<string>()
-    .domain(bars.map((b) => b.id))
-    .range([8, height - 26])
-    .padding(0.22);
-  const ticks = x.ticks(6);
+  const g = utilisationChartGeometry(bars);
   return (
     <svg
-      viewBox={`0 0 ${width} ${height}`}
+      viewBox={`0 0 ${g.width} ${g.height}`}
       role="img"
       aria-label={`Utilisation per case, ${CRITERION_LABELS[criterion]}, with the allowable line at 1`}
       className="w-full bg-grid bg-[length:16px_16px]"
     >
-      {ticks.map((t) => (
-        <g key={t}>
-          <line x1={x(t)} x2={x(t)} y1={8} y2={height - 26} className="stroke-rule" strokeWidth={0.6} />
-          <text x={x(t)} y={height - 10} textAnchor="middle" className="num fill-graphite-soft text-[11px]">
-            {t.toFixed(1)}
+      {g.ticks.map((t) => (
+        <g key={t.value}>
+          <line x1={t.at} x2={t.at} y1={g.top} y2={g.bottom} className="stroke-rule" strokeWidth={0.6} />
+          <text x={t.at} y={g.height - 10} textAnchor="middle" className="num fill-graphite-soft text-[11px]">
+            {t.label}
           </text>
         </g>
       ))}
-      {bars.map((b) => (
-        <g key={b.id}>
+      {g.rows.map((r) => (
+        <g key={r.id}>
           <text
-            x={labelWidth - 8}
-            y={y(b.id)! + y.bandwidth() / 2}
+            x={r.label.x}
+            y={r.label.y}
             dominantBaseline="middle"
             textAnchor="end"
             className="fill-graphite text-[12px]"
           >
-            {b.label.length > 40 ? `${b.label.slice(0, 39)}…` : b.label}
+            {r.label.text}
           </text>
           <rect
-            x={x(0)}
-            y={y(b.id)}
-            width={Math.max(1, x(b.u) - x(0))}
-            height={y.bandwidth()}
-            className={VERDICT_FILL[b.verdict]}
+            x={r.rect.x}
+            y={r.rect.y}
+            width={r.rect.width}
+            height={r.rect.height}
+            className={VERDICT_FILL[r.bar.verdict]}
             opacity={0.8}
           />
           <text
-            x={x(b.u) + 4}
-            y={y(b.id)! + y.bandwidth() / 2}
+            x={r.value.x}
+            y={r.value.y}
             dominantBaseline="middle"
             className="num fill-graphite text-[11px]"
           >
-            {b.u.toFixed(2)} {VERDICT_MARK[b.verdict]}
+            {r.value.text} {VERDICT_MARK[r.bar.verdict]}
           </text>
         </g>
       ))}
       <line
-        x1={closeEdgeX}
-        x2={closeEdgeX}
+        x1={g.closeEdgeX}
+        x2={g.closeEdgeX}
         y1={4}
-        y2={height - 26}
+        y2={g.bottom}
         className="stroke-close"
         strokeDasharray="3 3"
         strokeWidth={1}
       />
       <line
-        x1={allowableX}
-        x2={allowableX}
+        x1={g.allowableX}
+        x2={g.allowableX}
         y1={4}
-        y2={height - 26}
+        y2={g.bottom}
         className="stroke-fail"
         strokeWidth={1.6}
       />
-      <text x={allowableX + 3} y={12} className="fill-fail text-[11px] font-semibold">
+      <text x={g.allowableLabel.x} y={g.allowableLabel.y} className="fill-fail text-[11px] font-semibold">
         allowable (u = 1)
       </text>
-      <text x={labelWidth - 24} y={height - 10} textAnchor="end" className="fill-graphite-soft text-[11px]">
+      <text x={g.axisTitle.x} y={g.axisTitle.y} textAnchor="end" className="fill-graphite-soft text-[11px]">
         u = n_req / n
       </text>
     </svg>

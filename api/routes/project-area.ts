@@ -1,0 +1,29 @@
+import type { AppContext } from "../context";
+import type { AnyRoute } from "../openapi/registry";
+import { auditRoutes } from "./audit";
+import { combinationRoutes } from "./combinations";
+import { comparisonRoutes } from "./comparison";
+import { loadCaseRoutes } from "./load-cases";
+import { locationRoutes } from "./locations";
+import { materialRoutes } from "./materials";
+import { projectTransferRoutes } from "./project-transfer";
+import { trashRoutes } from "./trash";
+import { projectRoutes } from "./projects";
+
+/**
+ * Every route of the project area (projects, locations, load cases, combinations, materials,
+ * comparison, audit, trash, import/export), added to the route table in one line.
+ */
+export function projectAreaRoutes(context: AppContext): AnyRoute[] {
+  return [
+    ...materialRoutes(context),
+    ...projectRoutes(context),
+    ...locationRoutes(context),
+    ...loadCaseRoutes(context),
+    ...combinationRoutes(context),
+    ...comparisonRoutes(context),
+    ...auditRoutes(),
+    ...trashRoutes(context),
+    ...projectTransferRoutes(context),
+  ];
+}

@@ -1,0 +1,168 @@
+import { setFlagsFromString } from "node:v8";
+import { runInNewContext } from "node:vm";
+import { Worker } from "node:worker_threads";
+import { inferSchema, initParser } from "udsv";
+import { evaluatePointTable, lineCuts, parsePointTable, type PointTableOptions } from "../../core/index";
+import { BENCH_SPEC, GENERATED_LAYOUT, generatePointTableText } from "./support/point-table-text";
+
+const ROWS = 1_000_000;
+const REPEATS = 3; // best of REPEATS rounds for every figure
+
+// A full garbage collection before every timed run, so that no path pays for the garbage of the
+// one before it (uDSV's typed rows are a million arrays of boxed numbers).
+setFlagsFromString("--expose-gc");
+const collectGarbage = runInNewContext("gc") as () => void;
+
+type Summary = { count: number; lines: number; badRows: number; failing: number; worst: number };
+
+/** Sends each worker its byte range and waits for all summaries. */
+function runWorkers(
+  workers: Worker[],
+  bytes: SharedArrayBuffer,
+  ranges: [number, number, PointTableOptions][],
+): Promise<Summary[]> {
+  return Promise.all(
+    ranges.map(
+      ([from, to, options], i) =>
+        new Promise<Summary>((resolve, reject) => {
+          const w = workers[i];
+          w.once("message", resolve);
+          w.once("error", reject);
+          w.postMessage({ bytes, from, to, options });
+        }),
+    ),
+  );
+}
+
+/**
+ * Parsing and evaluating a generated 1,000,000-row point table (id, x, y, z, six components;
+ * about 84 MB) against uDSV's typed-number parse of the same text, in the same run, and the same
+ * work in two worker threads against one.
+ *
+ * Why core has its own parser (core/point-tables/parse-point-table.ts) rather than uDSV: uDSV's
+ * typed output (typedArrs, the faster of its typed outputs on this text) is an array of boxed
+ * numbers per row, to be copied into Float64Arrays afterwards, so a uDSV-based path can only be
+ * slower than uDSV's parse alone, while the goal is parse + evaluate at 1.2× uDSV's parse. Measured
+ * on this 2-core machine shared with teammates' test runs (load average 7–14), 3 December 2026:
+ * core's parse alone 1.92×, 2.13×, 2.14×, 2.26× and 3.08× uDSV's parse in five runs.
+ *
+ * The paths take turns, uDSV last in each round: with uDSV first, core's parse + evaluate ran
+ * 1.02×–1.17× uDSV in four runs; with uDSV last, 1.65× — a path run after uDSV's million row
+ * arrays was slower even after a full collection. Measuring each path in its own worker (its own
+ * heap) would remove that effect; not done yet.
+ */
+export async function run(): Promise<void> {
+  const t0 = performance.now();
+  const text = generatePointTableText(ROWS);
+  const genMs = performance.now() - t0;
+  const mb = text.length / 1e6;
+  console.log(
+    `${ROWS.toLocaleString("en-US")} rows, ${mb.toFixed(1)} MB (generated in ${(genMs / 1000).toFixed(1)} s); ` +
+      `best of ${REPEATS} runs each; evaluation: principal stresses, von Mises, Tresca and five safety factors per point`,
+  );
+
+  // Warm-up on a slice, so each path is compiled before it is timed.
+  const warm = text.slice(0, lineCuts(text, 20)[0]);
+  evaluatePointTable(parsePointTable(warm, GENERATED_LAYOUT).components, BENCH_SPEC, {
+    includeUnsuited: true,
+  });
+  initParser(inferSchema(warm)).typedArrs(warm);
+
+  // The three paths take turns, REPEATS rounds, so that a change in the machine's load during the
+  // run (teammates' tests share its two cores) touches each of them alike; best of the rounds.
+  // uDSV goes last in a round (see the note above run()).
+  let sink = 0;
+  let count = 0;
+  let bad = 0;
+  const paths: [string, () => void][] = [
+    ["parse", () => void (sink += parsePointTable(text, GENERATED_LAYOUT).count)],
+    [
+      "full",
+      () => {
+        const table = parsePointTable(text, GENERATED_LAYOUT);
+        const result = evaluatePointTable(table.components, BENCH_SPEC, { includeUnsuited: true });
+        count = result.evaluated;
+        bad = table.badRows.count;
+        sink += result.failing;
+      },
+    ],
+    [
+      "uDSV",
+      () => {
+        const parser = initParser(inferSchema(text.slice(0, 65_536)));
+        sink += (parser.typedArrs(text) as number[][]).length;
+      },
+    ],
+  ];
+  const best = new Map<string, number>();
+  for (let r = 0; r < REPEATS; r++) {
+    for (const [name, fn] of paths) {
+      collectGarbage();
+      const t = performance.now();
+      fn();
+      best.set(name, Math.min(best.get(name) ?? Number.POSITIVE_INFINITY, performance.now() - t));
+    }
+  }
+  const udsvMs = best.get("uDSV")!;
+  const parseMs = best.get("parse")!;
+  const fullMs = best.get("full")!;
+
+  // Workers: the file as UTF-8 bytes in shared memory, each worker decoding its range of lines.
+  const encoded = new TextEncoder().encode(text);
+  const bytes = new SharedArrayBuffer(encoded.length);
+  new Uint8Array(bytes).set(encoded);
+  const cut = Buffer.byteLength(text.slice(0, lineCuts(text, 2)[0]));
+  // A JavaScript shim that registers tsx in the worker, then loads the TypeScript worker.
+  const workerUrl = new URL("./support/point-table-worker.mjs", import.meta.url);
+  const spawn = () => new Worker(workerUrl);
+  const workers = [spawn(), spawn()];
+  try {
+    const secondHalf: PointTableOptions = { ...GENERATED_LAYOUT, header: false };
+    const one = () => runWorkers(workers, bytes, [[0, encoded.length, GENERATED_LAYOUT]]);
+    const two = () =>
+      runWorkers(workers, bytes, [
+        [0, cut, GENERATED_LAYOUT],
+        [cut, encoded.length, secondHalf],
+      ]);
+    await two(); // warm-up of both workers
+    let oneMs = Number.POSITIVE_INFINITY;
+    let twoMs = Number.POSITIVE_INFINITY;
+    let oneOut: Summary[] = [];
+    let twoOut: Summary[] = [];
+    for (let r = 0; r < REPEATS; r++) {
+      collectGarbage();
+      let t = performance.now();
+      oneOut = await one();
+      oneMs = Math.min(oneMs, performance.now() - t);
+      collectGarbage();
+      t = performance.now();
+      twoOut = await two();
+      twoMs = Math.min(twoMs, performance.now() - t);
+    }
+    const twoCount = twoOut.reduce((s, o) => s + o.count, 0);
+    if (oneOut[0].count !== ROWS || twoCount !== ROWS || count !== ROWS || bad !== 0) {
+      console.log(
+        `UNEXPECTED point counts: main ${count}, one worker ${oneOut[0].count}, two workers ${twoCount}`,
+      );
+    }
+
+    const rate = (ms: number) =>
+      `${(((ROWS / ms) * 1e3) / 1e6).toFixed(2).padStart(6)} M rows/s  ${(mb / (ms / 1e3)).toFixed(0).padStart(4)} MB/s  (${(ms / 1e3).toFixed(2)} s)`;
+    console.log(`${"uDSV typed parse (typedArrs), baseline".padEnd(48)} ${rate(udsvMs)}`);
+    console.log(`${"point table parse alone".padEnd(48)} ${rate(parseMs)}`);
+    console.log(`${"point table parse + evaluate".padEnd(48)} ${rate(fullMs)}`);
+    console.log(`${"one worker: parse + evaluate".padEnd(48)} ${rate(oneMs)}`);
+    console.log(`${"two workers: parse + evaluate, half each".padEnd(48)} ${rate(twoMs)}`);
+    const vsUdsv = udsvMs / fullMs;
+    const twoVsOne = oneMs / twoMs;
+    console.log(`point table parse / uDSV parse: ${(udsvMs / parseMs).toFixed(2)}×`);
+    console.log(`point table parse+evaluate / uDSV parse: ${vsUdsv.toFixed(2)}×`);
+    console.log(`point table two workers / one: ${twoVsOne.toFixed(2)}×`);
+    console.log(
+      `targets: parse+evaluate ≥ 1.2× uDSV (${vsUdsv >= 1.2 ? "met" : "NOT met"}), two workers ≥ 1.8× one (${twoVsOne >= 1.8 ? "met" : "NOT met"})`,
+    );
+  } finally {
+    await Promise.all(workers.map((w) => w.terminate()));
+  }
+  if (!Number.isFinite(sink)) console.log("(unexpected non-finite checksum)");
+}

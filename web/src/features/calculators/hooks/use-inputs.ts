@@ -1,0 +1,24 @@
+import { useCallback, useMemo } from "react";
+import { useSearchParams } from "react-router-dom";
+import { decodeInputs, encodeInputs, withUnits, type InputSpec, type InputValues } from "../model/inputs";
+import type { UnitSet } from "../model/units";
+
+/**
+ * A calculator's inputs, kept in the address: read from it on every render, written back with
+ * `replace` on each change so a copied link reproduces the page without flooding the history.
+ */
+export function useInputs<S extends InputSpec>(spec: S) {
+  const [params, setParams] = useSearchParams();
+  const search = params.toString();
+  const values = useMemo(() => decodeInputs(spec, search), [spec, search]);
+  const write = useCallback(
+    (next: InputValues<S>) => setParams(new URLSearchParams(encodeInputs(spec, next)), { replace: true }),
+    [spec, setParams],
+  );
+  const setNumber = (key: keyof S["numbers"] & string, value: number) =>
+    write({ ...values, numbers: { ...values.numbers, [key]: value } });
+  const setChoice = (key: keyof S["choices"] & string, value: string) =>
+    write({ ...values, choices: { ...values.choices, [key]: value } });
+  const setUnits = (units: UnitSet) => write(withUnits(spec, values, units));
+  return { values, setNumber, setChoice, setUnits };
+}

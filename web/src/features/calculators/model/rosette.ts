@@ -1,0 +1,85 @@
+/**
+ * The strain-gauge rosette calculator: rectangular (0°/45°/90°), delta (0°/60°/120°) or three gauges
+ * at any angles; readings in microstrain; principal strains and the plane-stress state by Hooke's law.
+ */
+import {
+  convertStress,
+  deltaRosette,
+  microstrain,
+  principalStrains,
+  rectangularRosette,
+  stressFromStrain,
+  threeGaugeRosette,
+  type PlaneStrain,
+  type PrincipalStrains,
+  type StressFromStrain,
+} from "../../../../../core";
+import type { InputSpec, InputValues } from "./inputs";
+import { attempt, refuse, type Outcome } from "./outcome";
+import { UNITS_OF, stressUnitOf } from "./units";
+
+export const ROSETTE_INPUTS = {
+  numbers: {
+    e1: { dimension: "microstrain", initial: 650 },
+    e2: { dimension: "microstrain", initial: 300 },
+    e3: { dimension: "microstrain", initial: -200 },
+    a1: { dimension: "angle", initial: 0 },
+    a2: { dimension: "angle", initial: 45 },
+    a3: { dimension: "angle", initial: 90 },
+    E: { dimension: "modulus", initial: 200 },
+    nu: { dimension: "ratio", initial: 0.3 },
+  },
+  choices: { layout: { options: ["rectangular", "delta", "any"], initial: "rectangular" } },
+} as const satisfies InputSpec;
+
+export type RosetteValues = InputValues<typeof ROSETTE_INPUTS>;
+
+/** The gauge angles of each layout (degrees from x); "any" takes the typed ones. */
+export function gaugeAngles(v: RosetteValues): [number, number, number] {
+  if (v.choices.layout === "rectangular") return [0, 45, 90];
+  if (v.choices.layout === "delta") return [0, 60, 120];
+  return [v.numbers.a1, v.numbers.a2, v.numbers.a3];
+}
+
+export type RosetteResult = {
+  angles: [number, number, number];
+  /** εx, εy, γxy as plain strains */
+  strains: PlaneStrain;
+  principal: PrincipalStrains;
+  /** plane stress in the set's stress unit, in the gauges' x y frame, z normal to the surface */
+  stress: StressFromStrain;
+};
+
+/** Strains and plane stress from the readings; stresses in the unit set's stress unit. */
+export function computeRosette(v: RosetteValues): Outcome<RosetteResult> {
+  return attempt(() => {
+    const n = v.numbers;
+    if (!(n.E > 0)) refuse("Young's modulus E", "must be positive");
+    if (!(n.nu > -1 && n.nu < 0.5)) refuse("Poisson's ratio ν", "must lie in (−1, 0.5)");
+    const [g1, g2, g3] = [microstrain(n.e1), microstrain(n.e2), microstrain(n.e3)];
+    const angles = gaugeAngles(v);
+    let strains: PlaneStrain;
+    if (v.choices.layout === "rectangular") strains = rectangularRosette(g1, g2, g3);
+    else if (v.choices.layout === "delta") strains = deltaRosette(g1, g2, g3);
+    else {
+      try {
+        strains = threeGaugeRosette([
+          { angle: angles[0], strain: g1 },
+          { angle: angles[1], strain: g2 },
+          { angle: angles[2], strain: g3 },
+        ]);
+      } catch (error) {
+        if (error instanceof RangeError) refuse("Gauge angles", "must differ from one another modulo 180°");
+        throw error;
+      }
+    }
+    // E in the stress unit the results are written in, so Hooke's law gives them directly.
+    const E = convertStress(n.E, UNITS_OF[v.units].modulus, stressUnitOf(v.units));
+    return {
+      angles,
+      strains,
+      principal: principalStrains(strains),
+      stress: stressFromStrain(strains, { E, nu: n.nu }),
+    };
+  });
+}

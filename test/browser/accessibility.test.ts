@@ -76,6 +76,7 @@ describe("axe on every page", () => {
       team.projectPath,
       `${team.projectPath}/comparison`,
       "/bench",
+      "/calculators",
       "/account",
     ];
     expect(await findings(team.contexts.owner, server.url, addresses, "a11y-owner")).toEqual([]);

@@ -75,6 +75,7 @@ describe("every page at phone width", () => {
       team.projectPath,
       `${team.projectPath}/comparison`,
       "/bench",
+      "/calculators",
       "/account",
     ];
     const wide: string[] = [];

@@ -18,7 +18,8 @@ export function roleAtLeast(role: Role, minimum: Role): boolean {
 export const ROLE_DESCRIPTIONS: Record<Role, string> = {
   owner: "Everything, including members, sharing and deleting the workspace.",
   editor: "Creates and changes projects, load cases and their inputs; creates share links.",
-  reviewer: "Reads and comments; will approve calculations. Cannot change inputs.",
+  reviewer:
+    "Reads everything, as a viewer does; reviewing and approving calculations is coming. Cannot change inputs.",
   viewer: "Reads only.",
 };
 

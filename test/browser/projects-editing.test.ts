@@ -179,7 +179,9 @@ describe("editing a project in Chromium: combinations, materials, the trash, exp
       waitUntil: "networkidle",
     });
     await page.getByText(SUPERPOSITION_CAUTION).first().waitFor();
-    await page.getByRole("link", { name: "Open Design plus test (owner) at mid-shell in the bench" }).click();
+    await page
+      .getByRole("link", { name: /^Open in bench\W*Design plus test \(owner\) at mid-shell$/ })
+      .click();
     await page.waitForURL(/\/bench\?/);
     const note = page.getByRole("region", { name: "Combination state" });
     await note.getByText("Design plus test (owner)").waitFor();

@@ -47,7 +47,7 @@ describe("a state saved in the bench, back on the project page in Chromium", () 
     await page.getByRole("region", { name: "Saved state" }).getByRole("link", { name: "Vessel V-7" }).click();
     await page.waitForURL(new RegExp(`/projects/${projectId}$`));
     await expect.poll(() => table.innerText(), { timeout: 2_000 }).toMatch(/σxx\s*150\.0/);
-    expect(await table.innerText()).toMatch(/rev\. 2/);
+    expect(await table.innerText()).toMatch(/saved 2 times \(revision 2\)/);
     await page.screenshot({ path: path.join(screenshotDir, "saved-state-refresh.png"), fullPage: true });
   });
 });

@@ -59,18 +59,32 @@ export function BenchPage() {
         <ShareBar />
       </div>
       <SavedStateBar />
+      {/* At phone width the three columns dissolve (display: contents) into one column, and the
+          order classes keep the reading order: state, element, diagrams, verdict. */}
       <div className="grid items-start gap-2 md:grid-cols-[17rem_minmax(0,1fr)] xl:grid-cols-[17.5rem_minmax(0,1fr)_minmax(0,1fr)]">
-        <div className="flex min-w-0 flex-col gap-2">
-          <StressInputPanel />
-          <PrincipalPanel />
+        <div className="contents md:flex md:min-w-0 md:flex-col md:gap-2">
+          <div className="order-1 min-w-0 md:order-none">
+            <StressInputPanel />
+          </div>
+          <div className="order-2 min-w-0 md:order-none">
+            <PrincipalPanel />
+          </div>
         </div>
-        <div className="flex min-w-0 flex-col gap-2">
-          <ElementPanel />
-          <EnvelopePlot />
+        <div className="contents md:flex md:min-w-0 md:flex-col md:gap-2">
+          <div className="order-3 min-w-0 md:order-none">
+            <ElementPanel />
+          </div>
+          <div className="order-5 min-w-0 md:order-none">
+            <EnvelopePlot />
+          </div>
         </div>
-        <div className="flex min-w-0 flex-col gap-2 md:col-span-2 md:grid md:grid-cols-2 xl:col-span-1 xl:flex">
-          <MohrPanel />
-          <CriteriaPanel />
+        <div className="contents md:col-span-2 md:grid md:min-w-0 md:grid-cols-2 md:gap-2 xl:col-span-1 xl:flex xl:flex-col">
+          <div className="order-4 min-w-0 md:order-none">
+            <MohrPanel />
+          </div>
+          <div className="order-6 min-w-0 md:order-none">
+            <CriteriaPanel />
+          </div>
         </div>
       </div>
     </div>

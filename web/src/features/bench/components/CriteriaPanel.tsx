@@ -168,22 +168,22 @@ export function CriteriaPanel() {
         <thead>
           <tr className="border-b border-rule text-[12px] text-graphite-soft">
             <th scope="col" className="py-0.5 text-left font-normal">
-              criterion
+              Criterion
             </th>
             <th scope="col" className="text-right font-normal">
-              σ<sub>eq</sub> = S/n
+              Equivalent stress σ<sub>eq</sub>, {unit}
             </th>
             <th scope="col" className="text-right font-normal">
-              n
+              Safety factor n
             </th>
             <th scope="col" className="text-right font-normal">
-              required
+              Required n
             </th>
             <th scope="col" className="text-right font-normal">
-              utilisation
+              Utilisation u
             </th>
             <th scope="col" className="pl-3 text-left font-normal">
-              verdict
+              Verdict
             </th>
           </tr>
         </thead>

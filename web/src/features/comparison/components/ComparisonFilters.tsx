@@ -8,6 +8,7 @@ const SELECT = "rounded-sm border border-rule-strong bg-panel px-1 py-0.5";
 export function ComparisonFilters({
   text,
   onText,
+  values,
   onFilter,
   locations,
   shown,
@@ -18,6 +19,8 @@ export function ComparisonFilters({
 }: {
   text: string;
   onText: (text: string) => void;
+  /** the chosen value of each filter ("" for all), read from the address */
+  values: Record<"kind" | "locationId" | "verdict", string>;
   onFilter: (columnId: "kind" | "locationId" | "verdict", value: string) => void;
   locations: readonly [string, string][];
   shown: number;
@@ -41,7 +44,12 @@ export function ComparisonFilters({
       </label>
       <label>
         Kind{" "}
-        <select aria-label="Kind" onChange={(e) => onFilter("kind", e.target.value)} className={SELECT}>
+        <select
+          aria-label="Kind"
+          value={values.kind}
+          onChange={(e) => onFilter("kind", e.target.value)}
+          className={SELECT}
+        >
           {KIND_OPTIONS.map(([value, words]) => (
             <option key={value} value={value}>
               {words}
@@ -53,6 +61,7 @@ export function ComparisonFilters({
         Location{" "}
         <select
           aria-label="Location"
+          value={values.locationId}
           onChange={(e) => onFilter("locationId", e.target.value)}
           className={SELECT}
         >
@@ -66,7 +75,12 @@ export function ComparisonFilters({
       </label>
       <label>
         Verdict{" "}
-        <select aria-label="Verdict" onChange={(e) => onFilter("verdict", e.target.value)} className={SELECT}>
+        <select
+          aria-label="Verdict"
+          value={values.verdict}
+          onChange={(e) => onFilter("verdict", e.target.value)}
+          className={SELECT}
+        >
           {VERDICT_OPTIONS.map(([value, words]) => (
             <option key={value} value={value}>
               {words}

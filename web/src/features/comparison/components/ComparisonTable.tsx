@@ -6,8 +6,10 @@ import {
   useReactTable,
   type ColumnFiltersState,
   type SortingState,
+  type Updater,
 } from "@tanstack/react-table";
-import { useMemo, useState } from "react";
+import { useMemo } from "react";
+import { useSearchParams } from "react-router-dom";
 import type { Comparison, PagedComparison } from "../../../../../core/contract/comparison";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import { governingMarks } from "../model/rows";
@@ -18,6 +20,7 @@ import {
   matchesText,
   rowHighlight,
 } from "../model/table-model";
+import { searchWithView, viewFromSearch, type ComparisonView } from "../model/url-view";
 import { ComparisonFilters } from "./ComparisonFilters";
 import { tableColumns } from "./comparison-columns";
 
@@ -28,7 +31,8 @@ const isNumeric = (meta: unknown) => (meta as { numeric?: boolean } | undefined)
  * kind, location and verdict; governing rows are highlighted and say for which criterion.
  * A project too large for one page is shown a page at a time (`paging`, `onPage`): sorting
  * and filters then act on the page shown, while the governing marks cover every row.
- * Columns, filters and sort values come from model/table-model.ts; TanStack Table keeps their state.
+ * Columns, filters and sort values come from model/table-model.ts; the sort and filters live in
+ * the address (model/url-view.ts), so a copied link or the back button brings the same view.
  */
 export function ComparisonTable({
   comparison,
@@ -46,12 +50,20 @@ export function ComparisonTable({
   const marks = useMemo(() => governingMarks(comparison), [comparison]);
   const criteria = comparison.requirements.map((r) => r.criterion);
   const criteriaKey = criteria.join(" ");
-  const [sorting, setSorting] = useState<SortingState>([]);
-  const [globalFilter, setGlobalFilter] = useState("");
-  const [columnFilters, setColumnFilters] = useState<ColumnFiltersState>([]);
+  const [search, setSearch] = useSearchParams();
+  const view = useMemo(() => viewFromSearch(search), [search]);
+  const { sorting, globalFilter, columnFilters } = view;
+  // Replace, not push: typing in the filter would otherwise fill the history with one entry per letter.
+  const setView = (change: Partial<ComparisonView>) =>
+    setSearch((current) => searchWithView(current, { ...viewFromSearch(current), ...change }), {
+      replace: true,
+    });
+  const apply = <T,>(updater: Updater<T>, old: T): T =>
+    typeof updater === "function" ? (updater as (old: T) => T)(old) : updater;
+  const filterValue = (id: string) => columnFilters.find((f) => f.id === id)?.value ?? "";
   const columns = useMemo(
     () =>
-      tableColumns(comparisonColumns(criteria), {
+      tableColumns(comparisonColumns(criteria, unit), {
         unit,
         workspaceId,
         projectId: comparison.projectId,
@@ -68,9 +80,15 @@ export function ComparisonTable({
     data: comparison.rows,
     columns,
     state: { sorting, globalFilter, columnFilters, columnVisibility: HIDDEN_COLUMNS },
-    onSortingChange: setSorting,
-    onGlobalFilterChange: setGlobalFilter,
-    onColumnFiltersChange: setColumnFilters,
+    onSortingChange: (updater: Updater<SortingState>) => setView({ sorting: apply(updater, sorting) }),
+    onGlobalFilterChange: (updater: Updater<string>) =>
+      setView({ globalFilter: String(apply(updater, globalFilter) ?? "") }),
+    onColumnFiltersChange: (updater: Updater<ColumnFiltersState>) =>
+      setView({
+        columnFilters: apply<ColumnFiltersState>(updater, columnFilters)
+          .filter((f) => f.value !== undefined && f.value !== "")
+          .map((f) => ({ id: f.id, value: String(f.value) })),
+      }),
     globalFilterFn: (row, _id, value: string) => matchesText(row.original, value),
     getCoreRowModel: getCoreRowModel(),
     getSortedRowModel: getSortedRowModel(),
@@ -81,7 +99,12 @@ export function ComparisonTable({
     <div>
       <ComparisonFilters
         text={globalFilter}
-        onText={setGlobalFilter}
+        onText={(text) => setView({ globalFilter: text })}
+        values={{
+          kind: filterValue("kind"),
+          locationId: filterValue("locationId"),
+          verdict: filterValue("verdict"),
+        }}
         onFilter={(id, value) => table.getColumn(id)?.setFilterValue(value || undefined)}
         locations={locationOptions(comparison.rows)}
         shown={table.getRowModel().rows.length}
@@ -90,7 +113,13 @@ export function ComparisonTable({
         paging={paging}
         onPage={onPage}
       />
-      <div className="overflow-x-auto">
+      {/* Scrolls sideways inside its own box on a phone; focusable so the keyboard can scroll it. */}
+      <div
+        className="relative overflow-x-auto focus-visible:outline focus-visible:outline-2 focus-visible:outline-ink"
+        role="region"
+        aria-label="Comparison table, scrolls sideways"
+        tabIndex={0}
+      >
         <table
           className="w-full border-collapse text-[14px]"
           aria-label="Comparison of load cases and locations"

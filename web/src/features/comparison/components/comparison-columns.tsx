@@ -116,12 +116,12 @@ function BenchCell({ row: r, ctx }: { row: Row; ctx: CellContext }) {
           ctx.unit,
         );
   return (
-    <Link
-      to={to}
-      className="whitespace-nowrap text-[13px] text-ink underline-offset-2 hover:underline"
-      aria-label={`Open ${r.caseName} at ${r.locationName} in the bench`}
-    >
+    <Link to={to} className="whitespace-nowrap text-[13px] text-ink underline-offset-2 hover:underline">
       Open in bench
+      {/* The name starts with the visible words (WCAG 2.5.3), then says which row it opens. */}
+      <span className="sr-only">
+        : {r.caseName} at {r.locationName}
+      </span>
     </Link>
   );
 }

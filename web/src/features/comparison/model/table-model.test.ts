@@ -48,8 +48,8 @@ function row(over: Partial<ComparisonRowView> = {}): ComparisonRowView {
 }
 
 describe("the comparison table's columns", () => {
-  it("when the project requires von Mises and Tresca, then the columns run case, kind, location, σ₁ σ₂ σ₃, σvm, σ₁−σ₃, τmax, one SF column per criterion, worst verdict and the bench link, with the stresses and factors numeric", () => {
-    const cols = comparisonColumns(["von-mises", "tresca"]);
+  it("when the project requires von Mises and Tresca, then the columns run case, kind, location, σ₁ σ₂ σ₃, σvm, σ₁−σ₃, τmax, one safety-factor column per criterion, worst verdict and the bench link, every header naming its content and unit, with the stresses and factors numeric", () => {
+    const cols = comparisonColumns(["von-mises", "tresca"], "MPa");
     expect(cols.map((c) => c.id)).toEqual([
       "caseName",
       "kind",
@@ -69,16 +69,16 @@ describe("the comparison table's columns", () => {
       "Case",
       "Kind",
       "Location",
-      "σ₁",
-      "σ₂",
-      "σ₃",
-      "σvm",
-      "σ₁−σ₃",
-      "τmax",
-      "von Mises: SF / required",
-      "Tresca: SF / required",
+      "σ₁, MPa",
+      "σ₂, MPa",
+      "σ₃, MPa",
+      "von Mises σvm, MPa",
+      "Tresca σ₁−σ₃, MPa",
+      "Max shear τmax, MPa",
+      "von Mises safety factor n / required",
+      "Tresca safety factor n / required",
       "Worst",
-      "",
+      "Bench",
     ]);
     expect(cols.filter((c) => c.numeric).map((c) => c.id)).toEqual([
       "s1",
@@ -99,7 +99,7 @@ describe("the comparison table's columns", () => {
   });
 
   it("when a row is read by each column, then the stresses are its Pa values and a criterion's column its utilisation", () => {
-    const cols = comparisonColumns(["tresca"]);
+    const cols = comparisonColumns(["tresca"], "MPa");
     const value = (id: string) => cols.find((c) => c.id === id)!.value!(row());
     expect([value("s1"), value("s2"), value("s3")]).toEqual([154.06e6, 0, -4.06e6]);
     expect(value("u:tresca")).toBe(0.95);
@@ -108,7 +108,7 @@ describe("the comparison table's columns", () => {
   });
 
   it("when locations are sorted, then they compare by name, not by id", () => {
-    const loc = comparisonColumns([]).find((c) => c.id === "locationId")!;
+    const loc = comparisonColumns([], "MPa").find((c) => c.id === "locationId")!;
     const a = row({ locationId: uuid(9), locationName: "Anchor" });
     const b = row({ locationId: uuid(1), locationName: "Shell" });
     expect(loc.compare!(a, b)).toBeLessThan(0);
@@ -151,7 +151,7 @@ describe("the comparison table's filters", () => {
   });
 
   it("when a kind, location or verdict filter is set, then only rows with exactly that value stay; an empty filter keeps all", () => {
-    const cols = comparisonColumns(["tresca"]);
+    const cols = comparisonColumns(["tresca"], "MPa");
     const col = (id: string) => cols.find((c) => c.id === id)!;
     const combination = row({ kind: "combination" });
     expect(matchesEquals(col("kind"), combination, "combination")).toBe(true);

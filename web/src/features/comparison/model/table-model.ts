@@ -92,10 +92,12 @@ const SUB = ["₁", "₂", "₃"] as const;
 
 /**
  * The table's columns, in order: case, kind (hidden), location, σ₁ σ₂ σ₃, σvm, σ₁−σ₃, τmax, one
- * "SF / required" column per required criterion, the worst verdict (hidden) and the bench link.
+ * safety-factor column per required criterion, the worst verdict (hidden) and the bench link.
+ * Each header says what the column holds and, for stresses, in which unit.
  * @param criteria the project's required criteria, in its order
+ * @param unit the unit the stresses are shown in
  */
-export function comparisonColumns(criteria: readonly CriterionName[]): ColumnSpec[] {
+export function comparisonColumns(criteria: readonly CriterionName[], unit: StressUnitName): ColumnSpec[] {
   return [
     { id: "caseName", header: "Case", numeric: false, value: (r) => r.caseName },
     { id: "kind", header: "Kind", numeric: false, value: (r) => r.kind, filter: "equals", hidden: true },
@@ -109,22 +111,22 @@ export function comparisonColumns(criteria: readonly CriterionName[]): ColumnSpe
     },
     ...([0, 1, 2] as const).map((k): ColumnSpec => ({
       id: `s${k + 1}`,
-      header: `σ${SUB[k]}`,
+      header: `σ${SUB[k]}, ${unit}`,
       numeric: true,
       value: (r) => r.principalPa[k],
     })),
-    { id: "vonMisesPa", header: "σvm", numeric: true, value: (r) => r.vonMisesPa },
-    { id: "trescaPa", header: "σ₁−σ₃", numeric: true, value: (r) => r.trescaPa },
-    { id: "maxShearPa", header: "τmax", numeric: true, value: (r) => r.maxShearPa },
+    { id: "vonMisesPa", header: `von Mises σvm, ${unit}`, numeric: true, value: (r) => r.vonMisesPa },
+    { id: "trescaPa", header: `Tresca σ₁−σ₃, ${unit}`, numeric: true, value: (r) => r.trescaPa },
+    { id: "maxShearPa", header: `Max shear τmax, ${unit}`, numeric: true, value: (r) => r.maxShearPa },
     ...criteria.map((c): ColumnSpec => ({
       id: `u:${c}`,
-      header: `${CRITERION_LABELS[c]}: SF / required`,
+      header: `${CRITERION_LABELS[c]} safety factor n / required`,
       numeric: true,
       value: (r) => utilisationOf(r, c),
       criterion: c,
     })),
     { id: "verdict", header: "Worst", numeric: false, value: worstVerdict, filter: "equals", hidden: true },
-    { id: "bench", header: "", numeric: false, value: null },
+    { id: "bench", header: "Bench", numeric: false, value: null },
   ];
 }
 

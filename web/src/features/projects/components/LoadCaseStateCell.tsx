@@ -1,12 +1,11 @@
 import { Link } from "react-router-dom";
 import type { LoadCase } from "../../../../../core/contract/load-cases";
-import type { StressUnitName } from "../../../../../core/contract/materials";
 import type { Location } from "../../../../../core/contract/projects";
 import { Quantity, stressTone } from "../../../components/Quantity";
 import { ToolButton } from "../../../components/ToolButton";
 import { benchLinkForState } from "../../../lib/bench-link";
 import { formatStress } from "../../../lib/stress";
-import { nonZeroComponents } from "../model/stress-components";
+import { nonZeroComponents, stateRevisionWords } from "../model/stress-components";
 
 /**
  * One cell of the load-case table: the saved state of `loadCase` at `location` (its non-zero
@@ -18,7 +17,6 @@ export function LoadCaseStateCell({
   projectId,
   loadCase: c,
   location: l,
-  unit,
   canEdit,
   historyOpen,
   onToggleHistory,
@@ -28,7 +26,6 @@ export function LoadCaseStateCell({
   projectId: string;
   loadCase: LoadCase;
   location: Location;
-  unit: StressUnitName;
   canEdit: boolean;
   historyOpen: boolean;
   onToggleHistory: () => void;
@@ -51,14 +48,14 @@ export function LoadCaseStateCell({
         {shown.map(({ key, label, pa }) => (
           <span key={key}>
             <span className="text-[12px] text-graphite-soft">{label} </span>
-            <Quantity value={formatStress(pa, unit)} tone={stressTone(pa)} />
+            <Quantity value={formatStress(pa, s.unit)} unit={s.unit} tone={stressTone(pa)} />
           </span>
         ))}
         {shown.length === 0 && <span className="text-graphite-soft">zero state</span>}
       </div>
       <div className="flex flex-wrap items-center gap-2 text-[12px] text-graphite-faint">
         <span>
-          {s.source} · rev. {s.revision}
+          {s.source} in {s.unit} · {stateRevisionWords(s.revision)}
         </span>
         <Link
           className="text-ink underline-offset-2 hover:underline"
@@ -69,6 +66,10 @@ export function LoadCaseStateCell({
           )}
         >
           Open in bench
+          {/* The name starts with the visible words (WCAG 2.5.3) and says which cell it opens. */}
+          <span className="sr-only">
+            : {c.name} at {l.name}
+          </span>
         </Link>
         {s.revision > 1 && (
           <ToolButton

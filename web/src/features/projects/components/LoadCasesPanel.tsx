@@ -50,7 +50,7 @@ export function LoadCasesPanel({
       id="load-cases"
       index="3"
       title="Load cases"
-      subtitle={`stress state at each location, in ${unit}; tension positive`}
+      subtitle={`stress state at each location, in the unit it was entered (new states: ${unit}); tension positive`}
     >
       <div className="overflow-x-auto">
         <table className="w-full border-collapse text-[14px]">
@@ -91,7 +91,6 @@ export function LoadCasesPanel({
                   <div className="text-[12px] font-normal text-graphite-soft" data-testid="case-allowables">
                     {allowablesNote(c.category, allowableCategories)}
                   </div>
-                  <div className="text-[12px] font-normal text-graphite-faint">version {c.version}</div>
                   {c.description && (
                     <div className="max-w-56 text-[12px] font-normal text-graphite-soft">{c.description}</div>
                   )}
@@ -138,7 +137,6 @@ export function LoadCasesPanel({
                       projectId={projectId}
                       loadCase={c}
                       location={l}
-                      unit={unit}
                       canEdit={canEdit}
                       historyOpen={isOpenCell(history, { caseId: c.id, locationId: l.id })}
                       onToggleHistory={() =>

@@ -8,6 +8,7 @@ import { useProject } from "../../../entities/project/queries";
 import { useWorkspaceRole } from "../../../entities/workspace/queries";
 import { displayUnit } from "../../../lib/stress";
 import { isNotThere } from "../model/errors";
+import { readOnlyNote } from "../../../lib/role-note";
 import { ActivityPanel } from "./ActivityPanel";
 import { CombinationsPanel } from "./CombinationsPanel";
 import { LoadCasesPanel } from "./LoadCasesPanel";
@@ -38,6 +39,7 @@ export function ProjectPage() {
   const p = project.data;
   const unit = displayUnit(p.unitSystem);
   const canEdit = role.canEdit;
+  const readOnly = role.role ? readOnlyNote(role.role) : null;
   return (
     <div className="space-y-5">
       <header className="flex flex-wrap items-end justify-between gap-4 border-b border-rule pb-4">
@@ -53,11 +55,7 @@ export function ProjectPage() {
           </p>
           <h1 className="text-3xl font-semibold tracking-tight">{p.name}</h1>
           {p.description && <p className="mt-1 max-w-3xl text-graphite-soft">{p.description}</p>}
-          {!canEdit && (
-            <p className="mt-1 text-sm text-graphite-soft">
-              You are a {role.role} here: you can read everything but not change inputs.
-            </p>
-          )}
+          {readOnly && <p className="mt-1 max-w-3xl text-sm text-graphite-soft">{readOnly}</p>}
         </div>
         <div className="flex flex-wrap items-center gap-2">
           <CopyLinkButton />

@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { nonZeroComponents } from "./stress-components";
+import { nonZeroComponents, stateRevisionWords } from "./stress-components";
 
 describe("non-zero components", () => {
   it("when some components are zero, then only the others are listed, in order, with their values", () => {
@@ -13,5 +13,13 @@ describe("non-zero components", () => {
 
   it("when every component is zero (negative zero too), then nothing is listed: a zero state", () => {
     expect(nonZeroComponents({ xx: 0, yy: -0, zz: 0, xy: 0, yz: 0, zx: 0 })).toEqual([]);
+  });
+});
+
+// Product wording (no outside source): a state's revision counts its saves.
+describe("state revision words", () => {
+  it("when a state was saved once or three times, then the words count the saves", () => {
+    expect(stateRevisionWords(1)).toBe("saved once");
+    expect(stateRevisionWords(3)).toBe("saved 3 times (revision 3)");
   });
 });

@@ -14,3 +14,10 @@ export function nonZeroComponents(
     pa: componentsPa[key],
   }));
 }
+
+/**
+ * How a saved state's revision reads beside it: every save of a state makes a new revision
+ * (the history lists them), so the number counts saves of this one state.
+ */
+export const stateRevisionWords = (revision: number): string =>
+  revision === 1 ? "saved once" : `saved ${revision} times (revision ${revision})`;

@@ -18,11 +18,20 @@ import {
   invitationErrorAboveTable,
   isAlreadyInvited,
 } from "../model/invitations";
+import { TableScroll } from "../../../components/TableScroll";
 import { RoleBadge } from "./RoleBadge";
+import { sectionRefusal } from "../model/roles";
+import { SectionRefusal } from "./SectionRefusal";
 
 /** `/workspaces/:id/invitations` (owners): invite by e-mail, see each invitation's state, resend or revoke. */
 export function InvitationsSection() {
   const workspace = useOutletContext<Workspace>();
+  const refusal = sectionRefusal(workspace.role, "invitations");
+  if (refusal) return <SectionRefusal headingId="invitations-heading" title="Invitations" reason={refusal} />;
+  return <InvitationsControls workspace={workspace} />;
+}
+
+function InvitationsControls({ workspace }: { workspace: Workspace }) {
   const invitations = useInvitations(workspace.id, true);
   const create = useCreateInvitation(workspace.id);
   const resend = useResendInvitation(workspace.id);
@@ -58,7 +67,7 @@ export function InvitationsSection() {
           id="invite-email"
           label="E-mail address"
           type="email"
-          placeholder="ines.okafor-lund@quillon.example"
+          placeholder="name@example.com"
           error={form.formState.errors.email?.message}
           {...form.register("email")}
         />
@@ -88,64 +97,68 @@ export function InvitationsSection() {
           ✓ Invitation mailed to {create.data.invitation.email}; it is valid for 7 days.
         </p>
       )}
-      <table className="w-full border-collapse rounded border border-rule bg-panel text-left">
-        <thead className="border-b border-rule text-sm text-graphite-soft">
-          <tr>
-            <th className="px-4 py-2 font-semibold">Address</th>
-            <th className="px-4 py-2 font-semibold">Role</th>
-            <th className="px-4 py-2 font-semibold">State</th>
-            <th className="px-4 py-2 font-semibold">Expires</th>
-            <th className="px-4 py-2">
-              <span className="sr-only">Actions</span>
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {invitations.data?.length === 0 && (
+      {/* On a phone the table scrolls inside its own box, not the page. */}
+      <TableScroll label="Invitations table">
+        <table className="w-full border-collapse text-left">
+          <thead className="border-b border-rule text-sm text-graphite-soft">
             <tr>
-              <td colSpan={5} className="px-4 py-3 text-graphite-soft">
-                No invitations yet.
-              </td>
+              <th className="px-4 py-2 font-semibold">Address</th>
+              <th className="px-4 py-2 font-semibold">Role</th>
+              <th className="px-4 py-2 font-semibold">State</th>
+              <th className="px-4 py-2 font-semibold">Expires</th>
+              <th className="px-4 py-2">
+                <span className="sr-only">Actions</span>
+              </th>
             </tr>
-          )}
-          {invitations.data?.map((i) => (
-            <tr key={i.id} className="border-b border-rule last:border-0">
-              <td className="px-4 py-3">
-                {i.email}
-                <br />
-                <span className="text-sm text-graphite-soft">
-                  by {i.invitedByName ?? "a former member"}, sent <span className="num">{i.sendCount}</span>×
-                </span>
-              </td>
-              <td className="px-4 py-3">
-                <RoleBadge role={i.role} />
-              </td>
-              <td className="px-4 py-3">{INVITATION_STATE_WORDS[i.state]}</td>
-              <td className="num px-4 py-3 text-sm">{formatDate(i.expiresAt)}</td>
-              <td className="space-x-2 px-4 py-3 text-right">
-                {canResendOrRevoke(i.state) && (
-                  <>
-                    <button
-                      type="button"
-                      className={quietButton}
-                      onClick={() => resend.mutate({ workspaceId: workspace.id, invitationId: i.id })}
-                    >
-                      Resend
-                    </button>
-                    <button
-                      type="button"
-                      className={quietButton}
-                      onClick={() => revoke.mutate({ workspaceId: workspace.id, invitationId: i.id })}
-                    >
-                      Revoke
-                    </button>
-                  </>
-                )}
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {invitations.data?.length === 0 && (
+              <tr>
+                <td colSpan={5} className="px-4 py-3 text-graphite-soft">
+                  No invitations yet.
+                </td>
+              </tr>
+            )}
+            {invitations.data?.map((i) => (
+              <tr key={i.id} className="border-b border-rule last:border-0">
+                <td className="px-4 py-3">
+                  {i.email}
+                  <br />
+                  <span className="text-sm text-graphite-soft">
+                    by {i.invitedByName ?? "a former member"}, sent <span className="num">{i.sendCount}</span>
+                    ×
+                  </span>
+                </td>
+                <td className="px-4 py-3">
+                  <RoleBadge role={i.role} />
+                </td>
+                <td className="px-4 py-3">{INVITATION_STATE_WORDS[i.state]}</td>
+                <td className="num px-4 py-3 text-sm">{formatDate(i.expiresAt)}</td>
+                <td className="space-x-2 px-4 py-3 text-right">
+                  {canResendOrRevoke(i.state) && (
+                    <>
+                      <button
+                        type="button"
+                        className={quietButton}
+                        onClick={() => resend.mutate({ workspaceId: workspace.id, invitationId: i.id })}
+                      >
+                        Resend
+                      </button>
+                      <button
+                        type="button"
+                        className={quietButton}
+                        onClick={() => revoke.mutate({ workspaceId: workspace.id, invitationId: i.id })}
+                      >
+                        Revoke
+                      </button>
+                    </>
+                  )}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </TableScroll>
     </section>
   );
 }

@@ -9,11 +9,14 @@ import {
 } from "../../../../../core/contract/workspaces";
 import { applyServerErrors, Field, FormMessage, primaryButton } from "../../../lib/forms";
 import { useDeleteWorkspace, useRenameWorkspace } from "../../../entities/workspace/mutations";
-import { deleteConfirmed } from "../model/roles";
+import { deleteConfirmed, sectionRefusal } from "../model/roles";
+import { SectionRefusal } from "./SectionRefusal";
 
 /** `/workspaces/:id/settings` (owners): rename the workspace, or delete it after typing its name. */
 export function SettingsSection() {
   const workspace = useOutletContext<Workspace>();
+  const refusal = sectionRefusal(workspace.role, "settings");
+  if (refusal) return <SectionRefusal headingId="settings-heading" title="Settings" reason={refusal} />;
   return (
     <div className="max-w-xl space-y-10">
       <RenameForm workspace={workspace} />

@@ -17,11 +17,20 @@ import {
   shareLinkUses,
   type ShareLinkFormValues,
 } from "../model/share-links";
+import { TableScroll } from "../../../components/TableScroll";
 import { RoleBadge } from "./RoleBadge";
+import { sectionRefusal } from "../model/roles";
+import { SectionRefusal } from "./SectionRefusal";
 
 /** `/workspaces/:id/share-links` (editors, owners): links that let a signed-in person join with a role. */
 export function ShareLinksSection() {
   const workspace = useOutletContext<Workspace>();
+  const refusal = sectionRefusal(workspace.role, "share-links");
+  if (refusal) return <SectionRefusal headingId="links-heading" title="Share links" reason={refusal} />;
+  return <ShareLinksControls workspace={workspace} />;
+}
+
+function ShareLinksControls({ workspace }: { workspace: Workspace }) {
   const links = useShareLinks(workspace.id, true);
   const create = useCreateShareLink(workspace.id);
   const revoke = useRevokeShareLink(workspace.id);
@@ -153,57 +162,60 @@ export function ShareLinksSection() {
           </div>
         </div>
       )}
-      <table className="w-full border-collapse rounded border border-rule bg-panel text-left">
-        <thead className="border-b border-rule text-sm text-graphite-soft">
-          <tr>
-            <th className="px-4 py-2 font-semibold">Link</th>
-            <th className="px-4 py-2 font-semibold">Role</th>
-            <th className="px-4 py-2 font-semibold">State</th>
-            <th className="px-4 py-2 font-semibold">Uses</th>
-            <th className="px-4 py-2 font-semibold">Expires</th>
-            <th className="px-4 py-2">
-              <span className="sr-only">Actions</span>
-            </th>
-          </tr>
-        </thead>
-        <tbody>
-          {links.data?.length === 0 && (
+      {/* On a phone the table scrolls inside its own box, not the page. */}
+      <TableScroll label="Share links table">
+        <table className="w-full border-collapse text-left">
+          <thead className="border-b border-rule text-sm text-graphite-soft">
             <tr>
-              <td colSpan={6} className="px-4 py-3 text-graphite-soft">
-                No share links yet.
-              </td>
+              <th className="px-4 py-2 font-semibold">Link</th>
+              <th className="px-4 py-2 font-semibold">Role</th>
+              <th className="px-4 py-2 font-semibold">State</th>
+              <th className="px-4 py-2 font-semibold">Uses</th>
+              <th className="px-4 py-2 font-semibold">Expires</th>
+              <th className="px-4 py-2">
+                <span className="sr-only">Actions</span>
+              </th>
             </tr>
-          )}
-          {links.data?.map((l) => (
-            <tr key={l.id} className="border-b border-rule last:border-0">
-              <td className="px-4 py-3">
-                {l.label ?? "Untitled link"}
-                <br />
-                <span className="text-sm text-graphite-soft">
-                  by {l.createdByName ?? "a former member"} on {formatDate(l.createdAt)}
-                </span>
-              </td>
-              <td className="px-4 py-3">
-                <RoleBadge role={l.role} />
-              </td>
-              <td className="px-4 py-3">{SHARE_LINK_STATE_WORDS[l.state]}</td>
-              <td className="num px-4 py-3 text-sm">{shareLinkUses(l)}</td>
-              <td className="num px-4 py-3 text-sm">{formatDate(l.expiresAt)}</td>
-              <td className="px-4 py-3 text-right">
-                {canRevokeShareLink(l.state) && (
-                  <button
-                    type="button"
-                    className={quietButton}
-                    onClick={() => revoke.mutate({ workspaceId: workspace.id, linkId: l.id })}
-                  >
-                    Revoke
-                  </button>
-                )}
-              </td>
-            </tr>
-          ))}
-        </tbody>
-      </table>
+          </thead>
+          <tbody>
+            {links.data?.length === 0 && (
+              <tr>
+                <td colSpan={6} className="px-4 py-3 text-graphite-soft">
+                  No share links yet.
+                </td>
+              </tr>
+            )}
+            {links.data?.map((l) => (
+              <tr key={l.id} className="border-b border-rule last:border-0">
+                <td className="px-4 py-3">
+                  {l.label ?? "Untitled link"}
+                  <br />
+                  <span className="text-sm text-graphite-soft">
+                    by {l.createdByName ?? "a former member"} on {formatDate(l.createdAt)}
+                  </span>
+                </td>
+                <td className="px-4 py-3">
+                  <RoleBadge role={l.role} />
+                </td>
+                <td className="px-4 py-3">{SHARE_LINK_STATE_WORDS[l.state]}</td>
+                <td className="num px-4 py-3 text-sm">{shareLinkUses(l)}</td>
+                <td className="num px-4 py-3 text-sm">{formatDate(l.expiresAt)}</td>
+                <td className="px-4 py-3 text-right">
+                  {canRevokeShareLink(l.state) && (
+                    <button
+                      type="button"
+                      className={quietButton}
+                      onClick={() => revoke.mutate({ workspaceId: workspace.id, linkId: l.id })}
+                    >
+                      Revoke
+                    </button>
+                  )}
+                </td>
+              </tr>
+            ))}
+          </tbody>
+        </table>
+      </TableScroll>
     </section>
   );
 }

@@ -1,6 +1,7 @@
 import { NavLink, Outlet, useParams } from "react-router-dom";
 import { FormMessage } from "../../../lib/forms";
 import { useWorkspace } from "../../../entities/workspace/queries";
+import { readOnlyNote } from "../../../lib/role-note";
 import { CopyLinkButton } from "../../../components/CopyLinkButton";
 import { isNotThere } from "../model/errors";
 import { membersWord, workspaceTabs } from "../model/roles";
@@ -36,10 +37,13 @@ export function WorkspacePage() {
             You are <RoleBadge role={w.role} /> · <span className="num">{w.memberCount}</span>{" "}
             {membersWord(w.memberCount)}
           </p>
+          {readOnlyNote(w.role) && (
+            <p className="mt-1 max-w-3xl text-sm text-graphite-soft">{readOnlyNote(w.role)}</p>
+          )}
         </div>
         <CopyLinkButton />
       </header>
-      <nav aria-label="Workspace" className="flex gap-1">
+      <nav aria-label="Workspace" className="flex flex-wrap gap-1">
         {tabs.map((t) => (
           <NavLink
             key={t.to}

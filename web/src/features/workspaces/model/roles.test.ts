@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { deleteConfirmed, membersWord, removeMemberQuestion, workspaceTabs } from "./roles";
+import { deleteConfirmed, membersWord, removeMemberQuestion, sectionRefusal, workspaceTabs } from "./roles";
 
 // Product rules of the workspace pages (the API's role checks are tested in test/api); no outside source.
 
@@ -23,6 +23,22 @@ describe("workspace tabs", () => {
   it("when a reviewer or viewer opens it, then only projects and members show", () => {
     expect(tabs("reviewer")).toEqual(["Projects", "Members"]);
     expect(tabs("viewer")).toEqual(["Projects", "Members"]);
+  });
+});
+
+describe("pages a role may open but not use", () => {
+  it("when a reviewer or viewer opens invitations or share links, then the refusal names who may act", () => {
+    for (const role of ["reviewer", "viewer"] as const) {
+      expect(sectionRefusal(role, "invitations")).toMatch(/^Only owners invite people by e-mail\. You are a/);
+      expect(sectionRefusal(role, "share-links")).toMatch(/^Only owners and editors create/);
+      expect(sectionRefusal(role, "settings")).toMatch(new RegExp(`You are a ${role} here`));
+    }
+  });
+
+  it("when an editor opens invitations, then it is refused but share links are not", () => {
+    expect(sectionRefusal("editor", "invitations")).not.toBeNull();
+    expect(sectionRefusal("editor", "share-links")).toBeNull();
+    expect(sectionRefusal("owner", "invitations")).toBeNull();
   });
 });
 

@@ -20,6 +20,25 @@ export function workspaceTabs(role: Role): WorkspaceTab[] {
     .map(({ to, label }) => ({ to, label }));
 }
 
+/** The workspace pages whose controls only some roles may use. */
+export type GuardedSection = "invitations" | "share-links" | "settings";
+
+const SECTION_MINIMUM: Record<GuardedSection, { minimum: Role; who: string; what: string }> = {
+  invitations: { minimum: "owner", who: "Only owners", what: "invite people by e-mail" },
+  "share-links": { minimum: "editor", who: "Only owners and editors", what: "create and revoke share links" },
+  settings: { minimum: "owner", who: "Only owners", what: "rename or delete the workspace" },
+};
+
+/**
+ * Why `role` sees no controls on `section`, or null when it may use them. A page that would
+ * only be refused (403) shows this sentence instead of a form that looks as if it works.
+ */
+export function sectionRefusal(role: Role, section: GuardedSection): string | null {
+  const rule = SECTION_MINIMUM[section];
+  if (roleAtLeast(role, rule.minimum)) return null;
+  return `${rule.who} ${rule.what}. You are a ${role} here: ask an owner if you need this.`;
+}
+
 /** "member" or "members" after a count. */
 export const membersWord = (count: number): string => (count === 1 ? "member" : "members");
 

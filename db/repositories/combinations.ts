@@ -3,10 +3,10 @@ import { Combination } from "../models/combination";
 import { CombinationTerm } from "../models/combination-term";
 import {
   countLive,
+  findLiveChild,
+  listLiveChildren,
   lastPosition,
-  lockOf,
   toPlain,
-  toPlainOrNull,
   updateById,
   type ReadOptions,
   type Row,
@@ -26,23 +26,13 @@ export type NewCombination = Pick<
 /** A term to store, in the order given. */
 export type NewTerm = { loadCaseId: string; factor: number };
 
-const ORDER: [string, string][] = [
-  ["position", "ASC"],
-  ["createdAt", "ASC"],
-];
-
 /** The combination `id` of `projectId`, not in the trash (locked FOR UPDATE with `lock`), or null. */
 export async function findLiveCombination(
   projectId: string,
   id: string,
   options: ReadOptions = {},
 ): Promise<CombinationRow | null> {
-  const row = await Combination.findOne({
-    where: { id, projectId, deletedAt: null },
-    transaction: options.transaction,
-    lock: lockOf(options),
-  });
-  return toPlainOrNull(row);
+  return findLiveChild(Combination, projectId, id, options);
 }
 
 /** The project's live combinations in their order. */
@@ -50,12 +40,7 @@ export async function listLiveCombinations(
   projectId: string,
   transaction?: Transaction,
 ): Promise<CombinationRow[]> {
-  const rows = await Combination.findAll({
-    where: { projectId, deletedAt: null },
-    order: ORDER,
-    transaction,
-  });
-  return rows.map(toPlain);
+  return listLiveChildren(Combination, projectId, transaction);
 }
 
 /** How many combinations of the project are not in the trash. */

@@ -2,10 +2,11 @@ import type { Transaction } from "sequelize";
 import { LoadCase } from "../models/load-case";
 import {
   countLive,
+  findLiveChild,
+  listLiveChildren,
+  liveChildIdsAmong,
   lastPosition,
-  lockOf,
   toPlain,
-  toPlainOrNull,
   updateById,
   type ReadOptions,
   type Row,
@@ -20,23 +21,13 @@ export type NewLoadCase = Pick<
   "projectId" | "name" | "category" | "description" | "position" | "createdBy" | "updatedBy"
 >;
 
-const ORDER: [string, string][] = [
-  ["position", "ASC"],
-  ["createdAt", "ASC"],
-];
-
 /** The load case `id` of `projectId`, not in the trash (locked FOR UPDATE with `lock`), or null. */
 export async function findLiveLoadCase(
   projectId: string,
   id: string,
   options: ReadOptions = {},
 ): Promise<LoadCaseRow | null> {
-  const row = await LoadCase.findOne({
-    where: { id, projectId, deletedAt: null },
-    transaction: options.transaction,
-    lock: lockOf(options),
-  });
-  return toPlainOrNull(row);
+  return findLiveChild(LoadCase, projectId, id, options);
 }
 
 /** The project's live load cases in their order. */
@@ -44,8 +35,7 @@ export async function listLiveLoadCases(
   projectId: string,
   transaction?: Transaction,
 ): Promise<LoadCaseRow[]> {
-  const rows = await LoadCase.findAll({ where: { projectId, deletedAt: null }, order: ORDER, transaction });
-  return rows.map(toPlain);
+  return listLiveChildren(LoadCase, projectId, transaction);
 }
 
 /** Which of `ids` are live load cases of `projectId`. */
@@ -54,13 +44,7 @@ export async function liveLoadCaseIdsAmong(
   ids: string[],
   transaction?: Transaction,
 ): Promise<Set<string>> {
-  if (ids.length === 0) return new Set();
-  const rows = await LoadCase.findAll({
-    attributes: ["id"],
-    where: { id: ids, projectId, deletedAt: null },
-    transaction,
-  });
-  return new Set(rows.map((c) => c.id));
+  return liveChildIdsAmong(LoadCase, projectId, ids, transaction);
 }
 
 /** The name of each load case with these ids and whether it is live (trashed ones too), by id. */

@@ -1,11 +1,12 @@
-import { Op, type Transaction } from "sequelize";
+import type { Transaction } from "sequelize";
 import { Location } from "../models/location";
 import {
   countLive,
+  findLiveChild,
+  listLiveChildren,
+  liveChildIdsAmong,
   lastPosition,
-  lockOf,
   toPlain,
-  toPlainOrNull,
   updateById,
   type ReadOptions,
   type Row,
@@ -18,23 +19,13 @@ export type LocationRow = Row<Location>;
 export type NewLocation = Pick<LocationRow, "projectId" | "name" | "position" | "createdBy" | "updatedBy"> &
   Partial<Pick<LocationRow, "note" | "materialId" | "publishedMaterial">>;
 
-const ORDER: [string, string][] = [
-  ["position", "ASC"],
-  ["createdAt", "ASC"],
-];
-
 /** The location `id` of `projectId`, not in the trash (locked FOR UPDATE with `lock`), or null. */
 export async function findLiveLocation(
   projectId: string,
   id: string,
   options: ReadOptions = {},
 ): Promise<LocationRow | null> {
-  const row = await Location.findOne({
-    where: { id, projectId, deletedAt: null },
-    transaction: options.transaction,
-    lock: lockOf(options),
-  });
-  return toPlainOrNull(row);
+  return findLiveChild(Location, projectId, id, options);
 }
 
 /** The project's live locations in their order. */
@@ -42,8 +33,7 @@ export async function listLiveLocations(
   projectId: string,
   transaction?: Transaction,
 ): Promise<LocationRow[]> {
-  const rows = await Location.findAll({ where: { projectId, deletedAt: null }, order: ORDER, transaction });
-  return rows.map(toPlain);
+  return listLiveChildren(Location, projectId, transaction);
 }
 
 /** Which of `ids` are live locations of `projectId`. */
@@ -52,13 +42,7 @@ export async function liveLocationIdsAmong(
   ids: string[],
   transaction?: Transaction,
 ): Promise<Set<string>> {
-  if (ids.length === 0) return new Set();
-  const rows = await Location.findAll({
-    attributes: ["id"],
-    where: { id: { [Op.in]: ids }, projectId, deletedAt: null },
-    transaction,
-  });
-  return new Set(rows.map((l) => l.id));
+  return liveChildIdsAmong(Location, projectId, ids, transaction);
 }
 
 /** The names of the locations with these ids (trashed ones too), by id. */

@@ -56,3 +56,54 @@ export async function lastPosition(
 export function countLive(model: ModelStatic<Model>, projectId: string, transaction?: Transaction) {
   return model.count({ where: { projectId, deletedAt: null }, transaction });
 }
+
+/** The order of a project's children (locations, load cases, combinations): position, then creation. */
+const CHILD_ORDER: [string, string][] = [
+  ["position", "ASC"],
+  ["createdAt", "ASC"],
+];
+
+/** The child `id` of `projectId` in `model`, not in the trash (locked FOR UPDATE with `lock`), or null. */
+export async function findLiveChild<M extends Model>(
+  model: ModelStatic<M>,
+  projectId: string,
+  id: string,
+  options: ReadOptions = {},
+): Promise<Row<M> | null> {
+  const row = await model.findOne({
+    where: { id, projectId, deletedAt: null } as WhereOptions,
+    transaction: options.transaction,
+    lock: lockOf(options),
+  });
+  return toPlainOrNull(row);
+}
+
+/** The project's live children in `model`, in their order. */
+export async function listLiveChildren<M extends Model>(
+  model: ModelStatic<M>,
+  projectId: string,
+  transaction?: Transaction,
+): Promise<Row<M>[]> {
+  const rows = await model.findAll({
+    where: { projectId, deletedAt: null } as WhereOptions,
+    order: CHILD_ORDER,
+    transaction,
+  });
+  return rows.map(toPlain);
+}
+
+/** Which of `ids` are live children of `projectId` in `model`. */
+export async function liveChildIdsAmong(
+  model: ModelStatic<Model>,
+  projectId: string,
+  ids: string[],
+  transaction?: Transaction,
+): Promise<Set<string>> {
+  if (ids.length === 0) return new Set();
+  const rows = await model.findAll({
+    attributes: ["id"],
+    where: { id: ids, projectId, deletedAt: null } as WhereOptions,
+    transaction,
+  });
+  return new Set(rows.map((row) => row.get("id") as string));
+}

@@ -33,62 +33,10 @@ export function readNumber(text: string, start: number, end: number, decimal: nu
   let c = 0;
   while (i < e && ((c = text.charCodeAt(i)) === SPACE || c === TAB)) i++;
   while (e > i && ((c = text.charCodeAt(e - 1)) === SPACE || c === TAB)) e--;
-  const first = i;
-  let negative = false;
-  c = text.charCodeAt(i);
-  if (c === MINUS) {
-    negative = true;
-    i++;
-  } else if (c === PLUS) i++;
-  let m = 0;
-  let digits = 0;
-  let frac = 0;
-  while (i < e) {
-    const d = text.charCodeAt(i) - 48;
-    if (d < 0 || d > 9) break;
-    m = m * 10 + d;
-    digits++;
-    i++;
-  }
-  if (i < e && text.charCodeAt(i) === decimal) {
-    i++;
-    while (i < e) {
-      const d = text.charCodeAt(i) - 48;
-      if (d < 0 || d > 9) break;
-      m = m * 10 + d;
-      digits++;
-      frac++;
-      i++;
-    }
-  }
-  let exp = 0;
-  if (i < e && digits > 0 && ((c = text.charCodeAt(i)) === 101 || c === 69)) {
-    i++;
-    let expNegative = false;
-    c = text.charCodeAt(i);
-    if (c === MINUS) {
-      expNegative = true;
-      i++;
-    } else if (c === PLUS) i++;
-    let expDigits = 0;
-    while (i < e) {
-      const d = text.charCodeAt(i) - 48;
-      if (d < 0 || d > 9) break;
-      exp = exp * 10 + d;
-      expDigits++;
-      i++;
-    }
-    if (expDigits === 0 || expDigits > 4) return slowNumber(text, first, e, decimal);
-    if (expNegative) exp = -exp;
-  }
-  if (i !== e || digits === 0 || digits > 15) return slowNumber(text, first, e, decimal);
-  const e10 = exp - frac;
-  let v: number;
-  if (e10 === 0) v = m;
-  else if (e10 < 0 && e10 >= -22) v = m / POW10[-e10];
-  else if (e10 > 0 && e10 <= 22) v = m * POW10[e10];
-  else return slowNumber(text, first, e, decimal);
-  return negative ? -v : v;
+  // The fast path is readNumberAt's; it must have read the whole trimmed field.
+  const v = readNumberAt(text, i, e, decimal);
+  if (!Number.isNaN(v) && numberScan.end === e) return v;
+  return slowNumber(text, i, e, decimal);
 }
 
 /** The rare forms: more than 15 digits, a large exponent, U+2212 minus, or not a number at all. */

@@ -11,20 +11,9 @@ import {
   type StressTensor,
 } from "../../core/index";
 import { seededRandom } from "../../core/testing/fixtures";
+import { bestRate } from "./support/best-rate";
 
 const N = 100_000;
-const REPEATS = 3; // best of REPEATS for every figure
-
-/** Best states-per-second rate of `fn` over REPEATS runs on `count` states. */
-function bestRate(count: number, fn: () => void): number {
-  let best = 0;
-  for (let r = 0; r < REPEATS; r++) {
-    const t0 = performance.now();
-    fn();
-    best = Math.max(best, count / ((performance.now() - t0) / 1000));
-  }
-  return best;
-}
 
 /**
  * The evaluator on N = 100,000 seeded states (components uniform in ±300 MPa) against all five
@@ -73,7 +62,7 @@ export async function run(): Promise<void> {
   const singleRate = bestRate(N, single);
   const batchRate = bestRate(N, batch);
   const fmt = (r: number) => `${(r / 1e6).toFixed(3).padStart(7)} M states/s`;
-  console.log(`N = ${N.toLocaleString("en-US")} seeded states, five criteria each; best of ${REPEATS} runs`);
+  console.log(`N = ${N.toLocaleString("en-US")} seeded states, five criteria each; best of 3 runs`);
   console.log(
     `${"baseline: principal, von Mises, Tresca, then safetyFactor per criterion".padEnd(72)} ${fmt(baseRate)}`,
   );

@@ -1,20 +1,9 @@
 import { linearize, principalBatch } from "../../core/index";
 import { seededRandom } from "../../core/testing/fixtures";
+import { bestRate } from "./support/best-rate";
 
 const LINES = 10_000;
 const POINTS = 21;
-const REPEATS = 3; // best of REPEATS for every figure
-
-/** Best rate (lines per second) of `fn` over REPEATS runs on `count` lines. */
-function bestRate(count: number, fn: () => void): number {
-  let best = 0;
-  for (let r = 0; r < REPEATS; r++) {
-    const t0 = performance.now();
-    fn();
-    best = Math.max(best, count / ((performance.now() - t0) / 1000));
-  }
-  return best;
-}
 
 /**
  * linearize on 10,000 seeded random lines of 21 points each (components uniform in ±100, one stress
@@ -64,7 +53,7 @@ export async function run(): Promise<void> {
 
   const fmt = (r: number) => `${Math.round(r).toLocaleString("en-US").padStart(10)} lines/s`;
   console.log(
-    `${LINES.toLocaleString("en-US")} seeded random lines of ${POINTS} points; best of ${REPEATS} runs each`,
+    `${LINES.toLocaleString("en-US")} seeded random lines of ${POINTS} points; best of 3 runs each`,
   );
   console.log(
     `${"baseline: principalBatch + von Mises + Tresca over the same points".padEnd(66)} ${fmt(baseRate)}`,

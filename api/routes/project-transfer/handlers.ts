@@ -3,7 +3,7 @@ import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import type { RouteHandler } from "../../openapi/registry";
 import { findProject } from "../../domain/projects/scope";
-import { exportProject } from "./export";
+import { exportProject } from "../../domain/projects/export";
 import { importProject } from "./import";
 
 type NoInput = Record<string, never>;

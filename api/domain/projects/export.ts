@@ -10,16 +10,32 @@ import { listLiveCombinations } from "../../../db/repositories/combinations";
 import { listLiveLoadCases } from "../../../db/repositories/load-cases";
 import { listLiveLocations } from "../../../db/repositories/locations";
 import type { ProjectRow } from "../../../db/repositories/projects";
-import { componentsPaOf, currentStatesOf } from "../../../db/repositories/stress-states";
-import { termsOf } from "../../domain/combinations/terms";
-import { libraryOf, refFromColumns } from "../../domain/materials/resolve";
+import { componentsPaOf, currentStatesOf, type StressStateRow } from "../../../db/repositories/stress-states";
+import { termsOf } from "../combinations/terms";
+import { libraryOf, refFromColumns } from "../materials/resolve";
+
+/** The export file of a project ({@link exportProjectWithKeys} without the keys). */
+export async function exportProject(project: ProjectRow): Promise<ProjectExport> {
+  return (await exportProjectWithKeys(project)).file;
+}
+
+/** Which database id each key of an export file stands for, and the current state rows exported. */
+export type ExportKeys = {
+  materials: Map<string, string>;
+  locations: Map<string, string>;
+  loadCases: Map<string, string>;
+  states: StressStateRow[];
+};
 
 /**
  * The export file of a project: live locations, load cases with their current states
  * (Pa as stored), combinations whose cases are all live, and the library materials the
- * project refers to. Keys are short labels ("m1", "l1", "c1") made for the file.
+ * project refers to. Keys are short labels ("m1", "l1", "c1") made for the file; `keys` maps
+ * each database id to its key, for a frozen record that must match rows across revisions.
  */
-export async function exportProject(project: ProjectRow): Promise<ProjectExport> {
+export async function exportProjectWithKeys(
+  project: ProjectRow,
+): Promise<{ file: ProjectExport; keys: ExportKeys }> {
   const [locations, cases, combinations, library] = await Promise.all([
     listLiveLocations(project.id),
     listLiveLoadCases(project.id),
@@ -48,7 +64,7 @@ export async function exportProject(project: ProjectRow): Promise<ProjectExport>
     note: l.note,
     material: exportRef(refFromColumns(l.materialId, l.publishedMaterial)),
   }));
-  return {
+  const file: ProjectExport = {
     format: PROJECT_EXPORT_FORMAT,
     schemaVersion: PROJECT_EXPORT_SCHEMA_VERSION,
     exportedAt: new Date().toISOString(),
@@ -99,5 +115,9 @@ export async function exportProject(project: ProjectRow): Promise<ProjectExport>
         description: c.description,
         terms: terms.get(c.id)!.map((t) => ({ loadCase: caseKeys.get(t.loadCaseId)!, factor: t.factor })),
       })),
+  };
+  return {
+    file,
+    keys: { materials: materialKeys, locations: locationKeys, loadCases: caseKeys, states },
   };
 }

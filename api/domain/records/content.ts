@@ -1,0 +1,77 @@
+import { createHash } from "node:crypto";
+import type { Sequelize } from "sequelize";
+import { ENGINE_NAME, ENGINE_VERSION } from "../../../core/constants/engine";
+import type { Comparison } from "../../../core/contract/comparison";
+import {
+  RECORD_CONTENT_FORMAT,
+  RECORD_CONTENT_VERSION,
+  type RecordContent,
+} from "../../../core/contract/records";
+import type { ProjectRow } from "../../../db/repositories/projects";
+import { comparisonInputFrom, loadComparisonSource } from "../comparison/load";
+import { comparisonPage } from "../comparison/paging";
+import { exportProjectWithKeys } from "../projects/export";
+
+const invert = (m: Map<string, string>): Record<string, string> =>
+  Object.fromEntries([...m].map(([id, key]) => [key, id]));
+
+/**
+ * Everything a frozen record holds, taken from the project as it is now: its inputs as the
+ * export writes them, the key → id maps, the revision of every state, and the full comparison
+ * (every row) computed with this process's engine. The comparison runs through paging.ts, so a
+ * large project yields the event loop between runs as the comparison route does.
+ *
+ * The inputs and the comparison are read by separate statements; a caller that freezes a record
+ * must make sure no write landed in between (e.g. compare the project's inputs version before and
+ * after, or hold a REPEATABLE READ transaction).
+ */
+export async function buildRecordContent(sequelize: Sequelize, project: ProjectRow): Promise<RecordContent> {
+  const [{ file, keys }, source] = await Promise.all([
+    exportProjectWithKeys(project),
+    loadComparisonSource(sequelize, project.workspaceId, project.id),
+  ]);
+  if (source === null) throw new Error(`project ${project.id} vanished while its record was taken`);
+  const { paging: _paging, ...results } = await comparisonPage(comparisonInputFrom(project.id, source), {
+    page: 1,
+    limit: Number.MAX_SAFE_INTEGER,
+  });
+  const caseKey = keys.loadCases;
+  const locationKey = keys.locations;
+  return {
+    format: RECORD_CONTENT_FORMAT,
+    contentVersion: RECORD_CONTENT_VERSION,
+    engine: { name: ENGINE_NAME, version: ENGINE_VERSION },
+    takenAt: new Date().toISOString(),
+    project: { id: project.id, workspaceId: project.workspaceId, version: project.version },
+    inputs: file,
+    ids: {
+      materials: invert(keys.materials),
+      locations: invert(keys.locations),
+      loadCases: invert(keys.loadCases),
+    },
+    stateRevisions: keys.states
+      .filter((s) => caseKey.has(s.loadCaseId) && locationKey.has(s.locationId))
+      .map((s) => ({
+        loadCase: caseKey.get(s.loadCaseId)!,
+        location: locationKey.get(s.locationId)!,
+        revision: s.revision,
+        savedAt: s.createdAt.toISOString(),
+        savedBy: s.createdBy,
+      })),
+    results: results satisfies Comparison,
+  };
+}
+
+/** JSON with every object's keys in sorted order, so equal content always hashes the same. */
+export function canonicalJson(value: unknown): string {
+  return JSON.stringify(value, (_key, v: unknown) =>
+    v !== null && typeof v === "object" && !Array.isArray(v)
+      ? Object.fromEntries(Object.entries(v as Record<string, unknown>).sort(([a], [b]) => (a < b ? -1 : 1)))
+      : v,
+  );
+}
+
+/** The record's content hash: SHA-256 of its canonical JSON, hex. */
+export function recordHash(content: RecordContent): string {
+  return createHash("sha256").update(canonicalJson(content)).digest("hex");
+}

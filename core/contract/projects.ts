@@ -270,6 +270,8 @@ export const auditEventSchema = z.object({
   action: z.enum(["create", "update", "delete", "restore", "import", "purge"]),
   summary: z.string(),
   changes: z.record(z.string(), z.unknown()).nullable(),
+  /** The changes in words: each field with its value before and after (null: none), names instead of ids. */
+  details: z.array(z.object({ field: z.string(), from: z.string().nullable(), to: z.string().nullable() })),
 });
 export type AuditEventView = z.infer<typeof auditEventSchema>;
 export const auditListSchema = z.object({

@@ -59,3 +59,10 @@ export async function updateMaterial(
 ): Promise<MaterialRow> {
   return (await updateById(Material, id, values, transaction))!;
 }
+
+/** The names of the library materials with these ids (trashed ones too), by id. */
+export async function materialNames(ids: string[], transaction?: Transaction): Promise<Map<string, string>> {
+  if (ids.length === 0) return new Map();
+  const rows = await Material.findAll({ attributes: ["id", "name"], where: { id: ids }, transaction });
+  return new Map(rows.map((m) => [m.id, m.name]));
+}

@@ -46,8 +46,37 @@ describe("the audit trail", () => {
         revision: 2,
       });
       expect(page.events[0].summary).toMatch(/Operating.*mid-shell.*revision 2.*calculator/);
+      // In words, in the unit the state was entered in: only the components that changed.
+      expect(page.events[0].details).toEqual([
+        { field: "σxx", from: "56.25 MPa", to: "60 MPa" },
+        { field: "σyy", from: "28.13 MPa", to: "30 MPa" },
+      ]);
     }
     await team.outsider.agent.get(wsPath(team, "/audit")).expect(404);
+  });
+
+  it("when the project's name, factors and default material change, then the trail shows each old → new value in words", async () => {
+    const path = wsPath(team, `/projects/${projectId}`);
+    const before = (await team.editor.agent.get(path).expect(200)).body.project;
+    await team.editor.agent
+      .patch(path)
+      .send({
+        version: before.version,
+        name: "Audited vessel",
+        requirements: [
+          { criterion: "von-mises", requiredFactor: 1.6 },
+          { criterion: "tresca", requiredFactor: 1.5 },
+        ],
+        defaultMaterial: { kind: "published", id: "sa516-70" },
+      })
+      .expect(200);
+    const page = auditListSchema.parse(
+      (await team.viewer.agent.get(wsPath(team, `/audit?projectId=${projectId}&limit=1`)).expect(200)).body,
+    );
+    const byField = new Map(page.events[0].details.map((d) => [d.field, d]));
+    expect(byField.get("Name")).toEqual({ field: "Name", from: "“Audited”", to: "“Audited vessel”" });
+    expect(byField.get("Required factors")?.to).toBe("von Mises 1.6 · Tresca 1.5");
+    expect(byField.get("Default material")?.to).toMatch(/516/);
   });
 
   it("when a page is asked with a limit, then nextBefore leads to the older events", async () => {

@@ -1,5 +1,8 @@
 import type { AuditQuery } from "../../../core/contract/projects";
 import { listAuditEvents } from "../../../db/repositories/audit";
+import { loadCaseNames } from "../../../db/repositories/load-cases";
+import { materialNames } from "../../../db/repositories/materials";
+import { idsNamedIn } from "../../domain/audit/describe";
 import { currentMembership } from "../../auth/guards";
 import type { RouteHandler } from "../../openapi/registry";
 import { presentAuditEvent } from "./presenter";
@@ -20,8 +23,17 @@ export const listAuditHandler: RouteHandler<
     limit: limit + 1,
   });
   const page = rows.slice(0, limit);
+  const ids = idsNamedIn(page);
+  const [materials, loadCases] = await Promise.all([
+    materialNames([...ids.materials]),
+    loadCaseNames([...ids.loadCases]),
+  ]);
+  const names = {
+    materials,
+    loadCases: new Map([...loadCases].map(([id, c]) => [id, c.name])),
+  };
   res.set("Cache-Control", "no-store").json({
-    events: page.map(presentAuditEvent),
+    events: page.map((e) => presentAuditEvent(e, names)),
     nextBefore: rows.length > limit ? String(page[page.length - 1].id) : null,
   });
 };

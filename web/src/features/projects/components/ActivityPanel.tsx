@@ -1,5 +1,6 @@
 import { useState } from "react";
 import { Panel } from "../../../components/Panel";
+import type { AuditEventView } from "../../../../../core/contract/projects";
 import { useAudit } from "../../../entities/audit/queries";
 
 /** How many changes show before "Show all": a screenful, so the list never scrolls inside the page. */
@@ -33,6 +34,7 @@ export function ActivityPanel({
               {new Date(e.at).toLocaleString()}
             </time>
             <strong>{e.actor.name}</strong> {e.summary}
+            {e.details.length > 0 && <ChangeDetails details={e.details} />}
           </li>
         ))}
       </ol>
@@ -50,5 +52,24 @@ export function ActivityPanel({
         </div>
       )}
     </Panel>
+  );
+}
+
+/** What changed, field by field: the value before → after (a new record shows only its values). */
+function ChangeDetails({ details }: { details: AuditEventView["details"] }) {
+  return (
+    <ul className="mt-0.5 ml-4 text-[13px] text-graphite-soft">
+      {details.map((d) => (
+        <li key={d.field}>
+          {d.field}:{" "}
+          {d.from !== null && (
+            <>
+              <span className="num">{d.from}</span> <span aria-label="changed to">→</span>{" "}
+            </>
+          )}
+          {d.to === null ? <em>removed</em> : <span className="num text-graphite">{d.to}</span>}
+        </li>
+      ))}
+    </ul>
   );
 }

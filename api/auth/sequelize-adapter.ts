@@ -1,23 +1,28 @@
 import type { Adapter, DatabaseSession, DatabaseUser } from "lucia";
 import { Op, QueryTypes } from "sequelize";
 import { Session } from "../../db/models/session";
+import { inputsStampSql } from "../domain/comparison/stamp";
 import { membershipPrefetch } from "./membership-prefetch";
 import { MEMBERSHIP_COLUMNS, membershipFromRow, type MembershipRow } from "./membership-row";
 import { hashToken } from "./tokens";
 
 /**
  * The session, its user and (when the request's path names a workspace) the user's
- * membership of it with the workspace: `:workspaceId` NULL matches no membership.
+ * membership of it with the workspace: `:workspaceId` NULL matches no membership. When the
+ * path asks for a project's comparison, the stamp of its inputs too (`:projectId` NULL: none).
  */
 const SESSION_AND_USER_SQL = `
 SELECT s.user_id AS "userId", s.expires_at AS "expiresAt", u.name, u.email, u.created_at AS "createdAt",
-  ${MEMBERSHIP_COLUMNS}
+  ${MEMBERSHIP_COLUMNS},
+  CASE WHEN CAST(:projectId AS uuid) IS NULL THEN NULL
+    ELSE ${inputsStampSql("CAST(:projectId AS uuid)", "CAST(:workspaceId AS uuid)")} END AS "comparisonStamp"
 FROM sessions s JOIN users u ON u.id = s.user_id
 LEFT JOIN memberships m ON m.user_id = s.user_id AND m.workspace_id = :workspaceId
 LEFT JOIN workspaces w ON w.id = m.workspace_id
 WHERE s.id = :id`;
 
 type SessionUserRow = MembershipRow & {
+  comparisonStamp: string | null;
   userId: string;
   expiresAt: Date | string;
   name: string;
@@ -37,10 +42,17 @@ export class SequelizeSessionAdapter implements Adapter {
     const prefetch = membershipPrefetch.getStore();
     const [row] = await Session.sequelize!.query<SessionUserRow>(SESSION_AND_USER_SQL, {
       type: QueryTypes.SELECT,
-      replacements: { id: hashToken(sessionId), workspaceId: prefetch?.workspaceId ?? null },
+      replacements: {
+        id: hashToken(sessionId),
+        workspaceId: prefetch?.workspaceId ?? null,
+        projectId: prefetch?.comparisonProjectId ?? null,
+      },
     });
     if (!row) return [null, null];
-    if (prefetch) prefetch.found = membershipFromRow(row);
+    if (prefetch) {
+      prefetch.found = membershipFromRow(row);
+      if (row.comparisonStamp !== null) prefetch.comparisonStamp = row.comparisonStamp;
+    }
     return [
       { id: sessionId, userId: row.userId, expiresAt: new Date(row.expiresAt), attributes: {} },
       {

@@ -9,8 +9,11 @@ import { createHash } from "node:crypto";
  * and the stamp is read on every request, with the session; an answer computed from inputs read
  * at that stamp is therefore the answer, and is sent again without reading or evaluating the
  * inputs. Kept as the bytes that go out, with their ETag, so a repeat costs no encoding or
- * hashing either. Measured with `npm run bench -- api-load` (100 connections, 8-row project):
- * see the commit that introduced the stamps for the figures.
+ * hashing either. Before the stamps the whole input text (read on every request, about 0.35 ms
+ * of PostgreSQL's time for an 8-row project) was compared with the kept one; with them, a CPU
+ * probe at 20 connections measured PostgreSQL 1.08 → 0.75–0.84 ms and the node process
+ * 1.55–1.68 → 1.35–1.58 ms per comparison request (most of what was left was the session
+ * statement's planning, since prepared: see sequelize-adapter.ts).
  */
 
 /** At most this many answers are kept (the most recently used ones). */

@@ -1,7 +1,12 @@
 import type { RequestHandler, Response } from "express";
 import type { Session, User } from "lucia";
 import type { Auth } from "./lucia";
-import { membershipPrefetch, workspaceIdInPath, type MembershipPrefetch } from "./membership-prefetch";
+import {
+  comparisonProjectIdInPath,
+  membershipPrefetch,
+  workspaceIdInPath,
+  type MembershipPrefetch,
+} from "./membership-prefetch";
 
 /**
  * What the session middleware leaves in `res.locals` for every /api request; `prefetchedMembership`
@@ -25,7 +30,10 @@ export function sessionMiddleware(auth: Auth): RequestHandler {
     const sessionId = auth.readSessionCookie(req.headers.cookie ?? "");
     if (!sessionId) return next();
     const workspaceId = workspaceIdInPath(req.path);
-    const prefetch: MembershipPrefetch | undefined = workspaceId ? { workspaceId } : undefined;
+    const comparisonProjectId = workspaceId ? comparisonProjectIdInPath(req.path) : null;
+    const prefetch: MembershipPrefetch | undefined = workspaceId
+      ? { workspaceId, ...(comparisonProjectId ? { comparisonProjectId } : {}) }
+      : undefined;
     const { session, user } = prefetch
       ? await membershipPrefetch.run(prefetch, () => auth.validateSession(sessionId))
       : await auth.validateSession(sessionId);

@@ -22,6 +22,7 @@ async function statementsDuring(run: () => Promise<unknown>): Promise<string[]> 
 
 let team: ProjectTeam;
 let comparison: string;
+let projectPath: string;
 
 beforeAll(async () => {
   team = await projectTeam(app);
@@ -36,12 +37,21 @@ beforeAll(async () => {
     .send({ name: "Design", states: [{ locationId: made.locationIds[0], stress: mpa(120, 60) }] })
     .expect(201);
   comparison = `${base}/comparison`;
+  projectPath = base;
   // The first request of a member records their activity (a write at most once a minute); warm it.
   await team.viewer.agent.get(comparison).expect(200);
 });
 
 describe("database round trips of a signed-in workspace request", () => {
-  it("when a member reads the comparison, then two statements run: the session with the membership, and the project's inputs", async () => {
+  it("when a member reads a comparison nobody changed since it was last answered, then one statement runs: the session with the membership and the inputs stamp", async () => {
+    const statements = await statementsDuring(() => team.viewer.agent.get(comparison).expect(200));
+    expect(statements).toHaveLength(1);
+    expect(statements[0]).toMatch(/FROM sessions s JOIN users u[\s\S]*LEFT JOIN memberships m/);
+    expect(statements[0]).toMatch(/comparison_stamps/);
+  });
+
+  it("when an input changed since, then two statements run: the session with the membership and the stamp, and the project's inputs", async () => {
+    await team.editor.agent.post(`${projectPath}/locations`).send({ name: "nozzle" }).expect(201);
     const statements = await statementsDuring(() => team.viewer.agent.get(comparison).expect(200));
     expect(statements).toHaveLength(2);
     expect(statements[0]).toMatch(/FROM sessions s JOIN users u[\s\S]*LEFT JOIN memberships m/);

@@ -1,25 +1,42 @@
+import type { Sequelize } from "sequelize";
 import type { ComparisonQuery } from "../../../core/contract/comparison";
-import { AnswerCache } from "./answer-cache";
-import { comparisonInputFrom } from "./load";
+import { AnswerCache, keptAnswer, type KeptAnswer } from "./answer-cache";
+import { comparisonInputFrom, loadComparisonSource } from "./load";
 import { comparisonPage } from "./paging";
 
-/** One per process: answers depend only on their input text and this process's engine. */
+/** One per process: answers depend only on their inputs (named by their stamp) and this process's engine. */
 const answers = new AnswerCache();
 
+/** Which comparison page: the project, the workspace the caller reached it through, the page. */
+export type ComparisonRequest = { workspaceId: string; projectId: string; query: ComparisonQuery };
+
 /**
- * The JSON text of one page of the comparison of `projectId`, computed from `source` (the
- * loader's text) or, when a page of the same project was answered from the very same text,
- * that answer again.
+ * One page of the comparison of a project, as the bytes to send; null when the workspace has no
+ * such live project (the caller answers 404).
+ *
+ * `stamp` is the project's inputs stamp as the session statement read it at the start of this
+ * request (see membership-prefetch.ts), when it did: if an answer was kept for that stamp it is
+ * the answer, and nothing more is read. Otherwise the inputs are read with their own stamp (one
+ * statement, one snapshot) and the answer kept for that stamp, or computed and kept. An answer is
+ * only ever kept under the stamp of the inputs it was computed from, and only after the project
+ * was found live in this workspace at that stamp (a deletion or a move raises the stamp).
  */
 export async function comparisonAnswer(
-  projectId: string,
-  source: string,
-  query: ComparisonQuery,
-): Promise<string> {
-  const key = `${projectId}|${query.page}|${query.limit}`;
-  const kept = answers.get(key, source);
-  if (kept !== undefined) return kept;
-  const body = JSON.stringify(await comparisonPage(comparisonInputFrom(projectId, source), query));
-  answers.set(key, source, body);
-  return body;
+  sequelize: Sequelize,
+  request: ComparisonRequest,
+  stamp: string | undefined,
+): Promise<KeptAnswer | null> {
+  const { workspaceId, projectId, query } = request;
+  const key = `${workspaceId}|${projectId}|${query.page}|${query.limit}`;
+  const early = stamp === undefined ? undefined : answers.get(key, stamp);
+  if (early) return early;
+  const loaded = await loadComparisonSource(sequelize, workspaceId, projectId);
+  if (!loaded) return null;
+  const kept = answers.get(key, loaded.stamp);
+  if (kept) return kept;
+  const answer = keptAnswer(
+    JSON.stringify(await comparisonPage(comparisonInputFrom(projectId, loaded.source), query)),
+  );
+  answers.set(key, loaded.stamp, answer);
+  return answer;
 }

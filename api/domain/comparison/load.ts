@@ -5,6 +5,7 @@ import type { Material } from "../../../db/models/material";
 import type { StoredTerm } from "../combinations/superpose";
 import { refFromColumns, resolveMaterial } from "../materials/resolve";
 import { stateKey, type ComparisonInput, type ComparisonState } from "./build";
+import { inputsStampSql } from "./stamp";
 
 /**
  * The project, its live locations, cases and combinations (with their terms), the
@@ -49,7 +50,8 @@ SELECT json_build_object(
     JOIN load_cases c ON c.id = s.load_case_id
     JOIN locations l ON l.id = s.location_id AND l.deleted_at IS NULL
     WHERE s.is_current AND c.project_id = p.id), '[]')
-)::text AS source
+)::text AS source,
+  ${inputsStampSql("p.id", "p.workspace_id")} AS stamp
 FROM projects p
 WHERE p.id = $1 AND p.workspace_id = $2 AND p.deleted_at IS NULL`;
 
@@ -72,23 +74,23 @@ type ProjectRow = {
   states: [string, string, number, number, number, number, number, number, number][];
 };
 
+/** The loader's answer: the inputs as JSON text, and the stamp of those very inputs. */
+export type ComparisonSource = { source: string; stamp: string };
+
 /**
  * The inputs of the comparison of project `projectId` in `workspaceId` (live rows only) as
- * the JSON text PostgreSQL builds, in one query; null when there is no such live project (the
- * caller answers 404). Text rather than parsed rows: two requests with the same text have the
- * same answer, which lets `comparisonAnswer` reuse it (see answer-cache.ts). At the project
- * limits the text is about 1.3 MB.
+ * the JSON text PostgreSQL builds, in one query, with their inputs stamp read by the same
+ * statement (so from the same snapshot: the stamp belongs to exactly these inputs); null when
+ * there is no such live project (the caller answers 404). At the project limits the text is
+ * about 1.3 MB.
  */
 export async function loadComparisonSource(
   sequelize: Sequelize,
   workspaceId: string,
   projectId: string,
-): Promise<string | null> {
-  const [row] = await preparedQuery<{ source: string }>(sequelize, PROJECT_STATEMENT, [
-    projectId,
-    workspaceId,
-  ]);
-  return row?.source ?? null;
+): Promise<ComparisonSource | null> {
+  const [row] = await preparedQuery<ComparisonSource>(sequelize, PROJECT_STATEMENT, [projectId, workspaceId]);
+  return row ?? null;
 }
 
 /**

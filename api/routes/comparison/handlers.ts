@@ -1,8 +1,9 @@
 import type { ComparisonQuery } from "../../../core/contract/comparison";
 import { currentMembership } from "../../auth/guards";
+import { prefetchedComparisonStamp } from "../../auth/membership-prefetch";
+import type { SessionLocals } from "../../auth/session-middleware";
 import type { AppContext } from "../../context";
 import { comparisonAnswer } from "../../domain/comparison/answer";
-import { loadComparisonSource } from "../../domain/comparison/load";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";
 
@@ -15,11 +16,18 @@ export function comparisonHandler(
   return async (_req, res) => {
     const { workspace } = currentMembership(res);
     const { params, query } = res.locals.input;
-    const source = await loadComparisonSource(context.sequelize, workspace.id, params.projectId);
-    if (source === null) throw errors.notFound("This project");
-    res
-      .set("Cache-Control", "no-store")
-      .type("json")
-      .send(await comparisonAnswer(params.projectId, source, query));
+    const stamp = prefetchedComparisonStamp(
+      (res.locals as Partial<SessionLocals>).prefetchedMembership,
+      workspace.id,
+      params.projectId,
+    );
+    const answer = await comparisonAnswer(
+      context.sequelize,
+      { workspaceId: workspace.id, projectId: params.projectId, query },
+      stamp,
+    );
+    if (answer === null) throw errors.notFound("This project");
+    // The ETag Express would compute, computed once per kept answer (res.send keeps a set one).
+    res.set("Cache-Control", "no-store").set("ETag", answer.etag).type("json").send(answer.body);
   };
 }

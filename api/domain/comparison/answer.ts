@@ -1,5 +1,6 @@
 import type { ComparisonQuery } from "../../../core/contract/comparison";
 import { AnswerCache } from "./answer-cache";
+import { comparisonLinearizations } from "./linearizations";
 import { comparisonInputFrom } from "./load";
 import { comparisonPage } from "./paging";
 
@@ -19,7 +20,10 @@ export async function comparisonAnswer(
   const key = `${projectId}|${query.page}|${query.limit}`;
   const kept = answers.get(key, source);
   if (kept !== undefined) return kept;
-  const body = JSON.stringify(await comparisonPage(comparisonInputFrom(projectId, source), query));
+  const input = comparisonInputFrom(projectId, source);
+  const page = await comparisonPage(input, query);
+  const linearizations = comparisonLinearizations(input.linearizations, input.cases, input.locations);
+  const body = JSON.stringify({ ...page, linearizations });
   answers.set(key, source, body);
   return body;
 }

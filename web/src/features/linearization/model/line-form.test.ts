@@ -1,7 +1,14 @@
 import { describe, expect, it } from "vitest";
 import type { LinearizationView } from "../../../../../core/contract/linearizations";
 import { linearizationInputSchema } from "../../../../../core/contract/linearizations";
-import { EMPTY_FORM, classificationExplained, formOf, requestBodyOf, type LineForm } from "./line-form";
+import {
+  EMPTY_FORM,
+  classificationExplained,
+  formFieldOf,
+  formOf,
+  requestBodyOf,
+  type LineForm,
+} from "./line-form";
 
 const path = "d sxx syy szz sxy syz szx\n0 0 100 0 0 0 0\n5 0 100 0 0 0 0\n10 0 100 0 0 0 0";
 const filled: LineForm = { ...EMPTY_FORM, name: " Shell ", pathText: path, S: "138", Sy: "", Su: "" };
@@ -64,5 +71,14 @@ describe("classificationExplained", () => {
     expect(classificationExplained({ membrane: "local", stresses: "primary-plus-secondary" })).toContain(
       "PL + Pb + Q ≤ SPS",
     );
+  });
+});
+
+describe("formFieldOf", () => {
+  it("when the server names a point's field or an allowable, then the form field beside it is named", () => {
+    expect(formFieldOf("path.points.3.distance")).toBe("path");
+    expect(formFieldOf("path.lineDirection")).toBe("lineDirection");
+    expect(formFieldOf("allowables.S")).toBe("S");
+    expect(formFieldOf("secondAxis")).toBe("secondAxis");
   });
 });

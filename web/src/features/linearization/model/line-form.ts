@@ -160,3 +160,14 @@ export function formOf(saved: LinearizationView): LineForm {
     bendEveryComponent: input.bending === "all-components",
   };
 }
+
+/**
+ * The form field a server error names (`path.points.3.distance` → the path box), so a 400 shows
+ * beside what to change.
+ */
+export function formFieldOf(serverPath: string): string {
+  if (serverPath.startsWith("path.lineDirection")) return "lineDirection";
+  if (serverPath.startsWith("path")) return "path";
+  if (serverPath.startsWith("allowables.")) return serverPath.slice("allowables.".length);
+  return serverPath;
+}

@@ -239,12 +239,19 @@ export function LinearizationPage() {
             index="4"
             title="Through the thickness"
             subtitle={`local frame, ${result.stressUnit} against ${result.lengthUnit}`}
-            tools={LOCAL_COMPONENTS.map((c) => (
-              <ToolButton key={c.index} pressed={component === c.index} onClick={() => setComponent(c.index)}>
-                {c.symbol}
-              </ToolButton>
-            ))}
           >
+            {/* The switches wrap in the body: six of them in the title row would not fit a phone. */}
+            <div className="flex flex-wrap gap-1.5 px-3 pt-2" role="group" aria-label="Component shown">
+              {LOCAL_COMPONENTS.map((c) => (
+                <ToolButton
+                  key={c.index}
+                  pressed={component === c.index}
+                  onClick={() => setComponent(c.index)}
+                >
+                  {c.symbol}
+                </ToolButton>
+              ))}
+            </div>
             {distribution && (
               <DistributionPlot
                 distribution={distribution}

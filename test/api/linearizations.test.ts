@@ -204,6 +204,12 @@ describe("bad input", () => {
     expect(await bad(body)).toContain("path.points");
   });
 
+  it("when the positions are so close together that the bending integral overflows, then 400 naming path.points", async () => {
+    const body = linearWall();
+    body.path.points = body.path.points.slice(0, 3).map((p, i) => ({ ...p, distance: i * 1e-200 }));
+    expect(await bad(body)).toContain("path.points");
+  });
+
   it("when the load case is not the project's, then 404", async () => {
     await team.editor.agent.post(lines(crypto.randomUUID())).send(linearWall()).expect(404);
   });

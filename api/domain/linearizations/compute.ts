@@ -99,6 +99,27 @@ function viewOf(
 }
 
 /**
+ * Refuses (400 naming `path.points`) a line so thin that the bending factor 6/t² overflows (positions
+ * like 1e-200 apart): core would compute non-finite stresses, which must never reach a response.
+ */
+function assertIntegrableThickness(path: StoredLinearizationInput["path"]) {
+  const first = path.points[0];
+  const last = path.points[path.points.length - 1];
+  const t =
+    path.positions === "distance"
+      ? Math.abs(last.distance! - first.distance!)
+      : Math.hypot(last.x! - first.x!, last.y! - first.y!, last.z! - first.z!);
+  if (t > 0 && !Number.isFinite(6 / (t * t))) {
+    throw errors.invalidInput([
+      {
+        path: "path.points",
+        message: `the line is ${t} long, too thin to integrate over; give the positions in a smaller length unit`,
+      },
+    ]);
+  }
+}
+
+/**
  * Linearizes a line with core's `linearize` — the server's own computation, never a client's —
  * and answers 400 naming the request field when core refuses the path (points that do not
  * advance along the line, a second axis along it, …).
@@ -113,6 +134,7 @@ export function computeLinearization(
   const { points, positions, lineDirection } = input.path;
   const stresses = new Float64Array(points.length * 6);
   points.forEach((p, i) => stresses.set([p.xx, p.yy, p.zz, p.xy, p.yz, p.zx], 6 * i));
+  assertIntegrableThickness(input.path);
   let result: LinearizationResult;
   try {
     result = linearize({

@@ -10,6 +10,7 @@ import { useWorkspace, useWorkspaceRole } from "../../../entities/workspace/quer
 import { fieldErrorsOf } from "../../../lib/api-client";
 import { FormMessage, primaryButton, quietButton } from "../../../lib/forms";
 import { readOnlyNote } from "../../../lib/role-note";
+import { useDeleteLinearization } from "../api/delete-linearization";
 import { useLinearization } from "../api/get-linearization";
 import { useLinearizations } from "../api/list-linearizations";
 import { usePreviewLinearization } from "../api/preview-linearization";
@@ -44,6 +45,7 @@ export function LinearizationPage() {
   const saved = useLinearizations(workspaceId, projectId, caseId);
   const opened = useLinearization(workspaceId, projectId, caseId, lineId);
   const save = useSaveLinearization(workspaceId, projectId);
+  const remove = useDeleteLinearization(workspaceId, projectId);
 
   const [form, setForm] = useState<LineForm>(EMPTY_FORM);
   const [formFor, setFormFor] = useState("");
@@ -326,6 +328,26 @@ export function LinearizationPage() {
               Start a new line
             </button>
           )}
+          {lineId && (
+            <button
+              type="button"
+              className={quietButton}
+              disabled={remove.isPending}
+              onClick={() => {
+                // Lines have no trash: say so before deleting for good.
+                if (
+                  !window.confirm(
+                    `Delete the line "${form.name}" for good? The audit trail keeps its inputs.`,
+                  )
+                )
+                  return;
+                remove.mutate({ loadCaseId: caseId, id: lineId }, { onSuccess: startNew });
+              }}
+            >
+              Delete this line
+            </button>
+          )}
+          {remove.error && <FormMessage error={remove.error} />}
           {save.isSuccess && (
             <p role="status" className="text-sm">
               <span aria-hidden="true">✓ </span>Saved. It appears in the{" "}

@@ -2,6 +2,7 @@ import { MutationObserver, QueryClient, type QueryKey } from "@tanstack/react-qu
 import { afterEach, describe, expect, it, vi } from "vitest";
 import { auditKeys } from "../../../entities/audit/keys";
 import { comparisonKeys } from "../../../entities/comparison/keys";
+import { deleteLinearizationMutation } from "./delete-linearization";
 import { linearizationKeys } from "./keys";
 import { saveLinearizationMutation, type SaveLine } from "./save-linearization";
 
@@ -49,5 +50,25 @@ describe("saveLinearizationMutation", () => {
     const { request, sent } = await run({ loadCaseId: CASE, body, id: LINE, version: 3 });
     expect(request).toBe(`PUT /api/workspaces/${WS}/projects/${P}/load-cases/${CASE}/linearizations/${LINE}`);
     expect(sent).toEqual({ name: "Shell", version: 3 });
+  });
+});
+
+describe("deleteLinearizationMutation", () => {
+  it("when a line is deleted, then it DELETEs the line and refreshes the lines, the comparison and the audit trail", async () => {
+    const fetchStub = vi.fn(async (_url: string, _init?: RequestInit) => new Response(null, { status: 204 }));
+    vi.stubGlobal("fetch", fetchStub);
+    const client = new QueryClient();
+    const spy = vi.spyOn(client, "invalidateQueries");
+    const observer = new MutationObserver(client, deleteLinearizationMutation(client, WS, P) as never);
+    await observer.mutate({ loadCaseId: CASE, id: LINE } as never);
+    const [url, init] = fetchStub.mock.calls[0];
+    expect(`${init?.method} ${url}`).toBe(
+      `DELETE /api/workspaces/${WS}/projects/${P}/load-cases/${CASE}/linearizations/${LINE}`,
+    );
+    expect(spy.mock.calls.map(([filters]) => (filters as { queryKey: QueryKey }).queryKey)).toEqual([
+      linearizationKeys.all(WS, P),
+      comparisonKeys.all(WS, P),
+      auditKeys.all(WS),
+    ]);
   });
 });

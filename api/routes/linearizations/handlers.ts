@@ -126,7 +126,7 @@ export function createLinearizationHandler(
             limit: "linesPerLoadCase",
             max: LINEARIZATION_LIMITS.linesPerLoadCase,
             requested: count + 1,
-            path: "name",
+            path: "linearizations",
           },
         );
       }

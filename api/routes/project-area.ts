@@ -3,6 +3,7 @@ import type { AnyRoute } from "../openapi/registry";
 import { auditRoutes } from "./audit";
 import { combinationRoutes } from "./combinations";
 import { comparisonRoutes } from "./comparison";
+import { linearizationRoutes } from "./linearizations";
 import { loadCaseRoutes } from "./load-cases";
 import { locationRoutes } from "./locations";
 import { materialRoutes } from "./materials";
@@ -11,7 +12,8 @@ import { trashRoutes } from "./trash";
 import { projectRoutes } from "./projects";
 
 /**
- * Every route of the project area (projects, locations, load cases, combinations, materials,
+ * Every route of the project area (projects, locations, load cases and their linearizations,
+ * combinations, materials,
  * comparison, audit, trash, import/export), added to the route table in one line.
  */
 export function projectAreaRoutes(context: AppContext): AnyRoute[] {
@@ -20,6 +22,7 @@ export function projectAreaRoutes(context: AppContext): AnyRoute[] {
     ...projectRoutes(context),
     ...locationRoutes(context),
     ...loadCaseRoutes(context),
+    ...linearizationRoutes(context),
     ...combinationRoutes(context),
     ...comparisonRoutes(context),
     ...auditRoutes(),

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { VERDICTS } from "../constants/verdicts";
 import { COMPARISON_PAGE } from "./limits";
+import { comparisonLinearizationSchema } from "./linearizations";
 import {
   CRITERION_LABELS,
   categoryRequirementSchema,
@@ -148,6 +149,8 @@ export const comparisonPageSchema = comparisonSchema.extend({
     /** At least 1, so page 1 always exists. */
     totalPages: z.int(),
   }),
+  /** Each saved stress classification line of a live case, with its category checks (every page). */
+  linearizations: z.array(comparisonLinearizationSchema),
 });
 export type PagedComparison = z.infer<typeof comparisonPageSchema>;
 

@@ -41,5 +41,19 @@ export function limitMessage(limit: ProjectLimitName): string {
   return `${where} holds at most ${PROJECT_LIMITS[limit]} ${LIMIT_NOUNS[limit]} (limit "${limit}"). Split the work into several projects, or remove some first.`;
 }
 
+/**
+ * Stress classification lines (linearizations) saved per load case. A line through a wall is
+ * read at a handful to a few dozen points (at least 11 recommended, core/linearization/path.ts)
+ * and a case is checked along a few lines at its discontinuities (common practice, no source);
+ * 1000 points and 20 lines bound what one request stores and what the comparison reads
+ * (100 cases × 20 lines, each a summary of a few checks, not its points).
+ */
+export const LINEARIZATION_LIMITS = {
+  /** Points along one line. */
+  pointsPerLine: 1000,
+  /** Saved lines per load case. */
+  linesPerLoadCase: 20,
+} as const;
+
 /** Rows per page of the comparison when the client does not say, and the most it may ask for. */
 export const COMPARISON_PAGE = { defaultLimit: 200, maxLimit: 1000 } as const;

@@ -2,6 +2,7 @@ import type { Sequelize } from "sequelize";
 import { initAuditEvent } from "./audit-event";
 import { initCombination } from "./combination";
 import { initCombinationTerm } from "./combination-term";
+import { initLinearization } from "./linearization";
 import { initLoadCase } from "./load-case";
 import { initLocation } from "./location";
 import { initMaterial } from "./material";
@@ -10,7 +11,7 @@ import { initStressState } from "./stress-state";
 
 /**
  * Registers the project models (materials, projects, locations, load cases, stress states,
- * combinations and their terms, the audit trail). Queries join them explicitly by id, so no
+ * combinations and their terms, the audit trail, saved stress classification lines). Queries join them explicitly by id, so no
  * associations are declared.
  */
 export function initProjectModels(sequelize: Sequelize) {
@@ -23,5 +24,6 @@ export function initProjectModels(sequelize: Sequelize) {
     Combination: initCombination(sequelize),
     CombinationTerm: initCombinationTerm(sequelize),
     AuditEvent: initAuditEvent(sequelize),
+    Linearization: initLinearization(sequelize),
   };
 }

@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { QueryTypes, type Transaction } from "sequelize";
 import { comparisonQuerySchema } from "../../core/contract/comparison";
 import { comparisonInputFrom, loadComparisonSource, PROJECT_SQL } from "../../api/domain/comparison/load";
-import { comparisonPage } from "../../api/domain/comparison/paging";
+import { comparisonPageWithSections } from "../../api/domain/comparison/sections";
 import { buildTestApp } from "../support/app";
 import { mpa, projectTeam, projectWithLocations, wsPath, type ProjectTeam } from "../support/project-team";
 
@@ -62,7 +62,7 @@ async function computedAfresh(): Promise<unknown> {
   const loaded = await loadComparisonSource(sequelize, team.workspaceId, projectId);
   if (!loaded) throw new Error("the project is not live");
   return JSON.parse(
-    JSON.stringify(await comparisonPage(comparisonInputFrom(projectId, loaded.source), query)),
+    JSON.stringify(await comparisonPageWithSections(comparisonInputFrom(projectId, loaded.source), query)),
   );
 }
 
@@ -243,6 +243,37 @@ describe("the comparison after every kind of change through the API", () => {
         })
         .expect(200);
     });
+  });
+
+  it("when a stress classification line is saved in a case, then the answer is computed afresh", async () => {
+    const points = Array.from({ length: 5 }, (_, i) => ({
+      distance: i,
+      xx: 0,
+      yy: 100 - 10 * i,
+      zz: 0,
+      xy: 0,
+      yz: 0,
+      zx: 0,
+    }));
+    await expectChangedBy(() =>
+      team.editor.agent
+        .post(`${base}/load-cases/${caseIds.Test}/linearizations`)
+        .send({
+          name: "Wall at the nozzle",
+          locationId: null,
+          path: {
+            positions: "distance",
+            lengthUnit: "mm",
+            stressUnit: "MPa",
+            lineDirection: [1, 0, 0],
+            points,
+          },
+          secondAxis: [0, 1, 0],
+          classification: { membrane: "general", stresses: "primary" },
+          allowables: { source: "typed", S: 138 },
+        })
+        .expect(201),
+    );
   });
 
   it("when a location is added, then the answer is computed afresh", async () => {

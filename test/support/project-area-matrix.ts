@@ -1,6 +1,7 @@
 import type { Role } from "../../core/contract/workspaces";
 import { Combination } from "../../db/models/combination";
 import { CombinationTerm } from "../../db/models/combination-term";
+import { Linearization } from "../../db/models/linearization";
 import { LoadCase } from "../../db/models/load-case";
 import { Location } from "../../db/models/location";
 import { Material } from "../../db/models/material";
@@ -228,6 +229,8 @@ export const projectAreaRows: Record<string, Row> = {
       },
     },
 
+  ...linearizationRows(),
+
   "GET /api/workspaces/{workspaceId}/projects/{projectId}/combinations": {
     who: "viewer",
     ok: 200,
@@ -335,4 +338,83 @@ async function trashedCase(f: RoleFixture): Promise<string> {
     deletedAt: new Date(),
   });
   return c.id;
+}
+
+/** A stress classification line body: a uniform 100 MPa hoop stress through a 10 mm wall. */
+const lineBody = {
+  name: "Matrix line",
+  path: {
+    positions: "distance",
+    lengthUnit: "mm",
+    stressUnit: "MPa",
+    lineDirection: [1, 0, 0],
+    points: [0, 5, 10].map((distance) => ({ distance, xx: 0, yy: 100, zz: 0, xy: 0, yz: 0, zx: 0 })),
+  },
+  classification: { membrane: "general", stresses: "primary" },
+  allowables: { source: "typed", S: 150 },
+};
+
+/** A line saved straight in the database under the fixture's load case (a fresh one per request). */
+async function savedLine(f: RoleFixture): Promise<string> {
+  const w = await projectWorld(f);
+  const line = await Linearization.create({
+    projectId: w.projectId,
+    loadCaseId: w.loadCaseId,
+    name: "Stored line",
+    input: {
+      path: { ...lineBody.path },
+      secondAxis: null,
+      classification: lineBody.classification,
+      allowables: { source: "typed", S: 150, Sy: null, Su: null, timeDependent: false },
+      equivalent: "von-mises",
+      bending: "annex-5a",
+    },
+    summary: {
+      classification: lineBody.classification,
+      equivalent: "von-mises",
+      stressUnit: "MPa",
+      pointCount: 3,
+      checks: [],
+      allowables: { S: 150, Sy: null, Su: null, timeDependent: false, note: "S, Sy and Su as typed." },
+    },
+  });
+  return line.id;
+}
+
+/** The rows of the linearization routes under …/load-cases/{loadCaseId}/linearizations. */
+function linearizationRows(): Record<string, Row> {
+  const base = "/api/workspaces/{workspaceId}/projects/{projectId}/load-cases/{loadCaseId}/linearizations";
+  const lines = async (f: RoleFixture, rest = "") =>
+    inProject(f, `/load-cases/${(await projectWorld(f)).loadCaseId}/linearizations${rest}`);
+  return {
+    [`GET ${base}`]: { who: "viewer", ok: 200, request: async (f) => ({ path: await lines(f) }) },
+    [`POST ${base}`]: {
+      who: "editor",
+      ok: 201,
+      request: async (f) => ({ path: await lines(f), body: lineBody }),
+    },
+    [`POST ${base}/preview`]: {
+      who: "viewer",
+      ok: 200,
+      request: async (f) => ({ path: await lines(f, "/preview"), body: lineBody }),
+    },
+    [`GET ${base}/{linearizationId}`]: {
+      who: "viewer",
+      ok: 200,
+      request: async (f) => ({ path: await lines(f, `/${await savedLine(f)}`) }),
+    },
+    [`PUT ${base}/{linearizationId}`]: {
+      who: "editor",
+      ok: 200,
+      request: async (f) => ({
+        path: await lines(f, `/${await savedLine(f)}`),
+        body: { version: 1, ...lineBody },
+      }),
+    },
+    [`DELETE ${base}/{linearizationId}`]: {
+      who: "editor",
+      ok: 204,
+      request: async (f) => ({ path: await lines(f, `/${await savedLine(f)}`) }),
+    },
+  };
 }

@@ -2,7 +2,7 @@ import type { Sequelize } from "sequelize";
 import type { ComparisonQuery } from "../../../core/contract/comparison";
 import { AnswerCache, keptAnswer, type KeptAnswer } from "./answer-cache";
 import { comparisonInputFrom, loadComparisonSource } from "./load";
-import { comparisonPage } from "./paging";
+import { comparisonPageWithSections } from "./sections";
 
 /** One per process: answers depend only on their inputs (named by their stamp) and this process's engine. */
 const answers = new AnswerCache();
@@ -34,9 +34,8 @@ export async function comparisonAnswer(
   if (!loaded) return null;
   const kept = answers.get(key, loaded.stamp);
   if (kept) return kept;
-  const answer = keptAnswer(
-    JSON.stringify(await comparisonPage(comparisonInputFrom(projectId, loaded.source), query)),
-  );
+  const page = await comparisonPageWithSections(comparisonInputFrom(projectId, loaded.source), query);
+  const answer = keptAnswer(JSON.stringify(page));
   answers.set(key, loaded.stamp, answer);
   return answer;
 }

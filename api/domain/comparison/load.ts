@@ -5,6 +5,7 @@ import type { Material } from "../../../db/models/material";
 import type { StoredTerm } from "../combinations/superpose";
 import { refFromColumns, resolveMaterial } from "../materials/resolve";
 import { stateKey, type ComparisonInput, type ComparisonState } from "./build";
+import type { StoredLineForComparison } from "./linearizations";
 import { inputsStampSql } from "./stamp";
 
 /**
@@ -49,7 +50,12 @@ SELECT json_build_object(
     FROM stress_states s
     JOIN load_cases c ON c.id = s.load_case_id
     JOIN locations l ON l.id = s.location_id AND l.deleted_at IS NULL
-    WHERE s.is_current AND c.project_id = p.id), '[]')
+    WHERE s.is_current AND c.project_id = p.id), '[]'),
+  'linearizations', COALESCE((
+    SELECT json_agg(json_build_object('id', z.id, 'name', z.name, 'caseId', z.load_case_id,
+      'locationId', z.location_id, 'version', z.version, 'summary', z.summary)
+      ORDER BY z.position, z.created_at)
+    FROM linearizations z WHERE z.project_id = p.id), '[]')
 )::text AS source,
   ${inputsStampSql("p.id", "p.workspace_id")} AS stamp
 FROM projects p
@@ -72,6 +78,7 @@ type ProjectRow = {
   >[];
   /** Current states as [caseId, locationId, revision, xx, yy, zz, xy, yz, zx] (Pa): arrays keep the JSON small. */
   states: [string, string, number, number, number, number, number, number, number][];
+  linearizations: StoredLineForComparison[];
 };
 
 /** The loader's answer: the inputs as JSON text, and the stamp of those very inputs. */
@@ -98,7 +105,10 @@ export async function loadComparisonSource(
  * materials resolved per location (their own, else the project's default). Parsed in one go,
  * well under the 50 ms a request may hold the event loop at the project limits.
  */
-export function comparisonInputFrom(projectId: string, source: string): ComparisonInput {
+export function comparisonInputFrom(
+  projectId: string,
+  source: string,
+): ComparisonInput & { linearizations: StoredLineForComparison[] } {
   const project = JSON.parse(source) as ProjectRow;
   const states = new Map<string, ComparisonState>();
   for (const [loadCaseId, locationId, revision, xxPa, yyPa, zzPa, xyPa, yzPa, zxPa] of project.states) {
@@ -133,5 +143,6 @@ export function comparisonInputFrom(projectId: string, source: string): Comparis
     cases: project.cases,
     states,
     combinations: project.combinations,
+    linearizations: project.linearizations,
   };
 }

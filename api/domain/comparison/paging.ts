@@ -71,7 +71,7 @@ function takeRun(input: ComparisonInput, items: Item[], start: number, rows: num
 export async function comparisonPage(
   input: ComparisonInput,
   query: ComparisonQuery,
-): Promise<PagedComparison> {
+): Promise<Omit<PagedComparison, "linearizations">> {
   const items: Item[] = [
     ...input.cases.map((_, index) => ({ kind: "case" as const, index })),
     ...input.combinations.map((_, index) => ({ kind: "combination" as const, index })),

@@ -9,7 +9,7 @@ import {
 } from "../../../core/contract/records";
 import type { ProjectRow } from "../../../db/repositories/projects";
 import { comparisonInputFrom, loadComparisonSource } from "../comparison/load";
-import { comparisonPage } from "../comparison/paging";
+import { comparisonPageWithSections } from "../comparison/sections";
 import { exportProjectWithKeys } from "../projects/export";
 
 const invert = (m: Map<string, string>): Record<string, string> =>
@@ -31,7 +31,8 @@ export async function buildRecordContent(sequelize: Sequelize, project: ProjectR
     loadComparisonSource(sequelize, project.workspaceId, project.id),
   ]);
   if (source === null) throw new Error(`project ${project.id} vanished while its record was taken`);
-  const { paging: _paging, ...results } = await comparisonPage(comparisonInputFrom(project.id, source), {
+  const input = comparisonInputFrom(project.id, source.source);
+  const { paging: _paging, ...results } = await comparisonPageWithSections(input, {
     page: 1,
     limit: Number.MAX_SAFE_INTEGER,
   });

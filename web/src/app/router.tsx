@@ -127,6 +127,13 @@ export const router = createBrowserRouter([
               })),
           },
           {
+            path: "workspaces/:workspaceId/projects/:projectId/linearization",
+            lazy: () =>
+              import("../features/linearization/components/LinearizationPage").then((m) => ({
+                Component: m.LinearizationPage,
+              })),
+          },
+          {
             path: "workspaces/:workspaceId",
             element: <WorkspacePage />,
             children: [

@@ -16,6 +16,7 @@ import { useWorkspace } from "../../../entities/workspace/queries";
 import { displayUnit } from "../../../lib/stress";
 import { comparisonTable } from "../model/rows";
 import { ComparisonTable } from "./ComparisonTable";
+import { LinearizationChecks } from "./LinearizationChecks";
 import { UtilisationChart } from "./UtilisationChart";
 
 /** `/workspaces/:workspaceId/projects/:projectId/comparison`: which case governs, and by how much. */
@@ -186,6 +187,16 @@ export function ComparisonPage() {
               </li>
             ))}
           </ul>
+        </Panel>
+      )}
+      {c.linearizations.length > 0 && (
+        <Panel
+          id="linearizations"
+          index="4"
+          title="Stress classification lines"
+          subtitle="category checks of each saved line"
+        >
+          <LinearizationChecks lines={c.linearizations} workspaceId={workspaceId} projectId={projectId} />
         </Panel>
       )}
       <Caution />

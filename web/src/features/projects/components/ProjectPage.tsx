@@ -62,6 +62,9 @@ export function ProjectPage() {
           <Link to={`/workspaces/${workspaceId}/projects/${projectId}/comparison`} className={quietButton}>
             Comparison
           </Link>
+          <Link to={`/workspaces/${workspaceId}/projects/${projectId}/linearization`} className={quietButton}>
+            Linearization
+          </Link>
           <a
             href={`/api/workspaces/${workspaceId}/projects/${projectId}/export`}
             download

@@ -1,0 +1,9 @@
+export {
+  linearizationCaseParamsSchema,
+  linearizationInputSchema,
+  linearizationListSchema,
+  linearizationParamsSchema,
+  linearizationPreviewSchema,
+  linearizationResponseSchema,
+  updateLinearizationBodySchema,
+} from "../../../core/contract/linearizations";

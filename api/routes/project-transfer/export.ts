@@ -90,6 +90,7 @@ export async function exportProject(project: ProjectRow): Promise<ProjectExport>
           componentsPa: componentsPaOf(s),
           source: s.source as StateSource,
           note: s.note,
+          calculator: s.calculator ?? null,
         })),
     })),
     combinations: combinations

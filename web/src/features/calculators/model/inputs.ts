@@ -5,19 +5,11 @@
  * The address holds every input by name (`units`, then the numbers and choices), so a copied link
  * reproduces the page; an unknown or malformed parameter falls back to the starting value, never fatal.
  */
-import { UNIT_SETS, convertInput, type Dimension, type UnitSet } from "./units";
+import type { InputSpec } from "../../../../../core/constants/calculators";
+import { UNIT_SETS, convertInput, type UnitSet } from "./units";
 
-/** One number input: what it measures and its starting value in SI units. */
-export type NumberInput = { dimension: Dimension; initial: number };
-
-/** One choice input: its options and the starting one. */
-export type ChoiceInput = { options: readonly string[]; initial: string };
-
-/** The inputs of one calculator. */
-export type InputSpec = {
-  numbers: Readonly<Record<string, NumberInput>>;
-  choices: Readonly<Record<string, ChoiceInput>>;
-};
+// The input descriptions are shared with the wire schema that checks a saved state's inputs.
+export type { ChoiceInput, InputSpec, NumberInput } from "../../../../../core/constants/calculators";
 
 /** The values of a calculator's inputs: the unit set, each number (in that set's units) and each choice. */
 export type InputValues<S extends InputSpec> = {

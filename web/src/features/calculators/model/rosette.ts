@@ -14,23 +14,12 @@ import {
   type PrincipalStrains,
   type StressFromStrain,
 } from "../../../../../core";
-import type { InputSpec, InputValues } from "./inputs";
+import { ROSETTE_INPUTS } from "../../../../../core/constants/calculators";
+import type { InputValues } from "./inputs";
 import { attempt, refuse, type Outcome } from "./outcome";
 import { UNITS_OF, stressUnitOf } from "./units";
 
-export const ROSETTE_INPUTS = {
-  numbers: {
-    e1: { dimension: "microstrain", initial: 650 },
-    e2: { dimension: "microstrain", initial: 300 },
-    e3: { dimension: "microstrain", initial: -200 },
-    a1: { dimension: "angle", initial: 0 },
-    a2: { dimension: "angle", initial: 45 },
-    a3: { dimension: "angle", initial: 90 },
-    E: { dimension: "modulus", initial: 200 },
-    nu: { dimension: "ratio", initial: 0.3 },
-  },
-  choices: { layout: { options: ["rectangular", "delta", "any"], initial: "rectangular" } },
-} as const satisfies InputSpec;
+export { ROSETTE_INPUTS };
 
 export type RosetteValues = InputValues<typeof ROSETTE_INPUTS>;
 

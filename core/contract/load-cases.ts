@@ -119,10 +119,7 @@ export const CALCULATOR_STATE_SOURCES: readonly StateSource[] = ["calculator", "
  */
 const calculatorField = calculatorRecordSchema.nullable().default(null);
 
-function checkCalculatorSource(
-  s: { source: StateSource; calculator: unknown },
-  ctx: z.RefinementCtx,
-): void {
+function checkCalculatorSource(s: { source: StateSource; calculator: unknown }, ctx: z.RefinementCtx): void {
   if (s.calculator !== null && !CALCULATOR_STATE_SOURCES.includes(s.source)) {
     ctx.addIssue({
       code: "custom",

@@ -106,7 +106,7 @@ describe("states saved from a calculator", () => {
 
   it("when the calculator inputs are wrong, then 400 names each field and nothing is stored", async () => {
     const before = await StressState.count({ where: { locationId: locationIds[1] } });
-    const cases: [Record<string, unknown>, string][] = [
+    const cases: [unknown, string][] = [
       [{ ...thinWall(), name: "slide-rule" }, "calculator.name"],
       [{ ...thinWall(), version: 99 }, "calculator.version"],
       [{ ...thinWall(), version: 0 }, "calculator.version"],

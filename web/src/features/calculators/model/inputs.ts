@@ -5,8 +5,13 @@
  * The address holds every input by name (`units`, then the numbers and choices), so a copied link
  * reproduces the page; an unknown or malformed parameter falls back to the starting value, never fatal.
  */
-import type { InputSpec } from "../../../../../core/constants/calculators";
-import { UNIT_SETS, convertInput, type UnitSet } from "./units";
+import {
+  CALCULATORS,
+  type CalculatorName,
+  type CalculatorRecord,
+  type InputSpec,
+} from "../../../../../core/constants/calculators";
+import { UNIT_SETS, convertInput, unitFor, type UnitSet } from "./units";
 
 // The input descriptions are shared with the wire schema that checks a saved state's inputs.
 export type { ChoiceInput, InputSpec, NumberInput } from "../../../../../core/constants/calculators";
@@ -76,4 +81,30 @@ export function withUnits<S extends InputSpec>(
     ]),
   );
   return { units, numbers, choices: { ...values.choices } } as InputValues<S>;
+}
+
+/**
+ * What a saved state keeps of this calculator: its name and version and every input as typed, each
+ * number with the unit its unit set types it in (the server checks the same list and units).
+ */
+export function calculatorRecordOf<N extends CalculatorName>(
+  name: N,
+  values: InputValues<(typeof CALCULATORS)[N]["inputs"]>,
+): CalculatorRecord {
+  const spec: InputSpec = CALCULATORS[name].inputs;
+  const typed = values as InputValues<InputSpec>;
+  return {
+    name,
+    version: CALCULATORS[name].version,
+    inputs: {
+      units: typed.units,
+      numbers: Object.fromEntries(
+        Object.entries(spec.numbers).map(([key, n]) => [
+          key,
+          { value: typed.numbers[key], unit: unitFor(n.dimension, typed.units) },
+        ]),
+      ),
+      choices: Object.fromEntries(Object.keys(spec.choices).map((key) => [key, typed.choices[key]])),
+    },
+  };
 }

@@ -3,6 +3,7 @@ import { Quantity } from "../../../components/Quantity";
 import { Sym } from "../../../components/Sym";
 import { fixed, sheetValue } from "../../../lib/number-format";
 import { useInputs } from "../hooks/use-inputs";
+import { calculatorRecordOf } from "../model/inputs";
 import { ROSETTE_INPUTS, computeRosette, gaugeAngles } from "../model/rosette";
 import { stressUnitOf } from "../model/units";
 import { CalculatorPage } from "./CalculatorPage";
@@ -10,6 +11,7 @@ import { ChoiceField } from "./ChoiceField";
 import { Formula, Validity } from "./Formula";
 import { InputField } from "./InputField";
 import { SendToBench } from "./SendToBench";
+import { AddToLoadCase } from "./AddToLoadCase";
 import { StateTable } from "./StateTable";
 import { UnitSetPicker } from "./UnitSetPicker";
 
@@ -155,7 +157,18 @@ export function RosettePage() {
           </>
         )
       }
-      actions={r && <SendToBench tensor={r.stress.tensor} units={units} />}
+      actions={
+        r && (
+          <>
+            <SendToBench tensor={r.stress.tensor} units={units} />
+            <AddToLoadCase
+              record={calculatorRecordOf("rosette", values)}
+              tensor={r.stress.tensor}
+              unit={unit}
+            />
+          </>
+        )
+      }
       formula={
         <Formula
           lines={[

@@ -24,6 +24,7 @@
  * them against the scenario.
  */
 import { microstrain, rectangularRosette, stressFromStrain } from "../calculators/rosette";
+import type { CalculatorRecord } from "../constants/calculators";
 import { solidShaftStress } from "../calculators/shaft";
 import { thinCylinder } from "../calculators/thin-wall";
 import type { Criterion } from "../criteria/safety-factor";
@@ -120,6 +121,8 @@ export type DemoState = {
   source: DemoStateSource;
   /** what the state is and the formula it came from */
   note: string;
+  /** the calculator and its inputs, when a Sigmacube calculator gives this state from them */
+  calculator?: CalculatorRecord;
 };
 
 /** One demo load case with its states. */
@@ -250,6 +253,53 @@ export function ct7StartUpTorque(): number {
   return CT7_SHAFT.torqueNm * CT7_SHAFT.startUpTorqueFactor;
 }
 
+// ── Calculator inputs (what the calculator pages take, in their SI unit set) ──────────
+
+/**
+ * The thin-wall calculator's inputs for the mid-shell state at `pressureMpa`: closed cylinder,
+ * inside radius 600 mm, wall 8 mm, inside-radius formula, σr = 0 (the membrane).
+ */
+export function ct7ShellCalculatorInputs(pressureMpa: number): CalculatorRecord {
+  return {
+    name: "thin-wall",
+    version: 1,
+    inputs: {
+      units: "si",
+      numbers: {
+        p: { value: pressureMpa, unit: "MPa" },
+        r: { value: CT7_SHELL.insideRadiusMm, unit: "mm" },
+        t: { value: CT7_SHELL.wallMm, unit: "mm" },
+      },
+      choices: { shape: "cylinder", given: "inner", form: "inside-radius", radial: "membrane" },
+    },
+  };
+}
+
+/** The rosette calculator's inputs for the proof-load readings: rectangular, readings as taken. */
+export function ct7RosetteCalculatorInputs(): CalculatorRecord {
+  const r = CT7_ROSETTE;
+  return {
+    name: "rosette",
+    version: 1,
+    inputs: {
+      units: "si",
+      numbers: {
+        e1: { value: r.e0Microstrain, unit: "µε" },
+        e2: { value: r.e45Microstrain, unit: "µε" },
+        e3: { value: r.e90Microstrain, unit: "µε" },
+        a1: { value: 0, unit: "°" },
+        a2: { value: 45, unit: "°" },
+        a3: { value: 90, unit: "°" },
+        E: { value: r.elasticModulusGpa, unit: "GPa" },
+        nu: { value: r.poissonRatio, unit: "" },
+        gfSet: { value: 2, unit: "" },
+        gfGauge: { value: 2, unit: "" },
+      },
+      choices: { layout: "rectangular", gf: "as-read" },
+    },
+  };
+}
+
 // ── Projects ─────────────────────────────────────────────────────────────────────────
 
 /** Location names, as the projects list them. */
@@ -274,6 +324,7 @@ function shellCase(c: (typeof CT7_SHELL_LOAD_CASES)[number]): DemoLoadCase {
         tensor: ct7ShellMembrane(c.pressureMpa),
         source: "calculator",
         note: `thin-wall membrane: σθ = pr/t, σx = pr/2t (x axial, y hoop), r = ${r} mm, t = ${t} mm`,
+        calculator: ct7ShellCalculatorInputs(c.pressureMpa),
       },
       {
         location: CT7_LOCATIONS.junction,
@@ -337,6 +388,7 @@ function lugCases(): DemoLoadCase[] {
             `ε0 = ${minus(e0)}, ε45 = ${minus(e45)}, ε90 = ${minus(e90)} µε; ` +
             `E = ${CT7_ROSETTE.elasticModulusGpa} GPa, ν = ${CT7_ROSETTE.poissonRatio}; ` +
             "rectangular rosette εx = ε0, εy = ε90, γxy = 2ε45 − ε0 − ε90, plane-stress Hooke's law",
+          calculator: ct7RosetteCalculatorInputs(),
         },
       ],
     },

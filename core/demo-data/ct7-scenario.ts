@@ -300,6 +300,40 @@ export function ct7RosetteCalculatorInputs(): CalculatorRecord {
   };
 }
 
+/**
+ * The shaft calculator's inputs for the coupling state: solid Ø45 mm, the bending moment about y
+ * (its tension fibre at θ = 90°, the point of maximum bending), torque, tensile thrust, no Kt.
+ * @param torqueNm torque, N·m
+ */
+export function ct7ShaftCalculatorInputs(torqueNm: number): CalculatorRecord {
+  const s = CT7_SHAFT;
+  const moment = { value: s.bendingMomentNm, unit: "N·m" };
+  return {
+    name: "shaft",
+    version: 1,
+    inputs: {
+      units: "si",
+      numbers: {
+        D: { value: s.diameterMm, unit: "mm" },
+        d: { value: 0, unit: "mm" },
+        My: moment,
+        Mz: { value: 0, unit: "N·m" },
+        M: moment,
+        phi: { value: 90, unit: "°" },
+        T: { value: torqueNm, unit: "N·m" },
+        P: { value: s.thrustN, unit: "N" },
+        Vy: { value: 0, unit: "N" },
+        Vz: { value: 0, unit: "N" },
+        ktb: { value: 1, unit: "" },
+        ktt: { value: 1, unit: "" },
+        kta: { value: 1, unit: "" },
+        angle: { value: 90, unit: "°" },
+      },
+      choices: { section: "solid", moments: "components", surface: "outer" },
+    },
+  };
+}
+
 // ── Projects ─────────────────────────────────────────────────────────────────────────
 
 /** Location names, as the projects list them. */
@@ -407,6 +441,7 @@ function shaftCase(name: string, description: string, torqueNm: number): DemoLoa
         tensor: ct7ShaftState(torqueNm),
         source: "calculator",
         note: `σ = 32M/πd³ + 4P/πd², τ = 16T/πd³; d = ${s.diameterMm} mm, M = ${s.bendingMomentNm} N·m, P = ${s.thrustN / 1000} kN, T = ${Math.round(torqueNm)} N·m`,
+        calculator: ct7ShaftCalculatorInputs(torqueNm),
       },
     ],
   };

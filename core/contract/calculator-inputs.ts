@@ -28,6 +28,61 @@ const storedNumberSchema = z.object(
   { error: "must be { value, unit }" },
 );
 
+type Numbers = Record<string, { value: number } | undefined>;
+type Choices = Record<string, string | undefined>;
+
+/**
+ * Inputs no calculator can compute from, per calculator: the same refusals its page makes (a wall
+ * of no thickness, an outer radius inside the inner one, ν outside (−1, 0.5)), so a state cannot
+ * be stored with inputs that could never have produced it. Each rule names the input at fault.
+ */
+const IMPOSSIBLE: Record<
+  CalculatorName,
+  (n: (key: string) => number, c: Choices) => { key: string; message: string }[]
+> = {
+  "thin-wall": (n) => [
+    ...(n("t") > 0 ? [] : [{ key: "t", message: "the wall thickness must be positive" }]),
+    ...(n("r") > 0 ? [] : [{ key: "r", message: "the radius must be positive" }]),
+  ],
+  "thick-cylinder": (n, c) => [
+    ...thickWallRules(n),
+    ...(c.ends === "plane-strain" && !(n("nu") > -1 && n("nu") <= 0.5)
+      ? [{ key: "nu", message: "Poisson's ratio must lie in (−1, 0.5]" }]
+      : []),
+  ],
+  "thick-sphere": (n) => thickWallRules(n),
+  shaft: (n, c) => [
+    ...(n("D") > 0 ? [] : [{ key: "D", message: "the outer diameter must be positive" }]),
+    ...(c.section === "hollow" && !(n("d") > 0 && n("d") < n("D"))
+      ? [{ key: "d", message: "the bore must be positive and smaller than D" }]
+      : []),
+    ...["ktb", "ktt", "kta"].flatMap((key) =>
+      n(key) >= 1 ? [] : [{ key, message: "a stress-concentration factor must be at least 1" }],
+    ),
+  ],
+  rosette: (n, c) => [
+    ...(n("E") > 0 ? [] : [{ key: "E", message: "Young's modulus must be positive" }]),
+    ...(n("nu") > -1 && n("nu") < 0.5
+      ? []
+      : [{ key: "nu", message: "Poisson's ratio must lie in (−1, 0.5)" }]),
+    ...(c.gf === "corrected"
+      ? ["gfSet", "gfGauge"].flatMap((key) =>
+          n(key) > 0 ? [] : [{ key, message: "a gauge factor must be positive" }],
+        )
+      : []),
+  ],
+};
+
+function thickWallRules(n: (key: string) => number) {
+  return [
+    ...(n("ri") > 0 ? [] : [{ key: "ri", message: "the inner radius must be positive" }]),
+    ...(n("ro") > n("ri") ? [] : [{ key: "ro", message: "the outer radius must be larger than the inner" }]),
+    ...(n("r") >= n("ri") && n("r") <= n("ro")
+      ? []
+      : [{ key: "r", message: "the radius of the point must lie in the wall" }]),
+  ];
+}
+
 const recordShape = z.object(
   {
     name: z.enum(CALCULATOR_NAMES as [CalculatorName, ...CalculatorName[]], {
@@ -98,6 +153,18 @@ export const calculatorRecordSchema = recordShape.superRefine((record, ctx) => {
         code: "custom",
         path: ["inputs", "choices", key],
         message: `must be one of ${spec.options.join(", ")}`,
+      });
+    }
+  }
+  // Only when every number is there: a missing one has been reported above.
+  const numbersGiven = numbers as Numbers;
+  if (Object.keys(specNumbers).every((key) => numbersGiven[key] !== undefined)) {
+    const n = (key: string) => numbersGiven[key]!.value;
+    for (const problem of IMPOSSIBLE[record.name](n, choices)) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["inputs", "numbers", problem.key, "value"],
+        message: problem.message,
       });
     }
   }

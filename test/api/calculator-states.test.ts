@@ -158,6 +158,16 @@ describe("states saved from a calculator", () => {
         },
         "calculator.inputs.choices.shape",
       ],
+      [
+        {
+          ...thinWall(),
+          inputs: {
+            ...thinWall().inputs,
+            numbers: { ...thinWall().inputs.numbers, t: { value: -1, unit: "mm" } },
+          },
+        },
+        "calculator.inputs.numbers.t.value",
+      ],
       ["a calculator", "calculator"],
     ];
     for (const [calculator, path] of cases) {

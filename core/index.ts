@@ -150,6 +150,7 @@ export {
   strain,
   microstrain,
   toMicrostrain,
+  correctForGaugeFactor,
   rectangularRosette,
   deltaRosette,
   threeGaugeRosette,

@@ -17,7 +17,9 @@ import { DEMO_WORKSPACE_NAME } from "./seed-accounts";
  * an invented junction bending; lug sections; the 0/45/90 rosette; solid shaft
  * σ = 32M/πd³ + 4P/πd², τ = 16T/πd³), so the bench examples and the seed hold one set of numbers.
  * The shell's hydrostatic test at the head-to-shell junction governs and fails the required
- * factor of 1.5 (Tresca n ≈ 1.30), so the demo shows what a failure looks like.
+ * factor of 1.5 (Tresca n ≈ 1.30), so the demo shows what a failure looks like. The mid-shell
+ * states and the lug rosette keep their calculator inputs (pressure, radius and wall; gauge
+ * readings, E and ν), so the demo shows the trail from inputs to verdict.
  */
 
 /** Creates one project with its locations, cases, states (revision 1, in MPa as entered) and combinations. */
@@ -70,6 +72,7 @@ export async function createDemoProject(
         unit: "MPa",
         source: s.source,
         note: s.note,
+        calculator: s.calculator ?? null,
         createdBy: ownerId,
       })),
       transaction,

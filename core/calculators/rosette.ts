@@ -38,6 +38,32 @@ export function toMicrostrain(value: Strain | number): number {
   return value / MICROSTRAIN;
 }
 
+/**
+ * A reading corrected for a gauge factor other than the one the instrument was set to. A gauge's
+ * gauge factor is GF = (ΔR/R)/ε; the instrument turns ΔR/R into strain with the factor it is set
+ * to, so the strain it shows is ε_read = (ΔR/R)/GF_set and the strain on the surface is
+ * ε = ε_read · GF_set / GF_gauge (from that definition; recalled from memory). Transverse
+ * sensitivity is not corrected here.
+ * @param reading the strain the instrument showed, m/m
+ * @param instrumentFactor the gauge factor the instrument was set to (> 0)
+ * @param gaugeFactor the gauge factor of the gauge, from its data sheet (> 0)
+ * @returns the corrected strain, m/m
+ * @throws TypeError/RangeError naming the argument when it is not finite, or a factor not positive
+ */
+export function correctForGaugeFactor(
+  reading: Strain,
+  instrumentFactor: number,
+  gaugeFactor: number,
+): Strain {
+  checkStrain(reading, "reading");
+  assertFinite(instrumentFactor, "instrumentFactor");
+  assertFinite(gaugeFactor, "gaugeFactor");
+  if (instrumentFactor <= 0)
+    throw new RangeError(`instrumentFactor must be positive, got ${instrumentFactor}`);
+  if (gaugeFactor <= 0) throw new RangeError(`gaugeFactor must be positive, got ${gaugeFactor}`);
+  return strain((reading * instrumentFactor) / gaugeFactor);
+}
+
 /** In-plane strain state at a point: normal strains and the engineering shear strain. */
 export type PlaneStrain = {
   /** normal strain along x, m/m */

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { COMPONENTS } from "../constants/components";
 import { SYMMETRY_REL_TOL } from "../constants/input-bounds";
+import { calculatorRecordOutSchema, calculatorRecordSchema } from "./calculator-inputs";
 import { uuidInput } from "./ids";
 import { stressUnitSchema, stressValue, versionSchema } from "./materials";
 import { personRefSchema, projectParamsSchema } from "./projects";
@@ -109,13 +110,35 @@ export const stressInputSchema = z
   });
 export type StressInput = z.output<typeof stressInputSchema>;
 
+/** Sources a state may have when it carries a calculator's inputs (a rosette's readings are measured). */
+export const CALCULATOR_STATE_SOURCES: readonly StateSource[] = ["calculator", "measured"];
+
+/**
+ * The calculator that produced a state, with every input (null: typed, pasted, from elsewhere).
+ * Only a state whose source is "calculator" or "measured" may carry one.
+ */
+const calculatorField = calculatorRecordSchema.nullable().default(null);
+
+function checkCalculatorSource(s: { source: StateSource; calculator: unknown }, ctx: z.RefinementCtx): void {
+  if (s.calculator !== null && !CALCULATOR_STATE_SOURCES.includes(s.source)) {
+    ctx.addIssue({
+      code: "custom",
+      path: ["source"],
+      message: `must be ${CALCULATOR_STATE_SOURCES.join(" or ")} when calculator inputs are given`,
+    });
+  }
+}
+
 /** One state to save at a location. */
-export const stateInputSchema = z.object({
-  locationId: uuidInput("must be a location id (UUID)"),
-  stress: stressInputSchema,
-  source: stateSourceSchema.default("typed"),
-  note: z.string().trim().max(2000, "At most 2000 characters.").default(""),
-});
+export const stateInputSchema = z
+  .object({
+    locationId: uuidInput("must be a location id (UUID)"),
+    stress: stressInputSchema,
+    source: stateSourceSchema.default("typed"),
+    note: z.string().trim().max(2000, "At most 2000 characters.").default(""),
+    calculator: calculatorField,
+  })
+  .superRefine(checkCalculatorSource);
 export type StateInput = z.infer<typeof stateInputSchema>;
 
 const statesInputSchema = z.array(stateInputSchema).superRefine((list, ctx) => {
@@ -159,12 +182,15 @@ export const updateLoadCaseBodySchema = z
 export type UpdateLoadCaseBody = z.infer<typeof updateLoadCaseBodySchema>;
 
 /** Saving one location's state (what the bench sends): the case's version, the stress, its source. */
-export const putStateBodySchema = z.object({
-  version: versionSchema,
-  stress: stressInputSchema,
-  source: stateSourceSchema.default("typed"),
-  note: z.string().trim().max(2000, "At most 2000 characters.").default(""),
-});
+export const putStateBodySchema = z
+  .object({
+    version: versionSchema,
+    stress: stressInputSchema,
+    source: stateSourceSchema.default("typed"),
+    note: z.string().trim().max(2000, "At most 2000 characters.").default(""),
+    calculator: calculatorField,
+  })
+  .superRefine(checkCalculatorSource);
 export type PutStateBody = z.infer<typeof putStateBodySchema>;
 
 /** A saved state: the stored Pa values, the same values in the entered unit, and its revision. */
@@ -180,6 +206,8 @@ export const stressStateSchema = z.object({
   componentsPa: componentsOutSchema,
   source: stateSourceSchema,
   note: z.string(),
+  /** The calculator that produced it, with every input as typed (null when it came from elsewhere). */
+  calculator: calculatorRecordOutSchema.nullable(),
   savedAt: z.iso.datetime(),
   savedBy: personRefSchema,
 });

@@ -1,5 +1,6 @@
 import { z } from "zod";
-import { stateSourceSchema } from "./load-cases";
+import { calculatorRecordSchema } from "./calculator-inputs";
+import { CALCULATOR_STATE_SOURCES, stateSourceSchema } from "./load-cases";
 import { finiteNumber, stressPaValue, stressUnitSchema } from "./materials";
 import { MAX_COMBINATION_FACTOR } from "./combinations";
 import {
@@ -20,9 +21,12 @@ import {
 
 export const PROJECT_EXPORT_FORMAT = "sigmacube.project";
 /** The version this Sigmacube writes. */
-export const PROJECT_EXPORT_SCHEMA_VERSION = 2;
-/** Every version this Sigmacube reads (1: before allowables per load-case category). */
-export const READABLE_SCHEMA_VERSIONS = [1, 2] as const;
+export const PROJECT_EXPORT_SCHEMA_VERSION = 3;
+/**
+ * Every version this Sigmacube reads (1: before allowables per load-case category; 2: before
+ * states kept their calculator's inputs).
+ */
+export const READABLE_SCHEMA_VERSIONS = [1, 2, 3] as const;
 
 const key = z.string({ error: "must be a key (text)" }).min(1, "must not be empty").max(100);
 // PostgreSQL text cannot hold U+0000; refuse it here with the field named rather than fail on insert.
@@ -75,6 +79,8 @@ const exportStateSchema = z.object({
   componentsPa: componentsPaSchema,
   source: stateSourceSchema,
   note: text(2000),
+  /** schemaVersion 3: the calculator that produced the state and every input, or null. */
+  calculator: calculatorRecordSchema.nullable().optional(),
 });
 
 const baseSchema = z.object({
@@ -211,6 +217,28 @@ function crossReferenceIssues(
       });
     seenCriteria.add(r.criterion);
   });
+  if (file.schemaVersion >= 3) {
+    file.loadCases.forEach((c, i) =>
+      c.states.forEach((s, j) => {
+        if (s.calculator === undefined) {
+          issues.push({
+            path: ["loadCases", i, "states", j, "calculator"],
+            message: "is required from schemaVersion 3 on (null when the state came from no calculator)",
+          });
+        }
+      }),
+    );
+  }
+  file.loadCases.forEach((c, i) =>
+    c.states.forEach((s, j) => {
+      if (s.calculator && !CALCULATOR_STATE_SOURCES.includes(s.source)) {
+        issues.push({
+          path: ["loadCases", i, "states", j, "source"],
+          message: `must be ${CALCULATOR_STATE_SOURCES.join(" or ")} when calculator inputs are given`,
+        });
+      }
+    }),
+  );
   if (file.schemaVersion >= 2) {
     for (const field of ["categoryRequirements", "includeUnsuitedCriteria"] as const) {
       if (file.project[field] === undefined) {
@@ -227,7 +255,10 @@ function crossReferenceIssues(
   return issues;
 }
 
-/** A file of any readable version in today's layout (a version-1 file has no category factors). */
+/**
+ * A file of any readable version in today's layout (a version-1 file has no category factors;
+ * states of a version-1 or 2 file kept no calculator inputs).
+ */
 function upgrade(file: z.infer<typeof baseSchema>) {
   return {
     ...file,
@@ -236,6 +267,10 @@ function upgrade(file: z.infer<typeof baseSchema>) {
       categoryRequirements: file.project.categoryRequirements ?? [],
       includeUnsuitedCriteria: file.project.includeUnsuitedCriteria ?? false,
     },
+    loadCases: file.loadCases.map((c) => ({
+      ...c,
+      states: c.states.map((s) => ({ ...s, calculator: s.calculator ?? null })),
+    })),
   };
 }
 

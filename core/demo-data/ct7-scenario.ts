@@ -24,6 +24,7 @@
  * them against the scenario.
  */
 import { microstrain, rectangularRosette, stressFromStrain } from "../calculators/rosette";
+import type { CalculatorRecord } from "../constants/calculators";
 import { solidShaftStress } from "../calculators/shaft";
 import { thinCylinder } from "../calculators/thin-wall";
 import type { Criterion } from "../criteria/safety-factor";
@@ -120,6 +121,8 @@ export type DemoState = {
   source: DemoStateSource;
   /** what the state is and the formula it came from */
   note: string;
+  /** the calculator and its inputs, when a Sigmacube calculator gives this state from them */
+  calculator?: CalculatorRecord;
 };
 
 /** One demo load case with its states. */
@@ -250,6 +253,87 @@ export function ct7StartUpTorque(): number {
   return CT7_SHAFT.torqueNm * CT7_SHAFT.startUpTorqueFactor;
 }
 
+// ── Calculator inputs (what the calculator pages take, in their SI unit set) ──────────
+
+/**
+ * The thin-wall calculator's inputs for the mid-shell state at `pressureMpa`: closed cylinder,
+ * inside radius 600 mm, wall 8 mm, inside-radius formula, σr = 0 (the membrane).
+ */
+export function ct7ShellCalculatorInputs(pressureMpa: number): CalculatorRecord {
+  return {
+    name: "thin-wall",
+    version: 1,
+    inputs: {
+      units: "si",
+      numbers: {
+        p: { value: pressureMpa, unit: "MPa" },
+        r: { value: CT7_SHELL.insideRadiusMm, unit: "mm" },
+        t: { value: CT7_SHELL.wallMm, unit: "mm" },
+      },
+      choices: { shape: "cylinder", given: "inner", form: "inside-radius", radial: "membrane" },
+    },
+  };
+}
+
+/** The rosette calculator's inputs for the proof-load readings: rectangular, readings as taken. */
+export function ct7RosetteCalculatorInputs(): CalculatorRecord {
+  const r = CT7_ROSETTE;
+  return {
+    name: "rosette",
+    version: 1,
+    inputs: {
+      units: "si",
+      numbers: {
+        e1: { value: r.e0Microstrain, unit: "µε" },
+        e2: { value: r.e45Microstrain, unit: "µε" },
+        e3: { value: r.e90Microstrain, unit: "µε" },
+        a1: { value: 0, unit: "°" },
+        a2: { value: 45, unit: "°" },
+        a3: { value: 90, unit: "°" },
+        E: { value: r.elasticModulusGpa, unit: "GPa" },
+        nu: { value: r.poissonRatio, unit: "" },
+        gfSet: { value: 2, unit: "" },
+        gfGauge: { value: 2, unit: "" },
+      },
+      choices: { layout: "rectangular", gf: "as-read" },
+    },
+  };
+}
+
+/**
+ * The shaft calculator's inputs for the coupling state: solid Ø45 mm, the bending moment about y
+ * (its tension fibre at θ = 90°, the point of maximum bending), torque, tensile thrust, no Kt.
+ * @param torqueNm torque, N·m
+ */
+export function ct7ShaftCalculatorInputs(torqueNm: number): CalculatorRecord {
+  const s = CT7_SHAFT;
+  const moment = { value: s.bendingMomentNm, unit: "N·m" };
+  return {
+    name: "shaft",
+    version: 1,
+    inputs: {
+      units: "si",
+      numbers: {
+        D: { value: s.diameterMm, unit: "mm" },
+        d: { value: 0, unit: "mm" },
+        My: moment,
+        Mz: { value: 0, unit: "N·m" },
+        M: moment,
+        phi: { value: 90, unit: "°" },
+        T: { value: torqueNm, unit: "N·m" },
+        P: { value: s.thrustN, unit: "N" },
+        Vy: { value: 0, unit: "N" },
+        Vz: { value: 0, unit: "N" },
+        ktb: { value: 1, unit: "" },
+        ktt: { value: 1, unit: "" },
+        kta: { value: 1, unit: "" },
+        angle: { value: 90, unit: "°" },
+      },
+      choices: { section: "solid", moments: "components", surface: "outer" },
+    },
+  };
+}
+
 // ── Projects ─────────────────────────────────────────────────────────────────────────
 
 /** Location names, as the projects list them. */
@@ -274,6 +358,7 @@ function shellCase(c: (typeof CT7_SHELL_LOAD_CASES)[number]): DemoLoadCase {
         tensor: ct7ShellMembrane(c.pressureMpa),
         source: "calculator",
         note: `thin-wall membrane: σθ = pr/t, σx = pr/2t (x axial, y hoop), r = ${r} mm, t = ${t} mm`,
+        calculator: ct7ShellCalculatorInputs(c.pressureMpa),
       },
       {
         location: CT7_LOCATIONS.junction,
@@ -337,6 +422,7 @@ function lugCases(): DemoLoadCase[] {
             `ε0 = ${minus(e0)}, ε45 = ${minus(e45)}, ε90 = ${minus(e90)} µε; ` +
             `E = ${CT7_ROSETTE.elasticModulusGpa} GPa, ν = ${CT7_ROSETTE.poissonRatio}; ` +
             "rectangular rosette εx = ε0, εy = ε90, γxy = 2ε45 − ε0 − ε90, plane-stress Hooke's law",
+          calculator: ct7RosetteCalculatorInputs(),
         },
       ],
     },
@@ -355,6 +441,7 @@ function shaftCase(name: string, description: string, torqueNm: number): DemoLoa
         tensor: ct7ShaftState(torqueNm),
         source: "calculator",
         note: `σ = 32M/πd³ + 4P/πd², τ = 16T/πd³; d = ${s.diameterMm} mm, M = ${s.bendingMomentNm} N·m, P = ${s.thrustN / 1000} kN, T = ${Math.round(torqueNm)} N·m`,
+        calculator: ct7ShaftCalculatorInputs(torqueNm),
       },
     ],
   };

@@ -1,9 +1,11 @@
 import { DataTypes, Model, type Sequelize } from "sequelize";
+import type { CalculatorRecord } from "../../core/constants/calculators";
 
 /**
  * One immutable revision of a load case's stress state at a location (table `stress_states`).
  * Components in Pa; `unit` is what they were entered in. Rows are never updated except to
- * clear `isCurrent` when a newer revision replaces them.
+ * clear `isCurrent` when a newer revision replaces them. `calculator` keeps the calculator and
+ * every input that produced the state (null when it came from elsewhere).
  */
 export class StressState extends Model {
   declare id: string;
@@ -20,6 +22,7 @@ export class StressState extends Model {
   declare unit: string;
   declare source: string;
   declare note: string;
+  declare calculator: CalculatorRecord | null;
   declare createdBy: string | null;
   declare createdAt: Date;
 }
@@ -41,6 +44,7 @@ export function initStressState(sequelize: Sequelize) {
       unit: { type: DataTypes.STRING(8), allowNull: false },
       source: { type: DataTypes.STRING(32), allowNull: false },
       note: { type: DataTypes.TEXT, allowNull: false, defaultValue: "" },
+      calculator: { type: DataTypes.JSONB, allowNull: true },
       createdBy: { type: DataTypes.UUID, allowNull: true },
     },
     { sequelize, tableName: "stress_states", updatedAt: false },

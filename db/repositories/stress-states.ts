@@ -1,4 +1,5 @@
 import { col, fn, literal, Op, type Transaction } from "sequelize";
+import type { CalculatorRecord } from "../../core/constants/calculators";
 import type { Components } from "../../core/contract/load-cases";
 import { StressState } from "../models/stress-state";
 import { toPlain, type Row } from "./plain";
@@ -27,6 +28,8 @@ export type NewStressState = {
   unit: string;
   source: string;
   note: string;
+  /** the calculator and its inputs that produced the state; null or left out when it came from elsewhere */
+  calculator?: CalculatorRecord | null;
   createdBy: string | null;
 };
 
@@ -89,6 +92,7 @@ export async function writeStressStates(
         unit: s.unit,
         source: s.source,
         note: s.note,
+        calculator: s.calculator ?? null,
         createdBy: s.createdBy,
       },
       previous: previous && { ...previous, isCurrent: false },

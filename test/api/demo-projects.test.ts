@@ -78,6 +78,22 @@ describe("the demo seed's projects step", () => {
     // Rosette: σx = E/(1−ν²)(εx + νεy) = 210000/0.91 × 393e-6 = 90.69 MPa (rectangular rosette equations).
     const proof = lug.rows.find((r) => r.caseName === "Proof load (rosette)")!;
     expect(proof.componentsPa.xx / 1e6).toBeCloseTo(90.69, 2);
+    // The rosette state keeps its readings, E and ν as the rosette calculator's inputs.
+    const lugProject = projects.find((x: { name: string }) => x.name === "CT-7 lifting lug");
+    const lugCases = (
+      await agent.get(`/api/workspaces/${workspace.id}/projects/${lugProject.id}/load-cases`).expect(200)
+    ).body.loadCases;
+    const rosette = lugCases.find((c: { name: string }) => c.name === "Proof load (rosette)").states[0];
+    expect(rosette.calculator).toMatchObject({
+      name: "rosette",
+      inputs: {
+        numbers: {
+          e1: { value: 420, unit: "µε" },
+          E: { value: 210, unit: "GPa" },
+          nu: { value: 0.3, unit: "" },
+        },
+      },
+    });
     // The proof-factored tilted lift at the weld toe comes close to 1.8 without failing.
     expect(lug.governing.map((g) => g.verdict)).toEqual(["close", "close"]);
 

@@ -41,7 +41,15 @@ async function type(page: Page, label: string, value: string) {
   await field.press("Enter");
 }
 
-const pick = (page: Page, name: string) => page.getByRole("radio", { name, exact: true }).check();
+/**
+ * Picks a radio option. The choice lives in the address, which the router applies in a transition,
+ * so the radio turns checked a moment after the click (on a loaded machine, after check() has looked).
+ */
+async function pick(page: Page, name: string) {
+  const radio = page.getByRole("radio", { name, exact: true });
+  if (!(await radio.isChecked())) await radio.click();
+  await expect.poll(() => radio.isChecked()).toBe(true);
+}
 
 /** The value a calculator shows in a row of its state table, at full precision. */
 const shown = async (page: Page, id: string) =>

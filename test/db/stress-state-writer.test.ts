@@ -1,5 +1,6 @@
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import type { Components } from "../../core/contract/load-cases";
+import { ct7RosetteCalculatorInputs } from "../../core/demo-data/ct7-scenario";
 import { LoadCase } from "../../db/models/load-case";
 import { Project } from "../../db/models/project";
 import { StressState } from "../../db/models/stress-state";
@@ -37,9 +38,13 @@ function storedColumns(row: StressState) {
     unit: row.unit,
     source: row.source,
     note: row.note,
+    calculator: row.calculator,
     createdBy: row.createdBy,
   };
 }
+
+/** The rosette's inputs the state came from (kept by every writer alike). */
+const ROSETTE_INPUTS = ct7RosetteCalculatorInputs();
 
 /** Every stored revision of the project's only load case. */
 async function rowsOfProject(projectId: string) {
@@ -71,6 +76,7 @@ describe("the one writer of stress-state rows", () => {
             stress: { unit: "MPa", components: IN_MPA },
             source: "measured",
             note: NOTE,
+            calculator: ROSETTE_INPUTS,
           },
         ],
       })
@@ -101,7 +107,15 @@ describe("the one writer of stress-state rows", () => {
               name: "Hydrotest",
               category: "test",
               description: "",
-              states: [{ location: "weld toe", tensor: IN_PA, source: "measured", note: NOTE }],
+              states: [
+                {
+                  location: "weld toe",
+                  tensor: IN_PA,
+                  source: "measured",
+                  note: NOTE,
+                  calculator: ROSETTE_INPUTS,
+                },
+              ],
             },
           ],
           combinations: [],
@@ -124,6 +138,7 @@ describe("the one writer of stress-state rows", () => {
       unit: "MPa",
       source: "measured",
       note: NOTE,
+      calculator: ROSETTE_INPUTS,
       createdBy: team.editor.user.id,
     };
     expect(viaApi.map(storedColumns)).toEqual([expected]);

@@ -68,6 +68,7 @@ export async function saveStateRevision(
         unit: input.stress.unit,
         source: input.source,
         note: input.note,
+        calculator: input.calculator,
         createdBy: user.id,
       },
     ],
@@ -79,7 +80,7 @@ export async function saveStateRevision(
     entityType: "stress-state",
     entityId: saved.id,
     action: previous ? "update" : "create",
-    summary: `${previous ? "changed" : "entered"} the state of "${scope.caseName}" at "${scope.locationName ?? "a location"}" (revision ${saved.revision}, ${input.source})`,
+    summary: `${previous ? "changed" : "entered"} the state of "${scope.caseName}" at "${scope.locationName ?? "a location"}" (revision ${saved.revision}, ${input.source}${input.calculator ? `, ${input.calculator.name} calculator` : ""})`,
     changes: {
       loadCaseId,
       locationId: input.locationId,
@@ -87,6 +88,7 @@ export async function saveStateRevision(
       fromPa: previous ? componentsPaOf(previous) : null,
       toPa: componentsPaOf(saved),
       unit: input.stress.unit,
+      ...(input.calculator ? { calculator: input.calculator } : {}),
     },
   });
   return saved;

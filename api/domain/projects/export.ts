@@ -106,6 +106,7 @@ export async function exportProjectWithKeys(
           componentsPa: componentsPaOf(s),
           source: s.source as StateSource,
           note: s.note,
+          calculator: s.calculator ?? null,
         })),
     })),
     combinations: combinations

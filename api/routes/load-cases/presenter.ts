@@ -27,6 +27,7 @@ export function presentState(s: StressStateRow, people: Map<string, PersonRef>):
     componentsPa: pa,
     source: s.source as StateSource,
     note: s.note,
+    calculator: s.calculator ?? null,
     savedAt: s.createdAt.toISOString(),
     savedBy: personOf(people, s.createdBy),
   };

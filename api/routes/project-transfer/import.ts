@@ -111,6 +111,7 @@ export async function importProject(
         unit: s.unit,
         source: s.source,
         note: s.note,
+        calculator: s.calculator,
         createdBy: user.id,
       })),
       transaction,

@@ -4,6 +4,7 @@ import {
   type Components,
   type StateSource,
 } from "../../../../core/contract/load-cases";
+import type { CalculatorRecord } from "../../../../core/contract/calculator-inputs";
 import type { StressUnitName } from "../../../../core/contract/materials";
 import { apiSend } from "../../lib/api-client";
 import { auditKeys } from "../audit/keys";
@@ -25,6 +26,8 @@ export type SaveStateVariables = {
   stress: StressBody;
   source: StateSource;
   note?: string;
+  /** the calculator and every input that produced the state (left out: none) */
+  calculator?: CalculatorRecord | null;
 };
 
 // Every write is also an audit event, so each one refreshes the audit trail as well.
@@ -51,7 +54,13 @@ export const saveStateMutation = (queryClient: QueryClient, workspaceId: string,
       apiSend(
         "PUT",
         `${loadCasesPath(workspaceId, projectId)}/${v.caseId}/states/${v.locationId}`,
-        { version: v.version, stress: v.stress, source: v.source, note: v.note ?? "" },
+        {
+          version: v.version,
+          stress: v.stress,
+          source: v.source,
+          note: v.note ?? "",
+          calculator: v.calculator ?? null,
+        },
         loadCaseResponseSchema,
       ).then((r) => r.loadCase),
     onSettled: (_saved, _error, v) =>

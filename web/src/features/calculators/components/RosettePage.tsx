@@ -3,13 +3,16 @@ import { Quantity } from "../../../components/Quantity";
 import { Sym } from "../../../components/Sym";
 import { fixed, sheetValue } from "../../../lib/number-format";
 import { useInputs } from "../hooks/use-inputs";
+import { calculatorRecordOf } from "../model/inputs";
 import { ROSETTE_INPUTS, computeRosette, gaugeAngles } from "../model/rosette";
 import { stressUnitOf } from "../model/units";
 import { CalculatorPage } from "./CalculatorPage";
 import { ChoiceField } from "./ChoiceField";
 import { Formula, Validity } from "./Formula";
+import { ElasticMaterialPicker } from "./ElasticMaterialPicker";
 import { InputField } from "./InputField";
 import { SendToBench } from "./SendToBench";
+import { AddToLoadCase } from "./AddToLoadCase";
 import { StateTable } from "./StateTable";
 import { UnitSetPicker } from "./UnitSetPicker";
 
@@ -23,7 +26,7 @@ const micro = (v: number) => `${fixed(toMicrostrain(v), 1)}`;
 
 /** Strain-gauge rosette: three readings to principal strains and the plane-stress state. */
 export function RosettePage() {
-  const { values, setNumber, setChoice, setUnits } = useInputs(ROSETTE_INPUTS);
+  const { values, setNumber, setNumbers, setChoice, setUnits } = useInputs(ROSETTE_INPUTS);
   const { units, numbers: n, choices: c } = values;
   const outcome = computeRosette(values);
   const unit = stressUnitOf(units);
@@ -67,11 +70,26 @@ export function RosettePage() {
               {field(`e${k}`, `Gauge ${k} reading ε`)}
             </div>
           ))}
+          <ChoiceField
+            legend="Gauge factor"
+            value={c.gf}
+            onChange={(v) => setChoice("gf", v)}
+            options={[
+              { value: "as-read", label: "readings as taken" },
+              { value: "corrected", label: "correct the readings" },
+            ]}
+          />
+          {c.gf === "corrected" && (
+            <div className="grid grid-cols-2 gap-2">
+              {field("gfSet", "Instrument gauge factor")}
+              {field("gfGauge", "Gauge factor of the gauges")}
+            </div>
+          )}
+          <ElasticMaterialPicker units={units} onPick={(v) => setNumbers(v)} />
           {field("E", "Young's modulus E")}
           {field("nu", "Poisson's ratio ν")}
           <p className="text-[12px] text-graphite-soft">
-            Readings as corrected by the instrument: no gauge-factor or transverse-sensitivity correction is
-            applied here.
+            No transverse-sensitivity correction is applied here.
           </p>
         </>
       }
@@ -87,6 +105,13 @@ export function RosettePage() {
               <caption className="sr-only">Strains</caption>
               <tbody>
                 {[
+                  ...(c.gf === "corrected"
+                    ? ([
+                        ["ε₁ corrected", r.readings[0] * 1e-6],
+                        ["ε₂ corrected", r.readings[1] * 1e-6],
+                        ["ε₃ corrected", r.readings[2] * 1e-6],
+                      ] as const)
+                    : []),
                   ["εx", r.strains.ex],
                   ["εy", r.strains.ey],
                   ["γxy", r.strains.gxy],
@@ -155,15 +180,27 @@ export function RosettePage() {
           </>
         )
       }
-      actions={r && <SendToBench tensor={r.stress.tensor} units={units} />}
+      actions={
+        r && (
+          <>
+            <SendToBench tensor={r.stress.tensor} units={units} />
+            <AddToLoadCase
+              record={calculatorRecordOf("rosette", values)}
+              tensor={r.stress.tensor}
+              unit={unit}
+            />
+          </>
+        )
+      }
       formula={
         <Formula
           lines={[
+            ...(c.gf === "corrected" ? ["ε = ε_read · GF_instrument / GF_gauge  (each reading)"] : []),
             ...FORMULAS[c.layout],
             "ε₁,₂ = (εx + εy)/2 ± √(((εx − εy)/2)² + (γxy/2)²),  tan 2θ = γxy/(εx − εy)",
             "σx = E(εx + νεy)/(1 − ν²),  σy = E(εy + νεx)/(1 − ν²),  τxy = G·γxy,  G = E/(2(1 + ν))",
           ]}
-          source="strain transformation and Hooke's law for plane stress, as in any strength-of-materials text."
+          source="strain transformation and Hooke's law for plane stress, as in any strength-of-materials text; the gauge-factor correction from the definition GF = (ΔR/R)/ε (recalled from memory)."
         />
       }
       validity={
@@ -172,7 +209,7 @@ export function RosettePage() {
             "Linear elastic, isotropic material; the gauges sit at one point of a free surface (plane stress, σz = 0).",
             "Readings within the gauges' linear range; γxy is the engineering shear strain.",
             "The three gauge directions must differ modulo 180°.",
-            "Gauge-factor and transverse-sensitivity corrections are not applied: enter corrected readings.",
+            "The gauge-factor correction assumes the instrument turned ΔR/R into strain with the factor it was set to; transverse sensitivity is not corrected: enter readings corrected for it.",
           ]}
         />
       }

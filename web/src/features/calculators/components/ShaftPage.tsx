@@ -3,6 +3,7 @@ import { Quantity } from "../../../components/Quantity";
 import { Sym } from "../../../components/Sym";
 import { sheetValue } from "../../../lib/number-format";
 import { useInputs } from "../hooks/use-inputs";
+import { calculatorRecordOf } from "../model/inputs";
 import { SHAFT_INPUTS, computeShaft } from "../model/shaft";
 import { stressUnitOf } from "../model/units";
 import { CalculatorPage } from "./CalculatorPage";
@@ -10,6 +11,7 @@ import { ChoiceField } from "./ChoiceField";
 import { Formula, Validity } from "./Formula";
 import { InputField } from "./InputField";
 import { SendToBench } from "./SendToBench";
+import { AddToLoadCase } from "./AddToLoadCase";
 import { StateTable } from "./StateTable";
 import { UnitSetPicker } from "./UnitSetPicker";
 
@@ -149,6 +151,11 @@ export function ShaftPage() {
             <PointState p={r.point} unit={unit} prefix="" />
             <div className="flex flex-wrap gap-3">
               <SendToBench tensor={r.point.tensor} units={units} label="Send this point to bench" />
+              <AddToLoadCase
+                record={calculatorRecordOf("shaft", values)}
+                tensor={r.point.tensor}
+                unit={unit}
+              />
             </div>
             <h3 className="text-[14px] font-semibold" data-testid="critical-point">
               Critical point (largest von Mises): {r.critical.surface === "outer" ? "outer surface" : "bore"},

@@ -1,4 +1,5 @@
 import { useInputs } from "../hooks/use-inputs";
+import { calculatorRecordOf } from "../model/inputs";
 import { THICK_CYLINDER_INPUTS, computeThickCylinder } from "../model/thick-wall";
 import { stressUnitOf } from "../model/units";
 import { CalculatorPage } from "./CalculatorPage";
@@ -6,6 +7,7 @@ import { ChoiceField } from "./ChoiceField";
 import { Formula, Validity } from "./Formula";
 import { InputField } from "./InputField";
 import { SendToBench } from "./SendToBench";
+import { AddToLoadCase } from "./AddToLoadCase";
 import { LameResults } from "./LameResults";
 import { ThickWallInputs } from "./ThickWallInputs";
 import { UnitSetPicker } from "./UnitSetPicker";
@@ -86,7 +88,18 @@ export function ThickCylinderPage() {
           </>
         )
       }
-      actions={r && <SendToBench tensor={r.tensor} units={units} />}
+      actions={
+        r && (
+          <>
+            <SendToBench tensor={r.tensor} units={units} />
+            <AddToLoadCase
+              record={calculatorRecordOf("thick-cylinder", values)}
+              tensor={r.tensor}
+              unit={unit}
+            />
+          </>
+        )
+      }
       formula={
         <Formula
           lines={[

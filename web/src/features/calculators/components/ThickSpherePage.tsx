@@ -1,9 +1,11 @@
 import { useInputs } from "../hooks/use-inputs";
+import { calculatorRecordOf } from "../model/inputs";
 import { THICK_SPHERE_INPUTS, computeThickSphere } from "../model/thick-wall";
 import { stressUnitOf } from "../model/units";
 import { CalculatorPage } from "./CalculatorPage";
 import { Formula, Validity } from "./Formula";
 import { SendToBench } from "./SendToBench";
+import { AddToLoadCase } from "./AddToLoadCase";
 import { LameResults } from "./LameResults";
 import { ThickWallInputs } from "./ThickWallInputs";
 import { UnitSetPicker } from "./UnitSetPicker";
@@ -52,7 +54,18 @@ export function ThickSpherePage() {
           </>
         )
       }
-      actions={r && <SendToBench tensor={r.tensor} units={units} />}
+      actions={
+        r && (
+          <>
+            <SendToBench tensor={r.tensor} units={units} />
+            <AddToLoadCase
+              record={calculatorRecordOf("thick-sphere", values)}
+              tensor={r.tensor}
+              unit={unit}
+            />
+          </>
+        )
+      }
       formula={
         <Formula
           lines={[

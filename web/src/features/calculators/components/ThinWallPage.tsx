@@ -1,6 +1,7 @@
 import { Link } from "react-router-dom";
 import { Sym } from "../../../components/Sym";
 import { useInputs } from "../hooks/use-inputs";
+import { calculatorRecordOf } from "../model/inputs";
 import { THIN_WALL_INPUTS, computeThinWall } from "../model/thin-wall";
 import { stressUnitOf, unitFor } from "../model/units";
 import { CalculatorPage } from "./CalculatorPage";
@@ -8,6 +9,7 @@ import { ChoiceField } from "./ChoiceField";
 import { Formula, Validity } from "./Formula";
 import { InputField } from "./InputField";
 import { SendToBench } from "./SendToBench";
+import { AddToLoadCase } from "./AddToLoadCase";
 import { StateTable } from "./StateTable";
 import { UnitSetPicker } from "./UnitSetPicker";
 
@@ -135,7 +137,14 @@ export function ThinWallPage() {
           </>
         )
       }
-      actions={r && <SendToBench tensor={r.tensor} units={units} />}
+      actions={
+        r && (
+          <>
+            <SendToBench tensor={r.tensor} units={units} />
+            <AddToLoadCase record={calculatorRecordOf("thin-wall", values)} tensor={r.tensor} unit={unit} />
+          </>
+        )
+      }
       formula={
         <Formula
           lines={

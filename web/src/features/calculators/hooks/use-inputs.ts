@@ -17,8 +17,11 @@ export function useInputs<S extends InputSpec>(spec: S) {
   );
   const setNumber = (key: keyof S["numbers"] & string, value: number) =>
     write({ ...values, numbers: { ...values.numbers, [key]: value } });
+  /** Several numbers at once (a material fills E and ν together). */
+  const setNumbers = (next: Partial<Record<keyof S["numbers"] & string, number>>) =>
+    write({ ...values, numbers: { ...values.numbers, ...next } });
   const setChoice = (key: keyof S["choices"] & string, value: string) =>
     write({ ...values, choices: { ...values.choices, [key]: value } });
   const setUnits = (units: UnitSet) => write(withUnits(spec, values, units));
-  return { values, setNumber, setChoice, setUnits };
+  return { values, setNumber, setNumbers, setChoice, setUnits };
 }

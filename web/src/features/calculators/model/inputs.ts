@@ -5,19 +5,16 @@
  * The address holds every input by name (`units`, then the numbers and choices), so a copied link
  * reproduces the page; an unknown or malformed parameter falls back to the starting value, never fatal.
  */
-import { UNIT_SETS, convertInput, type Dimension, type UnitSet } from "./units";
+import {
+  CALCULATORS,
+  type CalculatorName,
+  type CalculatorRecord,
+  type InputSpec,
+} from "../../../../../core/constants/calculators";
+import { UNIT_SETS, convertInput, unitFor, type UnitSet } from "./units";
 
-/** One number input: what it measures and its starting value in SI units. */
-export type NumberInput = { dimension: Dimension; initial: number };
-
-/** One choice input: its options and the starting one. */
-export type ChoiceInput = { options: readonly string[]; initial: string };
-
-/** The inputs of one calculator. */
-export type InputSpec = {
-  numbers: Readonly<Record<string, NumberInput>>;
-  choices: Readonly<Record<string, ChoiceInput>>;
-};
+// The input descriptions are shared with the wire schema that checks a saved state's inputs.
+export type { ChoiceInput, InputSpec, NumberInput } from "../../../../../core/constants/calculators";
 
 /** The values of a calculator's inputs: the unit set, each number (in that set's units) and each choice. */
 export type InputValues<S extends InputSpec> = {
@@ -84,4 +81,30 @@ export function withUnits<S extends InputSpec>(
     ]),
   );
   return { units, numbers, choices: { ...values.choices } } as InputValues<S>;
+}
+
+/**
+ * What a saved state keeps of this calculator: its name and version and every input as typed, each
+ * number with the unit its unit set types it in (the server checks the same list and units).
+ */
+export function calculatorRecordOf<N extends CalculatorName>(
+  name: N,
+  values: InputValues<(typeof CALCULATORS)[N]["inputs"]>,
+): CalculatorRecord {
+  const spec: InputSpec = CALCULATORS[name].inputs;
+  const typed = values as InputValues<InputSpec>;
+  return {
+    name,
+    version: CALCULATORS[name].version,
+    inputs: {
+      units: typed.units,
+      numbers: Object.fromEntries(
+        Object.entries(spec.numbers).map(([key, n]) => [
+          key,
+          { value: typed.numbers[key], unit: unitFor(n.dimension, typed.units) },
+        ]),
+      ),
+      choices: Object.fromEntries(Object.keys(spec.choices).map((key) => [key, typed.choices[key]])),
+    },
+  };
 }

@@ -1,36 +1,28 @@
 /**
  * The strain-gauge rosette calculator: rectangular (0°/45°/90°), delta (0°/60°/120°) or three gauges
- * at any angles; readings in microstrain; principal strains and the plane-stress state by Hooke's law.
+ * at any angles; readings in microstrain, optionally corrected for the gauge factor; principal strains
+ * and the plane-stress state by Hooke's law.
  */
 import {
   convertStress,
+  correctForGaugeFactor,
   deltaRosette,
   microstrain,
   principalStrains,
   rectangularRosette,
   stressFromStrain,
   threeGaugeRosette,
+  toMicrostrain,
   type PlaneStrain,
   type PrincipalStrains,
   type StressFromStrain,
 } from "../../../../../core";
-import type { InputSpec, InputValues } from "./inputs";
+import { ROSETTE_INPUTS } from "../../../../../core/constants/calculators";
+import type { InputValues } from "./inputs";
 import { attempt, refuse, type Outcome } from "./outcome";
 import { UNITS_OF, stressUnitOf } from "./units";
 
-export const ROSETTE_INPUTS = {
-  numbers: {
-    e1: { dimension: "microstrain", initial: 650 },
-    e2: { dimension: "microstrain", initial: 300 },
-    e3: { dimension: "microstrain", initial: -200 },
-    a1: { dimension: "angle", initial: 0 },
-    a2: { dimension: "angle", initial: 45 },
-    a3: { dimension: "angle", initial: 90 },
-    E: { dimension: "modulus", initial: 200 },
-    nu: { dimension: "ratio", initial: 0.3 },
-  },
-  choices: { layout: { options: ["rectangular", "delta", "any"], initial: "rectangular" } },
-} as const satisfies InputSpec;
+export { ROSETTE_INPUTS };
 
 export type RosetteValues = InputValues<typeof ROSETTE_INPUTS>;
 
@@ -43,6 +35,8 @@ export function gaugeAngles(v: RosetteValues): [number, number, number] {
 
 export type RosetteResult = {
   angles: [number, number, number];
+  /** the three readings used, µε (after the gauge-factor correction when it is asked for) */
+  readings: [number, number, number];
   /** εx, εy, γxy as plain strains */
   strains: PlaneStrain;
   principal: PrincipalStrains;
@@ -56,7 +50,13 @@ export function computeRosette(v: RosetteValues): Outcome<RosetteResult> {
     const n = v.numbers;
     if (!(n.E > 0)) refuse("Young's modulus E", "must be positive");
     if (!(n.nu > -1 && n.nu < 0.5)) refuse("Poisson's ratio ν", "must lie in (−1, 0.5)");
-    const [g1, g2, g3] = [microstrain(n.e1), microstrain(n.e2), microstrain(n.e3)];
+    const corrected = v.choices.gf === "corrected";
+    if (corrected && !(n.gfSet > 0)) refuse("Instrument gauge factor", "must be positive");
+    if (corrected && !(n.gfGauge > 0)) refuse("Gauge factor of the gauges", "must be positive");
+    // Readings taken with the instrument set to another gauge factor than the gauges' are scaled back.
+    const reading = (e: number) =>
+      corrected ? correctForGaugeFactor(microstrain(e), n.gfSet, n.gfGauge) : microstrain(e);
+    const [g1, g2, g3] = [reading(n.e1), reading(n.e2), reading(n.e3)];
     const angles = gaugeAngles(v);
     let strains: PlaneStrain;
     if (v.choices.layout === "rectangular") strains = rectangularRosette(g1, g2, g3);
@@ -77,6 +77,7 @@ export function computeRosette(v: RosetteValues): Outcome<RosetteResult> {
     const E = convertStress(n.E, UNITS_OF[v.units].modulus, stressUnitOf(v.units));
     return {
       angles,
+      readings: [toMicrostrain(g1), toMicrostrain(g2), toMicrostrain(g3)],
       strains,
       principal: principalStrains(strains),
       stress: stressFromStrain(strains, { E, nu: n.nu }),

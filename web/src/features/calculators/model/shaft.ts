@@ -11,33 +11,12 @@ import {
   type ShaftPointStress,
   type ShaftSurface,
 } from "../../../../../core";
-import type { InputSpec, InputValues } from "./inputs";
+import { SHAFT_INPUTS } from "../../../../../core/constants/calculators";
+import type { InputValues } from "./inputs";
 import { attempt, refuse, type Outcome } from "./outcome";
 import { stressUnitOf, toWorking } from "./units";
 
-export const SHAFT_INPUTS = {
-  numbers: {
-    D: { dimension: "length", initial: 60 },
-    d: { dimension: "length", initial: 30 },
-    My: { dimension: "moment", initial: 1200 },
-    Mz: { dimension: "moment", initial: 0 },
-    M: { dimension: "moment", initial: 1200 },
-    phi: { dimension: "angle", initial: 90 },
-    T: { dimension: "moment", initial: 900 },
-    P: { dimension: "force", initial: 0 },
-    Vy: { dimension: "force", initial: 0 },
-    Vz: { dimension: "force", initial: 0 },
-    ktb: { dimension: "ratio", initial: 1 },
-    ktt: { dimension: "ratio", initial: 1 },
-    kta: { dimension: "ratio", initial: 1 },
-    angle: { dimension: "angle", initial: 90 },
-  },
-  choices: {
-    section: { options: ["solid", "hollow"], initial: "solid" },
-    moments: { options: ["components", "direction"], initial: "components" },
-    surface: { options: ["outer", "inner"], initial: "outer" },
-  },
-} as const satisfies InputSpec;
+export { SHAFT_INPUTS };
 
 export type ShaftValues = InputValues<typeof SHAFT_INPUTS>;
 

@@ -10,23 +10,11 @@ import {
   type CylinderEnds,
   type StressTensor,
 } from "../../../../../core";
-import type { InputSpec, InputValues } from "./inputs";
+import { THICK_CYLINDER_INPUTS, THICK_SPHERE_INPUTS } from "../../../../../core/constants/calculators";
+import type { InputValues } from "./inputs";
 import { attempt, refuse, type Outcome } from "./outcome";
 
-const WALL = {
-  ri: { dimension: "length", initial: 50 },
-  ro: { dimension: "length", initial: 100 },
-  pi: { dimension: "stress", initial: 100 },
-  po: { dimension: "stress", initial: 0 },
-  r: { dimension: "length", initial: 50 },
-} as const;
-
-export const THICK_CYLINDER_INPUTS = {
-  numbers: { ...WALL, nu: { dimension: "ratio", initial: 0.3 } },
-  choices: { ends: { options: ["closed", "open", "plane-strain"], initial: "closed" } },
-} as const satisfies InputSpec;
-
-export const THICK_SPHERE_INPUTS = { numbers: WALL, choices: {} } as const satisfies InputSpec;
+export { THICK_CYLINDER_INPUTS, THICK_SPHERE_INPUTS };
 
 export type ThickCylinderValues = InputValues<typeof THICK_CYLINDER_INPUTS>;
 export type ThickSphereValues = InputValues<typeof THICK_SPHERE_INPUTS>;

@@ -12,23 +12,12 @@ import {
   type ThinWallRadial,
   type VesselShape,
 } from "../../../../../core";
+import { THIN_WALL_INPUTS } from "../../../../../core/constants/calculators";
 import { encodeInputs, initialValues, type InputSpec, type InputValues } from "./inputs";
 import { attempt, refuse, type Outcome } from "./outcome";
 import type { UnitSet } from "./units";
 
-export const THIN_WALL_INPUTS = {
-  numbers: {
-    p: { dimension: "stress", initial: 2 },
-    r: { dimension: "length", initial: 500 },
-    t: { dimension: "length", initial: 10 },
-  },
-  choices: {
-    shape: { options: ["cylinder", "sphere"], initial: "cylinder" },
-    given: { options: ["inner", "mean", "outer"], initial: "inner" },
-    form: { options: ["inside-radius", "mean-diameter"], initial: "inside-radius" },
-    radial: { options: ["membrane", "inner-surface"], initial: "membrane" },
-  },
-} as const satisfies InputSpec;
+export { THIN_WALL_INPUTS };
 
 export type ThinWallValues = InputValues<typeof THIN_WALL_INPUTS>;
 

@@ -6,29 +6,16 @@
  */
 import { METRES_PER_INCH, NEWTONS_PER_POUND_FORCE, convertStress } from "../../../../../core";
 import type { StressUnitName } from "../../../../../core/contract/materials";
+import { UNITS_OF, type Dimension, type UnitSet } from "../../../../../core/constants/calculators";
 
-/** The unit sets offered: SI, and US customary with stresses in psi or in ksi. */
-export const UNIT_SETS = ["si", "us-psi", "us-ksi"] as const;
-export type UnitSet = (typeof UNIT_SETS)[number];
-
-/** What an input measures. `modulus` is an elastic modulus (GPa in SI, else the set's stress unit). */
-export type Dimension =
-  "length" | "stress" | "force" | "moment" | "modulus" | "angle" | "ratio" | "microstrain";
-
-type UnitOfSet = {
-  length: string;
-  stress: StressUnitName;
-  force: string;
-  moment: string;
-  modulus: StressUnitName;
-};
-
-/** The unit of each dimension in each set, as written on the page. */
-export const UNITS_OF: Readonly<Record<UnitSet, UnitOfSet>> = {
-  si: { length: "mm", stress: "MPa", force: "N", moment: "N·m", modulus: "GPa" },
-  "us-psi": { length: "in", stress: "psi", force: "lbf", moment: "lbf·in", modulus: "psi" },
-  "us-ksi": { length: "in", stress: "ksi", force: "lbf", moment: "lbf·in", modulus: "ksi" },
-};
+// The unit sets and each dimension's unit are shared with the wire schema that checks stored inputs.
+export {
+  UNIT_SETS,
+  UNITS_OF,
+  unitFor,
+  type Dimension,
+  type UnitSet,
+} from "../../../../../core/constants/calculators";
 
 /** How the unit sets read in the picker. */
 export const UNIT_SET_LABEL: Readonly<Record<UnitSet, string>> = {
@@ -44,24 +31,6 @@ const NMM_PER: Readonly<Record<string, number>> = {
   "N·m": 1000,
   "lbf·in": NEWTONS_PER_POUND_FORCE * MM_PER_INCH,
 };
-
-/** The unit an input of this dimension is typed in under a unit set ("" for plain numbers). */
-export function unitFor(dimension: Dimension, set: UnitSet): string {
-  switch (dimension) {
-    case "length":
-    case "stress":
-    case "force":
-    case "moment":
-    case "modulus":
-      return UNITS_OF[set][dimension];
-    case "angle":
-      return "°";
-    case "microstrain":
-      return "µε";
-    case "ratio":
-      return "";
-  }
-}
 
 /**
  * The value in the calculators' working units: mm, N, N·mm and MPa (so stresses from forces and

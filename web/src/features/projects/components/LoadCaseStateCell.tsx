@@ -4,12 +4,14 @@ import type { Location } from "../../../../../core/contract/projects";
 import { Quantity, stressTone } from "../../../components/Quantity";
 import { ToolButton } from "../../../components/ToolButton";
 import { benchLinkForState } from "../../../lib/bench-link";
+import { calculatorLinkFor } from "../../../lib/calculator-link";
 import { formatStress } from "../../../lib/stress";
 import { nonZeroComponents, stateRevisionWords } from "../model/stress-components";
 
 /**
  * One cell of the load-case table: the saved state of `loadCase` at `location` (its non-zero
- * components, source and revision, with links to the bench and its history), or for editors a
+ * components, source and revision, with links to the bench, its history and, for a state from a
+ * calculator, the calculator with the inputs it was given), or for editors a
  * button to enter one.
  */
 export function LoadCaseStateCell({
@@ -71,7 +73,15 @@ export function LoadCaseStateCell({
             : {c.name} at {l.name}
           </span>
         </Link>
-        {s.revision > 1 && (
+        {s.calculator && (
+          <Link className="text-ink underline-offset-2 hover:underline" to={calculatorLinkFor(s.calculator)}>
+            Reopen in calculator
+            <span className="sr-only">
+              : {c.name} at {l.name}
+            </span>
+          </Link>
+        )}
+        {(s.revision > 1 || s.calculator) && (
           <ToolButton
             aria-label={`Revisions of ${c.name} at ${l.name}`}
             pressed={historyOpen}

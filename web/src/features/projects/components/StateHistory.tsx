@@ -1,9 +1,14 @@
+import { Link } from "react-router-dom";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import { Quantity } from "../../../components/Quantity";
 import { useStateHistory } from "../../../entities/load-case/queries";
+import { calculatorLinkFor, calculatorTitle, describeCalculatorInputs } from "../../../lib/calculator-link";
 import { COMPONENT_SYMBOLS, formatStress, STRESS_COMPONENTS as KEYS } from "../../../lib/stress";
 
-/** The revisions of one saved state, newest first: what a checker reads to see what changed and who changed it. */
+/**
+ * The revisions of one saved state, newest first: what a checker reads to see what changed and who
+ * changed it, and for a state from a calculator, every input it was given and a link that reopens it.
+ */
 export function StateHistory(props: {
   workspaceId: string;
   projectId: string;
@@ -30,6 +35,7 @@ export function StateHistory(props: {
               </th>
             ))}
             <th className="pr-3">note</th>
+            <th className="pr-3">calculator inputs</th>
           </tr>
         </thead>
         <tbody>
@@ -47,6 +53,26 @@ export function StateHistory(props: {
                 </td>
               ))}
               <td className="pr-3 text-graphite-soft">{r.note}</td>
+              <td className="pr-3" data-testid={`revision-${r.revision}-calculator`}>
+                {r.calculator ? (
+                  <>
+                    <span className="font-semibold">
+                      {calculatorTitle(r.calculator)}, version {r.calculator.version}
+                    </span>
+                    <ul className="num text-[12px]">
+                      {describeCalculatorInputs(r.calculator).map((line) => (
+                        <li key={line}>{line}</li>
+                      ))}
+                    </ul>
+                    <Link className="text-ink underline" to={calculatorLinkFor(r.calculator)}>
+                      Reopen in calculator
+                      <span className="sr-only">: revision {r.revision}</span>
+                    </Link>
+                  </>
+                ) : (
+                  <span className="text-graphite-faint">—</span>
+                )}
+              </td>
             </tr>
           ))}
         </tbody>

@@ -22,6 +22,7 @@ const saved = (over: Partial<StressState> = {}): StressState => ({
   componentsPa: { xx: 67.5e6, yy: -12e6, zz: 0, xy: 0.1, yz: 0, zx: 250e6 },
   source: "typed",
   note: "",
+  calculator: null,
   savedAt: "2026-12-01T10:00:00.000Z",
   savedBy: null,
   ...over,

@@ -257,12 +257,15 @@ export async function run(): Promise<void> {
         `saves stored: ${savedVersions} versions, ${saved} superseded revisions   ` +
         `(${SECONDS} s per route on loopback after a 1 s warm-up)`,
     );
-    const ratios = rounds.map((r) => r.comparison / r.health);
+    // A round in which either route completed nothing (the machine stalled) gives no ratio.
+    const counted = rounds.filter((r) => r.health > 0 && r.comparison > 0);
+    const ratios = counted.map((r) => r.comparison / r.health);
     console.log(
       `comparison / health in ${PAIRED_ROUNDS} paired ${ROUND_SECONDS}-s rounds (order alternating): median ` +
-        `${median(ratios).toFixed(2)}× (rounds ${ratios.map((r) => r.toFixed(2)).join(", ")}; median rates: ` +
-        `health ${median(rounds.map((r) => r.health)).toFixed(0)} req/s, ` +
-        `comparison ${median(rounds.map((r) => r.comparison)).toFixed(0)} req/s)`,
+        `${median(ratios).toFixed(2)}× (rounds ${ratios.map((r) => r.toFixed(2)).join(", ")}` +
+        `${counted.length < rounds.length ? `; ${rounds.length - counted.length} stalled round(s) left out` : ""}; ` +
+        `median rates: health ${median(counted.map((r) => r.health)).toFixed(0)} req/s, ` +
+        `comparison ${median(counted.map((r) => r.comparison)).toFixed(0)} req/s)`,
     );
     if (healthCpu && comparisonCpu) {
       const show = (c: typeof healthCpu) =>

@@ -1,6 +1,7 @@
 import autocannon from "autocannon";
 import { LoadCase } from "../../db/models/load-case";
 import { StressState } from "../../db/models/stress-state";
+import { cpuMeter, type CpuTime } from "./support/cpu-time";
 import { seedProject } from "./support/seed-project";
 import { startThrowawayServer } from "./support/throwaway-server";
 
@@ -14,6 +15,16 @@ const CONNECTIONS = 100;
 const SAVE_CONNECTIONS = 10;
 /** Seconds each route is loaded for, after a one-second warm-up: the section stays under a minute. */
 const SECONDS = 5;
+
+/**
+ * Paired rounds of health and the comparison, back to back with the order alternating, each
+ * ROUND_SECONDS long: other work on a shared machine changes from second to second, and two
+ * 5-s runs taken one after the other can see very different machines. Each round's ratio
+ * compares routes that saw about the same load; the median of the rounds is printed beside
+ * the 5-s runs' ratio.
+ */
+const PAIRED_ROUNDS = 6;
+const ROUND_SECONDS = 2;
 
 type Figures = { label: string; rate: number; p50: number; p99: number; errors: number; statuses: string };
 
@@ -39,6 +50,51 @@ async function load(
     errors: r.errors + r.timeouts + (label.includes("404") ? r["2xx"] : r.non2xx),
     statuses,
   };
+}
+
+/** The median of `values` (the mean of the middle two for an even count). */
+function median(values: number[]): number {
+  const sorted = [...values].sort((a, b) => a - b);
+  const middle = Math.floor(sorted.length / 2);
+  return sorted.length % 2 ? sorted[middle] : (sorted[middle - 1] + sorted[middle]) / 2;
+}
+
+/** One route loaded for ROUND_SECONDS at CONNECTIONS: its rate (completed requests per second). */
+async function roundRate(options: autocannon.Options): Promise<number> {
+  const r = await autocannon({ ...options, connections: CONNECTIONS, duration: ROUND_SECONDS });
+  if (r.non2xx + r.errors + r.timeouts > 0) {
+    throw new Error(`${options.url}: ${r.non2xx} non-2xx, ${r.errors} errors, ${r.timeouts} timeouts`);
+  }
+  return r.requests.total / ROUND_SECONDS;
+}
+
+/** Health and the comparison in PAIRED_ROUNDS alternating pairs: each round's two rates. */
+async function pairedRounds(health: autocannon.Options, comparison: autocannon.Options) {
+  const rounds: { health: number; comparison: number }[] = [];
+  for (let n = 0; n < PAIRED_ROUNDS; n++) {
+    if (n % 2 === 0) {
+      const h = await roundRate(health);
+      rounds.push({ health: h, comparison: await roundRate(comparison) });
+    } else {
+      const c = await roundRate(comparison);
+      rounds.push({ health: await roundRate(health), comparison: c });
+    }
+  }
+  return rounds;
+}
+
+/** Requests and connections of the CPU measurement: a fixed count, so none is left in flight. */
+const CPU_REQUESTS = 2000;
+const CPU_CONNECTIONS = 20;
+
+/** CPU ms per request of one route over CPU_REQUESTS requests: this process, PostgreSQL, both. */
+async function cpuPerRequest(options: autocannon.Options, meter: () => CpuTime) {
+  const before = meter();
+  const r = await autocannon({ ...options, connections: CPU_CONNECTIONS, amount: CPU_REQUESTS });
+  const after = meter();
+  const processMs = (after.processMs - before.processMs) / r.requests.total;
+  const postgresMs = (after.postgresMs - before.postgresMs) / r.requests.total;
+  return { processMs, postgresMs, totalMs: processMs + postgresMs };
 }
 
 /** The token of the confirmation link mailed to `email`, from the development mailbox. */
@@ -98,7 +154,7 @@ async function signedIn(origin: string) {
  * ratio is the issue's target (≥ 0.5×).
  */
 export async function run(): Promise<void> {
-  const { server, stop } = await startThrowawayServer();
+  const { server, postmasterPid, stop } = await startThrowawayServer();
   try {
     const origin = server.url;
     const { cookie, userId, workspaceId } = await signedIn(origin);
@@ -155,12 +211,16 @@ export async function run(): Promise<void> {
       },
     };
 
+    const healthRequest = { url: `${origin}/api/health` };
+    // A normal signed-in GET, as the web client sends it (no If-None-Match: its answers are no-store).
+    const comparisonRequest = { url: comparisonUrl, headers: { cookie } };
     const baseline = await load("JSON 404, no database (baseline)", { url: `${origin}/api/no-such-route` });
-    const health = await load("GET /api/health", { url: `${origin}/api/health` });
-    const comparison = await load("GET …/comparison, 8 rows, signed in", {
-      url: comparisonUrl,
-      headers: { cookie },
-    });
+    const health = await load("GET /api/health", healthRequest);
+    const comparison = await load("GET …/comparison, 8 rows, signed in", comparisonRequest);
+    const rounds = await pairedRounds(healthRequest, comparisonRequest);
+    const meter = cpuMeter(postmasterPid);
+    const healthCpu = meter && (await cpuPerRequest(healthRequest, meter));
+    const comparisonCpu = meter && (await cpuPerRequest(comparisonRequest, meter));
     const save = await load(
       "PUT …/states/{location}, signed in",
       {
@@ -197,6 +257,27 @@ export async function run(): Promise<void> {
         `saves stored: ${savedVersions} versions, ${saved} superseded revisions   ` +
         `(${SECONDS} s per route on loopback after a 1 s warm-up)`,
     );
+    // A round in which either route completed nothing (the machine stalled) gives no ratio.
+    const counted = rounds.filter((r) => r.health > 0 && r.comparison > 0);
+    const ratios = counted.map((r) => r.comparison / r.health);
+    console.log(
+      `comparison / health in ${PAIRED_ROUNDS} paired ${ROUND_SECONDS}-s rounds (order alternating): median ` +
+        `${median(ratios).toFixed(2)}× (rounds ${ratios.map((r) => r.toFixed(2)).join(", ")}` +
+        `${counted.length < rounds.length ? `; ${rounds.length - counted.length} stalled round(s) left out` : ""}; ` +
+        `median rates: health ${median(counted.map((r) => r.health)).toFixed(0)} req/s, ` +
+        `comparison ${median(counted.map((r) => r.comparison)).toFixed(0)} req/s)`,
+    );
+    if (healthCpu && comparisonCpu) {
+      const show = (c: typeof healthCpu) =>
+        `${c.processMs.toFixed(2)} + ${c.postgresMs.toFixed(2)} = ${c.totalMs.toFixed(2)} ms`;
+      // The load generator runs in this process too, so "this process" includes its share.
+      console.log(
+        `CPU per request, ${CPU_REQUESTS} requests at ${CPU_CONNECTIONS} connections (this process incl. the load generator + PostgreSQL): ` +
+          `health ${show(healthCpu)}, comparison ${show(comparisonCpu)}; ` +
+          `health / comparison ${(healthCpu.totalMs / comparisonCpu.totalMs).toFixed(2)}× ` +
+          `(what the ratio of rates tends to when CPU is the limit)`,
+      );
+    }
   } finally {
     await stop();
   }

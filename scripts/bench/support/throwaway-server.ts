@@ -13,7 +13,12 @@ import { ensureWebBuild, webDist } from "../../web-build";
  * A benchmark's own world: a throwaway cluster, a migrated database, a current web build
  * and the real server on a free port. `stop()` removes all of it.
  */
-export async function startThrowawayServer(): Promise<{ server: RunningServer; stop: () => Promise<void> }> {
+export async function startThrowawayServer(): Promise<{
+  server: RunningServer;
+  /** The throwaway cluster's postmaster, for benchmarks that read PostgreSQL's CPU time. */
+  postmasterPid: number;
+  stop: () => Promise<void>;
+}> {
   const baseDir = await mkdtemp(path.join(os.tmpdir(), "sigmacube-bench-pg-"));
   const cluster = await startCluster({ baseDir, durable: false });
   await ensureDatabase(cluster.adminUrl, "sigmacube_bench");
@@ -27,6 +32,7 @@ export async function startThrowawayServer(): Promise<{ server: RunningServer; s
   });
   return {
     server,
+    postmasterPid: cluster.pid,
     stop: async () => {
       await server.close();
       await cluster.stop("immediate");

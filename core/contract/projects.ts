@@ -249,6 +249,7 @@ export const AUDIT_ENTITY_TYPES = [
   "stress-state",
   "combination",
   "material",
+  "record",
 ] as const;
 
 export const auditQuerySchema = z.object({
@@ -267,7 +268,7 @@ export const auditEventSchema = z.object({
   projectId: z.uuid().nullable(),
   entityType: z.enum(AUDIT_ENTITY_TYPES),
   entityId: z.uuid(),
-  action: z.enum(["create", "update", "delete", "restore", "import", "purge"]),
+  action: z.enum(["create", "update", "delete", "restore", "import", "purge", "submit", "return", "approve"]),
   summary: z.string(),
   changes: z.record(z.string(), z.unknown()).nullable(),
 });

@@ -121,7 +121,6 @@ export function approveRecordHandler(
     const { comment } = res.locals.input.body;
     const outcome = await context.sequelize.transaction(async (transaction) => {
       const { project, record } = await lockedRecord(workspace.id, res.locals.input.params, transaction);
-      assertSubmitted(record, "approved");
       const earlier = (await approvalsOf([record.id], transaction)).get(record.id)!;
       if (earlier.some((a) => a.approverId === user.id)) {
         throw errors.conflictWithId(
@@ -129,6 +128,7 @@ export function approveRecordHandler(
           `You have approved record ${record.number} already; a second approval must come from someone else.`,
         );
       }
+      assertSubmitted(record, "approved");
       assertMayApprove(record, user.id);
       await insertRecordApproval(
         { recordId: record.id, approverId: user.id, approverName: user.name, comment },

@@ -9,6 +9,8 @@ import {
 } from "../../core/contract/records";
 import { canonicalJson, recordHash } from "../../api/domain/records/content";
 import { Membership } from "../../db/models/membership";
+import * as recordsMigration from "../../db/migrations/20261203-1440-create-calculation-records";
+import * as auditActions from "../../db/migrations/20261203-1441-audit-record-actions";
 import { buildTestApp } from "../support/app";
 import { signUp, type TestAccount } from "../support/accounts";
 import { mailCount, waitForMail } from "../support/mailbox";
@@ -416,5 +418,60 @@ describe("a frozen record after the project changes", () => {
     await team.reviewer.agent.post(`${otherBase}/records/${records[0]}/approve`).send({}).expect(404);
     await team.viewer.agent.get(`${base}/records/${records[1]}/diff?against=${other.projectId}`).expect(404);
     await team.outsider.agent.get(`${base}/records`).expect(404);
+  });
+});
+
+describe("the migrations that add calculation records", () => {
+  it("when they are undone and applied again, then the tables and the audit actions go and come back, and the frozen-content trigger works again (up → down → up)", async () => {
+    const sequelize = context.sequelize;
+    const rollback = new Error("roll back the schema test");
+    const seen: unknown[] = [];
+    await expect(
+      sequelize.transaction(async (transaction) => {
+        const migrationContext = { queryInterface: sequelize.getQueryInterface(), sequelize, transaction };
+        const tables = async () =>
+          (
+            await sequelize.query<{ table_name: string }>(
+              `select table_name from information_schema.tables where table_name like 'record%' or table_name = 'calculation_records' order by table_name`,
+              { transaction, type: QueryTypes.SELECT },
+            )
+          ).map((t) => t.table_name);
+        await auditActions.down(migrationContext);
+        await recordsMigration.down(migrationContext);
+        seen.push(await tables());
+        await recordsMigration.up(migrationContext);
+        await auditActions.up(migrationContext);
+        seen.push(await tables());
+        const [project] = await sequelize.query<{ id: string }>(
+          `insert into projects (workspace_id, name, requirements) values ($1, 'Migration check', '[]') returning id`,
+          { bind: [team.workspaceId], transaction, type: QueryTypes.SELECT },
+        );
+        await sequelize.query(
+          `insert into calculation_records (project_id, workspace_id, number, revision, status, reason, content, hash,
+             engine_version, required_approvals, submitted_by_name, submitted_at)
+           values ($1, $2, 1, 'A', 'submitted', 'r', '{}'::jsonb, repeat('a', 64), 'x', 1, 'Someone', now())`,
+          { bind: [project.id, team.workspaceId], transaction },
+        );
+        await sequelize.query(`savepoint before_update`, { transaction });
+        try {
+          await sequelize.query(`update calculation_records set reason = 'changed' where project_id = $1`, {
+            bind: [project.id],
+            transaction,
+          });
+          seen.push("updated");
+        } catch (error) {
+          seen.push((error as Error).message);
+          await sequelize.query(`rollback to savepoint before_update`, { transaction });
+        }
+        await sequelize.query(`update calculation_records set status = 'returned' where project_id = $1`, {
+          bind: [project.id],
+          transaction,
+        });
+        throw rollback;
+      }),
+    ).rejects.toBe(rollback);
+    expect(seen[0]).toEqual([]);
+    expect(seen[1]).toEqual(["calculation_records", "record_approvals", "record_comments", "record_events"]);
+    expect(seen[2]).toMatch(/frozen/);
   });
 });

@@ -475,3 +475,53 @@ describe("the migrations that add calculation records", () => {
     expect(seen[2]).toMatch(/frozen/);
   });
 });
+
+describe("freezing while the project is being edited", () => {
+  it("when states are saved while a record is submitted, then the frozen inputs and the frozen comparison describe the same revisions", async () => {
+    const made = await projectWithLocations(
+      team,
+      { name: "Busy vessel", defaultMaterial: { kind: "workspace", id: materialId } },
+      ["a", "b", "c"],
+    );
+    const busy = wsPath(team, `/projects/${made.projectId}`);
+    const created = await team.editor.agent
+      .post(`${busy}/load-cases`)
+      .send({
+        name: "Operating",
+        states: made.locationIds.map((locationId) => ({ locationId, stress: mpa(50, 10) })),
+      })
+      .expect(201);
+    const caseId = created.body.loadCase.id as string;
+    let version = created.body.loadCase.version as number;
+    let saved = 0;
+    const edits = (async () => {
+      for (let i = 0; i < 12; i += 1) {
+        const response = await team.editor2.agent
+          .put(`${busy}/load-cases/${caseId}/states/${made.locationIds[i % 3]}`)
+          .send({ version, stress: mpa(60 + i, 10) });
+        if (response.status === 200) {
+          version = response.body.loadCase.version;
+          saved += 1;
+        }
+      }
+    })();
+    const submitted = await team.editor.agent.post(`${busy}/records`).send({ reason: "Busy" }).expect(201);
+    await edits;
+    const detail = recordDetailSchema.parse(
+      (await team.viewer.agent.get(`${busy}/records/${submitted.body.id}`).expect(200)).body,
+    );
+    const { content } = detail;
+    const locationId = (key: string) => content.ids.locations[key];
+    for (const s of content.stateRevisions) {
+      const row = content.results.rows.find(
+        (r) => r.kind === "load-case" && r.locationId === locationId(s.location),
+      )!;
+      const input = content.inputs.loadCases[0].states.find((x) => x.location === s.location)!;
+      // The comparison row was computed from the same revision the inputs hold, with the same numbers.
+      expect(row.stateRevision).toBe(s.revision);
+      expect(row.componentsPa.xx).toBe(input.componentsPa.xx);
+    }
+    expect(content.stateRevisions).toHaveLength(3);
+    expect(saved).toBe(12);
+  });
+});

@@ -29,7 +29,9 @@ export async function projectReview(sequelize: Sequelize, project: ProjectRow): 
   let revision = "A";
   if (latestHead) {
     revision =
-      latestHead.status === "approved" && differs ? nextRevisionLetter(latestHead.revision) : latestHead.revision;
+      latestHead.status === "approved" && differs
+        ? nextRevisionLetter(latestHead.revision)
+        : latestHead.revision;
   }
   return {
     status: projectReviewStatus(latestHead, differs),

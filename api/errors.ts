@@ -27,6 +27,8 @@ export const errors = {
   routeNotFound: (method: string, path: string) =>
     new HttpError(404, "route_not_found", `There is no API route ${method} ${path}.`),
   conflict: (message: string, details?: unknown) => new HttpError(409, "conflict", message, details),
+  /** A check or approval refused because the caller is not independent of the record (says why). */
+  independence: (message: string) => new HttpError(403, "independence", message),
   /** Send with a `Retry-After: seconds` header (the rate limiter sets it). */
   tooManyRequests: (retryAfterSeconds: number) =>
     new HttpError(

@@ -10,6 +10,7 @@ import { ensureDatabase } from "../db/ensure-database";
 import { migrate } from "../db/migrate";
 import { initModels } from "../db/models";
 import { seedDemo } from "../db/seed";
+import { freezeForSeed } from "../api/domain/records/seed-freeze";
 import { createSequelize } from "../db/sequelize";
 import { repoRoot } from "./web-build";
 
@@ -47,7 +48,7 @@ export async function prepareDatabase(
     const applied = await migrate(sequelize);
     say(applied.length ? `applied migrations: ${applied.join(", ")}` : "database schema is up to date");
     initModels(sequelize);
-    const seed = await seedDemo(sequelize, say);
+    const seed = await seedDemo(sequelize, say, freezeForSeed(sequelize));
     if (seed.seeded) say(`demo data seeded (seed version ${seed.version})`);
   } finally {
     await sequelize.close();

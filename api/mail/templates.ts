@@ -127,3 +127,66 @@ export function accountExistsMail(options: {
     footnote: "If this was not you, ignore this mail: your account stays as it is.",
   });
 }
+
+/** What a review mail says about the record it concerns. */
+type RecordMailFacts = {
+  to: string;
+  name: string;
+  projectName: string;
+  recordNumber: number;
+  revision: string;
+  url: string;
+};
+
+const recordLabel = (facts: RecordMailFacts) => `record ${facts.recordNumber}, revision ${facts.revision}`;
+
+/** To each reviewer and owner: a record waits for their check. */
+export function recordSubmittedMail(
+  facts: RecordMailFacts & { submitterName: string; reason: string },
+): OutgoingMail {
+  return layout({
+    to: facts.to,
+    subject: `${facts.projectName}: ${recordLabel(facts)} is submitted for check`,
+    greeting: `Hello ${facts.name},`,
+    paragraphs: [
+      `${facts.submitterName} submitted the calculation of "${facts.projectName}" for check as ${recordLabel(facts)}.`,
+      `What changed and why: ${facts.reason}`,
+      "Open the project to read the frozen record, comment on it, and return it with comments or approve it. Someone who submitted a record or last edited its inputs cannot approve it.",
+    ],
+    action: { label: "Open the project", url: facts.url },
+    footnote: `You receive this because you are a reviewer or owner of the workspace that holds "${facts.projectName}".`,
+  });
+}
+
+/** To the submitter: their record came back with comments. */
+export function recordReturnedMail(
+  facts: RecordMailFacts & { checkerName: string; comment: string },
+): OutgoingMail {
+  return layout({
+    to: facts.to,
+    subject: `${facts.projectName}: ${recordLabel(facts)} was returned with comments`,
+    greeting: `Hello ${facts.name},`,
+    paragraphs: [
+      `${facts.checkerName} returned ${recordLabel(facts)} of "${facts.projectName}" with comments.`,
+      `Their comment: ${facts.comment}`,
+      "Open the project to read and answer the comments, change what is needed and submit it again.",
+    ],
+    action: { label: "Open the project", url: facts.url },
+    footnote: "You receive this because you submitted the record.",
+  });
+}
+
+/** To the submitter: their record has every approval it needs. */
+export function recordApprovedMail(facts: RecordMailFacts & { approverNames: string[] }): OutgoingMail {
+  return layout({
+    to: facts.to,
+    subject: `${facts.projectName}: ${recordLabel(facts)} is approved`,
+    greeting: `Hello ${facts.name},`,
+    paragraphs: [
+      `${recordLabel(facts)[0].toUpperCase()}${recordLabel(facts).slice(1)} of "${facts.projectName}" is approved by ${facts.approverNames.join(" and ")}.`,
+      "The approved record stays as it was submitted. A later change to the project is checked as the next revision.",
+    ],
+    action: { label: "Open the project", url: facts.url },
+    footnote: "You receive this because you submitted the record.",
+  });
+}

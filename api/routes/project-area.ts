@@ -8,13 +8,14 @@ import { loadCaseRoutes } from "./load-cases";
 import { locationRoutes } from "./locations";
 import { materialRoutes } from "./materials";
 import { projectTransferRoutes } from "./project-transfer";
+import { recordRoutes } from "./records";
 import { trashRoutes } from "./trash";
 import { projectRoutes } from "./projects";
 
 /**
  * Every route of the project area (projects, locations, load cases and their linearizations,
- * combinations, materials,
- * comparison, audit, trash, import/export), added to the route table in one line.
+ * combinations, materials, comparison, audit, trash, import/export, review and records), added
+ * to the route table in one line.
  */
 export function projectAreaRoutes(context: AppContext): AnyRoute[] {
   return [
@@ -28,5 +29,6 @@ export function projectAreaRoutes(context: AppContext): AnyRoute[] {
     ...auditRoutes(),
     ...trashRoutes(context),
     ...projectTransferRoutes(context),
+    ...recordRoutes(context),
   ];
 }

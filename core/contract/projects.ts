@@ -250,6 +250,7 @@ export const AUDIT_ENTITY_TYPES = [
   "combination",
   "material",
   "linearization",
+  "record",
 ] as const;
 
 export const auditQuerySchema = z.object({
@@ -268,7 +269,7 @@ export const auditEventSchema = z.object({
   projectId: z.uuid().nullable(),
   entityType: z.enum(AUDIT_ENTITY_TYPES),
   entityId: z.uuid(),
-  action: z.enum(["create", "update", "delete", "restore", "import", "purge"]),
+  action: z.enum(["create", "update", "delete", "restore", "import", "purge", "submit", "return", "approve"]),
   summary: z.string(),
   changes: z.record(z.string(), z.unknown()).nullable(),
   /** The changes in words: each field with its value before and after (null: none), names instead of ids. */

@@ -1,8 +1,16 @@
 import { DataTypes, Model, type Sequelize } from "sequelize";
 
-export type AuditAction = "create" | "update" | "delete" | "restore" | "import" | "purge";
+export type AuditAction =
+  "create" | "update" | "delete" | "restore" | "import" | "purge" | "submit" | "return" | "approve";
 export type AuditEntityType =
-  "project" | "location" | "load-case" | "stress-state" | "combination" | "material" | "linearization";
+  | "project"
+  | "location"
+  | "load-case"
+  | "stress-state"
+  | "combination"
+  | "material"
+  | "linearization"
+  | "record";
 
 /** One entry of the audit trail (table `audit_events`): who changed what, when, and how. */
 export class AuditEvent extends Model {

@@ -7,6 +7,7 @@ import { initInvitation } from "./invitation";
 import { initMembership } from "./membership";
 import { initPasswordResetToken } from "./password-reset-token";
 import { initProjectModels } from "./project-models";
+import { initRecordModels } from "./record-models";
 import { initSession } from "./session";
 import { initShareLink } from "./share-link";
 import { initUser } from "./user";
@@ -26,6 +27,7 @@ export function initModels(sequelize: Sequelize) {
     ShareLink: initShareLink(sequelize),
     DevMailMessage: initDevMailMessage(sequelize),
     ...initProjectModels(sequelize),
+    ...initRecordModels(sequelize),
   };
   associateAccountModels();
   return models;

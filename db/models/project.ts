@@ -23,6 +23,8 @@ export class Project extends Model {
   /** Built-in published grade used where a location names none (or null). */
   declare defaultPublishedMaterial: string | null;
   declare version: number;
+  /** How many independent approvals a calculation record of the project needs (1 or 2). */
+  declare requiredApprovals: number;
   declare createdBy: string | null;
   declare updatedBy: string | null;
   declare deletedAt: Date | null;
@@ -45,6 +47,7 @@ export function initProject(sequelize: Sequelize) {
       defaultMaterialId: { type: DataTypes.UUID, allowNull: true },
       defaultPublishedMaterial: { type: DataTypes.STRING(40), allowNull: true },
       version: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 1 },
+      requiredApprovals: { type: DataTypes.SMALLINT, allowNull: false, defaultValue: 1 },
       createdBy: { type: DataTypes.UUID, allowNull: true },
       updatedBy: { type: DataTypes.UUID, allowNull: true },
       deletedAt: { type: DataTypes.DATE, allowNull: true },

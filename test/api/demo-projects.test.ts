@@ -3,6 +3,9 @@ import { comparisonSchema } from "../../core/contract/comparison";
 import { ensureDatabase } from "../../db/ensure-database";
 import { migrate } from "../../db/migrate";
 import { seedDemo } from "../../db/seed";
+import { freezeForSeed } from "../../api/domain/records/seed-freeze";
+import { recordDetailSchema, recordListSchema } from "../../core/contract/records";
+import { recordHash } from "../../api/domain/records/content";
 import { buildTestApp } from "../support/app";
 import { browserAgent } from "../support/accounts";
 
@@ -12,13 +15,13 @@ describe("the demo seed's projects step", () => {
   let closeApp: () => Promise<void> = async () => {};
   afterAll(() => closeApp());
 
-  it("when the demo is seeded, then the CT-7 projects are there, the hydrostatic test governs at the junction and fails 1.5, and the rest pass", async () => {
+  it("when the demo is seeded, then the CT-7 projects are there, the hydrostatic test governs at the junction and fails 1.5, the rest pass, and the shaft has an approved record and the shell one returned with comments", async () => {
     await ensureDatabase(adminUrl, "sigmacube_seed_projects");
     const { app, context, close } = buildTestApp({ databaseUrl, webDist: null });
     closeApp = close;
     await migrate(context.sequelize);
     const lines: string[] = [];
-    await seedDemo(context.sequelize, (l) => lines.push(l));
+    await seedDemo(context.sequelize, (l) => lines.push(l), freezeForSeed(context.sequelize));
     const line = lines.find((l) => l.includes("ines.okafor-lund@quillon.example"))!;
     const agent = browserAgent(app);
     await agent
@@ -99,5 +102,33 @@ describe("the demo seed's projects step", () => {
 
     const nozzle = await compare("CT-7 nozzle N2 (FE points)");
     expect(nozzle.rows).toEqual([]);
+
+    // The demo's calculation records: the shaft approved by someone other than its originator,
+    // the shell returned with a comment on the record and one on the failing row.
+    const recordsOf = async (name: string) => {
+      const p = projects.find((x: { name: string }) => x.name === name);
+      const base = `/api/workspaces/${workspace.id}/projects/${p.id}`;
+      const { records } = recordListSchema.parse((await agent.get(`${base}/records`).expect(200)).body);
+      expect(records).toHaveLength(1);
+      const detail = recordDetailSchema.parse(
+        (await agent.get(`${base}/records/${records[0].id}`).expect(200)).body,
+      );
+      expect(recordHash(detail.content)).toBe(detail.hash);
+      return detail;
+    };
+    const approved = await recordsOf("CT-7 agitator shaft");
+    expect(approved.status).toBe("approved");
+    expect(approved.submittedBy.name).toBe("Teo Valdric");
+    expect(approved.approvals.map((a) => a.by.name)).toEqual(["Ines Okafor-Lund"]);
+    const returned = await recordsOf("CT-7 shell and heads");
+    expect(returned.status).toBe("returned");
+    expect(returned.returned?.by.name).toBe("Ines Okafor-Lund");
+    expect(returned.submittedBy.name).toBe("Teo Valdric");
+    const rowComment = returned.comments.find((c) => c.rowId !== null)!;
+    const commentedRow = returned.content.results.rows.find((r) => r.rowId === rowComment.rowId)!;
+    expect(`${commentedRow.caseName} @ ${commentedRow.locationName}`).toBe(
+      "Hydrostatic test @ head-to-shell junction",
+    );
+    expect(returned.comments.some((c) => c.rowId === null)).toBe(true);
   });
 });

@@ -17,6 +17,7 @@ import {
   type RoleFixtureFactory,
 } from "../support/role-fixture";
 import { projectAreaRows } from "../support/project-area-matrix";
+import { recordRows } from "../support/records-matrix";
 
 /**
  * The role matrix: every API route × every kind of caller → the expected status.
@@ -206,6 +207,7 @@ const table: Record<string, Row> = {
   },
 
   ...projectAreaRows,
+  ...recordRows,
 };
 
 /** What `who` means for one caller. */

@@ -1,3 +1,4 @@
+import type { Transaction } from "sequelize";
 import {
   PROJECT_EXPORT_FORMAT,
   PROJECT_EXPORT_SCHEMA_VERSION,
@@ -15,8 +16,8 @@ import { termsOf } from "../combinations/terms";
 import { libraryOf, refFromColumns } from "../materials/resolve";
 
 /** The export file of a project ({@link exportProjectWithKeys} without the keys). */
-export async function exportProject(project: ProjectRow): Promise<ProjectExport> {
-  return (await exportProjectWithKeys(project)).file;
+export async function exportProject(project: ProjectRow, transaction?: Transaction): Promise<ProjectExport> {
+  return (await exportProjectWithKeys(project, transaction)).file;
 }
 
 /** Which database id each key of an export file stands for, and the current state rows exported. */
@@ -32,15 +33,18 @@ export type ExportKeys = {
  * (Pa as stored), combinations whose cases are all live, and the library materials the
  * project refers to. Keys are short labels ("m1", "l1", "c1") made for the file; `keys` maps
  * each database id to its key, for a frozen record that must match rows across revisions.
+ * Inside `transaction` every read sees that transaction's snapshot (a record freezes its
+ * content in one REPEATABLE READ transaction, so no write lands between two of these reads).
  */
 export async function exportProjectWithKeys(
   project: ProjectRow,
+  transaction?: Transaction,
 ): Promise<{ file: ProjectExport; keys: ExportKeys }> {
   const [locations, cases, combinations, library] = await Promise.all([
-    listLiveLocations(project.id),
-    listLiveLoadCases(project.id),
-    listLiveCombinations(project.id),
-    libraryOf(project.workspaceId),
+    listLiveLocations(project.id, transaction),
+    listLiveLoadCases(project.id, transaction),
+    listLiveCombinations(project.id, transaction),
+    libraryOf(project.workspaceId, transaction),
   ]);
   const materialKeys = new Map<string, string>();
   const exportRef = (ref: MaterialRef | null): ProjectExport["project"]["defaultMaterial"] => {
@@ -55,8 +59,11 @@ export async function exportProjectWithKeys(
   );
   const locationKeys = new Map(locations.map((l, i) => [l.id, `l${i + 1}`]));
   const caseKeys = new Map(cases.map((c, i) => [c.id, `c${i + 1}`]));
-  const states = await currentStatesOf(cases.map((c) => c.id));
-  const terms = await termsOf(combinations);
+  const states = await currentStatesOf(
+    cases.map((c) => c.id),
+    transaction,
+  );
+  const terms = await termsOf(combinations, transaction);
 
   const exportedLocations = locations.map((l) => ({
     key: locationKeys.get(l.id)!,

@@ -1,5 +1,5 @@
 import { createHash } from "node:crypto";
-import type { Sequelize } from "sequelize";
+import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
 import { ENGINE_NAME, ENGINE_VERSION } from "../../../core/constants/engine";
 import type { Comparison } from "../../../core/contract/comparison";
 import {
@@ -8,7 +8,12 @@ import {
   type RecordContent,
 } from "../../../core/contract/records";
 import type { ProjectRow } from "../../../db/repositories/projects";
-import { comparisonInputFrom, loadComparisonSource } from "../comparison/load";
+import {
+  comparisonInputFrom,
+  loadComparisonSource,
+  PROJECT_SQL,
+  type ComparisonSource,
+} from "../comparison/load";
 import { comparisonPageWithSections } from "../comparison/sections";
 import { exportProjectWithKeys } from "../projects/export";
 
@@ -21,14 +26,20 @@ const invert = (m: Map<string, string>): Record<string, string> =>
  * (every row) computed with this process's engine. The comparison runs through paging.ts, so a
  * large project yields the event loop between runs as the comparison route does.
  *
- * The inputs and the comparison are read by separate statements; a caller that freezes a record
- * must make sure no write landed in between (e.g. compare the project's inputs version before and
- * after, or hold a REPEATABLE READ transaction).
+ * The inputs and the comparison are read by separate statements. Pass a REPEATABLE READ
+ * `transaction` (see freeze.ts) and every statement reads the same snapshot, so no write can
+ * land between the inputs and the comparison; without one, the reads are independent.
  */
-export async function buildRecordContent(sequelize: Sequelize, project: ProjectRow): Promise<RecordContent> {
+export async function buildRecordContent(
+  sequelize: Sequelize,
+  project: ProjectRow,
+  transaction?: Transaction,
+): Promise<RecordContent> {
   const [{ file, keys }, source] = await Promise.all([
-    exportProjectWithKeys(project),
-    loadComparisonSource(sequelize, project.workspaceId, project.id),
+    exportProjectWithKeys(project, transaction),
+    transaction
+      ? comparisonSourceIn(sequelize, project, transaction)
+      : loadComparisonSource(sequelize, project.workspaceId, project.id),
   ]);
   if (source === null) throw new Error(`project ${project.id} vanished while its record was taken`);
   const input = comparisonInputFrom(project.id, source.source);
@@ -61,6 +72,23 @@ export async function buildRecordContent(sequelize: Sequelize, project: ProjectR
       })),
     results: results satisfies Comparison,
   };
+}
+
+/**
+ * The comparison's input text read inside `transaction` (the prepared statement of
+ * loadComparisonSource runs on a pooled connection outside any transaction).
+ */
+async function comparisonSourceIn(
+  sequelize: Sequelize,
+  project: ProjectRow,
+  transaction: Transaction,
+): Promise<ComparisonSource | null> {
+  const [row] = await sequelize.query<ComparisonSource>(PROJECT_SQL, {
+    bind: [project.id, project.workspaceId],
+    type: QueryTypes.SELECT,
+    transaction,
+  });
+  return row ?? null;
 }
 
 /** JSON with every object's keys in sorted order, so equal content always hashes the same. */

@@ -21,6 +21,8 @@ export function RequiredApprovals({ current, role }: { current: Count; role: Rol
       </div>
     );
   }
+  // While the owner's choice is on its way, the radio shows it rather than jump back.
+  const shown = (update.isPending ? update.variables?.requiredApprovals : undefined) ?? current;
   return (
     <fieldset className="space-y-1 px-3 py-2 text-[14px]">
       <legend className="sr-only">Approvals a record needs</legend>
@@ -30,7 +32,7 @@ export function RequiredApprovals({ current, role }: { current: Count; role: Rol
             type="radio"
             name="required-approvals"
             value={n}
-            checked={current === n}
+            checked={shown === n}
             disabled={update.isPending}
             onChange={() => update.mutate({ requiredApprovals: n })}
           />

@@ -113,13 +113,17 @@ export function FrozenResults({
                   {isOpen && (
                     <tr id={panelId}>
                       <td colSpan={7} className="bg-paper px-3 py-2">
-                        <CommentThreads
-                          threads={rowThreads}
-                          rowId={r.rowId}
-                          newLabel={`Comment on ${r.name}`}
-                          ids={ids}
-                          permission={permission}
-                        />
+                        {/* Held at the box's left edge and within the screen, so on a phone the
+                            comments stay in view however far the table is scrolled sideways. */}
+                        <div className="sticky left-3 max-w-[calc(100vw-4rem)] sm:max-w-3xl">
+                          <CommentThreads
+                            threads={rowThreads}
+                            rowId={r.rowId}
+                            newLabel={`Comment on ${r.name}`}
+                            ids={ids}
+                            permission={permission}
+                          />
+                        </div>
                       </td>
                     </tr>
                   )}

@@ -70,11 +70,12 @@ export function frozenInputs(content: RecordContent): FrozenInputs {
       const revision = content.stateRevisions.find((r) => r.loadCase === c.key && r.location === s.location);
       return {
         label: `${c.name} at ${locationName(s.location)}`,
-        value: STRESS_COMPONENTS.map(
-          (k) => `${COMPONENT_SYMBOLS[k].short} ${formatStress(s.componentsPa[k], s.unit)}`,
-        ).join("  "),
+        value:
+          STRESS_COMPONENTS.map(
+            (k) => `${COMPONENT_SYMBOLS[k].short} ${formatStress(s.componentsPa[k], s.unit)}`,
+          ).join("  ") + ` ${s.unit}`,
         detail:
-          `${s.unit}; ${c.category || "no category"}` +
+          `${c.category || "no category"}` +
           (revision ? `; revision ${revision.revision}, saved ${formatDateTime(revision.savedAt)}` : "") +
           (s.note ? `; ${s.note}` : ""),
       };

@@ -41,8 +41,8 @@ export const recordStatusWords = (status: RecordStatus): StatusWords => RECORD[s
 /** A mark beside the status word, so the status never rests on colour alone. */
 export const STATUS_MARK: Readonly<Record<ProjectReviewStatus | RecordStatus, string>> = {
   "in-work": "✎",
-  submitted: "⧗",
+  submitted: "→",
   returned: "↩",
   approved: "✓",
-  superseded: "⤓",
+  superseded: "↓",
 };

@@ -46,7 +46,7 @@ export function RecordsPage() {
         </p>
         {readOnly && <p className="mt-1 max-w-3xl text-sm text-graphite-soft">{readOnly}</p>}
       </header>
-      <ReviewStatus />
+      <ReviewStatus linkToRecords={false} />
       <Panel id="revisions" index="1" title="Revision table" subtitle="newest first">
         <RevisionTable records={records.data} workspaceId={workspaceId} projectId={projectId} />
       </Panel>

@@ -17,7 +17,7 @@ import { TextForm } from "./TextForm";
  * the revision, whether the results on screen differ from the last approved record, a link to the
  * records, and "Submit for check" (asking what changed and why) for editors and owners.
  */
-export function ReviewStatus() {
+export function ReviewStatus({ linkToRecords = true }: { linkToRecords?: boolean } = {}) {
   const { workspaceId = "", projectId = "" } = useParams();
   const role = useWorkspaceRole(workspaceId);
   const review = useReview(workspaceId, projectId);
@@ -51,9 +51,11 @@ export function ReviewStatus() {
         <span className="text-[14px] text-graphite" data-testid="review-revision">
           {s.revision}
         </span>
-        <Link to={records} className="ml-auto text-[14px] text-ink underline-offset-2 hover:underline">
-          Records and sign-off
-        </Link>
+        {linkToRecords && (
+          <Link to={records} className="ml-auto text-[14px] text-ink underline-offset-2 hover:underline">
+            Records and sign-off
+          </Link>
+        )}
       </div>
       <p className="text-[14px] text-graphite-soft">{s.next}</p>
       {s.differs && (

@@ -67,7 +67,7 @@ describe.skipIf(!serverHasRecords)("review and sign-off in the browser", () => {
         headers: { Origin: origin },
       },
     );
-    expect(saved.status()).toBe(200);
+    expect(saved.status()).toBeLessThan(300);
   }
 
   it("when the originator submits, a checker comments and returns, the originator answers, changes a state and resubmits, and two checkers approve, then the approved record shows the diff and the signatures", async () => {
@@ -145,11 +145,12 @@ describe.skipIf(!serverHasRecords)("review and sign-off in the browser", () => {
     await rui.getByRole("button", { name: "Return with comments" }).last().click();
     await rui.getByTestId("record-status").getByText("Returned with comments").waitFor();
 
-    // The originator changes the state and resubmits from the comparison page.
+    // The project page says it came back; the originator changes the state and resubmits from the comparison page.
+    await eda.goto(`${world.server.url}${team.projectPath}`, { waitUntil: "networkidle" });
+    await eda.getByRole("region", { name: "Review status" }).getByText("Returned with comments").waitFor();
     await saveHydroState(175);
     await eda.goto(`${world.server.url}${team.projectPath}/comparison`, { waitUntil: "networkidle" });
     const again = eda.getByRole("region", { name: "Review status" });
-    await again.getByText("Returned with comments").waitFor();
     await again.getByRole("button", { name: "Submit for check" }).click();
     await again
       .getByLabel("What changed and why")

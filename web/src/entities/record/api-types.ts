@@ -1,5 +1,4 @@
 import { z } from "zod";
-import { verdictSchema } from "../../../../core/contract/comparison";
 import { recordContentSchema } from "../../../../core/contract/records";
 
 /*
@@ -10,8 +9,8 @@ import { recordContentSchema } from "../../../../core/contract/records";
  * are dropped by zod's default object parsing, so an added field never breaks a page.
  */
 
-/** A person as the API names them everywhere: id and display name. */
-export const recordPersonSchema = z.object({ id: z.string(), name: z.string() });
+/** A person named on a record: id (null once their account is gone; the name stays) and name. */
+export const recordPersonSchema = z.object({ id: z.string().nullable(), name: z.string() });
 export type RecordPerson = z.infer<typeof recordPersonSchema>;
 
 /** Where a project stands in its review (the product's own words, shown through features/records/model). */
@@ -41,6 +40,8 @@ export const recordSummarySchema = z.object({
   submittedAt: z.string(),
   approvals: z.array(z.object({ by: recordPersonSchema, at: z.string(), comment: z.string().nullish() })),
   returned: z.object({ by: recordPersonSchema, at: z.string(), comment: z.string() }).nullable(),
+  /** When the last required approval was given; absent or null until then. */
+  approvedAt: z.string().nullish(),
 });
 export type RecordSummary = z.infer<typeof recordSummarySchema>;
 
@@ -72,7 +73,10 @@ export const recordCommentSchema = z.object({
 export type RecordComment = z.infer<typeof recordCommentSchema>;
 
 export const recordEventSchema = z.object({
+  /** The record's status after the event. */
   status: recordStatusSchema,
+  /** What happened (one approval of two leaves the status "submitted"). */
+  action: z.enum(["submit", "approve", "return", "supersede"]).nullish(),
   by: recordPersonSchema,
   at: z.string(),
   note: z.string().nullish(),
@@ -97,7 +101,8 @@ export const inputChangeSchema = z.object({
 });
 export type InputChange = z.infer<typeof inputChangeSchema>;
 
-const verdictAtSchema = z.object({ verdict: verdictSchema, factor: z.number().nullable() }).nullable();
+/** The verdict word as the API sends it ("pass", "close", "fail"); kept as text so a new one still shows. */
+const verdictAtSchema = z.object({ verdict: z.string(), factor: z.number().nullable() }).nullable();
 
 export const verdictChangeSchema = z.object({
   rowId: z.string(),

@@ -2,7 +2,8 @@ import { formatFactor } from "../../../../../core/contract/comparison";
 import { CRITERION_LABELS, type CriterionName } from "../../../../../core/contract/projects";
 import type { InputChange, RecordDiff, VerdictChange } from "../../../entities/record/api-types";
 
-const VERDICT_WORD = { pass: "passes", close: "close", fail: "fails" } as const;
+const VERDICT_WORD: Readonly<Record<string, string>> = { pass: "passes", close: "close", fail: "fails" };
+const VERDICT_RANK: Readonly<Record<string, number>> = { pass: 0, close: 1, fail: 2 };
 
 const KIND_WORD: Readonly<Record<InputChange["kind"], string>> = {
   state: "State",
@@ -17,7 +18,7 @@ const criterionLabel = (criterion: string) => CRITERION_LABELS[criterion as Crit
 
 function verdictAt(v: VerdictChange["from"]): string {
   if (!v) return "not rated";
-  return `${VERDICT_WORD[v.verdict]} (SF ${formatFactor(v.factor)})`;
+  return `${VERDICT_WORD[v.verdict] ?? v.verdict} (SF ${formatFactor(v.factor)})`;
 }
 
 /** "Hydrostatic test at mid-shell, Tresca: passes (SF 1.58) → fails (SF 1.20)". */
@@ -27,7 +28,7 @@ export function verdictChangeSentence(c: VerdictChange): string {
 
 /** How bad the change is for ordering: a new failure first, then anything that got worse, then the rest. */
 function severity(c: VerdictChange): number {
-  const rank = (v: VerdictChange["from"]) => (v ? { pass: 0, close: 1, fail: 2 }[v.verdict] : -1);
+  const rank = (v: VerdictChange["from"]) => (v ? (VERDICT_RANK[v.verdict] ?? -1) : -1);
   if (c.to?.verdict === "fail") return 0;
   if (rank(c.to) > rank(c.from)) return 1;
   return 2;

@@ -23,4 +23,27 @@ describe("record events", () => {
       ["Approved — Rui Tanager", null],
     ]);
   });
+
+  it("when the first of two approvals is given, then the event says approved though the record still waits", () => {
+    const lines = eventLines([
+      {
+        status: "submitted",
+        action: "approve",
+        by: person(IDS.checker, "Rui Tanager"),
+        at: "2026-12-02T09:00:00.000Z",
+        note: "",
+      },
+      {
+        status: "approved",
+        action: "approve",
+        by: person(IDS.editor, "Sol Brannigan"),
+        at: "2026-12-02T10:00:00.000Z",
+        note: "",
+      },
+    ]);
+    expect(lines.map((l) => [l.text, l.note])).toEqual([
+      ["Approved (more approvals needed) — Rui Tanager", null],
+      ["Approved (record approved) — Sol Brannigan", null],
+    ]);
+  });
 });

@@ -21,10 +21,8 @@ export type RevisionRow = {
 /** When and by whom the record was returned or approved. */
 function decision(r: RecordSummary): string {
   if (r.returned) return `returned ${formatDateTime(r.returned.at)} by ${r.returned.by.name}`;
-  if (r.status === "approved" && r.approvals.length > 0) {
-    const last = r.approvals[r.approvals.length - 1];
-    return `approved ${formatDateTime(last.at)}`;
-  }
+  if (r.status === "approved" && (r.approvedAt || r.approvals.length > 0))
+    return `approved ${formatDateTime(r.approvedAt ?? r.approvals[r.approvals.length - 1].at)}`;
   return "—";
 }
 

@@ -193,7 +193,7 @@ describe.skipIf(!serverHasRecords)("review and sign-off in the browser", () => {
     // The revision table lists both records; the first was returned, the second approved.
     await owner.reload({ waitUntil: "networkidle" });
     const rows = owner.getByTestId("revision-table").locator("tbody tr");
-    await rows.first().getByText("Approved").waitFor();
+    await rows.first().getByText("Approved", { exact: true }).waitFor();
     expect(await rows.count()).toBe(2);
     expect(await rows.nth(1).textContent()).toMatch(/returned .* by Rui Tanager/);
 
@@ -203,12 +203,11 @@ describe.skipIf(!serverHasRecords)("review and sign-off in the browser", () => {
     await eda.getByText("The results shown differ from the last approved record.").waitFor();
   });
 
-  it("when a viewer opens a record, then it reads only, and says who may comment and decide", async () => {
+  it("when a viewer opens a record, then it reads only, and says who may comment", async () => {
     const list = await team.contexts.viewer.request.get(`${world.server.url}/api${team.projectPath}/records`);
     const { records } = (await list.json()) as { records: { id: string }[] };
     expect(records.length).toBeGreaterThan(0);
     const page = await open(team.contexts.viewer, `${team.projectPath}/records/${records[0].id}`);
-    await page.getByText("Only reviewers and owners return a record with comments or approve it.").waitFor();
     expect(
       await page.getByRole("button", { name: /^(Approve|Return with comments|Add comment)$/ }).count(),
     ).toBe(0);

@@ -102,27 +102,37 @@ describe("axe on every page", () => {
     });
   }
 
-  it.skipIf(!serverHasRecords)(
-    "when each role opens the records, a record submitted for check and its print page, then axe finds nothing serious",
-    async () => {
-      const submitted = await team.contexts.editor.request.post(
-        `${server.url}/api${team.projectPath}/records`,
-        {
-          data: { reason: "Submitted for the accessibility check." },
-          headers: { Origin: server.url },
-        },
-      );
-      expect(submitted.status()).toBe(201);
-      const { id } = (await submitted.json()) as { id: string };
-      const addresses = [
-        `${team.projectPath}/records`,
-        `${team.projectPath}/records/${id}`,
-        `${team.projectPath}/records/${id}/report`,
-      ];
-      for (const role of ["owner", "editor", "reviewer", "viewer"] as const)
+  // One record submitted for check, made by the first role's test and read by the others.
+  let recordId: string | undefined;
+  async function submittedRecord(): Promise<string> {
+    if (recordId) return recordId;
+    const submitted = await team.contexts.editor.request.post(
+      `${server.url}/api${team.projectPath}/records`,
+      {
+        data: { reason: "Submitted for the accessibility check." },
+        headers: { Origin: server.url },
+      },
+    );
+    expect(submitted.status()).toBe(201);
+    recordId = ((await submitted.json()) as { id: string }).id;
+    return recordId;
+  }
+
+  // One test per role keeps each within the time limit when the machine is busy (axe takes seconds a page).
+  for (const role of ["owner", "editor", "reviewer", "viewer"] as const) {
+    it.skipIf(!serverHasRecords)(
+      `when ${role === "owner" || role === "editor" ? "an" : "a"} ${role} opens the records, a record submitted for check and its print page, then axe finds nothing serious`,
+      async () => {
+        const id = await submittedRecord();
+        const addresses = [
+          `${team.projectPath}/records`,
+          `${team.projectPath}/records/${id}`,
+          `${team.projectPath}/records/${id}/report`,
+        ];
         expect(await findings(team.contexts[role], server.url, addresses, `a11y-${role}`)).toEqual([]);
-    },
-  );
+      },
+    );
+  }
 
   it("when the project's activity is longer than a screenful, then it grows with the page and the rest opens from a keyboard button", async () => {
     const page = await team.contexts.viewer.newPage();

@@ -59,14 +59,13 @@ describe("each role sees only the controls it may use", () => {
     });
   }
 
-  it("when a reviewer opens the project, then the page says reviewing is coming and offers no edit controls, as for a viewer", async () => {
+  it("when a reviewer opens the project, then the page says they check submitted records and offers no edit controls, as for a viewer", async () => {
     for (const role of ["reviewer", "viewer"] as const) {
       const page = await open(role, team.projectPath);
       await page.getByRole("heading", { name: "CT-7 shell", level: 1 }).waitFor();
       const note = page.getByText(`You are a ${role} here`);
       expect(await note.count()).toBeGreaterThan(0);
-      if (role === "reviewer")
-        await page.getByText(/Reviewing and approving calculations is coming/).waitFor();
+      if (role === "reviewer") await page.getByText(/you check the records submitted for check/).waitFor();
       expect(await page.getByRole("button", { name: /^(Edit|Rename|Enter) / }).count()).toBe(0);
       expect(await page.getByRole("button", { name: /New load case|Add location/ }).count()).toBe(0);
       await page.screenshot({ path: path.join(screenshotDir, `roles-${role}-project.png`), fullPage: true });

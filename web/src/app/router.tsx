@@ -114,16 +114,34 @@ export const router = createBrowserRouter([
           { path: "workspaces/new", element: <NewWorkspacePage /> },
           {
             path: "workspaces/:workspaceId/projects/:projectId",
-            lazy: () =>
-              import("../features/projects/components/ProjectPage").then((m) => ({
-                Component: m.ProjectPage,
-              })),
+            lazy: () => import("./review-composition").then((m) => ({ Component: m.ProjectPageWithReview })),
           },
           {
             path: "workspaces/:workspaceId/projects/:projectId/comparison",
             lazy: () =>
-              import("../features/comparison/components/ComparisonPage").then((m) => ({
-                Component: m.ComparisonPage,
+              import("./review-composition").then((m) => ({ Component: m.ComparisonPageWithReview })),
+          },
+          // The review area: the revision table, one frozen record, and its print page.
+          {
+            path: "workspaces/:workspaceId/projects/:projectId/records",
+            lazy: () =>
+              import("../features/records/components/RecordsPage").then((m) => ({
+                Component: m.RecordsPage,
+              })),
+          },
+          {
+            path: "workspaces/:workspaceId/projects/:projectId/records/:recordId",
+            lazy: () =>
+              import("../features/records/components/RecordPage").then((m) => ({
+                Component: m.RecordPage,
+              })),
+          },
+          {
+            // Falls back to the record's PDF until the report's HTML view (ReportView) is composed in.
+            path: "workspaces/:workspaceId/projects/:projectId/records/:recordId/report",
+            lazy: () =>
+              import("../features/records/components/RecordReportPage").then((m) => ({
+                Component: m.RecordReportPage,
               })),
           },
           {

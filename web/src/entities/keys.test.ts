@@ -10,6 +10,8 @@ import { locationKeys } from "./location/keys";
 import { materialKeys } from "./material/keys";
 import { projectKeys } from "./project/keys";
 import { projectQueryOptions } from "./project/queries";
+import { recordKeys } from "./record/keys";
+import { recordQueryOptions, reviewQueryOptions } from "./record/queries";
 import { trashKeys } from "./trash/keys";
 import { workspaceKeys } from "./workspace/keys";
 import { workspaceQueryOptions } from "./workspace/queries";
@@ -110,5 +112,28 @@ describe("query-key factories", () => {
       loadCaseKeys.list(WS, P),
     ];
     expect(await staleAfter(loadCaseKeys.detail(WS, P, "c1"), [...mine, ...others])).toEqual(mine);
+  });
+
+  it("when an input write invalidates the comparison, then the review (does today differ from the approved record?) goes stale with it, and frozen records do not", async () => {
+    expect(reviewQueryOptions(WS, P).queryKey).toEqual(recordKeys.review(WS, P));
+    expect(recordQueryOptions(WS, P, "r1").queryKey).toEqual(recordKeys.detail(WS, P, "r1"));
+    const frozen = [
+      recordKeys.list(WS, P),
+      recordKeys.detail(WS, P, "r1"),
+      recordKeys.diff(WS, P, "r1", null),
+    ];
+    expect(await staleAfter(comparisonKeys.all(WS, P), [recordKeys.review(WS, P), ...frozen])).toEqual([
+      recordKeys.review(WS, P),
+    ]);
+  });
+
+  it("when a project's records are invalidated, then the list, every record and every diff go stale, another project's do not", async () => {
+    const mine = [recordKeys.list(WS, P), recordKeys.detail(WS, P, "r1"), recordKeys.diff(WS, P, "r2", "r1")];
+    const others = [
+      recordKeys.list(WS, OTHER_P),
+      recordKeys.detail(WS, OTHER_P, "r1"),
+      comparisonKeys.page(WS, P, 1),
+    ];
+    expect(await staleAfter(recordKeys.all(WS, P), [...mine, ...others])).toEqual(mine);
   });
 });

@@ -27,6 +27,14 @@ import {
   updateProjectMutation,
 } from "./project/mutations";
 import { trashKeys } from "./trash/keys";
+import { recordKeys } from "./record/keys";
+import {
+  addCommentMutation,
+  approveRecordMutation,
+  returnRecordMutation,
+  submitRecordMutation,
+  updateReviewMutation,
+} from "./record/mutations";
 import { purgeMutation, restoreMutation } from "./trash/mutations";
 import { workspaceKeys } from "./workspace/keys";
 import {
@@ -417,5 +425,53 @@ describe("workspace mutations", () => {
       NO_CONTENT,
     );
     expect(removed.invalidated).toEqual(expected);
+  });
+});
+
+describe("record mutations", () => {
+  const REC = "0d5f3c1e-0000-4000-8000-000000000005";
+  const statusChange = [recordKeys.review(WS, P), recordKeys.all(WS, P), auditKeys.all(WS)];
+
+  it("when a record is submitted for check, then the review, every record and the audit trail are refreshed", async () => {
+    const { request, invalidated } = await run(
+      (c) => submitRecordMutation(c, WS, P),
+      { reason: "Hydrostatic test state corrected" },
+      REFUSED,
+    );
+    expect(request).toBe(`POST ${base}/records`);
+    expect(invalidated).toEqual(statusChange);
+  });
+
+  it("when a record is returned or approved, then the same three are refreshed (the status moved)", async () => {
+    const returned = await run(
+      (c) => returnRecordMutation(c, WS, P, REC),
+      { comment: "check the lug" },
+      REFUSED,
+    );
+    expect(returned.request).toBe(`POST ${base}/records/${REC}/return`);
+    expect(returned.invalidated).toEqual(statusChange);
+    const approved = await run((c) => approveRecordMutation(c, WS, P, REC), {}, REFUSED);
+    expect(approved.request).toBe(`POST ${base}/records/${REC}/approve`);
+    expect(approved.invalidated).toEqual(statusChange);
+  });
+
+  it("when a comment is written, then only that record and the audit trail are refreshed", async () => {
+    const { request, invalidated } = await run(
+      (c) => addCommentMutation(c, WS, P, REC),
+      { text: "Which gauge?", rowId: null, replyTo: null },
+      REFUSED,
+    );
+    expect(request).toBe(`POST ${base}/records/${REC}/comments`);
+    expect(invalidated).toEqual([recordKeys.detail(WS, P, REC), auditKeys.all(WS)]);
+  });
+
+  it("when the owner changes the required approvals, then the review and the audit trail are refreshed", async () => {
+    const { request, invalidated } = await run(
+      (c) => updateReviewMutation(c, WS, P),
+      { requiredApprovals: 2 },
+      REFUSED,
+    );
+    expect(request).toBe(`PATCH ${base}/review`);
+    expect(invalidated).toEqual([recordKeys.review(WS, P), auditKeys.all(WS)]);
   });
 });

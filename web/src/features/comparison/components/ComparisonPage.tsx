@@ -1,5 +1,5 @@
 import { CopyLinkButton } from "../../../components/CopyLinkButton";
-import { useState } from "react";
+import { useState, type ReactNode } from "react";
 import { Link, useParams } from "react-router-dom";
 import { governingSentence } from "../../../../../core/contract/comparison";
 import { CRITERION_LABELS, type CriterionName } from "../../../../../core/contract/projects";
@@ -19,8 +19,11 @@ import { ComparisonTable } from "./ComparisonTable";
 import { LinearizationChecks } from "./LinearizationChecks";
 import { UtilisationChart } from "./UtilisationChart";
 
-/** `/workspaces/:workspaceId/projects/:projectId/comparison`: which case governs, and by how much. */
-export function ComparisonPage() {
+/**
+ * `/workspaces/:workspaceId/projects/:projectId/comparison`: which case governs, and by how much.
+ * `review` is the review status the app composes in below the header (features do not import each other).
+ */
+export function ComparisonPage({ review }: { review?: ReactNode } = {}) {
   const { workspaceId = "", projectId = "" } = useParams();
   const workspace = useWorkspace(workspaceId);
   const project = useProject(workspaceId, projectId);
@@ -95,6 +98,7 @@ export function ComparisonPage() {
           </ToolButton>
         </div>
       </header>
+      {review}
 
       <section aria-label="Governing case" className="rounded-sm border border-rule bg-panel px-4 py-3">
         {top ? (

@@ -1,3 +1,4 @@
+import type { ReactNode } from "react";
 import { CopyLinkButton } from "../../../components/CopyLinkButton";
 import { Link, useParams } from "react-router-dom";
 import { FormMessage, quietButton } from "../../../lib/forms";
@@ -16,8 +17,11 @@ import { LocationsPanel } from "./LocationsPanel";
 import { MaterialsPanel } from "./MaterialsPanel";
 import { RequirementsPanel } from "./RequirementsPanel";
 
-/** `/workspaces/:workspaceId/projects/:projectId`: a project's inputs, in the order a check is set up. */
-export function ProjectPage() {
+/**
+ * `/workspaces/:workspaceId/projects/:projectId`: a project's inputs, in the order a check is set up.
+ * `review` is the review status the app composes in below the header (features do not import each other).
+ */
+export function ProjectPage({ review }: { review?: ReactNode } = {}) {
   const { workspaceId = "", projectId = "" } = useParams();
   const role = useWorkspaceRole(workspaceId);
   const project = useProject(workspaceId, projectId);
@@ -74,6 +78,7 @@ export function ProjectPage() {
           </a>
         </div>
       </header>
+      {review}
       <RequirementsPanel key={p.version} project={p} canEdit={canEdit} />
       <LocationsPanel
         workspaceId={workspaceId}

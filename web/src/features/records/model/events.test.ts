@@ -7,12 +7,14 @@ describe("record events", () => {
     const lines = eventLines([
       {
         status: "approved",
+        action: "approve",
         by: person(IDS.checker, "Rui Tanager"),
         at: "2026-12-02T09:00:00.000Z",
-        note: null,
+        note: "",
       },
       {
         status: "submitted",
+        action: "submit",
         by: person(IDS.originator, "Ona Ferreby"),
         at: "2026-12-01T09:00:00.000Z",
         note: "First issue",
@@ -20,7 +22,7 @@ describe("record events", () => {
     ]);
     expect(lines.map((l) => [l.text, l.note])).toEqual([
       ["Submitted for check — Ona Ferreby", "First issue"],
-      ["Approved — Rui Tanager", null],
+      ["Approved (record approved) — Rui Tanager", null],
     ]);
   });
 

@@ -26,7 +26,7 @@ describe("independence before approving or returning", () => {
 
   it("when a checker already approved, then a second approval by them is refused; an independent checker is not", () => {
     const once = recordDetail({
-      approvals: [{ by: person(IDS.checker, "Rui Tanager"), at: "2026-12-01T11:00:00.000Z", comment: null }],
+      approvals: [{ by: person(IDS.checker, "Rui Tanager"), at: "2026-12-01T11:00:00.000Z", comment: "" }],
     });
     expect(independenceNote(once, IDS.checker, "approve")).toMatch(/already approved/);
     expect(independenceNote(record, IDS.checker, "approve")).toBeNull();

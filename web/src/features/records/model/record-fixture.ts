@@ -118,6 +118,7 @@ export function recordContent(): RecordContent {
               componentsPa: { xx: 165 * MPA, yy: 0, zz: 0, xy: 0, yz: 0, zx: 0 },
               source: "typed",
               note: "",
+              calculator: null,
             },
           ],
         },
@@ -174,6 +175,7 @@ export function recordSummary(overrides: Partial<RecordSummary> = {}): RecordSum
     submittedAt: "2026-12-01T10:00:00.000Z",
     approvals: [],
     returned: null,
+    approvedAt: null,
     ...overrides,
   };
 }

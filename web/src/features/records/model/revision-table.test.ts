@@ -14,7 +14,7 @@ describe("revision table", () => {
         reason: "Test pressure corrected",
         requiredApprovals: 2,
         approvals: [
-          { by: checker, at: "2026-12-02T09:00:00.000Z", comment: null },
+          { by: checker, at: "2026-12-02T09:00:00.000Z", comment: "" },
           { by: person(IDS.editor, "Vesna Holt"), at: "2026-12-02T10:00:00.000Z", comment: "ok" },
         ],
       }),

@@ -7,12 +7,13 @@ import { loadCaseRoutes } from "./load-cases";
 import { locationRoutes } from "./locations";
 import { materialRoutes } from "./materials";
 import { projectTransferRoutes } from "./project-transfer";
+import { reportRoutes } from "./report";
 import { trashRoutes } from "./trash";
 import { projectRoutes } from "./projects";
 
 /**
  * Every route of the project area (projects, locations, load cases, combinations, materials,
- * comparison, audit, trash, import/export), added to the route table in one line.
+ * comparison, audit, trash, import/export, report), added to the route table in one line.
  */
 export function projectAreaRoutes(context: AppContext): AnyRoute[] {
   return [
@@ -25,5 +26,6 @@ export function projectAreaRoutes(context: AppContext): AnyRoute[] {
     ...auditRoutes(),
     ...trashRoutes(context),
     ...projectTransferRoutes(context),
+    ...reportRoutes(context),
   ];
 }

@@ -1,3 +1,4 @@
+import { DownloadButton } from "../../../components/DownloadButton";
 import { CopyLinkButton } from "../../../components/CopyLinkButton";
 import { Link, useParams } from "react-router-dom";
 import { FormMessage, quietButton } from "../../../lib/forms";
@@ -62,6 +63,15 @@ export function ProjectPage() {
           <Link to={`/workspaces/${workspaceId}/projects/${projectId}/comparison`} className={quietButton}>
             Comparison
           </Link>
+          <Link to={`/workspaces/${workspaceId}/projects/${projectId}/report`} className={quietButton}>
+            Report (draft)
+          </Link>
+          <DownloadButton
+            path={`/workspaces/${workspaceId}/projects/${projectId}/report.pdf`}
+            fileName="draft-report.pdf"
+            label="Download PDF"
+            className={quietButton}
+          />
           <a
             href={`/api/workspaces/${workspaceId}/projects/${projectId}/export`}
             download

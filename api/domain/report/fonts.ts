@@ -85,6 +85,14 @@ function isLatin1(text: string): boolean {
   return true;
 }
 
+/** How many characters `text` prints as: each character once, a stand-in as its own length. */
+export function printedLength(text: string): number {
+  if (isLatin1(text)) return text.length;
+  let n = 0;
+  for (const ch of text) n += STAND_INS[ch]?.length ?? 1;
+  return n;
+}
+
 /** A piece of a line drawn in one file. */
 export type Run = { font: string; text: string };
 

@@ -1,33 +1,30 @@
 import type PdfDocument from "pdfkit";
-import { runsOf, type Weight } from "./fonts";
+import { printedLength, runsOf, type Weight } from "./fonts";
 
 type Doc = InstanceType<typeof PdfDocument>;
 
 /** A line's look: size in points, weight and colour. */
 export type TextStyle = { size: number; weight: Weight; color: string };
 
-/** Each face's advance per point of size. */
-const advances = new WeakMap<Doc, Map<string, number>>();
+/** JetBrains Mono's advance, the same for every glyph of every script file: 600 units per 1000 em. */
+const ADVANCE_PER_EM = 0.6;
 
 /**
  * Width of `text` in points in `style`. JetBrains Mono is monospaced (every glyph of every script
- * file has the same advance), so a run's width is its character count times the face's advance,
- * measured once per face: fontkit's layout, which pdfkit does not cache when features are set,
- * would otherwise run for every word the line breaker tries.
+ * file the report embeds advances 600/1000 em; checked when the faces were chosen), so a line's
+ * width is its printed character count times the advance — no font layout per word tried while
+ * breaking lines, which took most of a large report's time.
  */
-export function textWidth(doc: Doc, text: string, style: TextStyle): number {
-  let perFont = advances.get(doc);
-  if (!perFont) advances.set(doc, (perFont = new Map()));
-  let w = 0;
-  for (const run of runsOf(text, style.weight)) {
-    let advance = perFont.get(run.font);
-    if (advance === undefined) {
-      advance = doc.font(run.font).fontSize(1000).widthOfString("0") / 1000;
-      perFont.set(run.font, advance);
-    }
-    w += [...run.text].length * advance * style.size;
-  }
-  return w;
+export function textWidth(_doc: Doc, text: string, style: TextStyle): number {
+  return printedLength(text) * ADVANCE_PER_EM * style.size;
+}
+
+/** The colour last set on each document, so a run of lines in one colour sets it once. */
+const lastColor = new WeakMap<Doc, string>();
+
+/** Forget the remembered colour (after doc.restore(), which puts the graphics state back). */
+export function colorUnknown(doc: Doc): void {
+  lastColor.delete(doc);
 }
 
 /**
@@ -44,7 +41,10 @@ export function drawLine(
 ): void {
   const width = anchor === "start" ? 0 : textWidth(doc, text, style);
   let at = anchor === "start" ? x : anchor === "middle" ? x - width / 2 : x - width;
-  doc.fillColor(style.color);
+  if (lastColor.get(doc) !== style.color) {
+    doc.fillColor(style.color);
+    lastColor.set(doc, style.color);
+  }
   for (const run of runsOf(text, style.weight)) {
     doc.font(run.font).fontSize(style.size);
     doc.text(run.text, at, y, { lineBreak: false, baseline: "alphabetic" });

@@ -1,7 +1,7 @@
 import PdfDocument from "pdfkit";
 import type { ReportBlock, ReportColumn, ReportModel, ReportMohr, ReportSection } from "../../../core/report";
 import { reportFaces } from "./fonts";
-import { drawLine, textWidth, wrapText, type TextStyle } from "./pdf-text";
+import { colorUnknown, drawLine, textWidth, wrapText, type TextStyle } from "./pdf-text";
 
 type Doc = InstanceType<typeof PdfDocument>;
 
@@ -33,6 +33,9 @@ const STYLE = {
   cellHead: { size: 7, weight: "bold", color: COLOR.soft },
   furniture: { size: 6.6, weight: "regular", color: COLOR.soft },
 } satisfies Record<string, TextStyle>;
+
+/** Blocks drawn between two yields to the event loop (about one case of a location section). */
+const BLOCKS_PER_YIELD = 8;
 
 const lineHeight = (s: TextStyle) => s.size * 1.35;
 
@@ -232,6 +235,7 @@ function drawMohr(sheet: Sheet, figure: ReportMohr, caption: string): void {
     figure.maxShear.label.anchor,
   );
   doc.restore();
+  colorUnknown(doc);
   sheet.y = top + height;
   sheet.lines(caption, STYLE.note);
   sheet.gap(4);
@@ -282,7 +286,11 @@ async function drawSection(sheet: Sheet, section: ReportSection, first: boolean)
   sheet.gap(2);
   sheet.rule(COLOR.ink, 0.8);
   sheet.gap(4);
-  for (const block of section.blocks) await drawBlock(sheet, block);
+  for (const [i, block] of section.blocks.entries()) {
+    await drawBlock(sheet, block);
+    // A location with many cases is a long section: give the event loop back every few blocks.
+    if (i % BLOCKS_PER_YIELD === BLOCKS_PER_YIELD - 1) await yieldToEventLoop();
+  }
 }
 
 /** Every page: the caution, the record (or draft) it belongs to and "page n of m"; a draft's watermark. */
@@ -303,6 +311,7 @@ function drawPageFurniture(doc: Doc, model: ReportModel): void {
         "middle",
       );
       doc.restore();
+      colorUnknown(doc);
     }
     const base = PAGE.height - PAGE.bottom + 18;
     doc

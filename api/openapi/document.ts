@@ -69,7 +69,9 @@ export function buildOpenApiDocument(routes: AnyRoute[], info: { version: string
       responses[status] = response.schema
         ? {
             description: response.description,
-            content: { "application/json": { schema: jsonSchema(response.schema, "output") } },
+            content: {
+              [response.contentType ?? "application/json"]: { schema: jsonSchema(response.schema, "output") },
+            },
           }
         : { description: response.description };
     }

@@ -14,8 +14,11 @@ export type Access = { kind: "public" } | { kind: "signed-in" } | { kind: "membe
 
 export type HttpMethod = "get" | "post" | "patch" | "put" | "delete";
 
-/** A documented answer; `schema` absent means no body (204). */
-export type ResponseSpec = { description: string; schema?: z.ZodType };
+/**
+ * A documented answer; `schema` absent means no body (204). `contentType` names a body that is not
+ * JSON (e.g. "application/pdf", with a string schema of format binary).
+ */
+export type ResponseSpec = { description: string; schema?: z.ZodType; contentType?: string };
 
 /** What a handler finds in `res.locals.input`: already parsed, never the raw request. */
 export type RouteInput<P, Q, B> = { params: P; query: Q; body: B };

@@ -9,13 +9,14 @@ import { locationRoutes } from "./locations";
 import { materialRoutes } from "./materials";
 import { projectTransferRoutes } from "./project-transfer";
 import { recordRoutes } from "./records";
+import { reportRoutes } from "./report";
 import { trashRoutes } from "./trash";
 import { projectRoutes } from "./projects";
 
 /**
  * Every route of the project area (projects, locations, load cases and their linearizations,
- * combinations, materials, comparison, audit, trash, import/export, review and records), added
- * to the route table in one line.
+ * combinations, materials, comparison, audit, trash, import/export, review and records, reports),
+ * added to the route table in one line.
  */
 export function projectAreaRoutes(context: AppContext): AnyRoute[] {
   return [
@@ -30,5 +31,6 @@ export function projectAreaRoutes(context: AppContext): AnyRoute[] {
     ...trashRoutes(context),
     ...projectTransferRoutes(context),
     ...recordRoutes(context),
+    ...reportRoutes(context),
   ];
 }

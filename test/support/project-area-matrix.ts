@@ -278,6 +278,16 @@ export const projectAreaRows: Record<string, Row> = {
     ok: 200,
     request: async (f) => ({ path: await inProject(f, "/comparison") }),
   },
+  "GET /api/workspaces/{workspaceId}/projects/{projectId}/report.pdf": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: await inProject(f, "/report.pdf") }),
+  },
+  "GET /api/workspaces/{workspaceId}/projects/{projectId}/report-content": {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: await inProject(f, "/report-content") }),
+  },
 
   "GET /api/workspaces/{workspaceId}/audit": {
     who: "viewer",

@@ -118,6 +118,11 @@ export const recordRows: Record<string, Row> = {
     ok: 200,
     request: async (f) => ({ path: await submitted(f, "/diff") }),
   },
+  [`GET ${P}/records/{recordId}/report.pdf`]: {
+    who: "viewer",
+    ok: 200,
+    request: async (f) => ({ path: await submitted(f, "/report.pdf") }),
+  },
   [`POST ${P}/records/{recordId}/comments`]: {
     who: "reviewer",
     ok: 201,

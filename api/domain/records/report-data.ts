@@ -1,8 +1,8 @@
 import type { RecordContent, RecordPerson, RecordSummary } from "../../../core/contract/records";
-import { findRecord, recordEventsOf } from "../../../db/repositories/records";
+import { findRecord, listRecordHeads, recordEventsOf } from "../../../db/repositories/records";
 import { errors } from "../../errors";
 import { findProject } from "../projects/scope";
-import { recordSummary } from "./summary";
+import { recordSummaries, recordSummary } from "./summary";
 
 /** Someone who signed a record, and when. */
 export type Signature = { by: RecordPerson; at: string; comment: string };
@@ -11,6 +11,8 @@ export type Signature = { by: RecordPerson; at: string; comment: string };
 export type RecordForReport = {
   summary: RecordSummary;
   content: RecordContent;
+  /** The project's records up to and including this one, oldest first: the report's revision table. */
+  revisions: RecordSummary[];
   signatures: {
     /** Who submitted the record, and when. */
     originator: Signature;
@@ -38,11 +40,14 @@ export async function recordForReport(
   const { content, ...head } = row;
   const summary = await recordSummary(head);
   const events = await recordEventsOf(row.id);
+  const earlier = (await listRecordHeads(project.id)).filter((h) => h.number <= row.number).reverse();
+  const revisions = await recordSummaries(earlier);
   const submitted = events.find((e) => e.action === "submit");
   const checkers: Signature[] = summary.approvals.map((a) => ({ by: a.by, at: a.at, comment: a.comment }));
   return {
     summary,
     content: content as RecordContent,
+    revisions,
     signatures: {
       originator: {
         by: summary.submittedBy,

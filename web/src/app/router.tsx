@@ -152,6 +152,13 @@ export const router = createBrowserRouter([
               })),
           },
           {
+            path: "workspaces/:workspaceId/projects/:projectId/report",
+            lazy: () =>
+              import("../features/report/components/ReportPage").then((m) => ({
+                Component: m.ReportPage,
+              })),
+          },
+          {
             path: "workspaces/:workspaceId",
             element: <WorkspacePage />,
             children: [

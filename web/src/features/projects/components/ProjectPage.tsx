@@ -1,4 +1,5 @@
 import type { ReactNode } from "react";
+import { DownloadButton } from "../../../components/DownloadButton";
 import { CopyLinkButton } from "../../../components/CopyLinkButton";
 import { Link, useParams } from "react-router-dom";
 import { FormMessage, quietButton } from "../../../lib/forms";
@@ -69,6 +70,15 @@ export function ProjectPage({ review }: { review?: ReactNode } = {}) {
           <Link to={`/workspaces/${workspaceId}/projects/${projectId}/linearization`} className={quietButton}>
             Linearization
           </Link>
+          <Link to={`/workspaces/${workspaceId}/projects/${projectId}/report`} className={quietButton}>
+            Report (draft)
+          </Link>
+          <DownloadButton
+            path={`/workspaces/${workspaceId}/projects/${projectId}/report.pdf`}
+            fileName="draft-report.pdf"
+            label="Download PDF"
+            className={quietButton}
+          />
           <a
             href={`/api/workspaces/${workspaceId}/projects/${projectId}/export`}
             download

@@ -1,0 +1,28 @@
+import type { Response } from "express";
+import type { RecordContent } from "../../../core/contract/records";
+import { buildReportModel, type ReportMeta } from "../../../core/report";
+import { renderReportPdf } from "./render-pdf";
+
+/** A file name safe in a Content-Disposition header: "ct-7-shell-draft-report.pdf". */
+export function reportFileName(projectName: string, meta: ReportMeta): string {
+  const slug = (text: string) =>
+    text
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, "-")
+      .replace(/^-|-$/g, "");
+  const what = meta.kind === "draft" ? "draft" : `${slug(meta.number)}-rev-${slug(meta.revision)}`;
+  return `${slug(projectName) || "project"}-${what || "record"}-report.pdf`;
+}
+
+/**
+ * Answers with the PDF report of `content` as `meta` describes it (a draft, or a frozen record with
+ * its signatures): the one place the draft route and the record route share.
+ */
+export async function sendReportPdf(res: Response, content: RecordContent, meta: ReportMeta): Promise<void> {
+  const pdf = await renderReportPdf(buildReportModel(content, meta));
+  res
+    .set("Cache-Control", "no-store")
+    .set("Content-Disposition", `attachment; filename="${reportFileName(content.inputs.project.name, meta)}"`)
+    .type("application/pdf")
+    .send(pdf);
+}

@@ -10,3 +10,4 @@ export type { ReportModel } from "./model";
 export { buildReportModel, RESPONSIBILITY } from "./model";
 export { VERIFY_CERTIFICATE_NOTE } from "./inputs-section";
 export { VERDICT_TEXT } from "./location-sections";
+export { recordReportMeta } from "./record-meta";

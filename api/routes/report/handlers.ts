@@ -3,8 +3,8 @@ import type { AppContext } from "../../context";
 import { findProject } from "../../domain/projects/scope";
 import { buildRecordContent } from "../../domain/records/content";
 import { recordForReport } from "../../domain/records/report-data";
-import { recordReportMeta } from "../../domain/report/record-meta";
 import { sendReportPdf } from "../../domain/report/send";
+import { recordReportMeta } from "../../../core/report";
 import type { RouteHandler } from "../../openapi/registry";
 
 type ProjectParams = { workspaceId: string; projectId: string };
@@ -39,5 +39,5 @@ export const recordReportPdfHandler: RouteHandler<
   const { workspace } = currentMembership(res);
   const { projectId, recordId } = res.locals.input.params;
   const record = await recordForReport(workspace.id, projectId, recordId);
-  await sendReportPdf(res, record.content, recordReportMeta(record));
+  await sendReportPdf(res, record.content, recordReportMeta(record.summary, record.revisions));
 };

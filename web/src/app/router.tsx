@@ -137,11 +137,10 @@ export const router = createBrowserRouter([
               })),
           },
           {
-            // Falls back to the record's PDF until the report's HTML view (ReportView) is composed in.
             path: "workspaces/:workspaceId/projects/:projectId/records/:recordId/report",
             lazy: () =>
-              import("../features/records/components/RecordReportPage").then((m) => ({
-                Component: m.RecordReportPage,
+              import("./review-composition").then((m) => ({
+                Component: m.RecordReportPageWithView,
               })),
           },
           {

@@ -1,40 +1,55 @@
+import type { ReactNode } from "react";
 import { Link, useParams } from "react-router-dom";
-import { useRecord } from "../../../entities/record/queries";
-import { FormMessage, primaryButton } from "../../../lib/forms";
+import type { RecordContent } from "../../../../../core/contract/records";
+import { recordReportMeta, type ReportMeta } from "../../../../../core/report";
+import { useRecord, useRecords } from "../../../entities/record/queries";
+import { FormMessage, quietButton } from "../../../lib/forms";
 import { recordPagePath, recordPdfPath } from "../model/paths";
 
 /**
  * `/workspaces/:workspaceId/projects/:projectId/records/:recordId/report`: the print page of a
- * frozen record. The report's HTML view (ReportView, features/report) is built beside this
- * branch; until it is composed here, the page offers the server's PDF of the same record, which
- * carries the same content, signatures and cautions.
+ * frozen record — its report drawn from the frozen content with the record's number, hash,
+ * revision table and signatures (core/report/record-meta.ts, as the PDF signs it). The report's
+ * HTML view lives in features/report; the app composes it in through `report` (features do not
+ * import each other).
  */
-export function RecordReportPage() {
+export function RecordReportPage({
+  report,
+}: {
+  report: (content: RecordContent, meta: ReportMeta) => ReactNode;
+}) {
   const { workspaceId = "", projectId = "", recordId = "" } = useParams();
   const record = useRecord(workspaceId, projectId, recordId);
-  if (record.isPending) return <p className="text-graphite-soft">Opening the record…</p>;
+  const records = useRecords(workspaceId, projectId);
+  if (record.isPending || records.isPending) return <p className="text-graphite-soft">Opening the record…</p>;
   if (record.error) return <FormMessage error={record.error} />;
+  if (records.error) return <FormMessage error={records.error} />;
   const r = record.data;
   return (
     <div className="space-y-4">
-      <p className="text-sm text-graphite-soft">
-        <Link
-          to={recordPagePath(workspaceId, projectId, recordId)}
-          className="text-ink underline-offset-2 hover:underline"
-        >
-          Record {r.number} · revision {r.revision}
-        </Link>
-      </p>
-      <h1 className="text-3xl font-semibold tracking-tight">
-        Calculation report of record <span className="num">{r.number}</span>
-      </h1>
-      <p className="max-w-3xl text-graphite-soft">
-        The report of this frozen record, with its inputs, results, signatures and cautions, as a PDF to print
-        or file.
-      </p>
-      <a href={recordPdfPath(workspaceId, projectId, recordId)} className={`inline-block ${primaryButton}`}>
-        Open the PDF report
-      </a>
+      <div
+        data-print-hidden
+        className="flex flex-wrap items-center justify-between gap-3 border-b border-rule pb-3"
+      >
+        <p className="text-sm text-graphite-soft">
+          <Link
+            to={recordPagePath(workspaceId, projectId, recordId)}
+            className="text-ink underline-offset-2 hover:underline"
+          >
+            Record <span className="num">{r.number}</span> · revision {r.revision}
+          </Link>{" "}
+          / calculation report
+        </p>
+        <div className="flex flex-wrap items-center gap-2">
+          <button type="button" className={quietButton} onClick={() => window.print()}>
+            Print
+          </button>
+          <a href={recordPdfPath(workspaceId, projectId, recordId)} className={quietButton}>
+            Open the PDF
+          </a>
+        </div>
+      </div>
+      {report(r.content, recordReportMeta(r, records.data))}
     </div>
   );
 }

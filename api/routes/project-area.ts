@@ -6,13 +6,14 @@ import { comparisonRoutes } from "./comparison";
 import { loadCaseRoutes } from "./load-cases";
 import { locationRoutes } from "./locations";
 import { materialRoutes } from "./materials";
+import { pointTableRoutes } from "./point-tables";
 import { projectTransferRoutes } from "./project-transfer";
 import { trashRoutes } from "./trash";
 import { projectRoutes } from "./projects";
 
 /**
  * Every route of the project area (projects, locations, load cases, combinations, materials,
- * comparison, audit, trash, import/export), added to the route table in one line.
+ * point tables, comparison, audit, trash, import/export), added to the route table in one line.
  */
 export function projectAreaRoutes(context: AppContext): AnyRoute[] {
   return [
@@ -20,6 +21,7 @@ export function projectAreaRoutes(context: AppContext): AnyRoute[] {
     ...projectRoutes(context),
     ...locationRoutes(context),
     ...loadCaseRoutes(context),
+    ...pointTableRoutes(context),
     ...combinationRoutes(context),
     ...comparisonRoutes(context),
     ...auditRoutes(),

@@ -249,6 +249,7 @@ export const AUDIT_ENTITY_TYPES = [
   "stress-state",
   "combination",
   "material",
+  "point-table",
 ] as const;
 
 export const auditQuerySchema = z.object({

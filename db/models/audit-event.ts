@@ -2,7 +2,7 @@ import { DataTypes, Model, type Sequelize } from "sequelize";
 
 export type AuditAction = "create" | "update" | "delete" | "restore" | "import" | "purge";
 export type AuditEntityType =
-  "project" | "location" | "load-case" | "stress-state" | "combination" | "material";
+  "project" | "location" | "load-case" | "stress-state" | "combination" | "material" | "point-table";
 
 /** One entry of the audit trail (table `audit_events`): who changed what, when, and how. */
 export class AuditEvent extends Model {

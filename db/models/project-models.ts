@@ -5,12 +5,14 @@ import { initCombinationTerm } from "./combination-term";
 import { initLoadCase } from "./load-case";
 import { initLocation } from "./location";
 import { initMaterial } from "./material";
+import { initPointTable } from "./point-table";
+import { initPointTableChunk } from "./point-table-chunk";
 import { initProject } from "./project";
 import { initStressState } from "./stress-state";
 
 /**
  * Registers the project models (materials, projects, locations, load cases, stress states,
- * combinations and their terms, the audit trail). Queries join them explicitly by id, so no
+ * combinations and their terms, the audit trail, finite-element point tables and their chunks). Queries join them explicitly by id, so no
  * associations are declared.
  */
 export function initProjectModels(sequelize: Sequelize) {
@@ -23,5 +25,7 @@ export function initProjectModels(sequelize: Sequelize) {
     Combination: initCombination(sequelize),
     CombinationTerm: initCombinationTerm(sequelize),
     AuditEvent: initAuditEvent(sequelize),
+    PointTable: initPointTable(sequelize),
+    PointTableChunk: initPointTableChunk(sequelize),
   };
 }

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { VERDICTS } from "../constants/verdicts";
 import { COMPARISON_PAGE } from "./limits";
+import { comparisonPointTableSchema } from "./point-tables";
 import {
   CRITERION_LABELS,
   categoryRequirementSchema,
@@ -148,6 +149,8 @@ export const comparisonPageSchema = comparisonSchema.extend({
     /** At least 1, so page 1 always exists. */
     totalPages: z.int(),
   }),
+  /** Each finite-element point table of a live load case, summarised; its governing points compete in `governing`. */
+  pointTables: z.array(comparisonPointTableSchema).optional(),
 });
 export type PagedComparison = z.infer<typeof comparisonPageSchema>;
 

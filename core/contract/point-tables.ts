@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { COMPONENTS } from "../constants/components";
-import { verdictSchema } from "./comparison";
+import { VERDICTS } from "../constants/verdicts";
 import { loadCaseParamsSchema } from "./load-cases";
 import { POINT_TABLE_LIMITS } from "./limits";
 import { stressUnitSchema } from "./materials";
@@ -32,6 +32,9 @@ export const POINT_TABLE_CONTENT_TYPES = ["text/plain", "text/csv", "application
 const MAX_COLUMN = 10_000;
 /** Lines skipped before the data (a title block) at most. */
 const MAX_SKIP_ROWS = 1000;
+
+/** A verdict (as the comparison's schema has it; declared here too so the two files do not import each other). */
+const verdictSchema = z.enum(VERDICTS);
 
 const columnIndex = () =>
   z

@@ -5,6 +5,7 @@ import type { Material } from "../../../db/models/material";
 import type { StoredTerm } from "../combinations/superpose";
 import { refFromColumns, resolveMaterial } from "../materials/resolve";
 import { stateKey, type ComparisonInput, type ComparisonState } from "./build";
+import { POINT_TABLES_SQL, pointTablesOf, type StoredTableSummary } from "./point-tables";
 
 /**
  * The project, its live locations, cases and combinations (with their terms), the
@@ -42,6 +43,7 @@ SELECT json_build_object(
       'yieldPa', m.yield_pa, 'ultimateTensionPa', m.ultimate_tension_pa,
       'ultimateCompressionPa', m.ultimate_compression_pa))
     FROM materials m WHERE m.workspace_id = p.workspace_id AND m.deleted_at IS NULL), '[]'),
+  'pointTables', ${POINT_TABLES_SQL},
   'states', COALESCE((
     SELECT json_agg(json_build_array(s.load_case_id, s.location_id, s.revision,
       s.xx_pa, s.yy_pa, s.zz_pa, s.xy_pa, s.yz_pa, s.zx_pa))
@@ -70,6 +72,7 @@ type ProjectRow = {
   >[];
   /** Current states as [caseId, locationId, revision, xx, yy, zz, xy, yz, zx] (Pa): arrays keep the JSON small. */
   states: [string, string, number, number, number, number, number, number, number][];
+  pointTables: StoredTableSummary[];
 };
 
 /**
@@ -131,5 +134,6 @@ export function comparisonInputFrom(projectId: string, source: string): Comparis
     cases: project.cases,
     states,
     combinations: project.combinations,
+    pointTables: pointTablesOf(project),
   };
 }

@@ -58,9 +58,11 @@ export function* chunksOf(table: PointTable): Generator<NewPointTableChunk> {
 }
 
 /** A stored chunk's points as core's evaluator takes them: interleaved xx yy zz xy yz zx per point. */
-export function interleavedComponents(
-  chunk: Pick<PointTableChunkRow, "components" | "pointCount">,
-): Float64Array {
+export function interleavedComponents(chunk: {
+  components: Buffer | null;
+  pointCount: number;
+}): Float64Array {
+  if (chunk.components === null) throw new Error("the chunk was read without its components");
   const n = chunk.pointCount;
   const columns = doublesOf(chunk.components);
   const out = new Float64Array(6 * n);

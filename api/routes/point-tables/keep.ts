@@ -38,7 +38,7 @@ async function findPoints(table: PointTableRow, wanted: (number | string)[]): Pr
     if (chunk === null) break;
     const ids = chunkIds(chunk);
     const n = chunk.pointCount;
-    const comps = doublesOf(chunk.components);
+    const comps = doublesOf(chunk.components!);
     const xyz = chunk.coordinates ? doublesOf(chunk.coordinates) : null;
     ids.forEach((id, k) => {
       const key = idKey(id, textIds);

@@ -1,5 +1,5 @@
 import { evaluatePointTable, parsePointTable } from "../../core/index";
-import { chunksOf } from "../../api/domain/point-tables/chunks";
+import { chunksOf } from "../../db/repositories/point-table-chunks";
 import { evaluateStoredTable } from "../../api/domain/point-tables/evaluate";
 import type { PointTableRating } from "../../api/domain/point-tables/spec";
 import { LoadCase } from "../../db/models/load-case";

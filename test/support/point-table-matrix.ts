@@ -3,7 +3,7 @@ import { parsePointTable } from "../../core";
 import type { Role } from "../../core/contract/workspaces";
 import { PointTable } from "../../db/models/point-table";
 import { storePointTableContent } from "../../db/repositories/point-tables";
-import { chunksOf } from "../../api/domain/point-tables/chunks";
+import { chunksOf } from "../../db/repositories/point-table-chunks";
 import type { Actor, RoleFixture } from "./role-fixture";
 import { projectWorld } from "./project-area-matrix";
 

@@ -10,7 +10,7 @@ import type {
   PointTableGoverningView,
 } from "../../../core/contract/point-tables";
 import { readChunk, saveEvaluation, type PointTableRow } from "../../../db/repositories/point-tables";
-import { chunkIds, doublesOf, interleavedComponents } from "./chunks";
+import { chunkIds, doublesOf, interleavedComponents } from "../../../db/repositories/point-table-chunks";
 import type { PointTableRating } from "./spec";
 
 /**

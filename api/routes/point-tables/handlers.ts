@@ -10,7 +10,7 @@ import {
 import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import { recordAudit } from "../../domain/audit/record";
-import { chunksOf } from "../../domain/point-tables/chunks";
+import { chunksOf } from "../../../db/repositories/point-table-chunks";
 import { currentEvaluation } from "../../domain/point-tables/evaluate";
 import { pointTableLimitError } from "../../domain/point-tables/limits";
 import { loadRating } from "../../domain/point-tables/spec";

@@ -7,7 +7,7 @@ import { componentsPaOf, writeStressStates } from "../../../db/repositories/stre
 import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import { recordAudit } from "../../domain/audit/record";
-import { chunkIds, doublesOf } from "../../domain/point-tables/chunks";
+import { chunkIds, doublesOf } from "../../../db/repositories/point-table-chunks";
 import { assertWithinLimit } from "../../domain/projects/limits";
 import { errors } from "../../errors";
 import type { RouteHandler } from "../../openapi/registry";

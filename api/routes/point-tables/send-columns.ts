@@ -2,7 +2,7 @@ import { once } from "node:events";
 import type { Response } from "express";
 import type { PointTableRow } from "../../../db/repositories/point-tables";
 import { readColumnBlocks } from "../../../db/repositories/point-tables";
-import { POINTS_PER_CHUNK } from "../../domain/point-tables/chunks";
+import { POINTS_PER_CHUNK } from "../../../db/repositories/point-table-chunks";
 
 /** Writes `bytes`, waiting for the socket to drain when its buffer is full. */
 async function write(res: Response, bytes: Buffer): Promise<void> {

@@ -2,7 +2,7 @@ import { once } from "node:events";
 import type { Response } from "express";
 import { convertStress, type StressUnit } from "../../../core";
 import { readChunk, type PointTableRow } from "../../../db/repositories/point-tables";
-import { chunkIds, doublesOf } from "../../domain/point-tables/chunks";
+import { chunkIds, doublesOf } from "../../../db/repositories/point-table-chunks";
 
 /** Writes `text`, waiting for the socket to drain when its buffer is full. */
 async function write(res: Response, text: string): Promise<void> {

@@ -1,5 +1,5 @@
-import type { PointTable } from "../../../core";
-import type { NewPointTableChunk, PointTableChunkRow } from "../../../db/repositories/point-tables";
+import type { PointTable } from "../../core";
+import type { NewPointTableChunk, PointTableChunkRow } from "./point-tables";
 
 /** Points per stored chunk row: 65,536 points are about 3 MB of components, one bytea each. */
 export const POINTS_PER_CHUNK = 65_536;

@@ -8,8 +8,8 @@
  * must answer within 2 s on this 2-core machine (test/api/comparison-scale.test.ts). Twice
  * these counts (80 000 rows) took 8–13 s to compute here, nearly all of it per-row work in
  * the comparison's builder, so raise them only with a faster builder and that test passing.
- * Finite-element point tables, which do have thousands of points, are screened in the
- * browser's batch layer, not stored here.
+ * Finite-element point tables, which do have thousands of points, have their own limits
+ * (POINT_TABLE_LIMITS below) and a section of their own in the comparison, not rows.
  *
  * The API refuses to go past them on create and on import with a 400 that names the limit;
  * the API and the browser import them from here. Plain constants: imports nothing.

@@ -1,5 +1,12 @@
+import { createHash } from "node:crypto";
 import type { Transaction } from "sequelize";
+import { parsePointTable } from "../core";
+import { ct7NozzlePointTable } from "../core/demo-data/ct7-nozzle-points";
 import { CT7_SHAFT_BAR, ct7Projects, type DemoProject } from "../core/demo-data/ct7-scenario";
+import { LoadCase } from "./models/load-case";
+import { Project } from "./models/project";
+import { chunksOf } from "./repositories/point-table-chunks";
+import { createPointTable, storePointTableContent } from "./repositories/point-tables";
 import { Workspace } from "./models/workspace";
 import { insertAuditEvent } from "./repositories/audit";
 import { createCombination } from "./repositories/combinations";
@@ -116,5 +123,50 @@ export async function seedDemoProjects(transaction: Transaction, log: (line: str
   for (const spec of projects) {
     await createDemoProject(transaction, workspace.id, owner, spec, { [key]: shaftBar.id });
   }
-  log(`demo projects: ${projects.length} CT-7 projects in "${DEMO_WORKSPACE_NAME}"`);
+  const points = await seedDemoPointTable(transaction, workspace.id, owner);
+  log(
+    `demo projects: ${projects.length} CT-7 projects in "${DEMO_WORKSPACE_NAME}", a point table of ${points} points`,
+  );
+}
+
+/**
+ * Adds the nozzle project's point table (core/demo-data/ct7-nozzle-points.ts) to its load case,
+ * read by the same parser and stored in the same binary chunks as an upload; the server evaluates
+ * it when it is first read. Returns the points stored.
+ */
+async function seedDemoPointTable(transaction: Transaction, workspaceId: string, ownerId: string | null) {
+  const demo = ct7NozzlePointTable();
+  const project = await Project.findOne({ where: { workspaceId, name: demo.projectName }, transaction });
+  const loadCase =
+    project &&
+    (await LoadCase.findOne({ where: { projectId: project.id, name: demo.caseName }, transaction }));
+  if (!project || !loadCase)
+    throw new Error(`the demo has no load case "${demo.caseName}" in "${demo.projectName}"`);
+  const table = await createPointTable(
+    {
+      projectId: project.id,
+      loadCaseId: loadCase.id,
+      fileName: demo.fileName,
+      sizeBytes: Buffer.byteLength(demo.text),
+      sha256: createHash("sha256").update(demo.text).digest("hex"),
+      layout: demo.layout,
+      columns: demo.columns,
+      unit: demo.unit,
+      idKind: demo.idKind,
+      createdBy: ownerId,
+    },
+    transaction,
+  );
+  const parsed = parsePointTable(demo.text, { ...demo.layout, columns: demo.columns, unit: demo.unit });
+  await storePointTableContent(
+    table.id,
+    {
+      chunks: chunksOf(parsed),
+      pointCount: parsed.count,
+      hasCoordinates: parsed.coordinates !== null,
+      badRows: parsed.badRows,
+    },
+    transaction,
+  );
+  return parsed.count;
 }

@@ -7,6 +7,7 @@ import { linearizationRoutes } from "./linearizations";
 import { loadCaseRoutes } from "./load-cases";
 import { locationRoutes } from "./locations";
 import { materialRoutes } from "./materials";
+import { pointTableRoutes } from "./point-tables";
 import { projectTransferRoutes } from "./project-transfer";
 import { recordRoutes } from "./records";
 import { reportRoutes } from "./report";
@@ -14,9 +15,9 @@ import { trashRoutes } from "./trash";
 import { projectRoutes } from "./projects";
 
 /**
- * Every route of the project area (projects, locations, load cases and their linearizations,
- * combinations, materials, comparison, audit, trash, import/export, review and records, reports),
- * added to the route table in one line.
+ * Every route of the project area (projects, locations, load cases with their linearizations and
+ * point tables, combinations, materials, comparison, audit, trash, import/export, review and
+ * records, reports), added to the route table in one line.
  */
 export function projectAreaRoutes(context: AppContext): AnyRoute[] {
   return [
@@ -25,6 +26,7 @@ export function projectAreaRoutes(context: AppContext): AnyRoute[] {
     ...locationRoutes(context),
     ...loadCaseRoutes(context),
     ...linearizationRoutes(context),
+    ...pointTableRoutes(context),
     ...combinationRoutes(context),
     ...comparisonRoutes(context),
     ...auditRoutes(),

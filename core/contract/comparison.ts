@@ -2,6 +2,7 @@ import { z } from "zod";
 import { VERDICTS } from "../constants/verdicts";
 import { COMPARISON_PAGE } from "./limits";
 import { comparisonLinearizationSchema } from "./linearizations";
+import { comparisonPointTableSchema } from "./point-tables";
 import {
   CRITERION_LABELS,
   categoryRequirementSchema,
@@ -140,7 +141,20 @@ export type Comparison = z.infer<typeof comparisonSchema>;
  * comparison's order, while `governing`, `governingByLocation` and `summary` always cover
  * every row of the project.
  */
-export const comparisonPageSchema = comparisonSchema.extend({
+/**
+ * The comparison with the sections that stand beside its rows: saved stress classification lines
+ * and finite-element point tables. What a frozen record keeps (every row); both sections are
+ * optional here so a record frozen before a section existed still reads as it was frozen.
+ */
+export const comparisonWithSectionsSchema = comparisonSchema.extend({
+  /** Each saved stress classification line of a live case, with its category checks (every page). */
+  linearizations: z.array(comparisonLinearizationSchema).optional(),
+  /** Each finite-element point table of a live load case, summarised; its governing points compete in `governing`. */
+  pointTables: z.array(comparisonPointTableSchema).optional(),
+});
+export type ComparisonWithSections = z.infer<typeof comparisonWithSectionsSchema>;
+
+export const comparisonPageSchema = comparisonWithSectionsSchema.extend({
   paging: z.object({
     page: z.int(),
     limit: z.int(),

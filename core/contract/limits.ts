@@ -8,8 +8,8 @@
  * must answer within 2 s on this 2-core machine (test/api/comparison-scale.test.ts). Twice
  * these counts (80 000 rows) took 8–13 s to compute here, nearly all of it per-row work in
  * the comparison's builder, so raise them only with a faster builder and that test passing.
- * Finite-element point tables, which do have thousands of points, are screened in the
- * browser's batch layer, not stored here.
+ * Finite-element point tables, which do have thousands of points, have their own limits
+ * (POINT_TABLE_LIMITS below) and a section of their own in the comparison, not rows.
  *
  * The API refuses to go past them on create and on import with a 400 that names the limit;
  * the API and the browser import them from here. Plain constants: imports nothing.
@@ -57,3 +57,44 @@ export const LINEARIZATION_LIMITS = {
 
 /** Rows per page of the comparison when the client does not say, and the most it may ask for. */
 export const COMPARISON_PAGE = { defaultLimit: 200, maxLimit: 1000 } as const;
+
+/**
+ * How big finite-element point tables may grow. A load case's table is the stress output of one
+ * region of interest (a nozzle, a weld, a lug) or of a whole model's surface: tens of thousands
+ * to a couple of million nodal or integration points (common practice, no source). The limits sit
+ * above that while they bound what one upload makes the server hold: a table at the row limit
+ * takes about 160 MB of Float64Arrays while it is parsed (6 components, 3 coordinates and an id
+ * per point), and a 2,000,000-row file with ids, coordinates and six components in full
+ * precision is about 180–200 MB of text.
+ */
+export const POINT_TABLE_LIMITS = {
+  /** Lines of data in one file (header and skipped lines aside); bad rows count too. */
+  rowsPerTable: 2_000_000,
+  /** Bytes of one uploaded file. */
+  bytesPerTable: 256 * 1024 * 1024,
+  /** Point tables in one load case. */
+  tablesPerLoadCase: 10,
+  /** Point tables in one project (every load case together). */
+  tablesPerProject: 50,
+  /** Points promoted to locations in one "keep" request. */
+  keepPerRequest: 50,
+} as const;
+
+export type PointTableLimitName = keyof typeof POINT_TABLE_LIMITS;
+
+/** The sentence a point-table refusal carries: the limit, its number, and what to do. */
+export function pointTableLimitMessage(limit: PointTableLimitName): string {
+  const max = POINT_TABLE_LIMITS[limit].toLocaleString("en-GB");
+  switch (limit) {
+    case "rowsPerTable":
+      return `A point table holds at most ${max} rows (limit "${limit}"). Split the file by region and upload the parts as separate tables.`;
+    case "bytesPerTable":
+      return `A point table file is at most ${max} bytes (limit "${limit}"). Leave out columns you do not map, or split the file by region.`;
+    case "tablesPerLoadCase":
+      return `A load case holds at most ${max} point tables (limit "${limit}"). Delete a table you no longer need first.`;
+    case "tablesPerProject":
+      return `A project holds at most ${max} point tables (limit "${limit}"). Delete a table you no longer need first.`;
+    case "keepPerRequest":
+      return `At most ${max} points can be kept as locations at once (limit "${limit}").`;
+  }
+}

@@ -251,6 +251,7 @@ export const AUDIT_ENTITY_TYPES = [
   "material",
   "linearization",
   "record",
+  "point-table",
 ] as const;
 
 export const auditQuerySchema = z.object({

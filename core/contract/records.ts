@@ -1,6 +1,6 @@
 import { z } from "zod";
 import { ENGINE_NAME } from "../constants/engine";
-import { comparisonSchema } from "./comparison";
+import { comparisonWithSectionsSchema } from "./comparison";
 import { projectExportSchema } from "./project-export";
 
 /**
@@ -42,7 +42,7 @@ export const recordContentSchema = z.object({
     }),
   ),
   /** The comparison of those inputs: every row (not a page), the governing checks, the cautions. */
-  results: comparisonSchema,
+  results: comparisonWithSectionsSchema,
 });
 export type RecordContent = z.infer<typeof recordContentSchema>;
 

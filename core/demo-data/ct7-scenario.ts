@@ -40,6 +40,9 @@ export const STANDARD_GRAVITY = 9.80665;
 
 // ── Inputs (fictional) ───────────────────────────────────────────────────────────────
 
+/** The demo project whose load case holds a finite-element point table (core/demo-data/ct7-nozzle-points.ts). */
+export const CT7_NOZZLE_PROJECT = "CT-7 nozzle N2 (FE points)";
+
 /** CT-7 cylindrical shell. */
 export const CT7_SHELL = { insideRadiusMm: 600, wallMm: 8 } as const;
 
@@ -505,13 +508,20 @@ export function ct7Projects(): DemoProject[] {
       combinations: [],
     },
     {
-      name: "CT-7 nozzle N2 (FE points)",
+      name: CT7_NOZZLE_PROJECT,
       description:
-        "Finite-element point tensors around nozzle N2. Point tables (CSV uploads evaluated in the browser) come in a later version; this project is empty until then.",
+        "Stress points around nozzle N2 in a point table of the hydrostatic test (30,000 points, generated from the stresses around a hole in the shell's membrane field; see core/demo-data/ct7-nozzle-points.ts). A small region at the bore's edge fails; keep its governing point as a location to check it in the comparison.",
       requirements: [{ criterion: "von-mises", requiredFactor: 1.5 }],
       material: { publishedId: "sa516-70" },
       locations: [],
-      cases: [],
+      cases: [
+        {
+          name: "Hydrostatic test",
+          category: "test",
+          description: `Test pressure ${CT7_SHELL_LOAD_CASES.find((c) => c.name === "Hydrostatic test")!.pressureMpa} MPa; the stresses are in its point table.`,
+          states: [],
+        },
+      ],
       combinations: [],
     },
   ];

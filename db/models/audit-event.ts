@@ -10,7 +10,8 @@ export type AuditEntityType =
   | "combination"
   | "material"
   | "linearization"
-  | "record";
+  | "record"
+  | "point-table";
 
 /** One entry of the audit trail (table `audit_events`): who changed what, when, and how. */
 export class AuditEvent extends Model {

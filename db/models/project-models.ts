@@ -6,12 +6,15 @@ import { initLinearization } from "./linearization";
 import { initLoadCase } from "./load-case";
 import { initLocation } from "./location";
 import { initMaterial } from "./material";
+import { initPointTable } from "./point-table";
+import { initPointTableChunk } from "./point-table-chunk";
 import { initProject } from "./project";
 import { initStressState } from "./stress-state";
 
 /**
  * Registers the project models (materials, projects, locations, load cases, stress states,
- * combinations and their terms, the audit trail, saved stress classification lines). Queries join them explicitly by id, so no
+ * combinations and their terms, the audit trail, saved stress classification lines, finite-element
+ * point tables and their chunks). Queries join them explicitly by id, so no
  * associations are declared.
  */
 export function initProjectModels(sequelize: Sequelize) {
@@ -25,5 +28,7 @@ export function initProjectModels(sequelize: Sequelize) {
     CombinationTerm: initCombinationTerm(sequelize),
     AuditEvent: initAuditEvent(sequelize),
     Linearization: initLinearization(sequelize),
+    PointTable: initPointTable(sequelize),
+    PointTableChunk: initPointTableChunk(sequelize),
   };
 }

@@ -1,5 +1,5 @@
 import { afterAll, describe, expect, inject, it } from "vitest";
-import { comparisonSchema } from "../../core/contract/comparison";
+import { comparisonPageSchema, comparisonSchema } from "../../core/contract/comparison";
 import { ensureDatabase } from "../../db/ensure-database";
 import { migrate } from "../../db/migrate";
 import { seedDemo } from "../../db/seed";
@@ -100,8 +100,29 @@ describe("the demo seed's projects step", () => {
     // The proof-factored tilted lift at the weld toe comes close to 1.8 without failing.
     expect(lug.governing.map((g) => g.verdict)).toEqual(["close", "close"]);
 
-    const nozzle = await compare("CT-7 nozzle N2 (FE points)");
+    const nozzleProject = projects.find((x: { name: string }) => x.name === "CT-7 nozzle N2 (FE points)");
+    const nozzle = comparisonPageSchema.parse(
+      (await agent.get(`/api/workspaces/${workspace.id}/projects/${nozzleProject.id}/comparison`).expect(200))
+        .body,
+    );
     expect(nozzle.rows).toEqual([]);
+    // The hydrostatic test's point table: the bore's edge on the x axis carries the peak hoop stress,
+    // 3·σθ − σx = 2.5·σθ for a hole in a 1 : 2 biaxial membrane field (Kirsch's solution, handbook
+    // formula, recalled from memory), σθ = p·r/t = 1.17 × 600 / 8 MPa; von Mises there is that one
+    // stress (σr = 0 at a free edge). SA-516-70's Sy is 260 MPa in core's list.
+    const [table] = nozzle.pointTables!;
+    expect(table).toMatchObject({ caseName: "Hydrostatic test", pointCount: 30_000 });
+    const vm = table.perCriterion[0];
+    expect(vm).toMatchObject({
+      criterion: "von-mises",
+      verdict: "fail",
+      governing: { id: 200_001, x: 50, y: 0 },
+    });
+    expect(vm.factor!).toBeCloseTo(260 / (2.5 * ((1.17 * 600) / 8)), 4);
+    // one small region fails: a few rings near the bore, on either side of the x axis
+    expect(vm.countFail).toBeGreaterThan(0);
+    expect(vm.countFail).toBeLessThan(0.02 * 30_000);
+    expect(nozzle.summary).toContain('point 200001 of "ct7-n2-hydrotest-points.csv"');
 
     // The demo's calculation records: the shaft approved by someone other than its originator,
     // the shell returned with a comment on the record and one on the failing row.

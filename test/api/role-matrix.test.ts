@@ -18,6 +18,7 @@ import {
 } from "../support/role-fixture";
 import { projectAreaRows } from "../support/project-area-matrix";
 import { recordRows } from "../support/records-matrix";
+import { pointTableRows } from "../support/point-table-matrix";
 
 /**
  * The role matrix: every API route × every kind of caller → the expected status.
@@ -34,7 +35,7 @@ type Row = {
   except?: Partial<Record<Actor, number>>;
   request: (f: RoleFixture) => Promise<Req> | Req;
 };
-type Req = { path: string; body?: Record<string, unknown> };
+type Req = { path: string; body?: Record<string, unknown> | string; contentType?: string };
 
 const ws = (f: RoleFixture, rest = "") => `/api/workspaces/${f.workspaceId}${rest}`;
 
@@ -208,6 +209,7 @@ const table: Record<string, Row> = {
 
   ...projectAreaRows,
   ...recordRows,
+  ...pointTableRows,
 };
 
 /** What `who` means for one caller. */
@@ -257,8 +259,9 @@ describe.each(Object.entries(table))("%s", (key, row) => {
     "when %s calls it, then the status is %i",
     async (actor, expected) => {
       const f = await fixture(actor);
-      const { path, body } = await row.request(f);
+      const { path, body, contentType } = await row.request(f);
       let call = request(app)[method](path).set("Origin", TEST_ORIGIN);
+      if (contentType) call = call.set("Content-Type", contentType);
       if (f.cookie) call = call.set("Cookie", f.cookie);
       const response = body ? await call.send(body) : await call;
       expect(response.status, `${key} as ${actor}: ${JSON.stringify(response.body)}`).toBe(expected);

@@ -2,6 +2,7 @@ import type { Sequelize } from "sequelize";
 import type { ComparisonQuery } from "../../../core/contract/comparison";
 import { AnswerCache, keptAnswer, type KeptAnswer } from "./answer-cache";
 import { comparisonInputFrom, loadComparisonSource } from "./load";
+import { refreshPointTables } from "./point-tables";
 import { comparisonPageWithSections } from "./sections";
 
 /** One per process: answers depend only on their inputs (named by their stamp) and this process's engine. */
@@ -30,10 +31,16 @@ export async function comparisonAnswer(
   const key = `${workspaceId}|${projectId}|${query.page}|${query.limit}`;
   const early = stamp === undefined ? undefined : answers.get(key, stamp);
   if (early) return early;
-  const loaded = await loadComparisonSource(sequelize, workspaceId, projectId);
+  let loaded = await loadComparisonSource(sequelize, workspaceId, projectId);
   if (!loaded) return null;
   const kept = answers.get(key, loaded.stamp);
   if (kept) return kept;
+  // Point tables evaluated against allowables that have changed since are evaluated again first;
+  // storing their evaluations raises the stamp, so the inputs are read again with the new one.
+  if (await refreshPointTables(loaded.source)) {
+    loaded = await loadComparisonSource(sequelize, workspaceId, projectId);
+    if (!loaded) return null;
+  }
   const page = await comparisonPageWithSections(comparisonInputFrom(projectId, loaded.source), query);
   const answer = keptAnswer(JSON.stringify(page));
   answers.set(key, loaded.stamp, answer);

@@ -24,6 +24,7 @@ import type { CategoryRequirement, Requirement } from "../../../core/contract/pr
 import { componentsPaOf } from "../../../db/repositories/stress-states";
 import type { StoredTerm } from "../combinations/superpose";
 import type { ResolvedMaterial } from "../materials/resolve";
+import type { ComparisonPointTable } from "./point-tables";
 
 // Long because building the comparison's rows, its superposition over packed states and the
 // governing search share the input's indexes; paging.ts cuts the work into runs.
@@ -58,6 +59,8 @@ export type ComparisonInput = {
   /** Current states keyed "caseId:locationId". */
   states: Map<string, ComparisonState>;
   combinations: { id: string; name: string; version: number; terms: StoredTerm[] }[];
+  /** The project's finite-element point tables with their stored evaluations (paging.ts adds their section). */
+  pointTables?: ComparisonPointTable[];
 };
 
 /** The standing note about the strengths the factors are measured against. */

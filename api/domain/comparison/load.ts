@@ -7,6 +7,7 @@ import { refFromColumns, resolveMaterial } from "../materials/resolve";
 import { stateKey, type ComparisonInput, type ComparisonState } from "./build";
 import type { StoredLineForComparison } from "./linearizations";
 import { inputsStampSql } from "./stamp";
+import { POINT_TABLES_SQL, pointTablesOf, type StoredTableSummary } from "./point-tables";
 
 /**
  * The project, its live locations, cases and combinations (with their terms), the
@@ -44,6 +45,7 @@ SELECT json_build_object(
       'yieldPa', m.yield_pa, 'ultimateTensionPa', m.ultimate_tension_pa,
       'ultimateCompressionPa', m.ultimate_compression_pa))
     FROM materials m WHERE m.workspace_id = p.workspace_id AND m.deleted_at IS NULL), '[]'),
+  'pointTables', ${POINT_TABLES_SQL},
   'states', COALESCE((
     SELECT json_agg(json_build_array(s.load_case_id, s.location_id, s.revision,
       s.xx_pa, s.yy_pa, s.zz_pa, s.xy_pa, s.yz_pa, s.zx_pa))
@@ -79,6 +81,7 @@ type ProjectRow = {
   /** Current states as [caseId, locationId, revision, xx, yy, zz, xy, yz, zx] (Pa): arrays keep the JSON small. */
   states: [string, string, number, number, number, number, number, number, number][];
   linearizations: StoredLineForComparison[];
+  pointTables: StoredTableSummary[];
 };
 
 /** The loader's answer: the inputs as JSON text, and the stamp of those very inputs. */
@@ -144,5 +147,6 @@ export function comparisonInputFrom(
     states,
     combinations: project.combinations,
     linearizations: project.linearizations,
+    pointTables: pointTablesOf(project),
   };
 }

@@ -7,6 +7,7 @@ import {
   type GoverningView,
 } from "../../../core/contract/comparison";
 import { buildComparisonWindow, type ComparisonInput } from "./build";
+import { pointTableSection } from "./point-tables";
 
 /** How long one chunk of computation may hold the event loop before the next waits its turn. */
 const CHUNK_TARGET_MS = 20;
@@ -119,6 +120,9 @@ export async function comparisonPage(
     }
   } while (start < items.length);
 
+  const tables = pointTableSection(input.pointTables ?? []);
+  governing.push(...tables.governing);
+  overallCandidates.push(...tables.governing);
   const overall = mergeGoverning(governing);
   const top = mergeOverall(overallCandidates);
   return {
@@ -141,5 +145,6 @@ export async function comparisonPage(
       totalSkipped,
       totalPages: Math.max(1, Math.ceil(Math.max(totalRows, totalSkipped) / query.limit)),
     },
+    pointTables: tables.views,
   };
 }

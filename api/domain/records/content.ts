@@ -1,7 +1,7 @@
 import { createHash } from "node:crypto";
 import { QueryTypes, type Sequelize, type Transaction } from "sequelize";
 import { ENGINE_NAME, ENGINE_VERSION } from "../../../core/constants/engine";
-import type { Comparison } from "../../../core/contract/comparison";
+import type { ComparisonWithSections } from "../../../core/contract/comparison";
 import {
   RECORD_CONTENT_FORMAT,
   RECORD_CONTENT_VERSION,
@@ -70,7 +70,7 @@ export async function buildRecordContent(
         savedAt: s.createdAt.toISOString(),
         savedBy: s.createdBy,
       })),
-    results: results satisfies Comparison,
+    results: results satisfies ComparisonWithSections,
   };
 }
 

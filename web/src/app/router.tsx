@@ -120,6 +120,13 @@ export const router = createBrowserRouter([
               })),
           },
           {
+            path: "workspaces/:workspaceId/projects/:projectId/load-cases/:caseId/point-tables",
+            lazy: () =>
+              import("../features/point-tables/components/PointTablesPage").then((m) => ({
+                Component: m.PointTablesPage,
+              })),
+          },
+          {
             path: "workspaces/:workspaceId/projects/:projectId/comparison",
             lazy: () =>
               import("../features/comparison/components/ComparisonPage").then((m) => ({

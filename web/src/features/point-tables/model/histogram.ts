@@ -5,6 +5,7 @@
  */
 import { scaleLinear } from "d3";
 import { verdictForUtilisation, type UtilisationHistogram, type Verdict } from "../../../../../core";
+import type { Tick } from "../../../../../core/diagrams";
 
 export type HistogramBar = {
   from: number;
@@ -21,8 +22,8 @@ export type HistogramBar = {
 
 export type HistogramGeometry = {
   bars: HistogramBar[];
-  xTicks: { value: number; at: number }[];
-  yTicks: { value: number; at: number }[];
+  xTicks: Tick[];
+  yTicks: Tick[];
   /** where u = 1 (the required factor) falls on the x axis */
   requiredAt: number;
 };
@@ -54,11 +55,11 @@ export function histogramGeometry(h: UtilisationHistogram, width: number, height
     xTicks: x
       .ticks(6)
       .filter((v) => v <= h.max)
-      .map((value) => ({ value, at: x(value) })),
+      .map((value) => ({ value, at: x(value), label: value.toFixed(2) })),
     yTicks: y
       .ticks(4)
       .filter((v) => Number.isInteger(v))
-      .map((value) => ({ value, at: y(value) })),
+      .map((value) => ({ value, at: y(value), label: value.toLocaleString("en-US") })),
     requiredAt: x(1),
   };
 }

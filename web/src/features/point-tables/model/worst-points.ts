@@ -166,3 +166,6 @@ export function readBound(text: string, field: string): { value: number | null }
   const v = Number(t);
   return Number.isFinite(v) ? { value: v } : { error: `${field} must be a number or empty.` };
 }
+
+/** A coordinate as the list shows it: six significant figures, "—" when the table has none. */
+export const coordinateText = (v: number | null) => (v === null ? "—" : String(Number(v.toPrecision(6))));

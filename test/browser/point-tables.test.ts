@@ -2,6 +2,7 @@ import { readFileSync, readdirSync } from "node:fs";
 import path from "node:path";
 import type { Page } from "playwright-core";
 import { beforeAll, describe, expect, it } from "vitest";
+import { seededRandom } from "../../core/testing/fixtures";
 import { screenshotDir } from "../support/browser";
 import { signedInBrowser } from "../support/signed-in-browser";
 
@@ -26,8 +27,7 @@ const HOT_ID = 77_777;
  */
 function generatedTable(): Buffer {
   const lines = ["id,x,y,z,sxx,syy,szz,sxy,syz,szx"];
-  let seed = 12_345;
-  const random = () => (seed = (seed * 1_103_515_245 + 12_345) % 2_147_483_648) / 2_147_483_648;
+  const random = seededRandom(12_345);
   for (let i = 1; i <= ROWS; i++) {
     const x = (i % 400) * 0.5;
     const y = Math.floor(i / 400) * 0.5;

@@ -5,7 +5,7 @@ import { histogramGeometry } from "../model/histogram";
 
 const W = 520;
 const H = 180;
-const M = { left: 56, right: 12, top: 10, bottom: 40 };
+const M = { left: 66, right: 12, top: 10, bottom: 40 };
 
 /** How many points have each governing utilisation, in bins; the line u = 1 is the required factor. */
 export function UtilisationHistogram({ histogram }: { histogram: Histogram }) {
@@ -66,7 +66,7 @@ export function UtilisationHistogram({ histogram }: { histogram: Histogram }) {
               governing utilisation u = n required / n (dimensionless)
             </text>
             <text
-              transform={`translate(${-44} ${ph / 2}) rotate(-90)`}
+              transform={`translate(${-56} ${ph / 2}) rotate(-90)`}
               textAnchor="middle"
               className="fill-graphite text-[12px]"
             >

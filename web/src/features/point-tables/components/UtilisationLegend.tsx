@@ -27,7 +27,7 @@ export function UtilisationLegend() {
         {ticks.map((t) => (
           <span
             key={t.u}
-            className={`num absolute top-0.5 -translate-x-1/2 text-[11px] ${t.required ? "font-semibold text-graphite" : "text-graphite-soft"}`}
+            className={`num absolute top-0.5 whitespace-nowrap text-[11px] ${t.at >= 1 ? "-translate-x-full" : t.at > 0 ? "-translate-x-1/2" : ""} ${t.required ? "font-semibold text-graphite" : "text-graphite-soft"}`}
             style={{ left: `${t.at * 100}%` }}
           >
             {t.label}

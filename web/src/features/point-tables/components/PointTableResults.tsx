@@ -3,6 +3,7 @@ import type { PointTable } from "../../../../../core";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import { Caution } from "../../../components/Caution";
 import type { TableEvaluation } from "../model/merge-evaluations";
+import type { PartTimings } from "../model/part-task";
 import { BadRowsNote } from "./BadRowsNote";
 import { GoverningPoints } from "./GoverningPoints";
 import { UtilisationHistogram } from "./UtilisationHistogram";
@@ -22,6 +23,7 @@ export function PointTableResults({
   unit,
   seconds,
   workers,
+  timings,
   selected,
   onToggle,
   benchHref,
@@ -32,13 +34,18 @@ export function PointTableResults({
   unit: StressUnitName;
   seconds: number;
   workers: number;
+  timings: PartTimings[];
   selected: ReadonlySet<number>;
   onToggle: (index: number) => void;
   benchHref: (index: number) => string;
   onPick: (index: number) => void;
 }) {
   return (
-    <div className="space-y-4 p-3" data-testid="point-table-results">
+    <div
+      className="space-y-4 p-3"
+      data-testid="point-table-results"
+      data-timings={timings.map((t) => `${t.parseMs.toFixed(0)}+${t.evaluateMs.toFixed(0)}`).join(" ")}
+    >
       <Caution />
       <p className="text-sm">
         <span className="num">{table.count.toLocaleString("en-US")}</span> points read and rated in{" "}

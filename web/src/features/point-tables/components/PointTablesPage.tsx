@@ -176,6 +176,7 @@ export function PointTablesPage() {
             unit={unit}
             seconds={run.state.seconds}
             workers={result.workers}
+            timings={result.timings}
             selected={selected}
             onToggle={(i) => setSelected(toggleIn(selected, i))}
             benchHref={benchHref}

@@ -36,8 +36,11 @@ export type PartEvaluation = Pick<
 
 export type PartMessage =
   | { kind: "progress"; phase: "parse" | "evaluate"; done: number; total: number }
-  | { kind: "done"; table: PointTable; evaluation: PartEvaluation }
+  | { kind: "done"; table: PointTable; evaluation: PartEvaluation; timings: PartTimings }
   | { kind: "error"; message: string };
+
+/** How long the worker spent reading and rating its part (ms), for the benchmark and the page's note. */
+export type PartTimings = { parseMs: number; evaluateMs: number };
 
 export type Post = (message: PartMessage, transfer: Transferable[]) => void;
 
@@ -107,12 +110,15 @@ export function transferablesOf(table: PointTable, evaluation: PartEvaluation): 
 /** Runs one part and posts its progress, then its result (arrays transferred) or the error. */
 export async function runPart(request: PartRequest, post: Post): Promise<void> {
   try {
+    const began = performance.now();
     const table =
       "blob" in request.source
         ? await parseBlob(request.source.blob, request.options, post)
         : parsePointTable(request.source.text, request.options);
+    const parsed = performance.now();
     const evaluation = evaluate(table, request, post);
-    post({ kind: "done", table, evaluation }, transferablesOf(table, evaluation));
+    const timings = { parseMs: parsed - began, evaluateMs: performance.now() - parsed };
+    post({ kind: "done", table, evaluation, timings }, transferablesOf(table, evaluation));
   } catch (error) {
     post({ kind: "error", message: error instanceof Error ? error.message : String(error) }, []);
   }

@@ -14,7 +14,7 @@ import {
 } from "../../../../../core";
 import { byteLineCuts } from "./byte-cuts";
 import { mergeEvaluations, type TableEvaluation } from "./merge-evaluations";
-import type { PartMessage, PartRequest } from "./part-task";
+import type { PartMessage, PartRequest, PartTimings } from "./part-task";
 
 /** The part of a Worker the pipeline uses. */
 export type WorkerPort = {
@@ -35,7 +35,13 @@ export type PipelineInput = {
 
 export type PipelineProgress = { phase: "parse" | "evaluate"; fraction: number };
 
-export type PipelineResult = { table: PointTable; evaluation: TableEvaluation; workers: number };
+export type PipelineResult = {
+  table: PointTable;
+  evaluation: TableEvaluation;
+  workers: number;
+  /** per part, in file order */
+  timings: PartTimings[];
+};
 
 /** Thrown (as the run's rejection) when the engineer cancelled. */
 export class PipelineCancelled extends Error {
@@ -160,7 +166,7 @@ export function runPipeline(
       results.map((r) => r.evaluation),
       WORST_KEPT,
     );
-    return { table, evaluation, workers: results.length };
+    return { table, evaluation, workers: results.length, timings: results.map((r) => r.timings) };
   })();
   return { done, cancel };
 }

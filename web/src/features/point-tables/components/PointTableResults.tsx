@@ -6,11 +6,12 @@ import type { TableEvaluation } from "../model/merge-evaluations";
 import type { PartTimings } from "../model/part-task";
 import { BadRowsNote } from "./BadRowsNote";
 import { GoverningPoints } from "./GoverningPoints";
+import { loadPointCloud } from "./point-cloud-chunk";
 import { UtilisationHistogram } from "./UtilisationHistogram";
 import { UtilisationLegend } from "./UtilisationLegend";
 import { WorstPointsTable } from "./WorstPointsTable";
 
-const PointCloud = lazy(() => import("./PointCloud"));
+const PointCloud = lazy(loadPointCloud);
 
 /**
  * What a rated table shows: the caution once, beside the results; the governing point per

@@ -1,4 +1,4 @@
-import { useMemo, useState } from "react";
+import { useEffect, useMemo, useState } from "react";
 import { Link, useNavigate, useParams } from "react-router-dom";
 import { COMPONENTS } from "../../../../../core";
 import { materialLabel, type MaterialRef } from "../../../../../core/contract/materials";
@@ -19,6 +19,7 @@ import { optionOfRef, refFromOption, specFor } from "../model/spec";
 import { governingSelection, toggleIn } from "../model/selection";
 import { pointId, tensorAt } from "../model/worst-points";
 import { AddPointTable } from "./AddPointTable";
+import { loadPointCloud } from "./point-cloud-chunk";
 import { PointTableResults } from "./PointTableResults";
 import { ProgressLine } from "./ProgressLine";
 import type { TableSource } from "./SourcePicker";
@@ -46,6 +47,7 @@ export function PointTablesPage() {
   const [source, setSource] = useState<{ source: TableSource; draft: MappingDraft } | null>(null);
   const [selected, setSelected] = useState<ReadonlySet<number>>(new Set());
   const [selectedFor, setSelectedFor] = useState<unknown>(null);
+  useEffect(() => void loadPointCloud(), []);
 
   const loadCase = cases.data?.find((c) => c.id === caseId);
   if (project.isPending || cases.isPending) return <p className="text-graphite-soft">Loading…</p>;

@@ -92,10 +92,21 @@ export const pointTableSchema = z.looseObject({
 });
 export type StoredPointTable = z.infer<typeof pointTableSchema>;
 
-/** The list answers either a bare array or `{ items }`; both read as the array. */
+/**
+ * The list answers a bare array, `{ items }` or `{ pointTables }` (the agreed contract names the
+ * items but not the envelope); each reads as the array.
+ */
 export const pointTableListSchema = z
-  .union([z.array(pointTableSchema), z.looseObject({ items: z.array(pointTableSchema) })])
-  .transform((v) => (Array.isArray(v) ? v : v.items));
+  .union([
+    z.array(pointTableSchema),
+    z.looseObject({ items: z.array(pointTableSchema) }),
+    z.looseObject({ pointTables: z.array(pointTableSchema) }),
+  ])
+  .transform((v): StoredPointTable[] => {
+    if (Array.isArray(v)) return v;
+    const envelope = v as { items?: StoredPointTable[]; pointTables?: StoredPointTable[] };
+    return envelope.items ?? envelope.pointTables ?? [];
+  });
 
 export const createdPointTableSchema = z.looseObject({ id: z.string() });
 

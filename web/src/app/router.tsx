@@ -117,6 +117,13 @@ export const router = createBrowserRouter([
             lazy: () => import("./review-composition").then((m) => ({ Component: m.ProjectPageWithReview })),
           },
           {
+            path: "workspaces/:workspaceId/projects/:projectId/load-cases/:caseId/point-tables",
+            lazy: () =>
+              import("../features/point-tables/components/PointTablesPage").then((m) => ({
+                Component: m.PointTablesPage,
+              })),
+          },
+          {
             path: "workspaces/:workspaceId/projects/:projectId/comparison",
             lazy: () =>
               import("./review-composition").then((m) => ({ Component: m.ComparisonPageWithReview })),

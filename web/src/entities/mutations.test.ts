@@ -19,6 +19,12 @@ import { locationKeys } from "./location/keys";
 import { createLocationMutation, deleteLocationMutation, updateLocationMutation } from "./location/mutations";
 import { materialKeys } from "./material/keys";
 import { createMaterialMutation, deleteMaterialMutation, updateMaterialMutation } from "./material/mutations";
+import { pointTableKeys } from "./point-table/keys";
+import {
+  createPointTableMutation,
+  deletePointTableMutation,
+  keepPointsMutation,
+} from "./point-table/mutations";
 import { projectKeys } from "./project/keys";
 import {
   createProjectMutation,
@@ -473,5 +479,62 @@ describe("record mutations", () => {
     );
     expect(request).toBe(`PATCH ${base}/review`);
     expect(invalidated).toEqual([recordKeys.review(WS, P), auditKeys.all(WS)]);
+  });
+});
+
+describe("point-table mutations", () => {
+  const TABLE = "0d5f3c1e-0000-4000-8000-000000000005";
+
+  it("when a table is registered, then the case's tables, the comparison and the audit trail are refreshed", async () => {
+    const body = {
+      fileName: "nozzle.csv",
+      sizeBytes: 10,
+      sha256: "0".repeat(64),
+      layout: { separator: ",", decimal: ".", skipRows: 0, header: true },
+      columns: { xx: 0, yy: 1, zz: 2, xy: 3, yz: 4, zx: 5 },
+      unit: "MPa",
+      idKind: "number",
+    } as const;
+    const { request, invalidated } = await run(
+      (c) => createPointTableMutation(c, WS, P, CASE),
+      body,
+      REFUSED,
+    );
+    expect(request).toBe(`POST ${base}/load-cases/${CASE}/point-tables`);
+    expect(invalidated).toEqual([
+      pointTableKeys.list(WS, P, CASE),
+      comparisonKeys.all(WS, P),
+      auditKeys.all(WS),
+    ]);
+  });
+
+  it("when a table is deleted, then it, the case's tables, the comparison and the audit trail are refreshed", async () => {
+    const { request, invalidated } = await run(
+      (c) => deletePointTableMutation(c, WS, P, CASE),
+      TABLE,
+      NO_CONTENT,
+    );
+    expect(request).toBe(`DELETE ${base}/load-cases/${CASE}/point-tables/${TABLE}`);
+    expect(invalidated).toEqual([
+      pointTableKeys.detail(WS, P, CASE, TABLE),
+      pointTableKeys.list(WS, P, CASE),
+      comparisonKeys.all(WS, P),
+      auditKeys.all(WS),
+    ]);
+  });
+
+  it("when points are kept as locations, then the locations, the load cases (a state each), the comparison and the audit trail are refreshed", async () => {
+    const { request, invalidated } = await run(
+      (c) => keepPointsMutation(c, WS, P, CASE),
+      { tableId: TABLE, points: [77777] },
+      REFUSED,
+    );
+    expect(request).toBe(`POST ${base}/load-cases/${CASE}/point-tables/${TABLE}/keep`);
+    expect(invalidated).toEqual([
+      locationKeys.list(WS, P),
+      loadCaseKeys.list(WS, P),
+      comparisonKeys.all(WS, P),
+      auditKeys.all(WS),
+    ]);
   });
 });

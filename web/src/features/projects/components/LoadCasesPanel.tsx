@@ -1,4 +1,5 @@
 import { useState } from "react";
+import { Link } from "react-router-dom";
 import type { LoadCase } from "../../../../../core/contract/load-cases";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import type { Location } from "../../../../../core/contract/projects";
@@ -94,6 +95,12 @@ export function LoadCasesPanel({
                   {c.description && (
                     <div className="max-w-56 text-[12px] font-normal text-graphite-soft">{c.description}</div>
                   )}
+                  <Link
+                    to={`/workspaces/${workspaceId}/projects/${projectId}/load-cases/${c.id}/point-tables`}
+                    className="mr-2 text-[13px] font-normal text-ink underline-offset-2 hover:underline"
+                  >
+                    Point tables
+                  </Link>
                   {canEdit && renaming !== c.id && (
                     <ToolButton
                       aria-label={`Rename load case ${c.name}`}

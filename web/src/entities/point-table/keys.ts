@@ -1,0 +1,9 @@
+import { projectKeys } from "../project/keys";
+
+/** Query keys of a load case's point tables; they sit under the project's scope like its cases. */
+export const pointTableKeys = {
+  list: (workspaceId: string, projectId: string, caseId: string) =>
+    [...projectKeys.scope(workspaceId, projectId), "point-tables", caseId] as const,
+  detail: (workspaceId: string, projectId: string, caseId: string, tableId: string) =>
+    [...pointTableKeys.list(workspaceId, projectId, caseId), tableId] as const,
+};

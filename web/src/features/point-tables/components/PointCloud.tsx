@@ -1,0 +1,72 @@
+/**
+ * The points in 3D (react-three-fiber, loaded as its own chunk), one THREE.Points with a colour
+ * per point from the utilisation colour table: one draw call, so a million points turn smoothly.
+ * It draws only: positions are the table's coordinates scaled into a unit box, colours come from
+ * model/colour-scale.ts, and a click hands the point's index back.
+ */
+import { OrbitControls } from "@react-three/drei";
+import { Canvas, type ThreeEvent } from "@react-three/fiber";
+import { useMemo } from "react";
+import { BufferAttribute, BufferGeometry } from "three";
+import { colourTable, fillColours } from "../model/colour-scale";
+
+/** Coordinates (3 per point) into a box of half-size 1 around the origin, keeping proportions. */
+function unitPositions(coordinates: Float64Array): Float32Array {
+  const lo = [Infinity, Infinity, Infinity];
+  const hi = [-Infinity, -Infinity, -Infinity];
+  for (let i = 0; i < coordinates.length; i += 3) {
+    for (let a = 0; a < 3; a++) {
+      const v = coordinates[i + a];
+      if (v < lo[a]) lo[a] = v;
+      if (v > hi[a]) hi[a] = v;
+    }
+  }
+  const centre = lo.map((l, a) => (l + hi[a]) / 2);
+  const span = Math.max(...hi.map((h, a) => h - lo[a])) || 1;
+  const out = new Float32Array(coordinates.length);
+  for (let i = 0; i < coordinates.length; i += 3) {
+    for (let a = 0; a < 3; a++) out[i + a] = (2 * (coordinates[i + a] - centre[a])) / span;
+  }
+  return out;
+}
+
+export default function PointCloud({
+  coordinates,
+  utilisation,
+  onPick,
+}: {
+  coordinates: Float64Array;
+  utilisation: Float64Array;
+  onPick: (index: number) => void;
+}) {
+  const geometry = useMemo(() => {
+    const g = new BufferGeometry();
+    g.setAttribute("position", new BufferAttribute(unitPositions(coordinates), 3));
+    const colours = fillColours(utilisation, colourTable(), new Float32Array(3 * utilisation.length));
+    g.setAttribute("color", new BufferAttribute(colours, 3));
+    g.computeBoundingSphere();
+    return g;
+  }, [coordinates, utilisation]);
+
+  const onClick = (e: ThreeEvent<MouseEvent>) => {
+    e.stopPropagation();
+    if (e.index !== undefined) onPick(e.index);
+  };
+
+  return (
+    <Canvas
+      frameloop="demand"
+      camera={{ position: [2.2, 1.8, 2.6], fov: 40 }}
+      raycaster={{
+        params: { Points: { threshold: 0.02 }, Mesh: {}, Line: { threshold: 1 }, LOD: {}, Sprite: {} },
+      }}
+      data-testid="point-cloud"
+    >
+      <points geometry={geometry} onClick={onClick}>
+        <pointsMaterial size={3} sizeAttenuation={false} vertexColors />
+      </points>
+      <axesHelper args={[1.2]} />
+      <OrbitControls makeDefault enableDamping={false} />
+    </Canvas>
+  );
+}

@@ -1,0 +1,72 @@
+import type { StoredPointTable } from "../../../entities/point-table/contract";
+import { pointTableDownloadHref } from "../../../entities/point-table/queries";
+import { ToolButton } from "../../../components/ToolButton";
+
+/** The load case's stored tables: name, size, points, rows left out, when and by whom; download or delete. */
+export function StoredTables({
+  ids,
+  tables,
+  canEdit,
+  onDelete,
+}: {
+  ids: { workspaceId: string; projectId: string; caseId: string };
+  tables: StoredPointTable[];
+  canEdit: boolean;
+  onDelete: (tableId: string) => void;
+}) {
+  if (tables.length === 0)
+    return <p className="p-3 text-sm text-graphite-soft">No point table stored in this load case yet.</p>;
+  return (
+    <div className="overflow-x-auto" role="region" aria-label="Stored point tables" tabIndex={0}>
+      <table className="w-full border-collapse text-[14px]" data-testid="stored-tables">
+        <thead>
+          <tr className="border-b border-rule text-left text-[13px] text-graphite-soft">
+            <th scope="col" className="px-3 py-1">
+              file
+            </th>
+            <th scope="col" className="px-3 py-1 text-right">
+              size
+            </th>
+            <th scope="col" className="px-3 py-1 text-right">
+              points
+            </th>
+            <th scope="col" className="px-3 py-1 text-right">
+              rows left out
+            </th>
+            <th scope="col" className="px-3 py-1">
+              stored
+            </th>
+            <th scope="col" className="px-3 py-1">
+              <span className="sr-only">Actions</span>
+            </th>
+          </tr>
+        </thead>
+        <tbody>
+          {tables.map((t) => (
+            <tr key={t.id} className="border-b border-rule last:border-0">
+              <td className="px-3 py-1">{t.fileName}</td>
+              <td className="num px-3 py-1 text-right">{(t.sizeBytes / 1e6).toFixed(2)} MB</td>
+              <td className="num px-3 py-1 text-right">{t.pointCount.toLocaleString("en-US")}</td>
+              <td className="num px-3 py-1 text-right">{t.badRows.count.toLocaleString("en-US")}</td>
+              <td className="num px-3 py-1">{t.createdAt.slice(0, 16).replace("T", " ")} UTC</td>
+              <td className="space-x-2 px-3 py-1 text-right">
+                <a
+                  href={pointTableDownloadHref(ids.workspaceId, ids.projectId, ids.caseId, t.id)}
+                  download
+                  className="text-ink underline-offset-2 hover:underline"
+                >
+                  Download
+                </a>
+                {canEdit && (
+                  <ToolButton aria-label={`Delete point table ${t.fileName}`} onClick={() => onDelete(t.id)}>
+                    Delete
+                  </ToolButton>
+                )}
+              </td>
+            </tr>
+          ))}
+        </tbody>
+      </table>
+    </div>
+  );
+}

@@ -1,0 +1,125 @@
+/**
+ * What one Web Worker does with its run of whole lines of a point table: parse it with core's
+ * PointTableParser as the bytes arrive, rate every point with core's PointTableEvaluator, and hand
+ * back the arrays by transfer (no copy). Plain functions over a `post` callback, so the unit
+ * tests run them in Node without a worker.
+ */
+import {
+  PointTableEvaluator,
+  PointTableParser,
+  estimateRows,
+  parsePointTable,
+  type PointTable,
+  type PointTableEvaluation,
+  type PointTableOptions,
+  type PointTableSpec,
+} from "../../../../../core";
+
+/** What the page asks a worker to do. */
+export type PartRequest = {
+  /** a run of whole lines: a slice of the file (read in the worker) or pasted text */
+  source: { blob: Blob } | { text: string };
+  options: PointTableOptions;
+  spec: PointTableSpec;
+  includeUnsuited: boolean;
+  /** how many of the part's worst points to keep */
+  worstCount: number;
+};
+
+/** A part's rating without the per-criterion and per-point arrays the page does not keep. */
+export type PartEvaluation = Pick<
+  PointTableEvaluation,
+  "count" | "worst" | "histogram" | "failing" | "close" | "badPoints" | "utilisation"
+> & {
+  criteria: Omit<PointTableEvaluation["criteria"][number], "factor" | "utilisation">[];
+};
+
+export type PartMessage =
+  | { kind: "progress"; phase: "parse" | "evaluate"; done: number; total: number }
+  | { kind: "done"; table: PointTable; evaluation: PartEvaluation; timings: PartTimings }
+  | { kind: "error"; message: string };
+
+/** How long the worker spent reading and rating its part (ms), for the benchmark and the page's note. */
+export type PartTimings = { parseMs: number; evaluateMs: number };
+
+export type Post = (message: PartMessage, transfer: Transferable[]) => void;
+
+/** Progress is posted at most this often while reading (bytes), so messages stay few. */
+const PROGRESS_BYTES = 1 << 20;
+
+async function parseBlob(blob: Blob, options: PointTableOptions, post: Post): Promise<PointTable> {
+  const reader = blob.stream().getReader();
+  const decoder = new TextDecoder();
+  let parser: PointTableParser | null = null;
+  let done = 0;
+  let reported = 0;
+  for (;;) {
+    const next = await reader.read();
+    if (next.done) break;
+    const text = decoder.decode(next.value, { stream: true });
+    // the first chunk tells how long the lines are, so the arrays are allocated once
+    parser ??= new PointTableParser({ ...options, expectedRows: estimateRows(text, blob.size) });
+    parser.push(text);
+    done += next.value.byteLength;
+    if (done - reported >= PROGRESS_BYTES) {
+      reported = done;
+      post({ kind: "progress", phase: "parse", done, total: blob.size }, []);
+    }
+  }
+  parser ??= new PointTableParser(options);
+  parser.push(decoder.decode());
+  post({ kind: "progress", phase: "parse", done: blob.size, total: blob.size }, []);
+  return parser.finish();
+}
+
+/** Rates the table a chunk at a time, posting progress after each. */
+function evaluate(table: PointTable, request: PartRequest, post: Post): PartEvaluation {
+  const evaluator = new PointTableEvaluator(table.components, request.spec, {
+    includeUnsuited: request.includeUnsuited,
+    worstCount: request.worstCount,
+  });
+  while (evaluator.step()) {
+    post({ kind: "progress", phase: "evaluate", done: evaluator.result.evaluated, total: table.count }, []);
+  }
+  const r = evaluator.result;
+  return {
+    count: r.count,
+    worst: r.worst,
+    histogram: r.histogram,
+    failing: r.failing,
+    close: r.close,
+    badPoints: r.badPoints,
+    utilisation: r.utilisation,
+    criteria: r.criteria.map(({ factor: _f, utilisation: _u, ...rest }) => rest),
+  };
+}
+
+/** The buffers of a part's arrays, each once (a transfer list may not name one twice). */
+export function transferablesOf(table: PointTable, evaluation: PartEvaluation): ArrayBuffer[] {
+  const buffers = new Set<ArrayBuffer>();
+  const add = (a: Float64Array | null) => {
+    if (a !== null) buffers.add(a.buffer as ArrayBuffer);
+  };
+  add(table.components);
+  add(table.coordinates);
+  if (table.ids instanceof Float64Array) add(table.ids);
+  add(evaluation.utilisation);
+  return [...buffers];
+}
+
+/** Runs one part and posts its progress, then its result (arrays transferred) or the error. */
+export async function runPart(request: PartRequest, post: Post): Promise<void> {
+  try {
+    const began = performance.now();
+    const table =
+      "blob" in request.source
+        ? await parseBlob(request.source.blob, request.options, post)
+        : parsePointTable(request.source.text, request.options);
+    const parsed = performance.now();
+    const evaluation = evaluate(table, request, post);
+    const timings = { parseMs: parsed - began, evaluateMs: performance.now() - parsed };
+    post({ kind: "done", table, evaluation, timings }, transferablesOf(table, evaluation));
+  } catch (error) {
+    post({ kind: "error", message: error instanceof Error ? error.message : String(error) }, []);
+  }
+}

@@ -1,0 +1,212 @@
+import { describe, expect, it } from "vitest";
+import {
+  evaluatePointTable,
+  parsePointTable,
+  type PointTableOptions,
+  type PointTableSpec,
+} from "../../../../../core";
+import { seededRandom } from "../../../../../core/testing/fixtures";
+import { byteLineCuts } from "./byte-cuts";
+import { runPart, type PartMessage, type PartRequest } from "./part-task";
+import { PipelineCancelled, WORST_KEPT, runPipeline, workerCountFor, type WorkerPort } from "./pipeline";
+
+// The reference for every check here is core's own one-piece path (parsePointTable then
+// evaluatePointTable on the whole text): the pipeline must give exactly what it gives.
+
+const SPEC: PointTableSpec = {
+  material: { yield: 250e6, ultimateTension: 400e6, ultimateCompression: 600e6 },
+  requirements: [
+    { criterion: "von-mises", requiredFactor: 1.5 },
+    { criterion: "tresca", requiredFactor: 1.5 },
+    { criterion: "max-principal", requiredFactor: 2 },
+  ],
+};
+const OPTIONS: PointTableOptions = {
+  separator: ",",
+  header: true,
+  skipRows: 1,
+  columns: { id: 0, x: 1, y: 2, z: 3, xx: 4, yy: 5, zz: 6, xy: 7, yz: 8, zx: 9 },
+  unit: "MPa",
+};
+const NAMES = ["id", "x", "y", "z", "sxx", "syy", "szz", "sxy", "syz", "szx"];
+
+/** A title line, a header and `rows` seeded rows; rows listed in `bad` get a word in σyy. */
+function generated(rows: number, bad: ReadonlySet<number> = new Set()): string {
+  const random = seededRandom(7);
+  const lines = ["generated for the pipeline test", NAMES.join(",")];
+  for (let i = 0; i < rows; i++) {
+    const s = Array.from({ length: 6 }, () => ((random() - 0.5) * 400).toFixed(3));
+    if (bad.has(i)) s[1] = "n/a";
+    lines.push([i + 1, random().toFixed(4), random().toFixed(4), random().toFixed(4), ...s].join(","));
+  }
+  return lines.join("\r\n") + "\r\n";
+}
+
+/** A fake Worker: runs the part in this thread on the next turn, delivering what it posts. */
+class FakeWorker implements WorkerPort {
+  onmessage: ((event: { data: PartMessage }) => void) | null = null;
+  onerror: ((event: { message?: string }) => void) | null = null;
+  terminated = false;
+  received: PartRequest | null = null;
+  transferred: Transferable[] = [];
+  constructor(private readonly hold = false) {}
+  postMessage(message: PartRequest) {
+    this.received = message;
+    if (this.hold) return;
+    setTimeout(() => {
+      void runPart(message, (m, transfer) => {
+        this.transferred.push(...transfer);
+        if (!this.terminated) this.onmessage?.({ data: m });
+      });
+    }, 0);
+  }
+  terminate() {
+    this.terminated = true;
+  }
+}
+
+function reference(text: string) {
+  const table = parsePointTable(text, OPTIONS);
+  return { table, evaluation: evaluatePointTable(table.components, SPEC, { worstCount: WORST_KEPT }) };
+}
+
+describe("runPipeline", () => {
+  it("when a pasted text is read by three fake workers, then points, bad rows, governing points, histogram and worst points equal core's one-piece path", async () => {
+    const text = generated(3000, new Set([10, 1500, 2999]));
+    const ref = reference(text);
+    const workers: FakeWorker[] = [];
+    const run = runPipeline(
+      { source: { text }, options: OPTIONS, spec: SPEC, includeUnsuited: false, columnNames: NAMES },
+      {
+        createWorker: () => (workers.push(new FakeWorker()), workers.at(-1)!),
+        workers: 3,
+        onProgress: () => {},
+      },
+    );
+    const { table, evaluation } = await run.done;
+    expect(workers).toHaveLength(3);
+    expect(table.count).toBe(ref.table.count);
+    expect(table.badRows).toEqual(ref.table.badRows);
+    expect(Array.from(table.components)).toEqual(Array.from(ref.table.components));
+    expect(Array.from(evaluation.utilisation)).toEqual(Array.from(ref.evaluation.utilisation));
+    expect(evaluation.histogram.counts).toEqual(ref.evaluation.histogram.counts);
+    expect(evaluation.worst).toEqual(ref.evaluation.worst);
+    expect([evaluation.failing, evaluation.close]).toEqual([ref.evaluation.failing, ref.evaluation.close]);
+    expect(evaluation.criteria.map((c) => [c.governing, c.failing, c.close])).toEqual(
+      ref.evaluation.criteria.map((c) => [c.governing, c.failing, c.close]),
+    );
+    // parts after the first read neither the title line nor the header
+    expect(workers[1].received?.options).toMatchObject({ skipRows: 0, header: false, columnNames: NAMES });
+  });
+
+  it("when a file is read by two fake workers, then a bad row in the second half is named by its line in the whole file", async () => {
+    const text = generated(4000, new Set([3500]));
+    const ref = reference(text);
+    const run = runPipeline(
+      {
+        source: { file: new Blob([text]) },
+        options: OPTIONS,
+        spec: SPEC,
+        includeUnsuited: false,
+        columnNames: NAMES,
+      },
+      { createWorker: () => new FakeWorker(), workers: 2, onProgress: () => {} },
+    );
+    const { table, workers } = await run.done;
+    expect(workers).toBe(2);
+    // line 1 is the title, 2 the header, so row k (0-based) is line k + 3
+    expect(table.badRows.first).toEqual([{ line: 3503, reason: expect.stringContaining("σyy") }]);
+    expect(table.badRows).toEqual(ref.table.badRows);
+    expect(Array.from(table.ids as Float64Array)).toEqual(Array.from(ref.table.ids as Float64Array));
+  });
+
+  it("when a worker finishes, then its arrays come back by transfer, not copied", async () => {
+    const text = generated(200);
+    const worker = new FakeWorker();
+    const { table } = await runPipeline(
+      { source: { text }, options: OPTIONS, spec: SPEC, includeUnsuited: false, columnNames: NAMES },
+      { createWorker: () => worker, workers: 1, onProgress: () => {} },
+    ).done;
+    expect(worker.transferred).toContain(table.components.buffer);
+    expect(worker.transferred).toContain(table.coordinates!.buffer);
+  });
+
+  it("when the run is cancelled, then it rejects as cancelled and every worker is terminated", async () => {
+    const workers: FakeWorker[] = [];
+    const run = runPipeline(
+      {
+        source: { text: generated(3000) },
+        options: OPTIONS,
+        spec: SPEC,
+        includeUnsuited: false,
+        columnNames: NAMES,
+      },
+      {
+        createWorker: () => (workers.push(new FakeWorker(true)), workers.at(-1)!),
+        workers: 2,
+        onProgress: () => {},
+      },
+    );
+    await new Promise((r) => setTimeout(r, 0));
+    run.cancel();
+    await expect(run.done).rejects.toBeInstanceOf(PipelineCancelled);
+    expect(workers.length).toBe(2);
+    expect(workers.every((w) => w.terminated)).toBe(true);
+  });
+
+  it("when a worker reports an error, then the run rejects with its message and the other workers stop", async () => {
+    const workers: FakeWorker[] = [];
+    const run = runPipeline(
+      {
+        source: { text: generated(3000) },
+        // a decimal comma with a comma separator: core's parser refuses the options
+        options: { ...OPTIONS, decimal: "," },
+        spec: SPEC,
+        includeUnsuited: false,
+        columnNames: NAMES,
+      },
+      {
+        createWorker: () => (workers.push(new FakeWorker()), workers.at(-1)!),
+        workers: 2,
+        onProgress: () => {},
+      },
+    );
+    await expect(run.done).rejects.toThrow(/decimal comma/);
+    expect(workers.every((w) => w.terminated)).toBe(true);
+  });
+
+  it("when progress is reported, then it never goes back and ends at the whole", async () => {
+    const fractions: number[] = [];
+    await runPipeline(
+      {
+        source: { file: new Blob([generated(3000)]) },
+        options: OPTIONS,
+        spec: SPEC,
+        includeUnsuited: false,
+        columnNames: NAMES,
+      },
+      { createWorker: () => new FakeWorker(), workers: 2, onProgress: (p) => fractions.push(p.fraction) },
+    ).done;
+    expect(fractions.length).toBeGreaterThan(2);
+    for (let i = 1; i < fractions.length; i++) expect(fractions[i]).toBeGreaterThanOrEqual(fractions[i - 1]);
+    expect(fractions.at(-1)).toBe(1);
+  });
+});
+
+describe("workerCountFor and byteLineCuts", () => {
+  it("when the browser reports cores, then one worker per core, capped at eight, and one for a small file", () => {
+    expect(workerCountFor(2, 90e6)).toBe(2);
+    expect(workerCountFor(64, 90e6)).toBe(8);
+    expect(workerCountFor(undefined, 90e6)).toBe(2);
+    expect(workerCountFor(16, 1000)).toBe(1);
+  });
+
+  it("when a file has multi-byte characters, then every cut falls just after a line feed", async () => {
+    const text = Array.from({ length: 500 }, (_, i) => `σ-${i},1,2,3,4,5,6`).join("\n") + "\n";
+    const bytes = new TextEncoder().encode(text);
+    const cuts = await byteLineCuts(new Blob([bytes]), 4);
+    expect(cuts).toHaveLength(3);
+    for (const c of cuts) expect(bytes[c - 1]).toBe(10);
+    expect([...cuts].sort((a, b) => a - b)).toEqual(cuts);
+  });
+});

@@ -158,6 +158,8 @@ describe.skipIf(!serverHasRecords)("review and sign-off in the browser", () => {
     await again.getByRole("button", { name: "Submit for check" }).click();
     await again.getByText("Record 2 (revision A) is submitted for check.").waitFor();
     await again.getByRole("link", { name: "Open record 2" }).click();
+    // The record page is a lazily loaded route: wait for the address to change before reading it.
+    await eda.waitForURL(/\/records\/[0-9a-f-]+$/);
     const recordTwo = new URL(eda.url()).pathname;
 
     // The diff shows the change, verdicts first.

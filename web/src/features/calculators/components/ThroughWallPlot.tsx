@@ -1,5 +1,6 @@
 import { scaleLinear } from "d3";
 import { useEffect, useRef, useState } from "react";
+import { PlotGridTicks } from "../../../components/PlotGridTicks";
 import { axisTickFormat } from "../../../lib/number-format";
 
 /** One line of the plot: its name (as typeset on the page), its stroke and its values by radius. */
@@ -70,43 +71,17 @@ export function ThroughWallPlot({
         aria-label={`Stresses through the wall: ${series.map((s) => s.label).join(", ")} in ${stressUnit} against radius in ${lengthUnit}`}
         data-testid="through-wall-plot"
       >
-        {yTicks.map((t) => (
-          <g key={`y${t}`}>
-            <line
-              x1={M.left}
-              x2={W - M.right}
-              y1={y(t)}
-              y2={y(t)}
-              stroke={t === 0 ? "#5b5e66" : "#d8d1c1"}
-              strokeWidth={t === 0 ? 1 : 0.5}
-            />
-            <text
-              x={M.left - 6}
-              y={y(t)}
-              dy="0.32em"
-              textAnchor="end"
-              className="num"
-              fontSize="11"
-              fill="#5b5e66"
-            >
-              {yf.format(t)}
-            </text>
-          </g>
-        ))}
-        {xTicks.map((t) => (
-          <text
-            key={`x${t}`}
-            x={x(t)}
-            y={H - M.bottom + 15}
-            textAnchor="middle"
-            className="num"
-            fontSize="11"
-            fill="#5b5e66"
-          >
-            {xf.format(t)}
-          </text>
-        ))}
-        <line x1={M.left} x2={M.left} y1={M.top} y2={H - M.bottom} stroke="#5b5e66" strokeWidth={1} />
+        <PlotGridTicks
+          width={W}
+          height={H}
+          margins={M}
+          x={x}
+          y={y}
+          xTicks={xTicks}
+          yTicks={yTicks}
+          xFormat={xf}
+          yFormat={yf}
+        />
         <line
           x1={x(marked)}
           x2={x(marked)}

@@ -1,6 +1,7 @@
 import { scaleLinear } from "d3";
 import { useEffect, useRef, useState } from "react";
 import type { Distribution } from "../model/distribution";
+import { PlotGridTicks } from "../../../components/PlotGridTicks";
 import { axisTickFormat } from "../../../lib/number-format";
 
 /** Drawn at the width it is shown (so its labels keep their size on a phone), never narrower than this. */
@@ -77,43 +78,17 @@ export function DistributionPlot({
         aria-label={`${symbol} through the wall in ${stressUnit} against the distance from the first point in ${lengthUnit}: total, membrane and membrane + bending`}
         data-testid="distribution-plot"
       >
-        {yTicks.map((t) => (
-          <g key={`y${t}`}>
-            <line
-              x1={M.left}
-              x2={W - M.right}
-              y1={y(t)}
-              y2={y(t)}
-              stroke={t === 0 ? "#5b5e66" : "#d8d1c1"}
-              strokeWidth={t === 0 ? 1 : 0.5}
-            />
-            <text
-              x={M.left - 6}
-              y={y(t)}
-              dy="0.32em"
-              textAnchor="end"
-              className="num"
-              fontSize="11"
-              fill="#5b5e66"
-            >
-              {yf.format(t)}
-            </text>
-          </g>
-        ))}
-        {xTicks.map((t) => (
-          <text
-            key={`x${t}`}
-            x={x(t)}
-            y={H - M.bottom + 15}
-            textAnchor="middle"
-            className="num"
-            fontSize="11"
-            fill="#5b5e66"
-          >
-            {xf.format(t)}
-          </text>
-        ))}
-        <line x1={M.left} x2={M.left} y1={M.top} y2={H - M.bottom} stroke="#5b5e66" strokeWidth={1} />
+        <PlotGridTicks
+          width={W}
+          height={H}
+          margins={M}
+          x={x}
+          y={y}
+          xTicks={xTicks}
+          yTicks={yTicks}
+          xFormat={xf}
+          yFormat={yf}
+        />
         <text x={(M.left + W - M.right) / 2} y={H - 6} textAnchor="middle" fontSize="12" fill="#2a2c30">
           distance from the first point x ({xf.multiplier}
           {lengthUnit})

@@ -136,7 +136,8 @@ describe("editing a project in Chromium: combinations, materials, the trash, exp
     await shot(page, "combination-editing");
     await form.getByRole("button", { name: "Save combination" }).click();
     await expect.poll(() => form.count()).toBe(0);
-    await page.getByText("test pressure held during design upset").waitFor();
+    // The combination list shows the new description (the activity list shows it too, as the change in words).
+    await page.getByText("test pressure held during design upset").first().waitFor();
     const saved = await (
       await editor.request.get(`${api()}/projects/${projectId}/combinations/${combinationId}`)
     ).json();

@@ -24,13 +24,16 @@ type Summary = {
   requiredApprovals: 1 | 2;
   submittedBy: Person;
   submittedAt: string;
-  approvals: { by: Person; at: string; comment: string | null }[];
+  approvals: { by: Person; at: string; comment: string }[];
   returned: { by: Person; at: string; comment: string } | null;
+  approvedAt: string | null;
 };
 
 const RECORD_1 = "0d5f3c1e-0000-4000-8000-0000000000a1";
 const RECORD_2 = "0d5f3c1e-0000-4000-8000-0000000000a2";
 const EDA: Person = { id: "0d5f3c1e-0000-4000-8000-0000000000e1", name: "Eda Marlow" };
+/** The stand-in's comment ids: UUIDs, as the server's schema reads them. */
+const commentId = (n: number) => `0d5f3c1e-0000-4000-8000-${String(n).padStart(12, "0")}`;
 const RUI: Person = { id: "0d5f3c1e-0000-4000-8000-0000000000e2", name: "Rui Tanager" };
 
 describe("review screens against a stand-in records API", () => {
@@ -52,7 +55,8 @@ describe("review screens against a stand-in records API", () => {
     number: 1,
     revision: "A",
     status: "submitted",
-    hash: "5e1f0c2a9b7d",
+    // The server's schemas (core/contract/records.ts) read a SHA-256 in hex: 64 digits.
+    hash: "5e1f0c2a9b7d".padEnd(64, "0"),
     engineVersion: "0.1.0",
     reason: "First issue of the shell check for review.",
     requiredApprovals: 1,
@@ -60,6 +64,7 @@ describe("review screens against a stand-in records API", () => {
     submittedAt: "2026-12-01T10:00:00.000Z",
     approvals: [],
     returned: null,
+    approvedAt: null,
     ...over,
   });
 
@@ -107,7 +112,13 @@ describe("review screens against a stand-in records API", () => {
         content,
         comments: fake.comments,
         events: [
-          { status: "submitted", by: record.submittedBy, at: record.submittedAt, note: record.reason },
+          {
+            status: "submitted",
+            action: "submit",
+            by: record.submittedBy,
+            at: record.submittedAt,
+            note: record.reason,
+          },
         ],
       };
     };
@@ -151,7 +162,7 @@ describe("review screens against a stand-in records API", () => {
     if (action === "comments") {
       const body = request.postDataJSON();
       const comment = {
-        id: `c${fake.comments.length + 1}`,
+        id: commentId(fake.comments.length + 1),
         recordId: id,
         by: RUI,
         at: "2026-12-01T11:00:00.000Z",
@@ -209,7 +220,7 @@ describe("review screens against a stand-in records API", () => {
   it("when the results differ from the approved record, then the comparison says so, and a viewer is told who submits", async () => {
     const approved = summary({
       status: "approved",
-      approvals: [{ by: RUI, at: "2026-12-02T09:00:00.000Z", comment: null }],
+      approvals: [{ by: RUI, at: "2026-12-02T09:00:00.000Z", comment: "" }],
     });
     fake.review = {
       status: "approved",
@@ -301,7 +312,7 @@ describe("review screens against a stand-in records API", () => {
     ];
     fake.comments = [
       {
-        id: "c1",
+        id: commentId(1),
         recordId: RECORD_2,
         rowId: hydroRow,
         replyTo: null,
@@ -310,16 +321,16 @@ describe("review screens against a stand-in records API", () => {
         at: "2026-12-01T11:00:00.000Z",
       },
       {
-        id: "c2",
+        id: commentId(2),
         recordId: RECORD_2,
         rowId: hydroRow,
-        replyTo: "c1",
+        replyTo: commentId(1),
         text: "Gauge G-2.",
         by: EDA,
         at: "2026-12-01T11:30:00.000Z",
       },
       {
-        id: "c3",
+        id: commentId(3),
         recordId: RECORD_2,
         rowId: null,
         replyTo: null,

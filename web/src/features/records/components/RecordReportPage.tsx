@@ -49,6 +49,9 @@ export function RecordReportPage({
           </a>
         </div>
       </div>
+      <h1 data-print-hidden className="text-2xl font-semibold tracking-tight">
+        Calculation report of record <span className="num">{r.number}</span>, revision {r.revision}
+      </h1>
       {report(r.content, recordReportMeta(r, records.data))}
     </div>
   );

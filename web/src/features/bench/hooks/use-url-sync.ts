@@ -1,5 +1,5 @@
 import { useEffect } from "react";
-import { decodeBenchState, encodeBenchState } from "../model/url-state";
+import { benchAddress, decodeBenchState, encodeBenchState } from "../model/url-state";
 import { useBenchStore } from "../model/store";
 
 /** How long the state must rest before the address is rewritten (a drag would otherwise flood history). */
@@ -16,10 +16,15 @@ export function useUrlSync() {
     let timer: number | undefined;
     // A bench opened from a project keeps its `source` (workspace/project/case/location) in the address.
     const source = new URLSearchParams(window.location.search).get("source");
+    const benchPath = window.location.pathname;
     const write = () => {
-      const query = encodeBenchState(useBenchStore.getState());
-      const url = `${window.location.pathname}?${source ? `source=${source}&` : ""}${query}${window.location.hash}`;
-      window.history.replaceState(window.history.state, "", url);
+      const url = benchAddress(
+        window.location,
+        benchPath,
+        source,
+        encodeBenchState(useBenchStore.getState()),
+      );
+      if (url) window.history.replaceState(window.history.state, "", url);
     };
     write();
     const unsubscribe = useBenchStore.subscribe(() => {

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { rotateTensor, verdictForFactor as verdictFor } from "../../../../../core";
 import * as act from "./actions";
 import { initialBenchState } from "./bench-state";
-import { decodeBenchState, encodeBenchState } from "./url-state";
+import { benchAddress, decodeBenchState, encodeBenchState } from "./url-state";
 import { resultsAsText } from "./results-text";
 import { criteriaOf, planePrincipals } from "./derive";
 
@@ -83,5 +83,16 @@ describe("a link is an entry point too", () => {
       yz: 0,
       zx: 0,
     });
+  });
+
+  it("when the address has already moved to another page, then the bench writes nothing; on its own page it keeps the source first and the hash last", () => {
+    const query = encodeBenchState(initialBenchState());
+    expect(
+      benchAddress({ pathname: "/workspaces/w/projects/p", hash: "" }, "/bench", "w/p/c/l", query),
+    ).toBeNull();
+    expect(benchAddress({ pathname: "/bench", hash: "#mohr" }, "/bench", "w/p/c/l", query)).toBe(
+      `/bench?source=w/p/c/l&${query}#mohr`,
+    );
+    expect(benchAddress({ pathname: "/bench", hash: "" }, "/bench", null, query)).toBe(`/bench?${query}`);
   });
 });

@@ -127,3 +127,19 @@ export function decodeBenchState(search: string): Partial<BenchState> {
   if (form === "grid" || form === "six" || form === "plane") out.inputForm = form;
   return out;
 }
+
+/**
+ * The address the bench writes for its state, or null when the address is no longer the bench's.
+ * The router renders a navigation in a transition: for a moment the address is already the next
+ * page while the bench is still mounted, and a write then would stamp the bench's query onto it.
+ * @param source the `workspace/project/case/location` the bench was opened from, kept first
+ */
+export function benchAddress(
+  current: { pathname: string; hash: string },
+  benchPath: string,
+  source: string | null,
+  query: string,
+): string | null {
+  if (current.pathname !== benchPath) return null;
+  return `${benchPath}?${source ? `source=${source}&` : ""}${query}${current.hash}`;
+}

@@ -6,6 +6,7 @@ import { UserMenu } from "../features/auth/components/UserMenu";
 import { MailboxLink } from "../features/mailbox/components/MailboxPage";
 import { ServerStatus } from "../features/system-status/components/ServerStatus";
 import { useSession } from "../lib/session";
+import { usePageTitle } from "./use-page-title";
 
 const navigation = [
   { to: "/", label: "Overview", end: true },
@@ -20,6 +21,7 @@ const navigation = [
  */
 export function Layout() {
   const [menuOpen, setMenuOpen] = useState(false);
+  usePageTitle();
   // Following a link or pressing a button in the folded menu closes it; Escape closes it too.
   const closeOnChoice = (event: MouseEvent) => {
     if ((event.target as HTMLElement).closest("a, button")) setMenuOpen(false);

@@ -30,6 +30,8 @@ const BenchPage = lazy(() =>
 export const router = createBrowserRouter([
   {
     element: <Layout />,
+    // Shown while the first page's module loads (routes below load lazily).
+    hydrateFallbackElement: <p className="p-6 text-graphite-soft">Opening Sigmacube…</p>,
     children: [
       { index: true, element: <HomePage /> },
       {

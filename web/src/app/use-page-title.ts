@@ -1,0 +1,38 @@
+import { useEffect } from "react";
+
+const PRODUCT = "Sigmacube";
+
+/**
+ * The tab's title for what `main` shows: its heading, then the last link of the trail above the
+ * heading (the project or workspace it belongs to), then the product — "Comparison · CT-7 shell
+ * and heads · Sigmacube". An engineer with a bench, a comparison and a record open in three tabs
+ * tells them apart, and the browser's history lists pages by name.
+ * @param text the heading's text and the trail's last link, as found in the page
+ */
+export function pageTitle(heading: string | null, trail: string | null): string {
+  const parts = [heading, trail].map((s) => s?.replace(/\s+/g, " ").trim()).filter(Boolean);
+  return [...new Set(parts), PRODUCT].join(" · ");
+}
+
+/**
+ * Keeps `document.title` in step with the page in `#main`. Pages render their heading once their
+ * data arrives, so this watches the subtree rather than reading it once per navigation.
+ */
+export function usePageTitle() {
+  useEffect(() => {
+    const main = document.getElementById("main");
+    if (!main) return;
+    const update = () => {
+      const heading = main.querySelector("h1");
+      const trailLinks = heading?.previousElementSibling?.querySelectorAll("a");
+      const trail =
+        trailLinks && trailLinks.length > 0 ? trailLinks[trailLinks.length - 1].textContent : null;
+      const next = pageTitle(heading?.textContent ?? null, trail);
+      if (document.title !== next) document.title = next;
+    };
+    update();
+    const observer = new MutationObserver(update);
+    observer.observe(main, { childList: true, subtree: true, characterData: true });
+    return () => observer.disconnect();
+  }, []);
+}

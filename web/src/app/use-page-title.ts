@@ -15,7 +15,7 @@ export function pageTitle(heading: string | null, trail: string | null): string 
 }
 
 /**
- * Keeps `document.title` in step with the page in `#main`. Pages render their heading once their
+ * Keeps `document.title` in step with the page in `#main` (the home page is plain "Sigmacube"). Pages render their heading once their
  * data arrives, so this watches the subtree rather than reading it once per navigation.
  */
 export function usePageTitle() {
@@ -23,6 +23,11 @@ export function usePageTitle() {
     const main = document.getElementById("main");
     if (!main) return;
     const update = () => {
+      // The home page is the product itself; its heading is a sentence, not a name.
+      if (window.location.pathname === "/") {
+        document.title = PRODUCT;
+        return;
+      }
       const heading = main.querySelector("h1");
       const trailLinks = heading?.previousElementSibling?.querySelectorAll("a");
       const trail =

@@ -25,6 +25,10 @@ describe("page titles in Chromium", () => {
     await expect.poll(() => page.title(), { timeout: 10_000 }).toBe("Drum D-2 · Title checks · Sigmacube");
     await page.getByRole("link", { name: "Comparison", exact: true }).click();
     await expect.poll(() => page.title(), { timeout: 10_000 }).toBe("Comparison · Drum D-2 · Sigmacube");
+    await page.goto(`${project}/report`);
+    await expect
+      .poll(() => page.title(), { timeout: 10_000 })
+      .toBe("Draft calculation report · Drum D-2 · Sigmacube");
     await page.goto(`${server.url}/bench`);
     await expect.poll(() => page.title(), { timeout: 10_000 }).toMatch(/ · Sigmacube$/);
     expect(await page.title()).toBe(`${(await page.locator("main h1").innerText()).trim()} · Sigmacube`);

@@ -29,7 +29,10 @@ export function usePageTitle() {
         return;
       }
       const heading = main.querySelector("h1");
-      const trailLinks = heading?.previousElementSibling?.querySelectorAll("a");
+      // The trail is the line just above the heading, or the first line of the block above it.
+      const above = heading?.previousElementSibling;
+      const trailLine = above?.tagName === "P" ? above : above?.querySelector("p");
+      const trailLinks = trailLine?.querySelectorAll("a");
       const trail =
         trailLinks && trailLinks.length > 0 ? trailLinks[trailLinks.length - 1].textContent : null;
       const next = pageTitle(heading?.textContent ?? null, trail);

@@ -40,6 +40,9 @@ export function ReportPage() {
           />
         </div>
       </div>
+      <h1 data-print-hidden className="text-2xl font-semibold tracking-tight">
+        Draft calculation report
+      </h1>
       <ReportView content={content.data} meta={DRAFT} />
     </div>
   );

@@ -134,7 +134,11 @@ export async function seedDemoProjects(transaction: Transaction, log: (line: str
  * read by the same parser and stored in the same binary chunks as an upload; the server evaluates
  * it when it is first read. Returns the points stored.
  */
-async function seedDemoPointTable(transaction: Transaction, workspaceId: string, ownerId: string | null) {
+export async function seedDemoPointTable(
+  transaction: Transaction,
+  workspaceId: string,
+  ownerId: string | null,
+) {
   const demo = ct7NozzlePointTable();
   const project = await Project.findOne({ where: { workspaceId, name: demo.projectName }, transaction });
   const loadCase =

@@ -2,6 +2,7 @@ import type { Sequelize } from "sequelize";
 import { AppSetting } from "./models/app-setting";
 import { seedDemoAccounts } from "./seed-accounts";
 import { seedDemoProjects } from "./seed-projects";
+import { upgradeDemoNozzleProject } from "./seed-nozzle-upgrade";
 import { seedDemoRecords, type FreezeForSeed } from "./seed-records";
 
 /**
@@ -9,7 +10,7 @@ import { seedDemoRecords, type FreezeForSeed } from "./seed-records";
  * load cases) adds a step below and raises this number; a database seeded by an older
  * version gets the new steps on the next start.
  */
-export const DEMO_SEED_VERSION = 4;
+export const DEMO_SEED_VERSION = 5;
 const SEED_KEY = "demo_seed";
 
 type SeedRecord = { version: number; seededAt: string };
@@ -39,6 +40,9 @@ export async function seedDemo(
     if (done < 3) await seedDemoProjects(transaction, log);
     // Version 4: one approved calculation record and one returned with comments.
     if (done < 4 && freeze) await seedDemoRecords(transaction, freeze, log);
+    // Version 5: a demo seeded before point tables gets the nozzle project's table (a fresh seed
+    // made it in step 3 already, and the step leaves that project alone).
+    if (done < 5 && target >= 5) await upgradeDemoNozzleProject(transaction, log);
 
     const value: SeedRecord = { version: target, seededAt: new Date().toISOString() };
     await AppSetting.upsert({ key: SEED_KEY, value }, { transaction });

@@ -17,6 +17,7 @@ import { displayUnit } from "../../../lib/stress";
 import { comparisonTable } from "../model/rows";
 import { ComparisonTable } from "./ComparisonTable";
 import { LinearizationChecks } from "./LinearizationChecks";
+import { PointTableChecks } from "./PointTableChecks";
 import { UtilisationChart } from "./UtilisationChart";
 
 /**
@@ -40,6 +41,9 @@ export function ComparisonPage({ review }: { review?: ReactNode } = {}) {
   const criterion = chartCriterion ?? c.requirements[0]?.criterion ?? "von-mises";
   // The server's evaluator picked it (core's one governing rule); nothing is re-ranked here.
   const top = c.governingOverall;
+  const pointTables = c.pointTables ?? [];
+  // The sections after the rows, chart and per-location list are numbered on from 4 as they appear.
+  const sectionAfterRows = c.governingByLocation.length > 0 ? 4 : 3;
 
   return (
     <div className="space-y-5">
@@ -196,11 +200,21 @@ export function ComparisonPage({ review }: { review?: ReactNode } = {}) {
       {c.linearizations.length > 0 && (
         <Panel
           id="linearizations"
-          index="4"
+          index={String(sectionAfterRows)}
           title="Stress classification lines"
           subtitle="category checks of each saved line"
         >
           <LinearizationChecks lines={c.linearizations} workspaceId={workspaceId} projectId={projectId} />
+        </Panel>
+      )}
+      {pointTables.length > 0 && (
+        <Panel
+          id="point-tables"
+          index={String(sectionAfterRows + (c.linearizations.length > 0 ? 1 : 0))}
+          title="Finite-element point tables"
+          subtitle="governing point of each table per criterion; they take part in the governing check above"
+        >
+          <PointTableChecks tables={pointTables} workspaceId={workspaceId} projectId={projectId} />
         </Panel>
       )}
       <Caution />

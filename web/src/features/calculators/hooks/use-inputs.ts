@@ -23,5 +23,7 @@ export function useInputs<S extends InputSpec>(spec: S) {
   const setChoice = (key: keyof S["choices"] & string, value: string) =>
     write({ ...values, choices: { ...values.choices, [key]: value } });
   const setUnits = (units: UnitSet) => write(withUnits(spec, values, units));
-  return { values, setNumber, setNumbers, setChoice, setUnits };
+  /** Every input at once (a point moved to another face and angle in one step, one address). */
+  const setValues = (next: InputValues<S>) => write(next);
+  return { values, setNumber, setNumbers, setChoice, setUnits, setValues };
 }

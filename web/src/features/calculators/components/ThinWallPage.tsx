@@ -119,15 +119,18 @@ export function ThinWallPage() {
               ]}
             />
             <p className="text-[13px] text-graphite-soft">All shears are zero: these are principal axes.</p>
-            {r.adequacy.warning !== undefined && r.thickLink !== undefined && (
+            {r.warning !== undefined && r.thickLink !== undefined && (
               <div
                 role="note"
-                className="rounded-sm border border-close bg-close-wash px-3 py-2 text-[14px]"
+                className="space-y-1 rounded-sm border border-close bg-close-wash px-3 py-2 text-[14px]"
                 data-testid="thin-wall-warning"
               >
                 <p>
                   <span aria-hidden="true">△ </span>
-                  {r.adequacy.warning}
+                  {r.warning[0]}
+                </p>
+                <p className="text-[13px]" data-testid="thin-wall-radius">
+                  {r.warning[1]}
                 </p>
                 <Link to={r.thickLink} data-testid="open-thick">
                   Open in the thick-walled calculator with the same inputs

@@ -150,6 +150,40 @@ describe("the calculators in Chromium", () => {
     expect(await shown(page, "yy")).toBeCloseTo(lame, 9);
   });
 
+  it("when a cylinder's wall is checked by UG-27 and the unit set changes, then the page shows t = P·R/(S·E − 0.6P) on the corroded radius with the allowance, says the wall is too thin in words, and carries S and the allowance to psi and inches", async () => {
+    await open("Thin-walled cylinder and sphere");
+    await type(page, "Internal pressure p", "1.5");
+    await type(page, "Radius r", "600");
+    await type(page, "Wall thickness t", "8");
+    await type(page, "Allowable stress S", "138");
+    await type(page, "Joint efficiency E", "1");
+    await type(page, "Corrosion allowance", "1.5");
+    // UG-27(c)(1), recalled from memory: R = 600 + 1.5 = 601.5 mm, t = 1.5·601.5/(138 − 0.9) = 6.5810 mm,
+    // 8.0810 mm with the allowance (hand arithmetic): more than the 8 mm typed.
+    const required = (1.5 * 601.5) / (138 - 0.9) + 1.5;
+    const total = page.getByTestId("ug27-required");
+    await total.waitFor();
+    expect(Number(await total.getAttribute("data-value"))).toBeCloseTo(required, 9);
+    expect(await page.getByTestId("ug27-verdict").innerText()).toMatch(/wall too thin/);
+    expect(await page.getByTestId("ug27").innerText()).toContain("recalled from memory");
+    await page.screenshot({
+      path: path.join(screenshotDir, "calculator-thin-wall-ug27.png"),
+      fullPage: true,
+    });
+
+    await page.getByLabel(/^Units/).selectOption("us-psi");
+    // 138 MPa = 20 015.1 psi and 1.5 mm = 0.0590551 in (1 psi = 6894.757 Pa, 1 in = 25.4 mm by definition).
+    await expect
+      .poll(async () => Number(await page.getByLabel("Allowable stress S", { exact: true }).inputValue()))
+      .toBeCloseTo(138e6 / 6894.757293168, 3);
+    expect(Number(await page.getByLabel("Corrosion allowance", { exact: true }).inputValue())).toBeCloseTo(
+      1.5 / 25.4,
+      9,
+    );
+    expect(Number(await total.getAttribute("data-value"))).toBeCloseTo(required / 25.4, 9);
+    expect(await page.getByTestId("ug27-verdict").innerText()).toMatch(/wall too thin/);
+  });
+
   it("when a thick cylinder in plane strain is typed (rᵢ = 1, rₒ = 2, pᵢ = 100), then the page and the bench show core's thickCylinder at the chosen radius and the plot names σθ, σz and σr with units", async () => {
     await open("Thick-walled cylinder (Lamé)");
     await type(page, "Inner radius rᵢ", "1");

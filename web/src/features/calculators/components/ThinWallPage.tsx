@@ -12,12 +12,27 @@ import { SendToBench } from "./SendToBench";
 import { AddToLoadCase } from "./AddToLoadCase";
 import { StateTable } from "./StateTable";
 import { UnitSetPicker } from "./UnitSetPicker";
+import { Ug27CheckResults } from "./Ug27Check";
+import { UG27_INPUTS, computeUg27 } from "../model/ug27";
+import type { UnitSet } from "../model/units";
+
+/** Every input of the page: the calculator's and its UG-27 check's, for a change of unit set. */
+const PAGE_INPUTS = {
+  numbers: { ...THIN_WALL_INPUTS.numbers, ...UG27_INPUTS.numbers },
+  choices: THIN_WALL_INPUTS.choices,
+};
 
 /** Thin-walled cylinder (closed ends) or sphere under internal pressure: membrane stresses. */
 export function ThinWallPage() {
-  const { values, setNumber, setChoice, setUnits } = useInputs(THIN_WALL_INPUTS);
+  const { values, setNumber, setChoice } = useInputs(THIN_WALL_INPUTS);
+  // The UG-27 check's inputs share the address under their own names; a change of unit set
+  // converts both groups in one write.
+  const ug27 = useInputs(UG27_INPUTS);
+  const both = useInputs(PAGE_INPUTS);
+  const setUnits = (u: UnitSet) => both.setUnits(u);
   const { units, numbers: n, choices: c } = values;
   const outcome = computeThinWall(values);
+  const check = outcome.ok ? computeUg27(values, outcome.result, ug27.values) : undefined;
   const unit = stressUnitOf(units);
   const sphere = c.shape === "sphere";
   const meanForm = c.form === "mean-diameter";
@@ -68,6 +83,30 @@ export function ThinWallPage() {
             units={units}
             value={n.t}
             onCommit={(v) => setNumber("t", v)}
+          />
+          <p className="pt-1 text-[12px] text-graphite-soft">
+            Required-thickness check (ASME VIII-1 UG-27; not part of the state saved):
+          </p>
+          <InputField
+            label="Allowable stress S"
+            dimension="stress"
+            units={units}
+            value={ug27.values.numbers.S}
+            onCommit={(v) => ug27.setNumber("S", v)}
+          />
+          <InputField
+            label="Joint efficiency E"
+            dimension="ratio"
+            units={units}
+            value={ug27.values.numbers.E}
+            onCommit={(v) => ug27.setNumber("E", v)}
+          />
+          <InputField
+            label="Corrosion allowance"
+            dimension="length"
+            units={units}
+            value={ug27.values.numbers.CA}
+            onCommit={(v) => ug27.setNumber("CA", v)}
           />
           <ChoiceField
             legend="Formula"
@@ -137,6 +176,7 @@ export function ThinWallPage() {
                 </Link>
               </div>
             )}
+            {check && <Ug27CheckResults outcome={check} units={units} />}
           </>
         )
       }

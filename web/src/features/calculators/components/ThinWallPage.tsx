@@ -84,6 +84,24 @@ export function ThinWallPage() {
             value={n.t}
             onCommit={(v) => setNumber("t", v)}
           />
+          <ChoiceField
+            legend="Formula"
+            value={c.form}
+            onChange={(v) => setChoice("form", v)}
+            options={[
+              { value: "inside-radius", label: "inside radius" },
+              { value: "mean-diameter", label: "mean diameter" },
+            ]}
+          />
+          <ChoiceField
+            legend="Radial stress σr"
+            value={c.radial}
+            onChange={(v) => setChoice("radial", v)}
+            options={[
+              { value: "membrane", label: "0 (mid-wall, membrane)" },
+              { value: "inner-surface", label: "−p (inside face)" },
+            ]}
+          />
           <p className="pt-1 text-[12px] text-graphite-soft">
             Required-thickness check (ASME VIII-1 UG-27; not part of the state saved):
           </p>
@@ -107,24 +125,6 @@ export function ThinWallPage() {
             units={units}
             value={ug27.values.numbers.CA}
             onCommit={(v) => ug27.setNumber("CA", v)}
-          />
-          <ChoiceField
-            legend="Formula"
-            value={c.form}
-            onChange={(v) => setChoice("form", v)}
-            options={[
-              { value: "inside-radius", label: "inside radius" },
-              { value: "mean-diameter", label: "mean diameter" },
-            ]}
-          />
-          <ChoiceField
-            legend="Radial stress σr"
-            value={c.radial}
-            onChange={(v) => setChoice("radial", v)}
-            options={[
-              { value: "membrane", label: "0 (mid-wall, membrane)" },
-              { value: "inner-surface", label: "−p (inside face)" },
-            ]}
           />
         </>
       }
@@ -212,6 +212,7 @@ export function ThinWallPage() {
             "Away from heads, nozzles, supports and changes of thickness; no bending of the wall.",
             "Internal pressure. Under external pressure buckling usually governs and is not checked here.",
             "The mean-diameter form gives a hoop stress larger by (1 + t/dᵢ) than the inside-radius form: a convention, not an error.",
+            "UG-27 check: internal pressure only, formulas recalled from memory (verify against your code edition); one joint efficiency for both cylinder formulas (enter the lower); R is the inside radius plus the corrosion allowance; no mill tolerance and no other loadings.",
           ]}
         />
       }

@@ -4,7 +4,7 @@ import type { Outcome } from "../model/outcome";
 import type { Ug27Check } from "../model/ug27";
 import { unitFor, type UnitSet } from "../model/units";
 
-/** A thickness as the check shows it: 4 decimals in mm, 4 in inches (4 significant figures at least). */
+/** A thickness as the check shows it: 5 significant figures. */
 const thicknessText = (v: number) => Number(v.toPrecision(5)).toString();
 
 /**

@@ -188,6 +188,8 @@ export type {
   ShaftSurfacePoint,
 } from "./calculators/combined-shaft";
 export { bendingTowards, hollowShaftStress } from "./calculators/combined-shaft";
+export type { Ug27Formula, Ug27Input, Ug27Result, Ug27Shape } from "./calculators/asme-ug27";
+export { ug27RequiredThickness } from "./calculators/asme-ug27";
 
 export type { EnvelopeProbe, EnvelopeProbeHit } from "./criteria/envelope-probe";
 export { probeEnvelopes } from "./criteria/envelope-probe";

@@ -3,8 +3,9 @@
  * core covers. Each test title names the case's source (a published book with the place in it, or the
  * formula) and its basis ("published", "recalled from memory", "formula, recomputed independently",
  * "common practice, no source").
- * Strain-gauge, vessel (thin and Lamé thick-walled) and shaft cases run through core/calculators/; cases
- * whose expected values core does not compute (UG-27 thickness) are listed as skipped with the reason.
+ * Strain-gauge, vessel (thin and Lamé thick-walled, UG-27 required thickness) and shaft cases run
+ * through core/calculators/; cases whose expected values core does not compute would be listed as
+ * skipped with the reason.
  */
 import { describe, expect, it } from "vitest";
 import {
@@ -19,6 +20,7 @@ import {
   type PlaneStrain,
 } from "./calculators/rosette";
 import { solidShaftStress } from "./calculators/shaft";
+import { ug27RequiredThickness, type Ug27Shape } from "./calculators/asme-ug27";
 import { thickCylinder } from "./calculators/thick-wall";
 import { thinCylinder, thinSphere, type ThinWallOptions } from "./calculators/thin-wall";
 import { safetyFactor, type Material } from "./criteria/safety-factor";
@@ -54,11 +56,10 @@ const COVERED = [
   "thin_vessel",
   "shaft",
   "lame",
+  "asme_ug27",
 ] as const;
 /** calc kinds whose expected values core does not compute, with the reason shown on the skipped test. */
-const NOT_COVERED: Record<string, string> = {
-  asme_ug27: "core has no ASME UG-27 minimum-thickness calculator",
-};
+const NOT_COVERED: Record<string, string> = {};
 /** Facts core can state; the others are facts about formulas core does not have. */
 const FACTS_COVERED = [
   "pure_shear_yield",
@@ -196,6 +197,8 @@ function actualsFor(c: Case): Actuals {
       return thinVesselActuals(c);
     case "shaft":
       return shaftActuals(c);
+    case "asme_ug27":
+      return ug27Actuals(c);
     case "lame":
       return lameActuals(c);
     case "fact":
@@ -278,6 +281,19 @@ function thinVesselActuals(c: Case): Actuals {
     p_burst_DE: () => num(c, "p") * vonMisesFactor(num(c, "Su")),
     n_DE: () => vonMisesFactor(num(c, "Sy")),
   };
+}
+
+/** UG-27 required thickness: P, R (corroded), S, E, the corrosion allowance CA and the part. */
+function ug27Actuals(c: Case): Actuals {
+  const r = () =>
+    ug27RequiredThickness(c.inputs.part as Ug27Shape, {
+      pressure: num(c, "P"),
+      insideRadius: num(c, "R"),
+      allowableStress: num(c, "S"),
+      jointEfficiency: num(c, "E"),
+      corrosionAllowance: has(c, "CA") ? num(c, "CA") : 0,
+    });
+  return { t_req: () => r().required, t_with_CA: () => r().requiredWithCorrosion };
 }
 
 function shaftActuals(c: Case): Actuals {

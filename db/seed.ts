@@ -1,6 +1,7 @@
 import type { Sequelize } from "sequelize";
 import { AppSetting } from "./models/app-setting";
 import { seedDemoAccounts } from "./seed-accounts";
+import { backfillDemoCalculatorInputs } from "./seed-calculator-inputs";
 import { seedDemoProjects } from "./seed-projects";
 import { upgradeDemoNozzleProject } from "./seed-nozzle-upgrade";
 import { seedDemoRecords, type FreezeForSeed } from "./seed-records";
@@ -25,12 +26,16 @@ export async function seedDemo(
   sequelize: Sequelize,
   log: (line: string) => void = () => {},
   freeze?: FreezeForSeed,
-): Promise<{ seeded: boolean; version: number }> {
+): Promise<{ seeded: boolean; version: number; backfilled: number }> {
   const target = freeze ? DEMO_SEED_VERSION : 3;
   return sequelize.transaction(async (transaction) => {
     const existing = await AppSetting.findByPk(SEED_KEY, { transaction, lock: transaction.LOCK.UPDATE });
     const done = (existing?.value as SeedRecord | undefined)?.version ?? 0;
-    if (done >= target) return { seeded: false, version: done };
+    // On every start, not a numbered step: demo states seeded before they kept their calculator
+    // inputs get them (db/seed-calculator-inputs.ts says why and when a state is left alone).
+    // Before the records' step, so records frozen from here on hold the inputs.
+    const backfilled = done >= 3 ? await backfillDemoCalculatorInputs(transaction, log) : 0;
+    if (done >= target) return { seeded: false, version: done, backfilled };
 
     // Version 1: nothing but the record itself. Accounts and projects arrive with their issues.
     log(`demo seed: applying version ${target} (was ${done})`);
@@ -46,6 +51,6 @@ export async function seedDemo(
 
     const value: SeedRecord = { version: target, seededAt: new Date().toISOString() };
     await AppSetting.upsert({ key: SEED_KEY, value }, { transaction });
-    return { seeded: true, version: target };
+    return { seeded: true, version: target, backfilled };
   });
 }

@@ -20,6 +20,26 @@ describe("thin-wall adequacy against the Lamé bore stress", () => {
     expect(at05.warning).toMatch(/thick-walled cylinder calculator/);
   });
 
+  it("when t/r = 0.2 and 0.5, then the warning states the ratio for these inputs, the radius and formula it uses, and the thin-wall shortfall 1 − 1/ratio = 9.8 % and 23.1 % of the Lamé value (Lamé formula; the issue's ~10 % and ~23 % are this shortfall)", () => {
+    // (Lamé − thin)/Lamé with Lamé = ((1 + k)² + 1)/((1 + k)² − 1) and thin = 1/k (hand arithmetic):
+    // k = 0.2: 1 − 5/5.5454… = 0.0984; k = 0.5: 1 − 2/2.6 = 0.2308.
+    expect(1 - 1 / 0.2 / lameCylinder(0.2)).toBeCloseTo(0.0984, 4);
+    expect(1 - 1 / 0.5 / lameCylinder(0.5)).toBeCloseTo(0.2308, 4);
+    const at02 = thinWallAdequacy("cylinder", 100, 20).warning!;
+    expect(at02).toContain("t/r = 0.200 (wall over inside radius) is above 0.1");
+    expect(at02).toContain("1.109 × the thin-wall value of the inside-radius formula σθ = p·r/t");
+    expect(at02).toContain("9.8 % below the Lamé value (the Lamé value is 10.9 % higher)");
+    const at05 = thinWallAdequacy("cylinder", 100, 50).warning!;
+    expect(at05).toContain("1.300 × the thin-wall value");
+    expect(at05).toContain("23.1 % below the Lamé value (the Lamé value is 30.0 % higher)");
+    const mean = thinWallAdequacy("cylinder", 100, 50, "mean-diameter").warning!;
+    // Lamé 2.6 over (2r + t)/(2t) = 2.5: 1.040 (hand arithmetic)
+    expect(mean).toContain("1.040 × the thin-wall value of the mean-diameter formula σθ = p(dᵢ + t)/(2t)");
+    const sphere = thinWallAdequacy("sphere", 100, 50).warning!;
+    expect(sphere).toContain("σ = p·r/(2t)");
+    expect(sphere).toContain("thick-walled sphere calculator");
+  });
+
   it("when the cylinder or sphere and the form vary, then the ratio equals the Lamé formula over the thin-wall formula, and the warning appears exactly above t/r = 0.1", () => {
     fc.assert(
       fc.property(

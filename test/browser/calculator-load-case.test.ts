@@ -11,6 +11,7 @@ import { signedInBrowser } from "../support/signed-in-browser";
 const WORKSPACE = "Calculator checks";
 const PROJECT = "Vessel V-9";
 const CASE = "Design";
+const CRITICAL_LOCATION = "shaft critical point";
 
 type Flow = {
   /** the calculator's name, as stored and in its address */
@@ -157,6 +158,7 @@ describe("calculators to load cases and back in Chromium", () => {
     const projects = `/workspaces/${workspaceId}/projects`;
     const projectId = (await send(projects, { name: PROJECT })).project.id;
     for (const f of FLOWS) await send(`${projects}/${projectId}/locations`, { name: f.location });
+    await send(`${projects}/${projectId}/locations`, { name: CRITICAL_LOCATION });
     const c = await send(`${projects}/${projectId}/load-cases`, { name: CASE, category: "design" });
     projectPath = `${projects}/${projectId}`;
     caseApiPath = `${server.url}/api${projects}/${projectId}/load-cases/${c.loadCase.id}`;
@@ -249,4 +251,75 @@ describe("calculators to load cases and back in Chromium", () => {
       await page.close();
     });
   }
+  it("when the shaft's critical point is used, added to a load case and reopened, then the stored state is the critical one, its stored angle and surface are those shown, and the reopened page computes the same state", async () => {
+    const { server, editor } = world;
+    const page = await editor.newPage();
+    page.setDefaultTimeout(15_000);
+    const errors: string[] = [];
+    page.on("pageerror", (e) => errors.push(e.message));
+    // Hollow shaft D = 60, d = 30 mm, My = 1200, Mz = 900, T = 900 N·m, P = 20 kN; the point typed
+    // on the bore at 10°. Combined bending, axial load and torsion of a circular shaft (formula):
+    // σx = M·ro/I + P/A with M = √(My² + Mz²), τxy = T·ro/J, largest at θ = atan2(My, −Mz) outside.
+    const query = "section=hollow&D=60&d=30&My=1200&Mz=900&T=900&P=20000&surface=inner&angle=10";
+    await page.goto(`${server.url}/calculators/shaft?${query}`, { waitUntil: "networkidle" });
+    await page.getByRole("heading", { level: 1, name: "Shaft under combined load" }).waitFor();
+    const I = (Math.PI * (30 ** 4 - 15 ** 4)) / 4;
+    const sigma = (Math.hypot(1200e3, 900e3) * 30) / I + 20000 / (Math.PI * (30 ** 2 - 15 ** 2));
+    const tau = (900e3 * 30) / (2 * I);
+    const angle = (Math.atan2(1200, -900) * 180) / Math.PI;
+    expect(Math.abs((await shown(page, "crit-xx")) - sigma)).toBeLessThanOrEqual(1e-9 * sigma);
+    expect(Math.abs((await shown(page, "xx")) - sigma)).toBeGreaterThan(1);
+
+    await page.getByTestId("use-critical-point").click();
+    await page.getByTestId("point-is-critical").waitFor();
+    expect(await page.getByRole("radio", { name: "outer surface", exact: true }).isChecked()).toBe(true);
+    const angleField = page.getByLabel("Angle θ of the point, from +y towards +z", { exact: true });
+    expect(Math.abs(Number(await angleField.inputValue()) - angle)).toBeLessThanOrEqual(1e-6);
+    expect(Math.abs((await shown(page, "xx")) - sigma)).toBeLessThanOrEqual(1e-8 * sigma);
+    expect(Math.abs((await shown(page, "xy")) - tau)).toBeLessThanOrEqual(1e-8 * tau);
+    const shownState = { xx: await shown(page, "xx"), xy: await shown(page, "xy") };
+    // "Send this point to bench" now carries the critical state.
+    const bench = new URL((await page.getByTestId("send-to-bench").getAttribute("href"))!, server.url);
+    expect(bench.pathname).toBe("/bench");
+    const calculatorUrl = page.url();
+
+    await page.getByTestId("add-to-load-case").click();
+    const form = page.getByRole("form", { name: "Add to load case" });
+    await form.getByLabel("Workspace").selectOption({ label: WORKSPACE });
+    await form.getByLabel("Project").selectOption({ label: PROJECT });
+    await form.getByLabel("Load case").selectOption({ label: CASE });
+    await form.getByLabel("Location").selectOption({ label: CRITICAL_LOCATION });
+    await form.getByRole("button", { name: "Save in the load case" }).click();
+    await expect
+      .poll(() => page.getByTestId("added-to-load-case").textContent())
+      .toMatch(new RegExp(`Saved as revision 1 of "${CASE}" at "${CRITICAL_LOCATION}"`));
+    await page.screenshot({
+      path: path.join(screenshotDir, "calculator-added-shaft-critical.png"),
+      fullPage: true,
+    });
+
+    const loadCase = (await (await editor.request.get(caseApiPath)).json()).loadCase;
+    const locations = await (await editor.request.get(`${server.url}/api${projectPath}/locations`)).json();
+    const locationId = locations.locations.find((l: { name: string }) => l.name === CRITICAL_LOCATION).id;
+    const state = loadCase.states.find((s: { locationId: string }) => s.locationId === locationId);
+    expect(state.calculator.inputs.choices.surface).toBe("outer");
+    expect(state.calculator.inputs.numbers.angle.value).toBe(Number(await angleField.inputValue()));
+    expect(Math.abs(state.components.xx - shownState.xx)).toBeLessThanOrEqual(1e-12 * sigma);
+    expect(Math.abs(state.components.xy - shownState.xy)).toBeLessThanOrEqual(1e-12 * tau);
+
+    await page.goto(`${server.url}${projectPath}`, { waitUntil: "networkidle" });
+    await page
+      .getByRole("link", { name: new RegExp(`^Reopen in calculator\\s*: ${CASE} at ${CRITICAL_LOCATION}$`) })
+      .click();
+    await page.getByRole("heading", { level: 1, name: "Shaft under combined load" }).waitFor();
+    expect(Object.fromEntries(new URL(page.url()).searchParams)).toEqual(
+      Object.fromEntries(new URL(calculatorUrl).searchParams),
+    );
+    await page.getByTestId("point-is-critical").waitFor();
+    // The reopened inputs compute the very state shown before saving.
+    expect(await shown(page, "xx")).toBe(shownState.xx);
+    expect(await shown(page, "xy")).toBe(shownState.xy);
+    expect(errors).toEqual([]);
+    await page.close();
+  });
 });

@@ -122,19 +122,66 @@ describe("the calculators in Chromium", () => {
     expect(new URL(page.url()).searchParams.get("u")).toBe("MPa");
   });
 
-  it("when the wall is thick (t/r > 0.1), then the thin-wall page warns and opens the thick-walled calculator with the same vessel and pressure", async () => {
+  it("when the wall is thick (t/r > 0.1) and given by its mean radius, then the thin-wall page warns with the ratio for these inputs and the radius it used, and opens the thick-walled calculator with the same vessel and pressure, whose bore hoop stress is that ratio times the thin-wall one", async () => {
     await open("Thin-walled cylinder and sphere");
     await type(page, "Internal pressure p", "10");
-    await type(page, "Radius r", "100");
+    await type(page, "Radius r", "115");
+    await pick(page, "mean radius");
     await type(page, "Wall thickness t", "30");
     const warning = page.getByTestId("thin-wall-warning");
     await warning.waitFor();
-    expect(await warning.innerText()).toMatch(/t\/r = 0\.300 is above 0\.1/);
+    // rᵢ = 115 − 15 = 100 mm, rₒ = 130 mm. Lamé bore hoop stress p(rₒ² + rᵢ²)/(rₒ² − rᵢ²) = 10·26900/6900
+    // = 38.99 MPa against the thin-wall p·rᵢ/t = 33.33 MPa: ratio 1.170, shortfall 14.5 % (Lamé formula).
+    const lame = (10 * (130 ** 2 + 100 ** 2)) / (130 ** 2 - 100 ** 2);
+    const thin = (10 * 100) / 30;
+    const text = await warning.innerText();
+    expect(text).toContain("t/r = 0.300 (wall over inside radius) is above 0.1");
+    expect(text).toContain(`${(lame / thin).toFixed(3)} × the thin-wall value of the inside-radius formula`);
+    expect(text).toContain(`${((1 - thin / lame) * 100).toFixed(1)} % below the Lamé value`);
+    expect(text).toContain("rᵢ = r − t/2 = 100 mm");
+    expect(text).toContain("t over the mean radius is 0.261");
+    expect(await shown(page, "yy")).toBeCloseTo(thin, 9);
     await page.getByTestId("open-thick").click();
     await page.getByRole("heading", { level: 1, name: "Thick-walled cylinder (Lamé)" }).waitFor();
     expect(await page.getByLabel("Inner radius rᵢ", { exact: true }).inputValue()).toBe("100");
     expect(await page.getByLabel("Outer radius rₒ", { exact: true }).inputValue()).toBe("130");
     expect(await page.getByLabel("Internal pressure pᵢ", { exact: true }).inputValue()).toBe("10");
+    expect(await page.getByLabel("Radius r of the point", { exact: true }).inputValue()).toBe("100");
+    expect(await shown(page, "yy")).toBeCloseTo(lame, 9);
+  });
+
+  it("when a cylinder's wall is checked by UG-27 and the unit set changes, then the page shows t = P·R/(S·E − 0.6P) on the corroded radius with the allowance, says the wall is too thin in words, and carries S and the allowance to psi and inches", async () => {
+    await open("Thin-walled cylinder and sphere");
+    await type(page, "Internal pressure p", "1.5");
+    await type(page, "Radius r", "600");
+    await type(page, "Wall thickness t", "8");
+    await type(page, "Allowable stress S", "138");
+    await type(page, "Joint efficiency E", "1");
+    await type(page, "Corrosion allowance", "1.5");
+    // UG-27(c)(1), recalled from memory: R = 600 + 1.5 = 601.5 mm, t = 1.5·601.5/(138 − 0.9) = 6.5810 mm,
+    // 8.0810 mm with the allowance (hand arithmetic): more than the 8 mm typed.
+    const required = (1.5 * 601.5) / (138 - 0.9) + 1.5;
+    const total = page.getByTestId("ug27-required");
+    await total.waitFor();
+    expect(Number(await total.getAttribute("data-value"))).toBeCloseTo(required, 9);
+    expect(await page.getByTestId("ug27-verdict").innerText()).toMatch(/wall too thin/);
+    expect(await page.getByTestId("ug27").innerText()).toContain("recalled from memory");
+    await page.screenshot({
+      path: path.join(screenshotDir, "calculator-thin-wall-ug27.png"),
+      fullPage: true,
+    });
+
+    await page.getByLabel(/^Units/).selectOption("us-psi");
+    // 138 MPa = 20 015.1 psi and 1.5 mm = 0.0590551 in (1 psi = 6894.757 Pa, 1 in = 25.4 mm by definition).
+    await expect
+      .poll(async () => Number(await page.getByLabel("Allowable stress S", { exact: true }).inputValue()))
+      .toBeCloseTo(138e6 / 6894.757293168, 3);
+    expect(Number(await page.getByLabel("Corrosion allowance", { exact: true }).inputValue())).toBeCloseTo(
+      1.5 / 25.4,
+      9,
+    );
+    expect(Number(await total.getAttribute("data-value"))).toBeCloseTo(required / 25.4, 9);
+    expect(await page.getByTestId("ug27-verdict").innerText()).toMatch(/wall too thin/);
   });
 
   it("when a thick cylinder in plane strain is typed (rᵢ = 1, rₒ = 2, pᵢ = 100), then the page and the bench show core's thickCylinder at the chosen radius and the plot names σθ, σz and σr with units", async () => {

@@ -4,7 +4,7 @@ import { Sym } from "../../../components/Sym";
 import { sheetValue } from "../../../lib/number-format";
 import { useInputs } from "../hooks/use-inputs";
 import { calculatorRecordOf } from "../model/inputs";
-import { SHAFT_INPUTS, computeShaft } from "../model/shaft";
+import { SHAFT_INPUTS, atCriticalPoint, computeShaft, isCriticalPoint } from "../model/shaft";
 import { stressUnitOf } from "../model/units";
 import { CalculatorPage } from "./CalculatorPage";
 import { ChoiceField } from "./ChoiceField";
@@ -13,6 +13,7 @@ import { InputField } from "./InputField";
 import { SendToBench } from "./SendToBench";
 import { AddToLoadCase } from "./AddToLoadCase";
 import { StateTable } from "./StateTable";
+import { quietButton } from "../../../lib/forms";
 import { UnitSetPicker } from "./UnitSetPicker";
 
 function PointState({ p, unit, prefix }: { p: ShaftPointStress; unit: string; prefix: string }) {
@@ -55,7 +56,7 @@ function PointState({ p, unit, prefix }: { p: ShaftPointStress; unit: string; pr
 
 /** Solid or hollow circular shaft under bending, torque, axial force and transverse shear. */
 export function ShaftPage() {
-  const { values, setNumber, setChoice, setUnits } = useInputs(SHAFT_INPUTS);
+  const { values, setNumber, setChoice, setUnits, setValues } = useInputs(SHAFT_INPUTS);
   const { units, numbers: n, choices: c } = values;
   const outcome = computeShaft(values);
   const unit = stressUnitOf(units);
@@ -162,6 +163,28 @@ export function ShaftPage() {
               θ = <span className="num">{r.critical.angle.toFixed(2)}</span>°
             </h3>
             <PointState p={r.critical} unit={unit} prefix="crit-" />
+            {isCriticalPoint(r) ? (
+              <p className="text-[13px]" data-testid="point-is-critical">
+                <span aria-hidden="true">✓ </span>
+                The point above is the critical point: "Add to load case" saves it with inputs that give it
+                back.
+              </p>
+            ) : (
+              <div className="flex flex-wrap items-center gap-3">
+                <button
+                  type="button"
+                  className={quietButton}
+                  data-testid="use-critical-point"
+                  onClick={() => setValues(atCriticalPoint(values, r.critical))}
+                >
+                  Use the critical point
+                </button>
+                <span className="text-[12px] text-graphite-soft">
+                  sets the point's {hollow ? "surface and " : ""}angle to it, so it can be added to a load
+                  case or sent to the bench with its inputs
+                </span>
+              </div>
+            )}
             <p className="text-[13px] text-graphite-soft">
               Nominal largest stresses, before Kt: bending{" "}
               <Quantity value={sheetValue(r.nominal.bending)} unit={unit} />, axial{" "}

@@ -12,12 +12,27 @@ import { SendToBench } from "./SendToBench";
 import { AddToLoadCase } from "./AddToLoadCase";
 import { StateTable } from "./StateTable";
 import { UnitSetPicker } from "./UnitSetPicker";
+import { Ug27CheckResults } from "./Ug27Check";
+import { UG27_INPUTS, computeUg27 } from "../model/ug27";
+import type { UnitSet } from "../model/units";
+
+/** Every input of the page: the calculator's and its UG-27 check's, for a change of unit set. */
+const PAGE_INPUTS = {
+  numbers: { ...THIN_WALL_INPUTS.numbers, ...UG27_INPUTS.numbers },
+  choices: THIN_WALL_INPUTS.choices,
+};
 
 /** Thin-walled cylinder (closed ends) or sphere under internal pressure: membrane stresses. */
 export function ThinWallPage() {
-  const { values, setNumber, setChoice, setUnits } = useInputs(THIN_WALL_INPUTS);
+  const { values, setNumber, setChoice } = useInputs(THIN_WALL_INPUTS);
+  // The UG-27 check's inputs share the address under their own names; a change of unit set
+  // converts both groups in one write.
+  const ug27 = useInputs(UG27_INPUTS);
+  const both = useInputs(PAGE_INPUTS);
+  const setUnits = (u: UnitSet) => both.setUnits(u);
   const { units, numbers: n, choices: c } = values;
   const outcome = computeThinWall(values);
+  const check = outcome.ok ? computeUg27(values, outcome.result, ug27.values) : undefined;
   const unit = stressUnitOf(units);
   const sphere = c.shape === "sphere";
   const meanForm = c.form === "mean-diameter";
@@ -87,6 +102,30 @@ export function ThinWallPage() {
               { value: "inner-surface", label: "−p (inside face)" },
             ]}
           />
+          <p className="pt-1 text-[12px] text-graphite-soft">
+            Required-thickness check (ASME VIII-1 UG-27; not part of the state saved):
+          </p>
+          <InputField
+            label="Allowable stress S"
+            dimension="stress"
+            units={units}
+            value={ug27.values.numbers.S}
+            onCommit={(v) => ug27.setNumber("S", v)}
+          />
+          <InputField
+            label="Joint efficiency E"
+            dimension="ratio"
+            units={units}
+            value={ug27.values.numbers.E}
+            onCommit={(v) => ug27.setNumber("E", v)}
+          />
+          <InputField
+            label="Corrosion allowance"
+            dimension="length"
+            units={units}
+            value={ug27.values.numbers.CA}
+            onCommit={(v) => ug27.setNumber("CA", v)}
+          />
         </>
       }
       error={outcome.ok ? undefined : outcome.error}
@@ -119,21 +158,25 @@ export function ThinWallPage() {
               ]}
             />
             <p className="text-[13px] text-graphite-soft">All shears are zero: these are principal axes.</p>
-            {r.adequacy.warning !== undefined && r.thickLink !== undefined && (
+            {r.warning !== undefined && r.thickLink !== undefined && (
               <div
                 role="note"
-                className="rounded-sm border border-close bg-close-wash px-3 py-2 text-[14px]"
+                className="space-y-1 rounded-sm border border-close bg-close-wash px-3 py-2 text-[14px]"
                 data-testid="thin-wall-warning"
               >
                 <p>
                   <span aria-hidden="true">△ </span>
-                  {r.adequacy.warning}
+                  {r.warning[0]}
+                </p>
+                <p className="text-[13px]" data-testid="thin-wall-radius">
+                  {r.warning[1]}
                 </p>
                 <Link to={r.thickLink} data-testid="open-thick">
                   Open in the thick-walled calculator with the same inputs
                 </Link>
               </div>
             )}
+            {check && <Ug27CheckResults outcome={check} units={units} />}
           </>
         )
       }
@@ -169,6 +212,7 @@ export function ThinWallPage() {
             "Away from heads, nozzles, supports and changes of thickness; no bending of the wall.",
             "Internal pressure. Under external pressure buckling usually governs and is not checked here.",
             "The mean-diameter form gives a hoop stress larger by (1 + t/dᵢ) than the inside-radius form: a convention, not an error.",
+            "UG-27 check: internal pressure only, formulas recalled from memory (verify against your code edition); one joint efficiency for both cylinder formulas (enter the lower); R is the inside radius plus the corrosion allowance; no mill tolerance and no other loadings.",
           ]}
         />
       }

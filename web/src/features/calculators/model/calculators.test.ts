@@ -98,9 +98,38 @@ describe("thin-walled vessel calculator", () => {
     expect(ok(computeThickCylinder(thick)).hoop / r.hoop).toBeCloseTo((2 + 0.4 + 0.04) / 2.2, 12);
   });
 
+  it("when a thick wall is given by its mean radius in US units (p = 500 psi, r = 5 in, t = 1 in), then the warning states rᵢ = r − t/2 = 4.5 in, t over the mean radius 0.200, the ratio 1.122 = Lamé (5.5² + 4.5²)/(5.5² − 4.5²) = 5.05 over p·rᵢ/t = 4.5 (Lamé and thin-wall formulas, hand arithmetic), and the thick-walled link gives that Lamé bore stress in psi", () => {
+    const v = decodeInputs(THIN_WALL_INPUTS, "?units=us-psi&p=500&r=5&t=1&given=mean");
+    const r = ok(computeThinWall(v));
+    expect(r.warning).toHaveLength(2);
+    const [ratio, radius] = r.warning!;
+    expect(ratio).toContain("t/r = 0.222 (wall over inside radius)");
+    expect(ratio).toContain("1.122 × the thin-wall value of the inside-radius formula σθ = p·r/t");
+    expect(radius).toContain("was given as the mean radius");
+    expect(radius).toContain("rᵢ = r − t/2 = 4.5 in");
+    expect(radius).toContain("t over the mean radius is 0.200");
+    const link = r.thickLink!;
+    expect(link.startsWith("/calculators/thick-cylinder?")).toBe(true);
+    const thick = decodeInputs(THICK_CYLINDER_INPUTS, link.slice(link.indexOf("?")));
+    expect(thick.units).toBe("us-psi");
+    expect(thick.numbers).toMatchObject({ ri: 4.5, ro: 5.5, pi: 500, po: 0, r: 4.5 });
+    const bore = ok(computeThickCylinder(thick)).hoop;
+    expect(bore).toBeCloseTo(500 * 5.05, 9);
+    expect(bore / r.hoop).toBeCloseTo(5.05 / 4.5, 12);
+  });
+
+  it("when a thick sphere's inner radius is given, then the warning says t/r uses it as given and the link opens the thick-walled sphere", () => {
+    const r = ok(computeThinWall(decodeInputs(THIN_WALL_INPUTS, "?p=4&r=100&t=25&shape=sphere")));
+    expect(r.warning![1]).toBe(
+      "Radius convention: r = 100 mm was given as the inside radius, and t/r uses it.",
+    );
+    expect(r.thickLink!.startsWith("/calculators/thick-sphere?")).toBe(true);
+  });
+
   it("when the wall is thin (t/r = 0.02), then there is no warning and no thick-walled link", () => {
     const r = ok(computeThinWall(initialValues(THIN_WALL_INPUTS)));
     expect(r.adequacy.warning).toBeUndefined();
+    expect(r.warning).toBeUndefined();
     expect(r.thickLink).toBeUndefined();
   });
 

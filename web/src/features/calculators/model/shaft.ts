@@ -94,3 +94,39 @@ export function computeShaft(v: ShaftValues): Outcome<ShaftResult> {
     };
   });
 }
+
+/**
+ * The angle as the page keeps it for a point it is told to use: 10 significant figures, what the
+ * angle field shows, so the number stored with a saved state is the very number on screen and a
+ * reopened link computes the same state. The critical angle is a maximum of σvM, so rounding it
+ * there moves σvM only in the second order (by far less than rounding), and σx, τxy by about
+ * 1e-9 of themselves.
+ */
+export function keptAngle(angle: number): number {
+  const kept = Number(angle.toPrecision(10));
+  // 359.99999999999° keeps as 360°, which the calculator reads as 0°: say 0° at once.
+  return kept >= 360 ? kept - 360 : kept;
+}
+
+/**
+ * The inputs with the point moved to the critical one: its surface (a solid shaft has only the
+ * outer one, and its surface choice is left as it was) and its angle as the page keeps it. Every
+ * other input stays, so "Add to load case" and "Send to bench" then carry the critical state, and
+ * the saved inputs reproduce it.
+ */
+export function atCriticalPoint(v: ShaftValues, critical: ShaftPointStress): ShaftValues {
+  const hollow = v.choices.section === "hollow";
+  return {
+    ...v,
+    numbers: { ...v.numbers, angle: keptAngle(critical.angle) },
+    choices: hollow ? { ...v.choices, surface: critical.surface } : v.choices,
+  };
+}
+
+/** Whether the point asked for is already the critical point (same surface, same kept angle). */
+export function isCriticalPoint(result: ShaftResult): boolean {
+  return (
+    result.point.surface === result.critical.surface &&
+    keptAngle(result.point.angle) === keptAngle(result.critical.angle)
+  );
+}

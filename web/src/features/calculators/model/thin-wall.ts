@@ -15,7 +15,7 @@ import {
 import { THIN_WALL_INPUTS } from "../../../../../core/constants/calculators";
 import { encodeInputs, initialValues, type InputSpec, type InputValues } from "./inputs";
 import { attempt, refuse, type Outcome } from "./outcome";
-import type { UnitSet } from "./units";
+import { unitFor, type UnitSet } from "./units";
 
 export { THIN_WALL_INPUTS };
 
@@ -33,6 +33,11 @@ export type ThinWallResult = {
   adequacy: ThinWallAdequacy;
   /** the thick-walled calculator's address with the same vessel and pressure, when the wall is thick */
   thickLink: string | undefined;
+  /**
+   * When the wall is thick: core's warning (t/r, the Lamé-to-thin-wall ratio for these inputs and the
+   * formula it belongs to), then which radius the ratio used and how it came from the radius given
+   */
+  warning: string[] | undefined;
 };
 
 /** The inside radius from the radius as stated: r (inner), r − t/2 (mean) or r − t (outer). */
@@ -61,8 +66,32 @@ export function computeThinWall(v: ThinWallValues): Outcome<ThinWallResult> {
       tensor: s.tensor,
       adequacy,
       thickLink: adequacy.thinWallAdequate ? undefined : thickLinkFor(shape, v.units, ri, t, p),
+      warning:
+        adequacy.warning === undefined
+          ? undefined
+          : [adequacy.warning, radiusConvention(v.choices.given, r, t, ri, unitFor("length", v.units))],
     };
   });
+}
+
+/** A length as the sentences show it: up to 6 significant figures and its unit. */
+const lengthText = (v: number, unit: string) => `${Number(v.toPrecision(6))} ${unit}`;
+
+/**
+ * Which radius the thin-wall check used and how it came from the radius as given: the check and
+ * the thick-walled calculator take the inside radius; a mean or outer radius given is turned into
+ * it, and t over the radius as given is shown too, since texts state the 0.1 limit with either.
+ */
+export function radiusConvention(given: string, r: number, t: number, ri: number, unit: string): string {
+  if (given === "inner") {
+    return `Radius convention: r = ${lengthText(r, unit)} was given as the inside radius, and t/r uses it.`;
+  }
+  const how = given === "mean" ? "r − t/2" : "r − t";
+  return (
+    `Radius convention: r = ${lengthText(r, unit)} was given as the ${given} radius; t/r and the ` +
+    `ratio use the inside radius rᵢ = ${how} = ${lengthText(ri, unit)} (t over the ${given} radius is ` +
+    `${(t / r).toPrecision(3)}).`
+  );
 }
 
 /** The thick-walled calculator with the same inside radius, wall and internal pressure. */

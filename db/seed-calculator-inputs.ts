@@ -81,7 +81,9 @@ export async function backfillDemoCalculatorInputs(
       source: row.source,
       note: row.note,
       calculator: demo.calculator!,
-      createdBy: row.createdBy,
+      // Saved by no person: the history shows "—" and the audit line names the demo seed, and no
+      // member becomes the last editor of an input a calculation record may have frozen.
+      createdBy: null,
     })),
     transaction,
   );

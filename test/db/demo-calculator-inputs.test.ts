@@ -100,6 +100,7 @@ describe("the demo seed's calculator-input back-fill", () => {
       ]);
       expect(rows[0].calculator, label).toBeNull();
       expect(rows[1].calculator, label).toEqual(d.state.calculator);
+      expect(rows[1].createdBy, label).toBeNull();
       expect(componentsPaOf(rows[1]), label).toEqual(componentsPaOf(seeded[i]));
       expect([rows[1].unit, rows[1].source, rows[1].note], label).toEqual([
         seeded[i].unit,

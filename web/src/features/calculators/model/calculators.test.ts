@@ -118,6 +118,14 @@ describe("thin-walled vessel calculator", () => {
     expect(bore / r.hoop).toBeCloseTo(5.05 / 4.5, 12);
   });
 
+  it("when a thick cylinder is given by its outer radius (r = 130 mm, t = 30 mm), then the warning says rᵢ = r − t = 100 mm and t over the outer radius 0.231, and the ratio is that of t/rᵢ = 0.3 (Lamé (1.3² + 1)/(1.3² − 1) = 3.8986 over rᵢ/t = 3.3333: 1.170; hand arithmetic)", () => {
+    const r = ok(computeThinWall(decodeInputs(THIN_WALL_INPUTS, "?p=10&r=130&t=30&given=outer")));
+    expect(r.warning![0]).toContain("t/r = 0.300 (wall over inside radius)");
+    expect(r.warning![0]).toContain("1.170 × the thin-wall value");
+    expect(r.warning![1]).toContain("rᵢ = r − t = 100 mm");
+    expect(r.warning![1]).toContain("t over the outer radius is 0.231");
+  });
+
   it("when a thick sphere's inner radius is given, then the warning says t/r uses it as given and the link opens the thick-walled sphere", () => {
     const r = ok(computeThinWall(decodeInputs(THIN_WALL_INPUTS, "?p=4&r=100&t=25&shape=sphere")));
     expect(r.warning![1]).toBe(

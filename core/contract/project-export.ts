@@ -132,7 +132,11 @@ const baseSchema = z.object({
         category: text(40),
         description: text(4000),
         states: z.array(exportStateSchema).max(1000),
-        /** schemaVersion 4: the case's stress classification lines, in their order. */
+        /**
+         * schemaVersion 4: the case's stress classification lines, in their order. Optional even in
+         * version 4 (Sigmacube always writes it): a case without the field has no lines, which is
+         * unambiguous, so a hand-made file need not list an empty one.
+         */
         linearizations: z
           .array(exportLinearizationSchema)
           .max(
@@ -228,16 +232,6 @@ function crossReferenceIssues(
       }
     }),
   );
-  if (file.schemaVersion >= 4) {
-    file.loadCases.forEach((c, i) => {
-      if (c.linearizations === undefined) {
-        issues.push({
-          path: ["loadCases", i, "linearizations"],
-          message: "is required from schemaVersion 4 on (an empty list when the case has no lines)",
-        });
-      }
-    });
-  }
   file.combinations.forEach((c, i) =>
     c.terms.forEach((t, j) => {
       if (!cases.has(t.loadCase)) {

@@ -1,4 +1,4 @@
-import { pickPath, pointsNearSegment, type StressUnit } from "../../../core";
+import { MIN_POINTS, pickPath, pointsNearSegment, type StressUnit } from "../../../core";
 import { pascalsPer } from "../../../core/units/stress";
 import { LINEARIZATION_LIMITS } from "../../../core/contract/limits";
 import type { PathFromPointTable, PathFromPointTableBody } from "../../../core/contract/linearizations";
@@ -89,7 +89,8 @@ export async function pathFromStoredTable(
     body.tolerance,
   );
   const warnings = [...picked.warnings];
-  let usable = picked.count >= 3 && !warnings.some((w) => w.includes("not a number"));
+  // Core warns about a non-finite component; such a path could not be linearized, so none is offered.
+  let usable = picked.count >= MIN_POINTS && picked.stresses.every(Number.isFinite);
   if (picked.count > LINEARIZATION_LIMITS.pointsPerLine) {
     usable = false;
     warnings.push(

@@ -209,6 +209,7 @@ export type {
 export { linearize, ANNEX_5A_BENT_COMPONENTS, ALL_COMPONENTS } from "./linearization/linearize";
 export { MIN_POINTS, RECOMMENDED_MIN_POINTS, OFF_LINE_WARN_FRACTION } from "./linearization/path";
 export { spsLimit, SPS_YIELD_TO_ULTIMATE_LIMIT } from "./linearization/category-checks";
+export { pickPath, pointsNearSegment, COINCIDENT_FRACTION, type PickedPath } from "./linearization/pick-path";
 
 // Finite-element point tables: a chunked delimited-text parser into Float64Arrays and a chunked
 // evaluator over the batch kernels (see core/point-tables/).

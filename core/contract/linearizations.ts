@@ -308,3 +308,54 @@ export function classificationLabel(c: z.infer<typeof classificationSchema>): st
     c.stresses === "primary" ? "primary" : "primary + secondary"
   }`;
 }
+
+/**
+ * `POST …/linearizations/path-from-point-table`: pick a path out of a stored finite-element point
+ * table of the load case — the points within `tolerance` of the segment from `start` to `end`
+ * (the table's coordinates and length unit), projected onto it and sorted. `lengthUnit` only
+ * labels the path (a point table declares no length unit).
+ */
+export const pathFromPointTableBodySchema = z
+  .object({
+    tableId: uuidInput("must be a point-table id (UUID) of this load case"),
+    start: vec3Schema,
+    end: vec3Schema,
+    tolerance: coordinate().refine((v) => v > 0, "must be greater than 0 (a distance from the line)"),
+    lengthUnit: lengthUnitSchema.default("mm"),
+  })
+  .superRefine((body, ctx) => {
+    if (body.start.every((v, i) => v === body.end[i])) {
+      ctx.addIssue({
+        code: "custom",
+        path: ["end"],
+        message: "must differ from start: the two ends coincide, so the line has zero length",
+      });
+    }
+  });
+export type PathFromPointTableBody = z.infer<typeof pathFromPointTableBodySchema>;
+
+/** A picked path, in the shape the linearization's `path` field takes (points placed by distance). */
+export const pickedPathSchema = z.object({
+  positions: z.literal("distance"),
+  lengthUnit: lengthUnitSchema,
+  stressUnit: stressUnitSchema,
+  lineDirection: z.array(z.number()).length(3),
+  points: z.array(pathPointSchema),
+});
+
+/**
+ * What the pick found: how many points of the table lay within the tolerance (`found`), how many
+ * places they make along the line (`pointCount`, after coincident nodes were merged), and the
+ * path — null when there are too few places to linearize or more than a line may hold (the
+ * warnings say which).
+ */
+export const pathFromPointTableResponseSchema = z.object({
+  table: z.object({ id: z.uuid(), fileName: z.string(), unit: stressUnitSchema }),
+  found: z.int(),
+  pointCount: z.int(),
+  lineLength: z.number(),
+  path: pickedPathSchema.nullable(),
+  notes: z.array(z.string()),
+  warnings: z.array(z.string()),
+});
+export type PathFromPointTable = z.infer<typeof pathFromPointTableResponseSchema>;

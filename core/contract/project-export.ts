@@ -1,5 +1,7 @@
 import { z } from "zod";
 import { calculatorRecordSchema } from "./calculator-inputs";
+import { LINEARIZATION_LIMITS } from "./limits";
+import { linearizationInputSchema } from "./linearizations";
 import { CALCULATOR_STATE_SOURCES, stateSourceSchema } from "./load-cases";
 import { finiteNumber, stressPaValue, stressUnitSchema } from "./materials";
 import { MAX_COMBINATION_FACTOR } from "./combinations";
@@ -21,12 +23,12 @@ import {
 
 export const PROJECT_EXPORT_FORMAT = "sigmacube.project";
 /** The version this Sigmacube writes. */
-export const PROJECT_EXPORT_SCHEMA_VERSION = 3;
+export const PROJECT_EXPORT_SCHEMA_VERSION = 4;
 /**
  * Every version this Sigmacube reads (1: before allowables per load-case category; 2: before
- * states kept their calculator's inputs).
+ * states kept their calculator's inputs; 3: before load cases carried their linearization lines).
  */
-export const READABLE_SCHEMA_VERSIONS = [1, 2, 3] as const;
+export const READABLE_SCHEMA_VERSIONS = [1, 2, 3, 4] as const;
 
 const key = z.string({ error: "must be a key (text)" }).min(1, "must not be empty").max(100);
 // PostgreSQL text cannot hold U+0000; refuse it here with the field named rather than fail on insert.
@@ -83,6 +85,16 @@ const exportStateSchema = z.object({
   calculator: calculatorRecordSchema.nullable().optional(),
 });
 
+/**
+ * schemaVersion 4: a stress classification line of a load case — its inputs exactly as the
+ * linearization routes take them (path in the unit it was entered in, frame, classification,
+ * allowables, options), its location by key or null. No result: the importing server linearizes
+ * every line again with core's `linearize`, as it does on every save.
+ */
+const exportLinearizationSchema = linearizationInputSchema
+  .omit({ locationId: true })
+  .extend({ location: key.nullable() });
+
 const baseSchema = z.object({
   format: z.literal(PROJECT_EXPORT_FORMAT, { error: `must be "${PROJECT_EXPORT_FORMAT}"` }),
   schemaVersion: z.literal(READABLE_SCHEMA_VERSIONS, {
@@ -120,6 +132,18 @@ const baseSchema = z.object({
         category: text(40),
         description: text(4000),
         states: z.array(exportStateSchema).max(1000),
+        /**
+         * schemaVersion 4: the case's stress classification lines, in their order. Optional even in
+         * version 4 (Sigmacube always writes it): a case without the field has no lines, which is
+         * unambiguous, so a hand-made file need not list an empty one.
+         */
+        linearizations: z
+          .array(exportLinearizationSchema)
+          .max(
+            LINEARIZATION_LIMITS.linesPerLoadCase,
+            `A load case holds at most ${LINEARIZATION_LIMITS.linesPerLoadCase} linearizations (limit "linesPerLoadCase").`,
+          )
+          .optional(),
       }),
     )
     .max(1000),
@@ -198,6 +222,16 @@ function crossReferenceIssues(
       seen.add(s.location);
     });
   });
+  file.loadCases.forEach((c, i) =>
+    (c.linearizations ?? []).forEach((line, j) => {
+      if (line.location !== null && !locations.has(line.location)) {
+        issues.push({
+          path: ["loadCases", i, "linearizations", j, "location"],
+          message: `names the location "${line.location}", which is not in locations`,
+        });
+      }
+    }),
+  );
   file.combinations.forEach((c, i) =>
     c.terms.forEach((t, j) => {
       if (!cases.has(t.loadCase)) {
@@ -257,7 +291,8 @@ function crossReferenceIssues(
 
 /**
  * A file of any readable version in today's layout (a version-1 file has no category factors;
- * states of a version-1 or 2 file kept no calculator inputs).
+ * states of a version-1 or 2 file kept no calculator inputs). Load cases of a file before version 4
+ * carry no `linearizations`; the field stays optional in the type, read as no lines.
  */
 function upgrade(file: z.infer<typeof baseSchema>) {
   return {

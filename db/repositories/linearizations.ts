@@ -47,6 +47,20 @@ export async function listLinearizations(
   return rows.map(toPlain);
 }
 
+/** The lines of several load cases in one query, each case's in their order (for the project export). */
+export async function listLinearizationsOfCases(
+  loadCaseIds: readonly string[],
+  transaction?: Transaction,
+): Promise<LinearizationRow[]> {
+  if (loadCaseIds.length === 0) return [];
+  const rows = await Linearization.findAll({
+    where: { loadCaseId: [...loadCaseIds] },
+    order: ORDER,
+    transaction,
+  });
+  return rows.map(toPlain);
+}
+
 /** How many lines the load case holds. */
 export function countLinearizations(loadCaseId: string, transaction?: Transaction): Promise<number> {
   return Linearization.count({ where: { loadCaseId }, transaction });

@@ -215,7 +215,7 @@ describe("states saved from a calculator", () => {
   it("when the project is exported and imported, then each state keeps its calculator inputs (null where there were none)", async () => {
     const exported = await team.viewer.agent.get(wsPath(team, `/projects/${projectId}/export`)).expect(200);
     expect(exported.body.schemaVersion).toBe(PROJECT_EXPORT_SCHEMA_VERSION);
-    expect(PROJECT_EXPORT_SCHEMA_VERSION).toBe(3);
+    expect(PROJECT_EXPORT_SCHEMA_VERSION).toBe(4);
     const design = exported.body.loadCases.find((c: { name: string }) => c.name === "Design");
     const byLocation = (key: string) => design.states.find((s: { location: string }) => s.location === key);
     expect(byLocation("l1").calculator).toBeNull(); // the later typed revision is the current one

@@ -77,10 +77,10 @@ beforeAll(async () => {
 });
 
 describe("project export and import", () => {
-  it("when a project is exported, then the file matches its schema, version 3, with Pa values as stored and the per-category factors", async () => {
+  it("when a project is exported, then the file matches its schema, version 4, with Pa values as stored and the per-category factors", async () => {
     const file = projectExportSchema.parse(exported);
     expect(file.schemaVersion).toBe(PROJECT_EXPORT_SCHEMA_VERSION);
-    expect(PROJECT_EXPORT_SCHEMA_VERSION).toBe(3);
+    expect(PROJECT_EXPORT_SCHEMA_VERSION).toBe(4);
     expect(file.project.categoryRequirements).toEqual([
       { category: "start-up", factors: { "von-mises": 1.25 } },
     ]);
@@ -140,7 +140,7 @@ describe("project export and import", () => {
     const again = await team.editor.agent
       .get(wsPath(team, `/projects/${imported.body.project.id}/export`))
       .expect(200);
-    expect(again.body.schemaVersion).toBe(3);
+    expect(again.body.schemaVersion).toBe(4);
     expect(again.body.project.categoryRequirements).toEqual([]);
   });
 
@@ -173,7 +173,7 @@ describe("project export and import", () => {
     const name = `Malformed ${Date.now()}`;
     const bad = {
       ...file,
-      schemaVersion: 4,
+      schemaVersion: 5,
       project: { ...file.project, name, defaultMaterial: { kind: "library", key: "nowhere" } },
       locations: [file.locations[0], { ...file.locations[1], key: file.locations[0].key }],
       loadCases: [

@@ -1,3 +1,4 @@
+import { parsePointTable } from "../../core";
 import type { Role } from "../../core/contract/workspaces";
 import { Combination } from "../../db/models/combination";
 import { CombinationTerm } from "../../db/models/combination-term";
@@ -5,8 +6,11 @@ import { Linearization } from "../../db/models/linearization";
 import { LoadCase } from "../../db/models/load-case";
 import { Location } from "../../db/models/location";
 import { Material } from "../../db/models/material";
+import { PointTable } from "../../db/models/point-table";
 import { Project } from "../../db/models/project";
 import { StressState } from "../../db/models/stress-state";
+import { storePointTableContent } from "../../db/repositories/point-tables";
+import { chunksOf } from "../../db/repositories/point-table-chunks";
 import type { Actor, RoleFixture } from "./role-fixture";
 
 /**
@@ -391,6 +395,34 @@ async function savedLine(f: RoleFixture): Promise<string> {
   return line.id;
 }
 
+/** A ready point table with coordinates under the fixture's load case: three nodes along x. */
+async function tableWithCoordinates(f: RoleFixture): Promise<string> {
+  const w = await projectWorld(f);
+  const csv = "x,y,z,xx,yy,zz,xy,yz,zx\n0,0,0,0,100,0,0,0,0\n5,0,0,0,100,0,0,0,0\n10,0,0,0,100,0,0,0,0\n";
+  const layout = { separator: ",", decimal: ".", skipRows: 0, header: true } as const;
+  const columns = { x: 0, y: 1, z: 2, xx: 3, yy: 4, zz: 5, xy: 6, yz: 7, zx: 8 };
+  const table = await PointTable.create({
+    projectId: w.projectId,
+    loadCaseId: w.loadCaseId,
+    fileName: "matrix-wall.csv",
+    sizeBytes: csv.length,
+    sha256: "0".repeat(64),
+    layout,
+    columns,
+    unit: "MPa",
+    idKind: "number",
+  });
+  const parsed = parsePointTable(csv, { ...layout, columns, unit: "MPa" });
+  await f.context.sequelize.transaction((transaction) =>
+    storePointTableContent(
+      table.id,
+      { chunks: chunksOf(parsed), pointCount: parsed.count, hasCoordinates: true, badRows: parsed.badRows },
+      transaction,
+    ),
+  );
+  return table.id;
+}
+
 /** The rows of the linearization routes under …/load-cases/{loadCaseId}/linearizations. */
 function linearizationRows(): Record<string, Row> {
   const base = "/api/workspaces/{workspaceId}/projects/{projectId}/load-cases/{loadCaseId}/linearizations";
@@ -407,6 +439,14 @@ function linearizationRows(): Record<string, Row> {
       who: "viewer",
       ok: 200,
       request: async (f) => ({ path: await lines(f, "/preview"), body: lineBody }),
+    },
+    [`POST ${base}/path-from-point-table`]: {
+      who: "viewer",
+      ok: 200,
+      request: async (f) => ({
+        path: await lines(f, "/path-from-point-table"),
+        body: { tableId: await tableWithCoordinates(f), start: [0, 0, 0], end: [10, 0, 0], tolerance: 0.1 },
+      }),
     },
     [`GET ${base}/{linearizationId}`]: {
       who: "viewer",

@@ -8,11 +8,13 @@ import type { StressUnitName, MaterialRef } from "../../../core/contract/materia
 import type { StateSource } from "../../../core/contract/load-cases";
 import type { CategoryRequirement, Requirement } from "../../../core/contract/projects";
 import { listLiveCombinations } from "../../../db/repositories/combinations";
+import { listLinearizationsOfCases } from "../../../db/repositories/linearizations";
 import { listLiveLoadCases } from "../../../db/repositories/load-cases";
 import { listLiveLocations } from "../../../db/repositories/locations";
 import type { ProjectRow } from "../../../db/repositories/projects";
 import { componentsPaOf, currentStatesOf, type StressStateRow } from "../../../db/repositories/stress-states";
 import { termsOf } from "../combinations/terms";
+import type { StoredLinearizationInput } from "../linearizations/compute";
 import { libraryOf, refFromColumns } from "../materials/resolve";
 
 /** The export file of a project ({@link exportProjectWithKeys} without the keys). */
@@ -30,8 +32,8 @@ export type ExportKeys = {
 
 /**
  * The export file of a project: live locations, load cases with their current states
- * (Pa as stored), combinations whose cases are all live, and the library materials the
- * project refers to. Keys are short labels ("m1", "l1", "c1") made for the file; `keys` maps
+ * (Pa as stored) and their linearization lines (inputs only, in the units typed), combinations
+ * whose cases are all live, and the library materials the project refers to. Keys are short labels ("m1", "l1", "c1") made for the file; `keys` maps
  * each database id to its key, for a frozen record that must match rows across revisions.
  * Inside `transaction` every read sees that transaction's snapshot (a record freezes its
  * content in one REPEATABLE READ transaction, so no write lands between two of these reads).
@@ -40,12 +42,12 @@ export async function exportProjectWithKeys(
   project: ProjectRow,
   transaction?: Transaction,
 ): Promise<{ file: ProjectExport; keys: ExportKeys }> {
-  const [locations, cases, combinations, library] = await Promise.all([
-    listLiveLocations(project.id, transaction),
-    listLiveLoadCases(project.id, transaction),
-    listLiveCombinations(project.id, transaction),
-    libraryOf(project.workspaceId, transaction),
-  ]);
+  // One after another: queries on one transaction share its one connection, and node-postgres
+  // deprecates queueing several on a client at once (Promise.all here did that).
+  const locations = await listLiveLocations(project.id, transaction);
+  const cases = await listLiveLoadCases(project.id, transaction);
+  const combinations = await listLiveCombinations(project.id, transaction);
+  const library = await libraryOf(project.workspaceId, transaction);
   const materialKeys = new Map<string, string>();
   const exportRef = (ref: MaterialRef | null): ProjectExport["project"]["defaultMaterial"] => {
     if (!ref) return null;
@@ -64,6 +66,10 @@ export async function exportProjectWithKeys(
     transaction,
   );
   const terms = await termsOf(combinations, transaction);
+  const lines = await listLinearizationsOfCases(
+    cases.map((c) => c.id),
+    transaction,
+  );
 
   const exportedLocations = locations.map((l) => ({
     key: locationKeys.get(l.id)!,
@@ -115,6 +121,23 @@ export async function exportProjectWithKeys(
           note: s.note,
           calculator: s.calculator ?? null,
         })),
+      linearizations: lines
+        .filter((line) => line.loadCaseId === c.id)
+        .map((line) => {
+          const { path, secondAxis, classification, allowables, equivalent, bending } =
+            line.input as unknown as StoredLinearizationInput;
+          return {
+            name: line.name,
+            // A line whose location is in the trash keeps its inputs but loses the link.
+            location: line.locationId ? (locationKeys.get(line.locationId) ?? null) : null,
+            path,
+            secondAxis,
+            classification,
+            allowables,
+            equivalent,
+            bending,
+          };
+        }),
     })),
     combinations: combinations
       .filter((c) => terms.get(c.id)!.every((t) => caseKeys.has(t.loadCaseId)))

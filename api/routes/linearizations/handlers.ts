@@ -1,6 +1,10 @@
 import type { Transaction } from "sequelize";
 import { LINEARIZATION_LIMITS } from "../../../core/contract/limits";
-import type { LinearizationInputBody, UpdateLinearizationBody } from "../../../core/contract/linearizations";
+import type {
+  LinearizationInputBody,
+  PathFromPointTableBody,
+  UpdateLinearizationBody,
+} from "../../../core/contract/linearizations";
 import {
   countLinearizations,
   createLinearization,
@@ -12,6 +16,7 @@ import {
 } from "../../../db/repositories/linearizations";
 import { findLiveLoadCase } from "../../../db/repositories/load-cases";
 import { findLiveLocation } from "../../../db/repositories/locations";
+import { findPointTable } from "../../../db/repositories/point-tables";
 import type { ProjectRow } from "../../../db/repositories/projects";
 import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
@@ -23,6 +28,7 @@ import {
   summaryOf,
 } from "../../domain/linearizations/compute";
 import { materialOfLine } from "../../domain/linearizations/material";
+import { pathFromStoredTable } from "../../domain/linearizations/point-table-path";
 import { peopleById } from "../../domain/projects/people";
 import { findProject } from "../../domain/projects/scope";
 import { assertVersion } from "../../domain/projects/versioning";
@@ -91,6 +97,35 @@ export const previewLinearizationHandler: RouteHandler<CaseParams, NoInput, Line
   await findCase(project.id, loadCaseId);
   const { result } = await computeBody(project, res.locals.input.body);
   res.set("Cache-Control", "no-store").json({ result });
+};
+
+/**
+ * `POST …/linearizations/path-from-point-table`: the path picked out of one of the case's stored
+ * point tables (points within the tolerance of the line between two ends), not saved: the browser
+ * puts it in the form. 400 naming `tableId` for a table that is not the case's, has no points yet
+ * or has no x y z columns.
+ */
+export const pathFromPointTableHandler: RouteHandler<CaseParams, NoInput, PathFromPointTableBody> = async (
+  _req,
+  res,
+) => {
+  const { workspace } = currentMembership(res);
+  const { projectId, loadCaseId } = res.locals.input.params;
+  const body = res.locals.input.body;
+  const project = await findProject(workspace.id, projectId);
+  const c = await findCase(project.id, loadCaseId);
+  const table = await findPointTable(c.id, body.tableId);
+  const refuse = (message: string) => errors.invalidInput([{ path: "tableId", message }]);
+  if (!table) throw refuse("is not a point table of this load case");
+  if (table.status !== "ready") {
+    throw refuse(`the point table "${table.fileName}" has no points yet; send its file first`);
+  }
+  if (!table.hasCoordinates) {
+    throw refuse(
+      `the point table "${table.fileName}" has no x y z columns, so no point can be placed on a line; map its coordinate columns when uploading it`,
+    );
+  }
+  res.set("Cache-Control", "no-store").json(await pathFromStoredTable(table, body));
 };
 
 /** `GET …/linearizations/{id}`: the line with its inputs and result. */

@@ -5,6 +5,7 @@ import {
   deleteLinearizationHandler,
   getLinearizationHandler,
   listLinearizationsHandler,
+  pathFromPointTableHandler,
   previewLinearizationHandler,
   updateLinearizationHandler,
 } from "./handlers";
@@ -15,6 +16,8 @@ import {
   linearizationParamsSchema,
   linearizationPreviewSchema,
   linearizationResponseSchema,
+  pathFromPointTableBodySchema,
+  pathFromPointTableResponseSchema,
   updateLinearizationBodySchema,
 } from "./schema";
 
@@ -48,6 +51,21 @@ export function linearizationRoutes(context: AppContext): AnyRoute[] {
         200: { description: "The result the server computed.", schema: linearizationPreviewSchema },
       },
       handler: previewLinearizationHandler,
+    }),
+    defineRoute({
+      method: "post",
+      path: `${base}/path-from-point-table`,
+      tag,
+      summary: "Pick a path out of a stored point table: the points near the line between two ends",
+      access: { kind: "member", role: "viewer" },
+      request: { params: linearizationCaseParamsSchema, body: pathFromPointTableBodySchema },
+      responses: {
+        200: {
+          description: "How many points were found, and the path sorted along the line (not saved).",
+          schema: pathFromPointTableResponseSchema,
+        },
+      },
+      handler: pathFromPointTableHandler,
     }),
     defineRoute({
       method: "post",

@@ -5,5 +5,7 @@ export {
   linearizationParamsSchema,
   linearizationPreviewSchema,
   linearizationResponseSchema,
+  pathFromPointTableBodySchema,
+  pathFromPointTableResponseSchema,
   updateLinearizationBodySchema,
 } from "../../../core/contract/linearizations";

@@ -10,6 +10,7 @@ import { createProject, type ProjectRow } from "../../../db/repositories/project
 import { writeStressStates } from "../../../db/repositories/stress-states";
 import { PROJECT_LIMITS } from "../../../core/contract/limits";
 import { recordAudit } from "../../domain/audit/record";
+import { importLinearizations } from "../../domain/linearizations/import-lines";
 import { assertWithinLimit, projectLimitError } from "../../domain/projects/limits";
 import { columnsFromRef } from "../../domain/materials/resolve";
 
@@ -34,7 +35,8 @@ function assertFileWithinLimits(file: ProjectExport) {
 /**
  * Writes a validated export file into `workspaceId` as a new project, all inside the caller's
  * `transaction` (any failure leaves nothing behind). Library materials become new library
- * entries of this workspace; states become revision 1 with their source kept.
+ * entries of this workspace; states become revision 1 with their source kept; linearization lines
+ * are linearized again by the server and saved under their cases.
  */
 export async function importProject(
   transaction: Transaction,
@@ -89,6 +91,7 @@ export async function importProject(
     locationIds.set(l.key, created.id);
   }
   const caseIds = new Map<string, string>();
+  let lineCount = 0;
   for (const [position, c] of file.loadCases.entries()) {
     const created = await createLoadCase(
       {
@@ -115,6 +118,15 @@ export async function importProject(
         createdBy: user.id,
       })),
       transaction,
+    );
+    lineCount += await importLinearizations(
+      transaction,
+      user.id,
+      project,
+      created.id,
+      c.linearizations ?? [],
+      locationIds,
+      `loadCases.${position}`,
     );
   }
   for (const [position, c] of file.combinations.entries()) {
@@ -143,7 +155,7 @@ export async function importProject(
     entityType: "project",
     entityId: project.id,
     action: "import",
-    summary: `imported the project "${project.name}" (${counts.locations} locations, ${counts.loadCases} load cases, ${counts.combinations} combinations, ${counts.materials} library materials)`,
+    summary: `imported the project "${project.name}" (${counts.locations} locations, ${counts.loadCases} load cases, ${counts.combinations} combinations, ${counts.materials} library materials, ${lineCount} linearization lines)`,
     changes: { exportedAt: file.exportedAt, schemaVersion: file.schemaVersion },
   });
   return { project, counts };

@@ -20,7 +20,7 @@ export function projectTransferRoutes(context: AppContext): AnyRoute[] {
       path: "/workspaces/{workspaceId}/projects/{projectId}/export",
       tag,
       summary:
-        "The project as an export file (format sigmacube.project, schemaVersion 3; versions 1, 2 and 3 are read)",
+        "The project as an export file (format sigmacube.project, schemaVersion 4; versions 1 to 4 are read)",
       access: { kind: "member", role: "viewer" },
       request: { params: projectParamsSchema },
       responses: { 200: { description: "The export file.", schema: projectExportSchema } },

@@ -10,6 +10,9 @@ export const linearizationKeys = {
     [...linearizationKeys.all(workspaceId, projectId), loadCaseId, id] as const,
   preview: (workspaceId: string, projectId: string, loadCaseId: string, body: string) =>
     [...linearizationKeys.all(workspaceId, projectId), loadCaseId, "preview", body] as const,
+  /** A path picked from a point table; under the case, so a new upload's invalidation of the project refreshes it. */
+  pick: (workspaceId: string, projectId: string, loadCaseId: string, body: string) =>
+    [...linearizationKeys.all(workspaceId, projectId), loadCaseId, "pick", body] as const,
 };
 
 /** Base path of a load case's linearization routes. */

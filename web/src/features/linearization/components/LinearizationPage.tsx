@@ -19,8 +19,10 @@ import { useDebounced } from "../hooks/use-debounced";
 import { LOCAL_COMPONENTS, distributionOf } from "../model/distribution";
 import { EMPTY_FORM, formFieldOf, formOf, requestBodyOf, type LineForm } from "../model/line-form";
 import { parsePathText } from "../model/path-text";
+import { formWithPickedPath } from "../model/pick-form";
 import { DistributionPlot } from "./DistributionPlot";
 import { CheckFields, PathFields } from "./LineFields";
+import { PointTablePick } from "./PointTablePick";
 import { ChecksTable, PartsTable } from "./ResultTables";
 
 const label = "block text-sm font-semibold text-graphite";
@@ -217,6 +219,16 @@ export function LinearizationPage() {
           title="Path"
           subtitle={`components in ${form.stressUnit}, positions in ${form.lengthUnit}`}
         >
+          {caseId && (
+            <PointTablePick
+              key={caseId}
+              workspaceId={workspaceId}
+              projectId={projectId}
+              caseId={caseId}
+              lengthUnit={form.lengthUnit}
+              onUse={(picked) => setForm((f) => formWithPickedPath(f, picked))}
+            />
+          )}
           <PathFields form={form} set={set} parsed={parsed} errors={errors} />
         </Panel>
         <Panel id="classification" index="3" title="Classification and allowables">

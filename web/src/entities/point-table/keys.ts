@@ -6,4 +6,10 @@ export const pointTableKeys = {
     [...projectKeys.scope(workspaceId, projectId), "point-tables", caseId] as const,
   detail: (workspaceId: string, projectId: string, caseId: string, tableId: string) =>
     [...pointTableKeys.list(workspaceId, projectId, caseId), tableId] as const,
+  /** A stored table's points as binary columns (they never change once stored). */
+  columns: (workspaceId: string, projectId: string, caseId: string, tableId: string) =>
+    [...pointTableKeys.detail(workspaceId, projectId, caseId, tableId), "columns"] as const,
+  /** A stored table's point ids in table order. */
+  ids: (workspaceId: string, projectId: string, caseId: string, tableId: string) =>
+    [...pointTableKeys.detail(workspaceId, projectId, caseId, tableId), "ids"] as const,
 };

@@ -176,11 +176,17 @@ export function PointTablesPage() {
             table={result.table}
             evaluation={result.evaluation}
             unit={unit}
-            seconds={run.state.seconds}
-            workers={result.workers}
+            summary={
+              <p>
+                <span className="num">{result.table.count.toLocaleString("en-US")}</span> points read and
+                rated in <span className="num">{run.state.seconds.toFixed(2)} s</span> ({result.workers}{" "}
+                worker
+                {result.workers === 1 ? "" : "s"}) in this browser.
+              </p>
+            }
+            withCaution
             timings={result.timings}
-            selected={selected}
-            onToggle={(i) => setSelected(toggleIn(selected, i))}
+            selection={canEdit ? { selected, onToggle: (i) => setSelected(toggleIn(selected, i)) } : null}
             benchHref={benchHref}
             onPick={(i) => void navigate(benchHref(i))}
           />

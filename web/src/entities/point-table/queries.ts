@@ -49,7 +49,7 @@ export const getPointTableIds = (t: PointTableIds) => apiGet(`${tablePath(t)}/id
  */
 export const pointTableIdsQueryOptions = (t: PointTableIds) =>
   queryOptions({
-    queryKey: pointTableKeys.ids(t.workspaceId, t.projectId, t.caseId, t.tableId),
+    queryKey: pointTableKeys.ids(t.workspaceId, t.projectId, t.tableId),
     queryFn: () => getPointTableIds(t),
     staleTime: Infinity,
     gcTime: 60_000,
@@ -68,7 +68,7 @@ export const pointTableColumnsQueryOptions = (
   onProgress: (received: number, total: number) => void,
 ) =>
   queryOptions({
-    queryKey: pointTableKeys.columns(t.workspaceId, t.projectId, t.caseId, t.tableId),
+    queryKey: pointTableKeys.columns(t.workspaceId, t.projectId, t.tableId),
     queryFn: ({ signal }) => fetchPointColumns(`/api${tablePath(t)}/columns`, { signal, onProgress }),
     staleTime: Infinity,
     gcTime: 60_000,

@@ -1,17 +1,23 @@
+import { Link } from "react-router-dom";
 import type { StoredPointTable } from "../../../entities/point-table/contract";
 import { pointTableDownloadHref } from "../../../entities/point-table/queries";
 import { ToolButton } from "../../../components/ToolButton";
 
-/** The load case's stored tables: name, size, points, rows left out, when and by whom; download or delete. */
+/**
+ * The load case's stored tables: name, size, points, rows left out, when; open the results
+ * (`?table=<id>`, so the link can be copied), download, or delete (editors).
+ */
 export function StoredTables({
   ids,
   tables,
   canEdit,
+  openTableId,
   onDelete,
 }: {
   ids: { workspaceId: string; projectId: string; caseId: string };
   tables: StoredPointTable[];
   canEdit: boolean;
+  openTableId: string | null;
   onDelete: (tableId: string) => void;
 }) {
   if (tables.length === 0)
@@ -49,7 +55,17 @@ export function StoredTables({
               <td className="num px-3 py-1 text-right">{t.pointCount.toLocaleString("en-US")}</td>
               <td className="num px-3 py-1 text-right">{t.badRows.count.toLocaleString("en-US")}</td>
               <td className="num px-3 py-1">{t.createdAt.slice(0, 16).replace("T", " ")} UTC</td>
-              <td className="space-x-2 px-3 py-1 text-right">
+              <td className="space-x-2 whitespace-nowrap px-3 py-1 text-right">
+                {t.status === "ready" && (
+                  <Link
+                    to={`?table=${t.id}`}
+                    aria-label={`Open the results of ${t.fileName}`}
+                    aria-current={t.id === openTableId ? "true" : undefined}
+                    className="text-ink underline-offset-2 hover:underline aria-[current=true]:font-semibold"
+                  >
+                    Open results
+                  </Link>
+                )}
                 <a
                   href={pointTableDownloadHref(ids.workspaceId, ids.projectId, ids.caseId, t.id)}
                   download

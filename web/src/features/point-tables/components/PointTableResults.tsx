@@ -69,6 +69,7 @@ export function PointTableResults({
             <>
               <div
                 className="h-72 rounded border border-rule bg-panel"
+                role="group"
                 aria-label="Points in 3D, coloured by utilisation; click a point to open it in the bench"
               >
                 <Suspense fallback={<p className="p-3 text-sm text-graphite-soft">Drawing the points…</p>}>

@@ -260,7 +260,7 @@ export function PointTablesPage() {
         </Panel>
       )}
 
-      <Panel id="stored-point-tables" index="3" title="Stored in this load case">
+      <Panel id="stored-point-tables" index={result !== null ? "3" : "2"} title="Stored in this load case">
         {stored.error ? (
           <div className="p-3">
             <FormMessage error={stored.error} />
@@ -282,7 +282,7 @@ export function PointTablesPage() {
       {openTableId !== null && (
         <Panel
           id="stored-table-results"
-          index="4"
+          index={result !== null ? "4" : "3"}
           title="Results of a stored table"
           subtitle={`as the server rated it; utilisation u = n required / n`}
           tools={

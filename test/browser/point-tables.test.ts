@@ -279,7 +279,7 @@ describe.skipIf(!serverHasPointTables)(
       tableId = await storeThroughApi(page, world.server.url, tables.path, file);
     }, 180_000);
 
-    it("when an editor opens a stored table's results from the list, then the address names the table, the governing point per criterion is the one the server reports, the worst list draws only a window of its rows, and axe finds nothing serious", async () => {
+    it("when an editor opens a stored table's results from the list, then the address names the table, the governing point per criterion is the one the server reports, the worst list draws only a window of its rows, axe finds nothing serious, and the governing point can be kept", async () => {
       await page.goto(`${world.server.url}${tables.path}`, { waitUntil: "networkidle" });
       await page.getByRole("link", { name: "Open the results of nozzle.csv" }).click();
       await page.waitForURL(`**${tables.path}?table=${tableId}`);
@@ -324,6 +324,12 @@ describe.skipIf(!serverHasPointTables)(
         path: path.join(screenshotDir, "point-tables-stored-1280.png"),
         fullPage: true,
       });
+
+      // the governing point, ticked to begin with, is kept as a location from the stored table
+      await page.getByRole("button", { name: "Keep 1 chosen point as locations" }).click();
+      const kept = page.getByTestId("stored-kept-locations");
+      await kept.waitFor();
+      expect(await kept.innerText()).toContain(String(HOT_ID));
     });
 
     it("when a viewer and a reviewer open the copied link, then they see the same governing point and nothing to keep or delete", async () => {

@@ -14,7 +14,7 @@ import {
   evaluationFromServer,
   rateInSlices,
   ratingDisagreements,
-  tableFromColumns,
+  tableFromColumnsInSlices,
   utilisationOfWorst,
 } from "../model/stored-results";
 
@@ -81,10 +81,11 @@ export function useStoredResults(t: PointTableIds, rating: BrowserRating | null)
     const serverEvaluation = d.evaluation;
     let stopped = false;
     void (async () => {
-      // a macrotask first, so the page draws the finished download before the points are turned
-      await new Promise((resolve) => setTimeout(resolve, 0));
-      if (stopped) return;
-      const table = tableFromColumns(points.columns, points.count, idList, d);
+      // in slices, yielding to the page first, so it draws the finished download and stays responsive
+      const table = await tableFromColumnsInSlices(points.columns, points.count, idList, d, {
+        isCancelled: () => stopped,
+      });
+      if (table === null || stopped) return;
       if ("problem" in rating) {
         const evaluation = evaluationFromServer(
           serverEvaluation,

@@ -30,6 +30,60 @@ export function tableFromColumns(
   ids: readonly (number | string)[] | null,
   stored: Pick<PointTableDetailView, "idKind" | "hasCoordinates" | "badRows">,
 ): PointTable {
+  const turning = startTurning(columns, count, ids, stored);
+  turning.turn(0, count);
+  return turning.table;
+}
+
+/**
+ * {@link tableFromColumns} a slice of points at a time, yielding to the page between slices:
+ * turning a million points is a few hundred milliseconds of strided writes, too long for one task.
+ */
+export async function tableFromColumnsInSlices(
+  columns: Float64Array,
+  count: number,
+  ids: readonly (number | string)[] | null,
+  stored: Pick<PointTableDetailView, "idKind" | "hasCoordinates" | "badRows">,
+  { pause = yieldToPage, slice = TURNING_SLICE, isCancelled }: SliceOptions = {},
+): Promise<PointTable | null> {
+  const turning = startTurning(columns, count, ids, stored);
+  for (let from = 0; from < count; from += slice) {
+    await pause();
+    if (isCancelled?.() === true) return null;
+    turning.turn(from, Math.min(count, from + slice));
+  }
+  return turning.table;
+}
+
+/** How a sliced job pauses, how big a slice is, and whether to stop. */
+export type SliceOptions = { pause?: () => Promise<void>; slice?: number; isCancelled?: () => boolean };
+
+/** Points turned from columns between two yields to the page. */
+export const TURNING_SLICE = 65_536;
+
+/**
+ * Yields to the page through a message (a macrotask: input and drawing run first) rather than
+ * setTimeout, which browsers hold back by at least 4 ms once timeouts nest.
+ */
+export function yieldToPage(): Promise<void> {
+  if (typeof MessageChannel === "undefined") return new Promise((resolve) => setTimeout(resolve, 0));
+  return new Promise((resolve) => {
+    const channel = new MessageChannel();
+    channel.port1.onmessage = () => {
+      channel.port1.close();
+      resolve();
+    };
+    channel.port2.postMessage(null);
+  });
+}
+
+/** The table's arrays allocated, ids read, and `turn(from, to)` to fill points from..to-1 from the columns. */
+function startTurning(
+  columns: Float64Array,
+  count: number,
+  ids: readonly (number | string)[] | null,
+  stored: Pick<PointTableDetailView, "idKind" | "hasCoordinates" | "badRows">,
+): { table: PointTable; turn: (from: number, to: number) => void } {
   if (columns.length !== COLUMNS * count) {
     throw new RangeError(`columns hold ${columns.length} values, not ${COLUMNS} × ${count} points`);
   }
@@ -37,19 +91,8 @@ export function tableFromColumns(
     throw new RangeError(`${ids.length} point ids for ${count} points`);
   }
   const components = new Float64Array(6 * count);
-  for (let c = 0; c < 6; c++) {
-    const from = c * count;
-    for (let i = 0; i < count; i++) components[6 * i + c] = columns[from + i];
-  }
-  let coordinates: Float64Array | null = null;
-  if (stored.hasCoordinates) {
-    coordinates = new Float64Array(3 * count);
-    for (let a = 0; a < 3; a++) {
-      const from = (6 + a) * count;
-      for (let i = 0; i < count; i++) coordinates[3 * i + a] = columns[from + i];
-    }
-  }
-  return {
+  const coordinates = stored.hasCoordinates ? new Float64Array(3 * count) : null;
+  const table: PointTable = {
     count,
     components,
     coordinates,
@@ -63,6 +106,18 @@ export function tableFromColumns(
     badRows: stored.badRows,
     lines: 0,
   };
+  const turn = (from: number, to: number) => {
+    for (let c = 0; c < 6; c++) {
+      const at = c * count;
+      for (let i = from; i < to; i++) components[6 * i + c] = columns[at + i];
+    }
+    if (coordinates === null) return;
+    for (let a = 0; a < 3; a++) {
+      const at = (6 + a) * count;
+      for (let i = from; i < to; i++) coordinates[3 * i + a] = columns[at + i];
+    }
+  };
+  return { table, turn };
 }
 
 /**
@@ -146,11 +201,11 @@ export function ratingDisagreements(
 }
 
 /** Points rated between two yields to the page: small enough that one slice stays well under 50 ms. */
-export const RATING_SLICE = 16_384;
+export const RATING_SLICE = 8192;
 
 /**
  * Rates every point with core's evaluator a slice at a time, yielding to the page between
- * slices (`pause`, by default a macrotask) so it stays responsive, reporting progress, and
+ * slices (`pause`, by default {@link yieldToPage}) so it stays responsive, reporting progress, and
  * stopping when `isCancelled` says so (then null).
  */
 export async function rateInSlices(
@@ -160,14 +215,9 @@ export async function rateInSlices(
   {
     onProgress,
     isCancelled,
-    pause = () => new Promise<void>((resolve) => setTimeout(resolve, 0)),
+    pause = yieldToPage,
     slice = RATING_SLICE,
-  }: {
-    onProgress?: (done: number, total: number) => void;
-    isCancelled?: () => boolean;
-    pause?: () => Promise<void>;
-    slice?: number;
-  } = {},
+  }: SliceOptions & { onProgress?: (done: number, total: number) => void } = {},
 ): Promise<PointTableEvaluation | null> {
   const evaluator = new PointTableEvaluator(components, spec, {
     includeUnsuited,

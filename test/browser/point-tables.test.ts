@@ -378,7 +378,7 @@ describe.skipIf(!serverHasPointTables)(
         downloadThroughput: -1,
         uploadThroughput: -1,
       });
-      await slow.getByRole("button", { name: "Download the points again" }).click();
+      await slow.getByRole("button", { name: "Open the results again" }).click();
       await slow.getByTestId("stored-table-results").waitFor();
       expect(await slow.getByTestId("governing-points").innerText()).toContain(String(HOT_ID));
       await slow.close();

@@ -76,9 +76,9 @@ export function StoredTableResults({
     case "cancelled":
       return (
         <div className="flex flex-wrap items-center gap-3 p-3 text-sm">
-          <span data-testid="columns-cancelled">The download was cancelled; nothing is shown.</span>
+          <span data-testid="columns-cancelled">Opening the results was cancelled; nothing is shown.</span>
           <button type="button" className={quietButton} onClick={retry}>
-            Download the points again
+            Open the results again
           </button>
         </div>
       );

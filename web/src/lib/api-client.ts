@@ -46,7 +46,7 @@ export async function apiGet<T>(
 }
 
 /** Reads an error answer into ApiError (the shape every API error has). */
-async function toApiError(response: Response): Promise<ApiError> {
+export async function toApiError(response: Response): Promise<ApiError> {
   const body = (await response.json().catch(() => null)) as {
     error?: { id?: string; message?: string; details?: unknown };
   } | null;

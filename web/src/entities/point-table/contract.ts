@@ -1,124 +1,49 @@
 /**
- * The point-table wire shapes as this browser reads them, written from the API contract agreed
- * with the server half of issue 15. They stand in for the server's zod schemas
- * (core/contract/point-tables.ts) until both halves are merged: this is the one file to switch
- * then. Objects are loose (extra fields pass) so a richer server answer still parses.
+ * The point-table wire shapes as this browser reads them: the server's own zod schemas
+ * (core/contract/point-tables.ts), so a field the server drops or renames fails here at once,
+ * and only what the browser needs on top of them.
  */
-import { z } from "zod";
-import { stressUnitSchema } from "../../../../core/contract/materials";
+import type { z } from "zod";
+import {
+  POINT_ID_KINDS,
+  pointTableColumnsSchema,
+  pointTableSchema,
+  type CreatePointTableBody as ServerCreateBody,
+  type PointTableColumnsInput,
+} from "../../../../core/contract/point-tables";
 
-export const pointTableSeparatorSchema = z.enum([",", ";", "\t", "whitespace"]);
-export const pointTableLayoutSchema = z.object({
-  separator: pointTableSeparatorSchema,
-  decimal: z.enum([".", ","]),
-  skipRows: z.int().min(0),
-  header: z.boolean(),
-});
-export type PointTableLayoutBody = z.infer<typeof pointTableLayoutSchema>;
+export {
+  keepPointsResponseSchema,
+  pointTableDetailSchema,
+  pointTableIdsSchema,
+  pointTableSchema,
+  type PointTableDetailView,
+  type PointTableEvaluationView,
+  type PointTableView,
+} from "../../../../core/contract/point-tables";
 
-const column = z.int().min(0);
-export const pointTableColumnsSchema = z.object({
-  xx: column,
-  yy: column,
-  zz: column,
-  xy: column,
-  yz: column,
-  zx: column,
-  id: column.optional(),
-  x: column.optional(),
-  y: column.optional(),
-  z: column.optional(),
-});
-export type PointTableColumnsBody = z.infer<typeof pointTableColumnsSchema>;
-
-export const idKindSchema = z.enum(["number", "text"]);
-export type IdKind = z.infer<typeof idKindSchema>;
+/** The layout as the browser sends it: every field stated (the server's defaults are not relied on). */
+export type PointTableLayoutBody = z.output<typeof pointTableSchema.shape.layout>;
+export type PointTableColumnsBody = PointTableColumnsInput;
+export type IdKind = (typeof POINT_ID_KINDS)[number];
 
 /** What POST …/point-tables sends before the file's bytes follow. */
-export type CreatePointTableBody = {
-  fileName: string;
-  sizeBytes: number;
-  /** hex SHA-256 of the original file */
-  sha256: string;
+export type CreatePointTableBody = Omit<ServerCreateBody, "layout" | "columns" | "idKind"> & {
   layout: PointTableLayoutBody;
   columns: PointTableColumnsBody;
-  unit: z.infer<typeof stressUnitSchema>;
   idKind: IdKind;
 };
 
-export const badRowsSchema = z.object({
-  count: z.int(),
-  first: z.array(z.object({ line: z.int(), reason: z.string() })),
-});
-
-const pointIdSchema = z.union([z.number(), z.string()]);
-
-/** A criterion over a stored table, as the server's evaluation gives it. */
-export const storedCriterionSchema = z.looseObject({
-  governing: z
-    .looseObject({
-      id: pointIdSchema.nullable(),
-      x: z.number().nullable(),
-      y: z.number().nullable(),
-      z: z.number().nullable(),
-      factor: z.number().nullable(),
-      utilisation: z.number().nullable(),
-      verdict: z.string(),
-    })
-    .nullable(),
-  countFail: z.int(),
-  countClose: z.int(),
-  histogram: z.unknown().optional(),
-});
-
-export const storedEvaluationSchema = z.looseObject({
-  criteria: z.record(z.string(), storedCriterionSchema).optional(),
-});
-
-export const pointTableSchema = z.looseObject({
-  id: z.string(),
-  fileName: z.string(),
-  sizeBytes: z.number(),
-  sha256: z.string(),
-  layout: pointTableLayoutSchema,
-  columns: pointTableColumnsSchema,
-  unit: stressUnitSchema,
-  idKind: idKindSchema,
-  pointCount: z.int(),
-  badRows: badRowsSchema,
-  createdAt: z.string(),
-  createdBy: z.unknown().optional(),
-  evaluation: storedEvaluationSchema.nullable().optional(),
-});
-export type StoredPointTable = z.infer<typeof pointTableSchema>;
-
 /**
- * The list answers a bare array, `{ items }` or `{ pointTables }` (the agreed contract names the
- * items but not the envelope); each reads as the array.
+ * A stored table as the page lists it. The server's list types the mapping loosely (any column
+ * name); the browser offers a stored mapping again for a new file, so it reads it with the
+ * declaration's own schema (the six components, optional id and x y z), which every stored
+ * mapping passed when it was declared.
  */
-export const pointTableListSchema = z
-  .union([
-    z.array(pointTableSchema),
-    z.looseObject({ items: z.array(pointTableSchema) }),
-    z.looseObject({ pointTables: z.array(pointTableSchema) }),
-  ])
-  .transform((v): StoredPointTable[] => {
-    if (Array.isArray(v)) return v;
-    const envelope = v as { items?: StoredPointTable[]; pointTables?: StoredPointTable[] };
-    return envelope.items ?? envelope.pointTables ?? [];
-  });
+export const storedPointTableSchema = pointTableSchema.extend({ columns: pointTableColumnsSchema });
+export type StoredPointTable = z.infer<typeof storedPointTableSchema>;
+export const storedPointTableListSchema = storedPointTableSchema.array();
 
-export const createdPointTableSchema = z.looseObject({ id: z.string() });
-
-/** What PUT …/content answers once the server has read and evaluated the bytes. */
-export const uploadSummarySchema = z.looseObject({
-  id: z.string(),
-  pointCount: z.int(),
-  badRows: badRowsSchema,
-});
+/** What PUT …/content answers once the server has read and evaluated the bytes: the stored table. */
+export const uploadSummarySchema = pointTableSchema;
 export type UploadSummary = z.infer<typeof uploadSummarySchema>;
-
-export const keptLocationsSchema = z.looseObject({
-  locations: z.array(z.looseObject({ id: z.string(), name: z.string() })),
-});
-export type KeptLocations = z.infer<typeof keptLocationsSchema>;

@@ -5,7 +5,7 @@ import { comparisonKeys } from "../comparison/keys";
 import { invalidateKeys } from "../invalidate";
 import { loadCaseKeys } from "../load-case/keys";
 import { locationKeys } from "../location/keys";
-import { createdPointTableSchema, keptLocationsSchema, type CreatePointTableBody } from "./contract";
+import { keepPointsResponseSchema, pointTableSchema, type CreatePointTableBody } from "./contract";
 import { pointTableKeys } from "./keys";
 import { pointTablesPath } from "./queries";
 
@@ -21,7 +21,7 @@ export const createPointTableMutation = (
 ) =>
   mutationOptions({
     mutationFn: (body: CreatePointTableBody) =>
-      apiSend("POST", pointTablesPath(workspaceId, projectId, caseId), body, createdPointTableSchema),
+      apiSend("POST", pointTablesPath(workspaceId, projectId, caseId), body, pointTableSchema),
     onSettled: () =>
       invalidateKeys(queryClient, [
         pointTableKeys.list(workspaceId, projectId, caseId),
@@ -67,7 +67,7 @@ export const keepPointsMutation = (
         "POST",
         `${pointTablesPath(workspaceId, projectId, caseId)}/${v.tableId}/keep`,
         v.namePrefix === undefined ? { points: v.points } : { points: v.points, namePrefix: v.namePrefix },
-        keptLocationsSchema,
+        keepPointsResponseSchema,
       ),
     onSettled: () =>
       invalidateKeys(queryClient, [

@@ -1,4 +1,4 @@
-import { Suspense, lazy } from "react";
+import { Suspense, lazy, type ReactNode } from "react";
 import type { PointTable } from "../../../../../core";
 import type { StressUnitName } from "../../../../../core/contract/materials";
 import { Caution } from "../../../components/Caution";
@@ -14,47 +14,52 @@ import { WorstPointsTable } from "./WorstPointsTable";
 const PointCloud = lazy(loadPointCloud);
 
 /**
- * What a rated table shows: the caution once, beside the results; the governing point per
- * criterion; the histogram of utilisation; the points in 3D coloured by utilisation with its key;
- * and the worst points to sort, filter by region and keep.
+ * What a rated table shows, whether it was just read in this browser or opened from the project:
+ * the caution (once per page: the page says which results carry it), how the points were rated,
+ * the governing point per criterion, the histogram of utilisation, the points in 3D coloured by
+ * utilisation with its key, and the worst points to sort, filter by region and keep.
  */
 export function PointTableResults({
   table,
   evaluation,
   unit,
-  seconds,
-  workers,
-  timings,
-  selected,
-  onToggle,
+  summary,
+  withCaution,
+  timings = [],
+  selection,
   benchHref,
   onPick,
+  testId = "point-table-results",
 }: {
   table: PointTable;
   evaluation: TableEvaluation;
   unit: StressUnitName;
-  seconds: number;
-  workers: number;
-  timings: PartTimings[];
-  selected: ReadonlySet<number>;
-  onToggle: (index: number) => void;
+  /** the sentence that says where and how the points were rated */
+  summary: ReactNode;
+  withCaution: boolean;
+  /** per worker, for the benchmark (a run in this browser only) */
+  timings?: PartTimings[];
+  /** the points ticked for keeping; null where the reader may not keep points */
+  selection: { selected: ReadonlySet<number>; onToggle: (index: number) => void } | null;
   benchHref: (index: number) => string;
   onPick: (index: number) => void;
+  testId?: string;
 }) {
   return (
     <div
       className="space-y-4 p-3"
-      data-testid="point-table-results"
+      data-testid={testId}
       data-timings={timings.map((t) => `${t.parseMs.toFixed(0)}+${t.evaluateMs.toFixed(0)}`).join(" ")}
     >
-      <Caution />
-      <p className="text-sm">
-        <span className="num">{table.count.toLocaleString("en-US")}</span> points read and rated in{" "}
-        <span className="num">{seconds.toFixed(2)} s</span> ({workers} worker{workers === 1 ? "" : "s"});{" "}
-        <span className="num">{evaluation.failing.toLocaleString("en-US")}</span> fail,{" "}
-        <span className="num">{evaluation.close.toLocaleString("en-US")}</span> close (governing criterion per
-        point).
-      </p>
+      {withCaution && <Caution />}
+      <div className="space-y-1 text-sm">
+        {summary}
+        <p>
+          <span className="num">{evaluation.failing.toLocaleString("en-US")}</span> fail,{" "}
+          <span className="num">{evaluation.close.toLocaleString("en-US")}</span> close (governing criterion
+          per point).
+        </p>
+      </div>
       <BadRowsNote badRows={table.badRows} />
       <GoverningPoints table={table} evaluation={evaluation} />
       <div className="grid gap-4 lg:grid-cols-2">
@@ -64,6 +69,7 @@ export function PointTableResults({
             <>
               <div
                 className="h-72 rounded border border-rule bg-panel"
+                role="group"
                 aria-label="Points in 3D, coloured by utilisation; click a point to open it in the bench"
               >
                 <Suspense fallback={<p className="p-3 text-sm text-graphite-soft">Drawing the points…</p>}>
@@ -87,8 +93,7 @@ export function PointTableResults({
         table={table}
         utilisation={evaluation.utilisation}
         unit={unit}
-        selected={selected}
-        onToggle={onToggle}
+        selection={selection}
         benchHref={benchHref}
       />
     </div>

@@ -1,5 +1,5 @@
 import { useEffect, useMemo, useState } from "react";
-import { Link, useNavigate, useParams } from "react-router-dom";
+import { Link, useNavigate, useParams, useSearchParams } from "react-router-dom";
 import { COMPONENTS } from "../../../../../core";
 import { materialLabel, type MaterialRef } from "../../../../../core/contract/materials";
 import { Panel } from "../../../components/Panel";
@@ -23,17 +23,22 @@ import { loadPointCloud } from "./point-cloud-chunk";
 import { PointTableResults } from "./PointTableResults";
 import { ProgressLine } from "./ProgressLine";
 import type { TableSource } from "./SourcePicker";
+import { StoredTableResults } from "./StoredTableResults";
 import { StoredTables } from "./StoredTables";
 
 /**
  * `/workspaces/:workspaceId/projects/:projectId/load-cases/:caseId/point-tables`: a load case's
  * finite-element point tables — add one (read and rated in the browser's workers), see what
- * governs, store it in the project and keep chosen points as locations.
+ * governs, store it in the project and keep chosen points as locations; `?table=<id>` opens a
+ * stored table's results as the server rated them.
  */
 export function PointTablesPage() {
   const { workspaceId = "", projectId = "", caseId = "" } = useParams();
   const ids = useMemo(() => ({ workspaceId, projectId, caseId }), [workspaceId, projectId, caseId]);
   const navigate = useNavigate();
+  // the stored table whose results are open: in the address, so a copied link opens them again
+  const [search, setSearch] = useSearchParams();
+  const openTableId = search.get("table");
   const role = useWorkspaceRole(workspaceId);
   const project = useProject(workspaceId, projectId);
   const cases = useLoadCases(workspaceId, projectId);
@@ -176,11 +181,17 @@ export function PointTablesPage() {
             table={result.table}
             evaluation={result.evaluation}
             unit={unit}
-            seconds={run.state.seconds}
-            workers={result.workers}
+            summary={
+              <p>
+                <span className="num">{result.table.count.toLocaleString("en-US")}</span> points read and
+                rated in <span className="num">{run.state.seconds.toFixed(2)} s</span> ({result.workers}{" "}
+                worker
+                {result.workers === 1 ? "" : "s"}) in this browser.
+              </p>
+            }
+            withCaution
             timings={result.timings}
-            selected={selected}
-            onToggle={(i) => setSelected(toggleIn(selected, i))}
+            selection={canEdit ? { selected, onToggle: (i) => setSelected(toggleIn(selected, i)) } : null}
             benchHref={benchHref}
             onPick={(i) => void navigate(benchHref(i))}
           />
@@ -249,7 +260,7 @@ export function PointTablesPage() {
         </Panel>
       )}
 
-      <Panel id="stored-point-tables" index="3" title="Stored in this load case">
+      <Panel id="stored-point-tables" index={result !== null ? "3" : "2"} title="Stored in this load case">
         {stored.error ? (
           <div className="p-3">
             <FormMessage error={stored.error} />
@@ -259,10 +270,39 @@ export function PointTablesPage() {
             ids={ids}
             tables={stored.data ?? []}
             canEdit={canEdit}
-            onDelete={(id) => remove.mutate(id)}
+            openTableId={openTableId}
+            onDelete={(id) => {
+              remove.mutate(id);
+              if (id === openTableId) setSearch({}, { replace: true });
+            }}
           />
         )}
       </Panel>
+
+      {openTableId !== null && (
+        <Panel
+          id="stored-table-results"
+          index={result !== null ? "4" : "3"}
+          title="Results of a stored table"
+          subtitle={`as the server rated it; utilisation u = n required / n`}
+          tools={
+            <Link to={{ search: "" }} className="text-sm text-ink underline-offset-2 hover:underline">
+              Close
+            </Link>
+          }
+        >
+          <StoredTableResults
+            key={openTableId}
+            ids={ids}
+            tableId={openTableId}
+            canEdit={canEdit}
+            project={p}
+            category={loadCase.category}
+            materials={materials.data}
+            withCaution={result === null}
+          />
+        </Panel>
+      )}
     </div>
   );
 }

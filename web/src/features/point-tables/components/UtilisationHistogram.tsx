@@ -1,3 +1,4 @@
+import { useId } from "react";
 import type { UtilisationHistogram as Histogram } from "../../../../../core";
 import { SvgAxis } from "../../../components/SvgAxis";
 import { utilisationColour } from "../model/colour-scale";
@@ -12,6 +13,8 @@ export function UtilisationHistogram({ histogram }: { histogram: Histogram }) {
   const pw = W - M.left - M.right;
   const ph = H - M.top - M.bottom;
   const g = histogramGeometry(histogram, pw, ph);
+  // a page may show two histograms (a table just read and a stored one), so the title's id is the instance's own
+  const titleId = useId();
   return (
     <figure className="min-w-0">
       <div className="overflow-x-auto" role="region" aria-label="Utilisation histogram" tabIndex={0}>
@@ -19,9 +22,9 @@ export function UtilisationHistogram({ histogram }: { histogram: Histogram }) {
           viewBox={`0 0 ${W} ${H}`}
           className="block w-full min-w-[420px]"
           role="img"
-          aria-labelledby="hist-title"
+          aria-labelledby={titleId}
         >
-          <title id="hist-title">Histogram of governing utilisation over the points</title>
+          <title id={titleId}>Histogram of governing utilisation over the points</title>
           <g transform={`translate(${M.left} ${M.top})`}>
             {g.bars.map((b) => (
               <rect

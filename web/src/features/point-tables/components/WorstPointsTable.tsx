@@ -1,4 +1,5 @@
-import { useMemo, useState } from "react";
+import { useVirtualizer } from "@tanstack/react-virtual";
+import { useMemo, useRef, useState } from "react";
 import { Link } from "react-router-dom";
 import type { PointTable } from "../../../../../core";
 import type { StressUnitName } from "../../../../../core/contract/materials";
@@ -6,7 +7,6 @@ import { Verdict } from "../../../components/Verdict";
 import { quietButton } from "../../../lib/forms";
 import { formatStress } from "../../../lib/stress";
 import { WORST_KEPT } from "../model/pipeline";
-import { rowWindow } from "../model/windowing";
 import {
   DEFAULT_SORT,
   OPEN_BOX,
@@ -20,8 +20,12 @@ import {
   type SortKey,
 } from "../model/worst-points";
 
+/** Every row is one line of this height (px), so the list is measured once, not per row. */
 const ROW = 30;
+/** The list's viewport height (px). */
 const VIEW = 360;
+/** Rows drawn beyond the viewport on each side, so a quick scroll shows no blank band. */
+const OVERSCAN = 6;
 const AXES = ["x", "y", "z"] as const;
 
 type BoxText = Record<(typeof AXES)[number], [string, string]>;
@@ -29,29 +33,29 @@ const EMPTY_TEXT: BoxText = { x: ["", ""], y: ["", ""], z: ["", ""] };
 
 /**
  * The worst points of the table (or of a box of coordinates), highest utilisation first: a long
- * list drawn a window at a time, sortable by any column, each row with a box to keep the point as
- * a location and a link into the bench.
+ * list of which @tanstack/react-virtual draws only the rows in view, sortable by any column, each
+ * row with a link into the bench and — for those who may keep points (`selection` given) — a box
+ * to keep the point as a location.
  */
 export function WorstPointsTable({
   table,
   utilisation,
   unit,
-  selected,
-  onToggle,
+  selection,
   benchHref,
 }: {
   table: PointTable;
   utilisation: Float64Array;
   unit: StressUnitName;
-  selected: ReadonlySet<number>;
-  onToggle: (index: number) => void;
+  /** the points ticked for keeping and how to tick one; null where the reader may not keep points */
+  selection: { selected: ReadonlySet<number>; onToggle: (index: number) => void } | null;
   benchHref: (index: number) => string;
 }) {
   const [boxText, setBoxText] = useState<BoxText>(EMPTY_TEXT);
   const [box, setBox] = useState<CoordinateBox>(OPEN_BOX);
   const [boxError, setBoxError] = useState<string | null>(null);
   const [sort, setSort] = useState(DEFAULT_SORT);
-  const [scrollTop, setScrollTop] = useState(0);
+  const scroller = useRef<HTMLDivElement>(null);
 
   const indices = useMemo(
     () => worstInBox(utilisation, table.coordinates, box, WORST_KEPT),
@@ -61,7 +65,21 @@ export function WorstPointsTable({
     () => sortRows(rowsOf(table, utilisation, indices), sort),
     [table, utilisation, indices, sort],
   );
-  const w = rowWindow(scrollTop, VIEW, ROW, rows.length);
+  // TanStack Virtual returns fresh functions each render by design (it re-renders the list on
+  // scroll, which is what this list needs); the React Compiler leaves this component alone.
+  // eslint-disable-next-line react-hooks/incompatible-library
+  const virtualizer = useVirtualizer({
+    count: rows.length,
+    getScrollElement: () => scroller.current,
+    estimateSize: () => ROW,
+    overscan: OVERSCAN,
+    initialRect: { width: 0, height: VIEW },
+  });
+  const drawn = virtualizer.getVirtualItems();
+  // the rows not drawn are stood in for by one empty row above and one below, so the table keeps
+  // its columns aligned and the scroll bar its length
+  const padTop = drawn.length > 0 ? drawn[0].start : 0;
+  const padBottom = drawn.length > 0 ? virtualizer.getTotalSize() - drawn[drawn.length - 1].end : 0;
 
   const applyBox = () => {
     const next: CoordinateBox = { x: [null, null], y: [null, null], z: [null, null] };
@@ -74,7 +92,7 @@ export function WorstPointsTable({
     }
     setBoxError(null);
     setBox(next);
-    setScrollTop(0);
+    virtualizer.scrollToOffset(0);
   };
 
   const header = (key: SortKey, label: string) => (
@@ -137,7 +155,7 @@ export function WorstPointsTable({
       <div
         className="overflow-auto rounded border border-rule bg-panel"
         style={{ maxHeight: VIEW }}
-        onScroll={(e) => setScrollTop(e.currentTarget.scrollTop)}
+        ref={scroller}
         role="region"
         aria-label="Worst points"
         tabIndex={0}
@@ -146,9 +164,11 @@ export function WorstPointsTable({
         <table className="w-full border-collapse text-[13px]">
           <thead className="sticky top-0 bg-panel">
             <tr className="border-b border-rule text-graphite-soft">
-              <th scope="col" className="px-2 py-1">
-                <span className="sr-only">Keep</span>
-              </th>
+              {selection !== null && (
+                <th scope="col" className="px-2 py-1">
+                  <span className="sr-only">Keep</span>
+                </th>
+              )}
               {header("id", "point")}
               {table.coordinates !== null && (
                 <>
@@ -171,41 +191,46 @@ export function WorstPointsTable({
             </tr>
           </thead>
           <tbody>
-            {w.padTop > 0 && <tr style={{ height: w.padTop }} aria-hidden="true" />}
-            {rows.slice(w.first, w.last + 1).map((r) => (
-              <tr key={r.index} className="border-b border-rule" style={{ height: ROW }}>
-                <td className="px-2">
-                  <input
-                    type="checkbox"
-                    aria-label={`Keep point ${r.id} as a location`}
-                    checked={selected.has(r.index)}
-                    onChange={() => onToggle(r.index)}
-                  />
-                </td>
-                <td className="num px-2 text-right">{r.id}</td>
-                {table.coordinates !== null && (
-                  <>
-                    <td className="num px-2 text-right">{coordinateText(r.x)}</td>
-                    <td className="num px-2 text-right">{coordinateText(r.y)}</td>
-                    <td className="num px-2 text-right">{coordinateText(r.z)}</td>
-                  </>
-                )}
-                <td className="num px-2 text-right">{r.utilisation.toFixed(3)}</td>
-                <td className="px-2">
-                  <Verdict state={r.verdict} />
-                </td>
-                <td className="num px-2 text-right">{formatStress(r.s1, unit)}</td>
-                <td className="num px-2 text-right">{formatStress(r.s3, unit)}</td>
-                <td className="num px-2 text-right">{formatStress(r.vonMises, unit)}</td>
-                <td className="num px-2 text-right">{formatStress(r.tresca, unit)}</td>
-                <td className="px-2">
-                  <Link to={benchHref(r.index)} className="text-ink underline-offset-2 hover:underline">
-                    bench
-                  </Link>
-                </td>
-              </tr>
-            ))}
-            {w.padBottom > 0 && <tr style={{ height: w.padBottom }} aria-hidden="true" />}
+            {padTop > 0 && <tr style={{ height: padTop }} aria-hidden="true" />}
+            {drawn.map(({ index: at }) => {
+              const r = rows[at];
+              return (
+                <tr key={r.index} className="border-b border-rule" style={{ height: ROW }}>
+                  {selection !== null && (
+                    <td className="px-2">
+                      <input
+                        type="checkbox"
+                        aria-label={`Keep point ${r.id} as a location`}
+                        checked={selection.selected.has(r.index)}
+                        onChange={() => selection.onToggle(r.index)}
+                      />
+                    </td>
+                  )}
+                  <td className="num px-2 text-right">{r.id}</td>
+                  {table.coordinates !== null && (
+                    <>
+                      <td className="num px-2 text-right">{coordinateText(r.x)}</td>
+                      <td className="num px-2 text-right">{coordinateText(r.y)}</td>
+                      <td className="num px-2 text-right">{coordinateText(r.z)}</td>
+                    </>
+                  )}
+                  <td className="num px-2 text-right">{r.utilisation.toFixed(3)}</td>
+                  <td className="px-2">
+                    <Verdict state={r.verdict} />
+                  </td>
+                  <td className="num px-2 text-right">{formatStress(r.s1, unit)}</td>
+                  <td className="num px-2 text-right">{formatStress(r.s3, unit)}</td>
+                  <td className="num px-2 text-right">{formatStress(r.vonMises, unit)}</td>
+                  <td className="num px-2 text-right">{formatStress(r.tresca, unit)}</td>
+                  <td className="px-2">
+                    <Link to={benchHref(r.index)} className="text-ink underline-offset-2 hover:underline">
+                      bench
+                    </Link>
+                  </td>
+                </tr>
+              );
+            })}
+            {padBottom > 0 && <tr style={{ height: padBottom }} aria-hidden="true" />}
           </tbody>
         </table>
       </div>

@@ -4,7 +4,6 @@ import { evaluateState, principalValues, vonMises } from "../../../../../core";
 import { seededRandom } from "../../../../../core/testing/fixtures";
 import { COLOUR_STEPS, COLOUR_TOP, colourStep, colourTable, fillColours, legendTicks } from "./colour-scale";
 import { histogramGeometry } from "./histogram";
-import { rowWindow } from "./windowing";
 import {
   OPEN_BOX,
   nextSort,
@@ -158,18 +157,5 @@ describe("rowsOf and sortRows", () => {
     expect(readBound("", "x from")).toEqual({ value: null });
     expect(readBound(" 2,5 ", "x from")).toEqual({ value: 2.5 });
     expect(readBound("abc", "x from")).toEqual({ error: "x from must be a number or empty." });
-  });
-});
-
-describe("rowWindow", () => {
-  it("when scrolled, then only the rows in view plus the overscan are drawn and the padding keeps the full height", () => {
-    const w = rowWindow(300, 200, 20, 1000, 2);
-    expect([w.first, w.last]).toEqual([13, 27]);
-    expect(w.padTop + (w.last - w.first + 1) * 20 + w.padBottom).toBe(1000 * 20);
-  });
-
-  it("when the list is short or empty, then it is drawn whole or not at all", () => {
-    expect(rowWindow(0, 500, 20, 3)).toEqual({ first: 0, last: 2, padTop: 0, padBottom: 0 });
-    expect(rowWindow(0, 500, 20, 0).last).toBe(-1);
   });
 });

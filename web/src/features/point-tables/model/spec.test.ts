@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { MaterialList } from "../../../../../core/contract/materials";
-import { optionOfRef, refFromOption, specFor } from "./spec";
+import { optionOfRef, refFromOption, specFor, storedTableRating } from "./spec";
 
 const list: MaterialList = {
   materials: [],
@@ -55,5 +55,29 @@ describe("specFor", () => {
     expect(refFromOption(optionOfRef(ref))).toEqual(ref);
     expect(refFromOption("")).toBeNull();
     expect(refFromOption("other:x")).toBeNull();
+  });
+});
+
+describe("storedTableRating", () => {
+  it("when a stored table is opened, then it is rated against the project's default material and the case's category factors, with the project's unsuited-criteria choice", () => {
+    const rating = storedTableRating(
+      { ...project, defaultMaterial: { kind: "published", id: "grade-a" }, includeUnsuitedCriteria: true },
+      "test",
+      list,
+    );
+    if (rating === null || "problem" in rating) throw new Error("expected a spec");
+    expect(rating.spec.material).toEqual({ yield: 355e6, ultimateTension: 470e6 });
+    expect(rating.spec.requirements[0].requiredFactor).toBe(1.1);
+    expect(rating.includeUnsuited).toBe(true);
+  });
+
+  it("when the materials are loading or the project names no default material, then it waits or says why", () => {
+    const base = { ...project, includeUnsuitedCriteria: false };
+    expect(
+      storedTableRating({ ...base, defaultMaterial: { kind: "published", id: "grade-a" } }, "", undefined),
+    ).toBeNull();
+    expect(storedTableRating({ ...base, defaultMaterial: null }, "", list)).toEqual({
+      problem: "the project names no default material, which the server rates stored tables against.",
+    });
   });
 });

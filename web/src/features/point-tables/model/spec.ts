@@ -58,3 +58,29 @@ export function refFromOption(value: string): MaterialRef | null {
 }
 
 export const optionOfRef = (ref: MaterialRef | null) => (ref === null ? "" : `${ref.kind}:${ref.id}`);
+
+/**
+ * What a stored table's points are rated against in this browser, as the server rates them: the
+ * project's default material (never the one chosen for a new file) and the load case's category
+ * factors; null while the materials load, else the spec or why there is none.
+ */
+export function storedTableRating(
+  project: Pick<
+    Project,
+    "requirements" | "categoryRequirements" | "defaultMaterial" | "includeUnsuitedCriteria"
+  >,
+  category: string,
+  list: MaterialList | undefined,
+): { spec: PointTableSpec; includeUnsuited: boolean } | { problem: string } | null {
+  if (list === undefined) return null;
+  const choice = specFor(project, category, project.defaultMaterial, list);
+  if ("problem" in choice) {
+    return {
+      problem:
+        project.defaultMaterial === null
+          ? "the project names no default material, which the server rates stored tables against."
+          : choice.problem,
+    };
+  }
+  return { spec: choice.spec, includeUnsuited: project.includeUnsuitedCriteria };
+}

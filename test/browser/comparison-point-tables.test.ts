@@ -75,6 +75,10 @@ describe("the comparison's point-table section in Chromium", () => {
     expect(text).toMatch(/2 · 0/); // ids 12 and 13 fail, none within the close band
     expect(text).toMatch(/fails/);
     await page.getByRole("link", { name: "n4-points.csv" }).click();
-    await page.waitForURL(new RegExp(`/load-cases/${caseId}/point-tables`));
+    await page.waitForURL(new RegExp(`/load-cases/${caseId}/point-tables\\?table=${declared.id}$`));
+    // The link opens that table's stored results, whose governing point is the same one.
+    const governing = page.getByTestId("governing-points");
+    await governing.waitFor({ timeout: 15_000 });
+    expect((await governing.locator("tbody tr").first().innerText()).replace(/\s+/g, " ")).toMatch(/\b12\b/);
   });
 });

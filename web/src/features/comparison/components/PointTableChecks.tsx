@@ -17,7 +17,7 @@ function place(p: { x: number | null; y: number | null; z: number | null }): str
  * The finite-element point tables of the project's load cases, one section per table: for each
  * criterion the governing point with its safety factor against the required one, and how many
  * points fail or come close. The governing points already compete in the project's governing
- * check above; this says where each came from. The table's own page draws every point.
+ * check above; this says where each came from. The link opens that table's results, where every point is drawn.
  */
 export function PointTableChecks({
   tables,
@@ -52,7 +52,7 @@ export function PointTableChecks({
                     className={`${th} align-top font-normal`}
                   >
                     <Link
-                      to={`/workspaces/${workspaceId}/projects/${projectId}/load-cases/${table.caseId}/point-tables`}
+                      to={`/workspaces/${workspaceId}/projects/${projectId}/load-cases/${table.caseId}/point-tables?table=${table.tableId}`}
                       className="font-semibold text-ink underline-offset-2 hover:underline"
                     >
                       {table.fileName}

@@ -1,7 +1,5 @@
-import { scaleLinear } from "d3";
-import { useEffect, useRef, useState } from "react";
 import { PlotGridTicks } from "../../../components/PlotGridTicks";
-import { axisTickFormat } from "../../../lib/number-format";
+import { useThroughWallScales } from "../../../components/use-through-wall-scales";
 
 /** One line of the plot: its name (as typeset on the page), its stroke and its values by radius. */
 export type PlotSeries = {
@@ -12,8 +10,6 @@ export type PlotSeries = {
   values: readonly number[];
 };
 
-/** Drawn at the width it is shown (so its labels keep their size on a phone), never narrower than this. */
-const MIN_WIDTH = 300;
 const H = 260;
 const M = { left: 56, right: 70, top: 12, bottom: 40 };
 
@@ -35,33 +31,22 @@ export function ThroughWallPlot({
   stressUnit: string;
   marked: number;
 }) {
-  const box = useRef<HTMLDivElement>(null);
-  const [W, setW] = useState(560);
-  useEffect(() => {
-    const el = box.current;
-    if (!el) return;
-    const observer = new ResizeObserver(([entry]) =>
-      setW(Math.max(MIN_WIDTH, Math.round(entry.contentRect.width))),
-    );
-    observer.observe(el);
-    return () => observer.disconnect();
-  }, []);
-  const all = series.flatMap((s) => s.values);
-  const lo = Math.min(0, ...all);
-  const hi = Math.max(0, ...all);
-  const x = scaleLinear()
-    .domain([radii[0], radii[radii.length - 1]])
-    .range([M.left, W - M.right]);
-  const y = scaleLinear()
-    .domain([lo, hi === lo ? lo + 1 : hi])
-    .nice()
-    .range([H - M.bottom, M.top]);
-  const xTicks = x.ticks(W < 450 ? 4 : 6);
-  const yTicks = y.ticks(6);
-  const xf = axisTickFormat(xTicks);
-  const yf = axisTickFormat(yTicks);
-  const path = (values: readonly number[]) =>
-    values.map((v, i) => `${i === 0 ? "M" : "L"}${x(radii[i]).toFixed(2)},${y(v).toFixed(2)}`).join("");
+  const {
+    box,
+    width: W,
+    x,
+    y,
+    xTicks,
+    yTicks,
+    xFormat: xf,
+    yFormat: yf,
+    path,
+  } = useThroughWallScales(
+    radii,
+    series.flatMap((s) => s.values),
+    H,
+    M,
+  );
   return (
     <div ref={box} className="w-full">
       <svg

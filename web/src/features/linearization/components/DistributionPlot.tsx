@@ -1,11 +1,7 @@
-import { scaleLinear } from "d3";
-import { useEffect, useRef, useState } from "react";
 import type { Distribution } from "../model/distribution";
 import { PlotGridTicks } from "../../../components/PlotGridTicks";
-import { axisTickFormat } from "../../../lib/number-format";
+import { useThroughWallScales } from "../../../components/use-through-wall-scales";
 
-/** Drawn at the width it is shown (so its labels keep their size on a phone), never narrower than this. */
-const MIN_WIDTH = 300;
 const H = 260;
 const M = { left: 58, right: 16, top: 12, bottom: 42 };
 
@@ -31,34 +27,19 @@ export function DistributionPlot({
   lengthUnit: string;
   stressUnit: string;
 }) {
-  const box = useRef<HTMLDivElement>(null);
-  const [W, setW] = useState(560);
-  useEffect(() => {
-    const el = box.current;
-    if (!el) return;
-    const observer = new ResizeObserver(([entry]) =>
-      setW(Math.max(MIN_WIDTH, Math.round(entry.contentRect.width))),
-    );
-    observer.observe(el);
-    return () => observer.disconnect();
-  }, []);
   const { x: xs } = distribution;
   const all = [...distribution.total, ...distribution.membrane, ...distribution.membranePlusBending];
-  const lo = Math.min(0, ...all);
-  const hi = Math.max(0, ...all);
-  const x = scaleLinear()
-    .domain([xs[0], xs[xs.length - 1]])
-    .range([M.left, W - M.right]);
-  const y = scaleLinear()
-    .domain([lo, hi === lo ? lo + 1 : hi])
-    .nice()
-    .range([H - M.bottom, M.top]);
-  const xTicks = x.ticks(W < 450 ? 4 : 6);
-  const yTicks = y.ticks(6);
-  const xf = axisTickFormat(xTicks);
-  const yf = axisTickFormat(yTicks);
-  const path = (values: readonly number[]) =>
-    values.map((v, i) => `${i === 0 ? "M" : "L"}${x(xs[i]).toFixed(2)},${y(v).toFixed(2)}`).join("");
+  const {
+    box,
+    width: W,
+    x,
+    y,
+    xTicks,
+    yTicks,
+    xFormat: xf,
+    yFormat: yf,
+    path,
+  } = useThroughWallScales(xs, all, H, M);
   return (
     <div ref={box} className="w-full">
       <ul className="flex flex-wrap gap-x-4 gap-y-1 px-3 pt-2 text-[13px]" aria-hidden="true">

@@ -44,31 +44,39 @@ export type PartTimings = { parseMs: number; evaluateMs: number };
 
 export type Post = (message: PartMessage, transfer: Transferable[]) => void;
 
-/** Progress is posted at most this often while reading (bytes), so messages stay few. */
-const PROGRESS_BYTES = 1 << 20;
+/**
+ * How much of its slice a worker reads at a time: the next piece is already being read while this
+ * one is parsed, and progress is posted after each.
+ */
+export const READ_PIECE_BYTES = 4 << 20;
 
+/**
+ * The rows a slice of `size` bytes holds, about, by core's estimateRows on its first piece: decoded
+ * one character per byte (windows-1252), so that lengths in characters are lengths in bytes.
+ */
+const rowsEstimate = (first: Uint8Array, size: number) =>
+  estimateRows(new TextDecoder("windows-1252").decode(first.subarray(0, 65_536)), size);
+
+/**
+ * Reads the worker's slice of the file itself (`Blob.slice(…).arrayBuffer()`, a piece at a time,
+ * the next piece read while this one is parsed) and hands the bytes to core's parser undecoded:
+ * the page never holds the file's bytes or text.
+ */
 async function parseBlob(blob: Blob, options: PointTableOptions, post: Post): Promise<PointTable> {
-  const reader = blob.stream().getReader();
-  const decoder = new TextDecoder();
+  const read = (at: number) => blob.slice(at, Math.min(blob.size, at + READ_PIECE_BYTES)).arrayBuffer();
   let parser: PointTableParser | null = null;
-  let done = 0;
-  let reported = 0;
-  for (;;) {
-    const next = await reader.read();
-    if (next.done) break;
-    const text = decoder.decode(next.value, { stream: true });
-    // the first chunk tells how long the lines are, so the arrays are allocated once
-    parser ??= new PointTableParser({ ...options, expectedRows: estimateRows(text, blob.size) });
-    parser.push(text);
-    done += next.value.byteLength;
-    if (done - reported >= PROGRESS_BYTES) {
-      reported = done;
-      post({ kind: "progress", phase: "parse", done, total: blob.size }, []);
-    }
+  let next = blob.size > 0 ? read(0) : null;
+  for (let at = 0; next !== null;) {
+    const bytes = new Uint8Array(await next);
+    at += bytes.length;
+    next = at < blob.size && bytes.length > 0 ? read(at) : null;
+    // the first piece tells how long the lines are, so the arrays are allocated once
+    parser ??= new PointTableParser({ ...options, expectedRows: rowsEstimate(bytes, blob.size) });
+    parser.pushBytes(bytes);
+    post({ kind: "progress", phase: "parse", done: at, total: blob.size }, []);
   }
   parser ??= new PointTableParser(options);
-  parser.push(decoder.decode());
-  post({ kind: "progress", phase: "parse", done: blob.size, total: blob.size }, []);
+  if (blob.size === 0) post({ kind: "progress", phase: "parse", done: 0, total: 0 }, []);
   return parser.finish();
 }
 

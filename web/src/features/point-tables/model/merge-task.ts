@@ -7,7 +7,10 @@
  */
 import { mergePointTables, type PointTable } from "../../../../../core";
 import { mergeEvaluations, type TableEvaluation } from "./merge-evaluations";
+import type { CloudBuffers } from "./cloud-buffers";
 import {
+  cloudOf,
+  cloudTransferables,
   runPart,
   transferablesOf,
   type PartEvaluation,
@@ -19,13 +22,24 @@ import {
 export type FinishedPart = { table: PointTable; evaluation: PartEvaluation };
 
 /** What the page asks the joining worker to do. */
-export type MergeRequest = { kind: "merge"; parts: FinishedPart[]; worstCount: number };
+export type MergeRequest = {
+  kind: "merge";
+  parts: FinishedPart[];
+  worstCount: number;
+  /** also make the 3D view's arrays of the whole (cloud-buffers.ts) */
+  cloud?: boolean;
+};
 
 /** Every request a point-table worker answers. */
 export type WorkerRequest = PartRequest | MergeRequest;
 
 /** What the joining worker posts back. */
-export type MergedMessage = { kind: "merged"; table: PointTable; evaluation: TableEvaluation };
+export type MergedMessage = {
+  kind: "merged";
+  table: PointTable;
+  evaluation: TableEvaluation;
+  cloud?: CloudBuffers | null;
+};
 
 /** Every message a point-table worker posts. */
 export type WorkerMessage = PartMessage | MergedMessage;
@@ -45,7 +59,11 @@ export function runMerge(request: MergeRequest, post: WorkerPost): void {
       request.parts.map((p) => p.evaluation),
       request.worstCount,
     );
-    post({ kind: "merged", table, evaluation }, transferablesOf(table, evaluation));
+    const cloud = request.cloud === true ? cloudOf(table, evaluation) : null;
+    post({ kind: "merged", table, evaluation, cloud }, [
+      ...transferablesOf(table, evaluation),
+      ...cloudTransferables(cloud),
+    ]);
   } catch (error) {
     post({ kind: "error", message: error instanceof Error ? error.message : String(error) }, []);
   }

@@ -14,6 +14,7 @@ import {
   type PointTableOptions,
   type PointTableSpec,
 } from "../../../../../core";
+import { cloudBuffers, type CloudBuffers } from "./cloud-buffers";
 
 /** What the page asks a worker to do. */
 export type PartRequest = {
@@ -24,6 +25,8 @@ export type PartRequest = {
   includeUnsuited: boolean;
   /** how many of the part's worst points to keep */
   worstCount: number;
+  /** also make the 3D view's arrays (cloud-buffers.ts): only when this part is the whole table */
+  cloud?: boolean;
 };
 
 /** A part's rating without the per-criterion and per-point arrays the page does not keep. */
@@ -36,7 +39,14 @@ export type PartEvaluation = Pick<
 
 export type PartMessage =
   | { kind: "progress"; phase: "parse" | "evaluate"; done: number; total: number }
-  | { kind: "done"; table: PointTable; evaluation: PartEvaluation; timings: PartTimings }
+  | {
+      kind: "done";
+      table: PointTable;
+      evaluation: PartEvaluation;
+      timings: PartTimings;
+      /** the 3D view's arrays, when asked for and the table has coordinates */
+      cloud?: CloudBuffers | null;
+    }
   | { kind: "error"; message: string };
 
 /** How long the worker spent reading and rating its part (ms), for the benchmark and the page's note. */
@@ -115,6 +125,14 @@ export function transferablesOf(table: PointTable, evaluation: PartEvaluation): 
   return [...buffers];
 }
 
+/** The 3D view's arrays of a table with coordinates, else null. */
+export const cloudOf = (table: PointTable, evaluation: Pick<PartEvaluation, "utilisation">) =>
+  table.coordinates === null ? null : cloudBuffers(table.coordinates, evaluation.utilisation);
+
+/** The buffers of the 3D view's arrays, to transfer. */
+export const cloudTransferables = (cloud: CloudBuffers | null): ArrayBuffer[] =>
+  cloud === null ? [] : [cloud.positions.buffer as ArrayBuffer, cloud.colours.buffer as ArrayBuffer];
+
 /** Runs one part and posts its progress, then its result (arrays transferred) or the error. */
 export async function runPart(request: PartRequest, post: Post): Promise<void> {
   try {
@@ -126,7 +144,11 @@ export async function runPart(request: PartRequest, post: Post): Promise<void> {
     const parsed = performance.now();
     const evaluation = evaluate(table, request, post);
     const timings = { parseMs: parsed - began, evaluateMs: performance.now() - parsed };
-    post({ kind: "done", table, evaluation, timings }, transferablesOf(table, evaluation));
+    const cloud = request.cloud === true ? cloudOf(table, evaluation) : null;
+    post({ kind: "done", table, evaluation, timings, cloud }, [
+      ...transferablesOf(table, evaluation),
+      ...cloudTransferables(cloud),
+    ]);
   } catch (error) {
     post({ kind: "error", message: error instanceof Error ? error.message : String(error) }, []);
   }

@@ -7,6 +7,7 @@ import {
 } from "../../../../../core";
 import { seededRandom } from "../../../../../core/testing/fixtures";
 import { byteLineCuts } from "./byte-cuts";
+import { cloudBuffers } from "./cloud-buffers";
 import { handleWorkerRequest, type WorkerMessage, type WorkerRequest } from "./merge-task";
 import { READ_PIECE_BYTES, runPart, type PartMessage } from "./part-task";
 import { PipelineCancelled, WORST_KEPT, runPipeline, workerCountFor, type WorkerPort } from "./pipeline";
@@ -166,6 +167,31 @@ describe("runPipeline", () => {
     expect(workers.every((w) => w.terminated)).toBe(true);
     expect(table.badRows).toEqual(ref.table.badRows);
     expect(Array.from(evaluation.utilisation)).toEqual(Array.from(ref.evaluation.utilisation));
+  });
+
+  it("when the 3D view's arrays are asked for, then one worker or the joining worker makes them for the whole table, and without the ask there are none", async () => {
+    const text = generated(3000);
+    const ref = reference(text);
+    const expected = cloudBuffers(ref.table.coordinates!, ref.evaluation.utilisation);
+    for (const workers of [1, 2]) {
+      const made: FakeWorker[] = [];
+      const input = {
+        source: { text },
+        options: OPTIONS,
+        spec: SPEC,
+        includeUnsuited: false,
+        columnNames: NAMES,
+      };
+      const setup = {
+        createWorker: () => (made.push(new FakeWorker()), made.at(-1)!),
+        workers,
+        onProgress: () => {},
+      };
+      const { cloud } = await runPipeline({ ...input, cloud: true }, setup).done;
+      expect(cloud, `${workers} worker(s)`).toEqual(expected);
+      expect(made[0].transferred).toContain(cloud!.positions.buffer);
+      expect((await runPipeline(input, setup).done).cloud).toBeNull();
+    }
   });
 
   it("when the run is cancelled while worker 0 joins the parts, then it rejects as cancelled and worker 0 is terminated", async () => {

@@ -8,6 +8,7 @@
  */
 import { lineCuts, type PointTable, type PointTableOptions, type PointTableSpec } from "../../../../../core";
 import { byteLineCuts } from "./byte-cuts";
+import type { CloudBuffers } from "./cloud-buffers";
 import type { TableEvaluation } from "./merge-evaluations";
 import {
   mergeTransferables,
@@ -33,6 +34,11 @@ export type PipelineInput = {
   includeUnsuited: boolean;
   /** names of the columns, for the bad-row reasons of parts after the first */
   columnNames: readonly string[] | null;
+  /**
+   * Also make the 3D view's arrays in a worker (positions, colours, bounding sphere:
+   * cloud-buffers.ts), so the page need not build them; default false.
+   */
+  cloud?: boolean;
 };
 
 export type PipelineProgress = { phase: "parse" | "evaluate"; fraction: number };
@@ -43,6 +49,8 @@ export type PipelineResult = {
   workers: number;
   /** per part, in file order */
   timings: PartTimings[];
+  /** the 3D view's arrays, when the input asked for them and the table has coordinates; else null */
+  cloud: CloudBuffers | null;
 };
 
 /** Thrown (as the run's rejection) when the engineer cancelled. */
@@ -161,13 +169,15 @@ export function runPipeline(
           spec: input.spec,
           includeUnsuited: input.includeUnsuited,
           worstCount: WORST_KEPT,
+          cloud: input.cloud === true && sources.length === 1,
         });
       });
     });
     const timings = results.map((r) => r.timings);
     if (results.length === 1) {
       started.length = 0;
-      return { table: results[0].table, evaluation: results[0].evaluation, workers: 1, timings };
+      const { table, evaluation, cloud } = results[0];
+      return { table, evaluation, workers: 1, timings, cloud: cloud ?? null };
     }
     const merged = await new Promise<MergedMessage>((resolve, reject) => {
       stop = reject;
@@ -178,10 +188,14 @@ export function runPipeline(
         else if (data.kind === "error") fail(reject, data.message);
       };
       const parts: FinishedPart[] = results.map((r) => ({ table: r.table, evaluation: r.evaluation }));
-      joiner.postMessage({ kind: "merge", parts, worstCount: WORST_KEPT }, mergeTransferables(parts));
+      joiner.postMessage(
+        { kind: "merge", parts, worstCount: WORST_KEPT, cloud: input.cloud === true },
+        mergeTransferables(parts),
+      );
     });
     endAll();
-    return { table: merged.table, evaluation: merged.evaluation, workers: results.length, timings };
+    const { table, evaluation, cloud } = merged;
+    return { table, evaluation, workers: results.length, timings, cloud: cloud ?? null };
   })();
   return { done, cancel };
 }

@@ -49,8 +49,11 @@ export type PipelineResult = {
   workers: number;
   /** per part, in file order */
   timings: PartTimings[];
-  /** the 3D view's arrays, when the input asked for them and the table has coordinates; else null */
-  cloud: CloudBuffers | null;
+  /**
+   * the 3D view's arrays, when the input asked for them and the table has coordinates; else null
+   * (optional, so results built elsewhere, e.g. from a stored table, need not name it)
+   */
+  cloud?: CloudBuffers | null;
 };
 
 /** Thrown (as the run's rejection) when the engineer cancelled. */

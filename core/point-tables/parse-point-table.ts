@@ -2,7 +2,8 @@ import { FIRST_BAD_ROWS_LIMIT } from "../batch/principal-batch";
 import { COMPONENTS } from "../tensor/types";
 import { MAX_INPUT_STRESS } from "../tensor/validate";
 import { pascalsPer } from "../units/stress";
-import { numberScan, readNumber, readNumberAt } from "./read-number";
+import { decodeUtf8 } from "./decode-utf8";
+import { numberScan, readNumber, readNumberAt, readNumberAtBytes } from "./read-number";
 import { fieldEnd, fieldText, isQuoted, separatorCode, skipBlanks, splitLine } from "./split-line";
 import type { BadRow, PointTable, PointTableOptions, PointTableSeparator } from "./types";
 
@@ -21,6 +22,17 @@ const POINT = 46;
 /** The most rows allocated before any is read (2M rows: 160 MB with coordinates and ids). */
 const MAX_PREALLOCATED_ROWS = 2_000_000;
 const LF = "\n";
+const LF_BYTE = 10;
+// Module-local copies of two imports the per-field loops read: run under tsx (the Node bench and
+// workers), an imported binding is read through a getter on every access, which was a fifth of
+// the byte parse in a profile. The bundled app (Vite) reads them directly either way.
+const MAX_STRESS = MAX_INPUT_STRESS;
+const scan = numberScan;
+const QUOTE = 34;
+const SPACE = 32;
+const TAB = 9;
+/** The UTF-8 byte-order mark. */
+const BOM_BYTES = [0xef, 0xbb, 0xbf];
 
 /**
  * Reads a delimited point table (CSV, TSV, semicolon- or whitespace-separated) into Float64Arrays,
@@ -41,8 +53,9 @@ const LF = "\n";
  *
  * Own code rather than uDSV (a well-kept fast CSV parser): scripts/bench/point-tables.ts measures
  * both on the same generated 1,000,000-row file; this parser alone ran 1.9×–3.1× faster than
- * uDSV's typed parse alone in five runs (figures in that file's comment), and uDSV's typed rows
- * would still have to be copied into Float64Arrays.
+ * uDSV's typed parse alone in five runs, and 2.5× (text) and 3.3× (bytes, pushBytes) in the run of
+ * 3 December 2026 at load average 14 (figures in that file's comment), and uDSV's typed rows would
+ * still have to be copied into Float64Arrays.
  */
 export class PointTableParser {
   private readonly sep: number;
@@ -58,6 +71,10 @@ export class PointTableParser {
   private needHeader: boolean;
   private header: string[] | null = null;
   private carry = "";
+  /** the bytes after the last line break of the byte chunks (see pushBytes) */
+  private carryBytes: Uint8Array | null = null;
+  /** which of push / pushBytes this parser was given: the two do not mix */
+  private input: "text" | "bytes" | null = null;
   private line: number;
   private atStart = true;
   private finished = false;
@@ -115,6 +132,7 @@ export class PointTableParser {
   push(chunk: string): void {
     if (this.finished) throw new Error("push after finish: start a new PointTableParser");
     if (typeof chunk !== "string") throw new TypeError(`chunk must be a string, got ${typeof chunk}`);
+    this.takeInput("text");
     if (chunk.length === 0) return;
     let text = this.carry.length > 0 ? this.carry + chunk : chunk;
     if (this.atStart) {
@@ -131,11 +149,57 @@ export class PointTableParser {
     this.carry = pos === 0 ? text : text.slice(pos);
   }
 
+  /**
+   * Reads the complete lines of a chunk of the file's UTF-8 bytes (with what was left of the
+   * previous one); keeps the rest. The same result as decoding the bytes and calling `push`, but a
+   * line of plain numbers is read from the bytes without making a string: only a line the fast
+   * path does not take (skipped and header lines, a quoted or non-ASCII field, a bad row) is
+   * decoded and read by the text path, which also writes every bad row's reason. Text ids are
+   * made from their bytes. Do not mix with `push`.
+   */
+  pushBytes(chunk: Uint8Array): void {
+    if (this.finished) throw new Error("pushBytes after finish: start a new PointTableParser");
+    if (!(chunk instanceof Uint8Array)) throw new TypeError("chunk must be a Uint8Array");
+    this.takeInput("bytes");
+    if (chunk.length === 0) return;
+    let bytes = chunk;
+    let pos = 0;
+    const carry = this.carryBytes;
+    if (carry !== null) {
+      // the line begun in the previous chunk: joined with the start of this one (a short copy)
+      const nl = chunk.indexOf(LF_BYTE);
+      const joined = new Uint8Array(carry.length + (nl < 0 ? chunk.length : nl + 1));
+      joined.set(carry);
+      joined.set(nl < 0 ? chunk : chunk.subarray(0, nl + 1), carry.length);
+      if (nl < 0) {
+        this.carryBytes = joined;
+        return;
+      }
+      this.carryBytes = null;
+      this.readByteLine(joined, this.skipBom(joined), joined.length - 1);
+      pos = nl + 1;
+    } else if (this.atStart) pos = this.skipBom(bytes);
+    for (;;) {
+      const nl = bytes.indexOf(LF_BYTE, pos);
+      if (nl < 0) break;
+      this.readByteLine(bytes, pos, nl);
+      pos = nl + 1;
+    }
+    if (pos < bytes.length) {
+      bytes = bytes.slice(pos);
+      // a chunk without any line break waits whole for the next one (a BOM is still looked for)
+      this.carryBytes = bytes;
+    }
+  }
+
   /** Reads the last line (which may lack a line break) and returns the table. */
   finish(): PointTable {
     if (this.finished) throw new Error("finish called twice");
     if (this.carry.length > 0) this.readLine(this.carry, 0, this.carry.length);
     this.carry = "";
+    const rest = this.carryBytes;
+    if (rest !== null) this.readByteLine(rest, this.skipBom(rest), rest.length);
+    this.carryBytes = null;
     this.finished = true;
     const n = this.count;
     let ids: Float64Array | string[] | null = null;
@@ -190,7 +254,7 @@ export class PointTableParser {
         // numeric ids are integers or plain numbers: always read with the decimal point
         const mark = role === ROLE_ID ? POINT : decimal;
         let v = readNumberAt(text, p, end, mark);
-        fe = numberScan.end;
+        fe = scan.end;
         const stop = fe < end ? text.charCodeAt(fe) : -2;
         if (v !== v || !(stop === -2 || stop === sep || (sep < 0 && (stop === 32 || stop === 9)))) {
           // not the common form: find the field's end, then read it with every rule
@@ -202,7 +266,7 @@ export class PointTableParser {
           }
         }
         if (role < ROLE_X) {
-          if (!(v <= MAX_INPUT_STRESS && v >= -MAX_INPUT_STRESS)) return this.bad(line, col, text, p, fe, v);
+          if (!(v <= MAX_STRESS && v >= -MAX_STRESS)) return this.bad(line, col, text, p, fe, v);
           comps[6 * n + role] = v * scale;
         } else if (!(v - v === 0)) {
           return this.bad(line, col, text, p, fe, v);
@@ -227,6 +291,100 @@ export class PointTableParser {
       );
     }
     this.count = n + 1;
+  }
+
+  private takeInput(kind: "text" | "bytes"): void {
+    if (this.input !== null && this.input !== kind)
+      throw new Error("push and pushBytes do not mix: give one parser either text or bytes");
+    this.input = kind;
+  }
+
+  /** Past a UTF-8 byte-order mark when `bytes` starts the file; the index reading starts at. */
+  private skipBom(bytes: Uint8Array): number {
+    if (!this.atStart) return 0;
+    if (bytes.length < 3 && BOM_BYTES.slice(0, bytes.length).every((b, i) => bytes[i] === b)) return 0;
+    this.atStart = false;
+    return BOM_BYTES.every((b, i) => bytes[i] === b) ? 3 : 0;
+  }
+
+  /**
+   * One line of bytes, `bytes[start, nl)` (nl: the line feed, or the end of the last line): the
+   * twin of readLine's number loop over bytes; anything it does not take goes to readLine as text,
+   * so every rule and every bad row's reason stays in one place.
+   */
+  private readByteLine(bytes: Uint8Array, start: number, nl: number): void {
+    if (this.toSkip > 0 || this.needHeader) return this.readDecodedLine(bytes, start, nl);
+    let end = nl;
+    if (end > start && bytes[end - 1] === CR) end--;
+    const sep = this.sep;
+    let p = skipBlankBytes(bytes, start, end);
+    if (p >= end) {
+      this.line++; // a blank line
+      return;
+    }
+    if (sep >= 0) p = start;
+    const n = this.count;
+    if (n === this.capacity) this.grow();
+    const roleOf = this.roleOf;
+    const last = roleOf.length - 1;
+    const comps = this.components;
+    const scale = this.scale;
+    const decimal = this.decimal;
+    const textIds = this.textIds;
+    let textId: string | null = null;
+    let col = 0;
+    for (; col <= last; col++) {
+      if (sep < 0 ? p >= end : p > end) break;
+      const role = roleOf[col];
+      let fe: number;
+      if (role >= 0 && (role < ROLE_ID || !textIds)) {
+        const v = readNumberAtBytes(bytes, p, end, role === ROLE_ID ? POINT : decimal);
+        fe = scan.end;
+        const stop = fe < end ? bytes[fe] : -2;
+        if (v !== v || !(stop === -2 || stop === sep || (sep < 0 && (stop === SPACE || stop === TAB)))) {
+          return this.readDecodedLine(bytes, start, nl);
+        }
+        if (role < ROLE_X) {
+          if (!(v <= MAX_STRESS && v >= -MAX_STRESS)) return this.readDecodedLine(bytes, start, nl);
+          comps[6 * n + role] = v * scale;
+        } else if (!(v - v === 0)) {
+          return this.readDecodedLine(bytes, start, nl);
+        } else if (role === ROLE_ID) this.numericIds![n] = v;
+        else this.coordinates![3 * n + role - ROLE_X] = v;
+      } else {
+        // a field not read as a number, unquoted: its end is where the text path finds it (no
+        // byte of a multi-byte character is a separator); a text id is taken when it is plain
+        // printable ASCII, anything else goes to the text path
+        if (bytes[p] === QUOTE) return this.readDecodedLine(bytes, start, nl);
+        fe = p;
+        let from = -1;
+        let to = -1;
+        for (; fe < end; fe++) {
+          const c = bytes[fe];
+          if (c === sep || (sep < 0 && (c === SPACE || c === TAB))) break;
+          if (role !== ROLE_ID || c === SPACE || c === TAB) continue;
+          if (c < SPACE || c >= 0x7f || c === QUOTE) return this.readDecodedLine(bytes, start, nl);
+          if (from < 0) from = fe;
+          to = fe + 1;
+        }
+        if (role === ROLE_ID) {
+          // (a very long one too: fromCharCode takes its arguments on the stack)
+          if (from < 0 || to - from > 4096) return this.readDecodedLine(bytes, start, nl);
+          textId = String.fromCharCode(...bytes.subarray(from, to));
+        }
+      }
+      p = sep < 0 ? skipBlankBytes(bytes, fe, end) : fe + 1;
+    }
+    if (col <= last) return this.readDecodedLine(bytes, start, nl);
+    if (textId !== null) this.stringIds[n] = textId;
+    this.line++;
+    this.count = n + 1;
+  }
+
+  /** A line the byte path does not take, decoded and read by readLine (its line break left out). */
+  private readDecodedLine(bytes: Uint8Array, start: number, nl: number): void {
+    const text = decodeUtf8(bytes, start, nl);
+    this.readLine(text, 0, text.length);
   }
 
   private separatorName(): PointTableSeparator {
@@ -292,6 +450,12 @@ export class PointTableParser {
  */
 function fitted(arr: Float64Array, length: number, capacity: number): Float64Array {
   return length >= 0.8 * capacity ? arr.subarray(0, length) : arr.slice(0, length);
+}
+
+/** Index of the first byte at or after `i` that is not a space or tab (skipBlanks over bytes). */
+function skipBlankBytes(bytes: Uint8Array, i: number, end: number): number {
+  while (i < end && (bytes[i] === SPACE || bytes[i] === TAB)) i++;
+  return i;
 }
 
 /** Role of each column (−1: not read), up to the last mapped column; checks the mapping. */

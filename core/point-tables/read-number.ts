@@ -119,3 +119,70 @@ export function readNumberAt(text: string, start: number, end: number, decimal: 
   else return Number.NaN;
   return negative ? -v : v;
 }
+
+/**
+ * {@link readNumberAt} over UTF-8 bytes instead of a string, for a Web Worker that parses the bytes
+ * of a file without decoding them to text (decoding 90 MB and scanning the string cost more than
+ * the parse itself). The same rules, line for line: keep the two in step (the tests give both the
+ * same fields). A byte of a multi-byte character is never a digit, sign, mark or `e`, so the
+ * scan stops at it and the caller falls back to the decoded line.
+ */
+export function readNumberAtBytes(bytes: Uint8Array, start: number, end: number, decimal: number): number {
+  let i = start;
+  let negative = false;
+  let c = bytes[i];
+  if (c === MINUS) {
+    negative = true;
+    i++;
+  } else if (c === PLUS) i++;
+  let m = 0;
+  let digits = 0;
+  let frac = 0;
+  while (i < end) {
+    const d = bytes[i] - 48;
+    if (d < 0 || d > 9) break;
+    m = m * 10 + d;
+    digits++;
+    i++;
+  }
+  if (i < end && bytes[i] === decimal) {
+    i++;
+    while (i < end) {
+      const d = bytes[i] - 48;
+      if (d < 0 || d > 9) break;
+      m = m * 10 + d;
+      digits++;
+      frac++;
+      i++;
+    }
+  }
+  let exp = 0;
+  if (i < end && ((c = bytes[i]) === 101 || c === 69)) {
+    i++;
+    let expNegative = false;
+    c = bytes[i];
+    if (c === MINUS) {
+      expNegative = true;
+      i++;
+    } else if (c === PLUS) i++;
+    let expDigits = 0;
+    while (i < end) {
+      const d = bytes[i] - 48;
+      if (d < 0 || d > 9) break;
+      exp = exp * 10 + d;
+      expDigits++;
+      i++;
+    }
+    if (expDigits === 0 || expDigits > 4) return Number.NaN;
+    if (expNegative) exp = -exp;
+  }
+  numberScan.end = i;
+  if (digits === 0 || digits > 15) return Number.NaN;
+  const e10 = exp - frac;
+  let v: number;
+  if (e10 === 0) v = m;
+  else if (e10 < 0 && e10 >= -22) v = m / POW10[-e10];
+  else if (e10 > 0 && e10 <= 22) v = m * POW10[e10];
+  else return Number.NaN;
+  return negative ? -v : v;
+}

@@ -8,6 +8,7 @@
  * storage, every 100 ms; the workers' own heaps are not in it). Targets (issue 15): ≤ 3 s from file to results on this 2-core machine, no main-thread task
  * over 50 ms, heap ≤ 3× the table's float64 size; two workers faster than one.
  */
+import { existsSync, readFileSync } from "node:fs";
 import { rm, writeFile } from "node:fs/promises";
 import os from "node:os";
 import path from "node:path";
@@ -15,10 +16,15 @@ import type { Browser } from "playwright-core";
 import { launchChromium, signUpInContext } from "../../test/support/browser";
 import { generatePointTableText } from "./support/point-table-text";
 import { startThrowawayServer } from "./support/throwaway-server";
+import { webDist } from "../web-build";
 
 const ROWS = Number(process.env.BENCH_POINT_ROWS ?? 1_000_000);
-const REPEATS = 2; // best of REPEATS runs per worker count
+const REPEATS = Number(process.env.BENCH_POINT_REPEATS ?? 2); // best of REPEATS runs per worker count
 const LONG_TASK_MS = 50;
+/** How long after the results appear long tasks and the heap are still watched (ms). */
+const SETTLE_MS = 1000;
+/** BENCH_POINT_PROFILE=1: a sampling profile of the main thread, its long stretches of work by function. */
+const PROFILE = process.env.BENCH_POINT_PROFILE === "1";
 /** The table's float64 size: six components, three coordinates and the id per point. */
 const TABLE_BYTES = ROWS * 10 * 8;
 
@@ -96,13 +102,21 @@ async function oneRun(browser: Browser, origin: string, file: string, cores: num
       await new Promise((r) => setTimeout(r, 100));
     }
   })();
+  if (PROFILE) {
+    await cdp.send("Profiler.enable");
+    await cdp.send("Profiler.setSamplingInterval", { interval: 500 });
+    await cdp.send("Profiler.start");
+  }
   const t0 = performance.now();
   await button.click();
   const results = page.getByTestId("point-table-results");
   await results.waitFor();
   const seconds = (performance.now() - t0) / 1000;
+  // what the page does just after the results appear (the 3D view's buffers, the list) counts too
+  await page.waitForTimeout(SETTLE_MS);
   sampling = false;
   await sampler;
+  if (PROFILE) printBusyStretches((await cdp.send("Profiler.stop")).profile, cores);
   const text = await results.innerText();
   const timings = (await results.getAttribute("data-timings")) ?? "";
   const pageSeconds = Number(/read and rated in\s+([\d.]+)\s*s/.exec(text)?.[1] ?? Number.NaN);
@@ -119,6 +133,90 @@ async function oneRun(browser: Browser, origin: string, file: string, cores: num
     longTasks: tasks.filter((d) => d > LONG_TASK_MS).length,
     peakHeap,
   };
+}
+
+/** The part of a CDP CPU profile (Profiler.stop) read here. */
+type CpuProfile = {
+  nodes: {
+    id: number;
+    callFrame: { functionName: string; url: string; lineNumber: number; columnNumber: number };
+    children?: number[];
+  }[];
+  samples?: number[];
+  timeDeltas?: number[];
+};
+
+const builtCache = new Map<string, string[]>();
+/** The lines of a built asset (dist/web/assets), for naming a minified function. */
+function builtLines(file: string): string[] {
+  let lines = builtCache.get(file);
+  if (lines === undefined) {
+    const at = path.join(webDist, "assets", file);
+    lines = existsSync(at) ? readFileSync(at, "utf8").split("\n") : [];
+    builtCache.set(file, lines);
+  }
+  return lines;
+}
+
+/**
+ * Prints each stretch of main-thread work longer than {@link LONG_TASK_MS} in a CPU profile (samples
+ * not idle, one after the other) with the functions that took its time, so a long task can be
+ * traced to its code.
+ */
+function printBusyStretches(profile: CpuProfile, cores: number): void {
+  const nodes = new Map(profile.nodes.map((n) => [n.id, n]));
+  const parent = new Map<number, number>();
+  for (const n of profile.nodes) for (const c of n.children ?? []) parent.set(c, n.id);
+  const label = (id: number) => {
+    const f = nodes.get(id)!.callFrame;
+    const file = f.url.split("/").pop() ?? "";
+    // the built code where the function starts, since its name is minified
+    const code =
+      file === "" ? "" : (builtLines(file)[f.lineNumber] ?? "").slice(f.columnNumber, f.columnNumber + 70);
+    return `${f.functionName || "(anonymous)"} ${file}:${f.lineNumber + 1}  ${code}`;
+  };
+  const samples = profile.samples ?? [];
+  const deltas = profile.timeDeltas ?? [];
+  let at = 0;
+  let start = -1;
+  let stretch: { id: number; ms: number }[] = [];
+  const flush = (end: number) => {
+    const ms = end - start;
+    if (start >= 0 && ms > LONG_TASK_MS) {
+      const self = new Map<string, number>();
+      const inclusive = new Map<string, number>();
+      for (const s of stretch) {
+        self.set(label(s.id), (self.get(label(s.id)) ?? 0) + s.ms);
+        const seen = new Set<string>();
+        for (let id: number | undefined = s.id; id !== undefined; id = parent.get(id)) {
+          const l = label(id);
+          if (!seen.has(l)) inclusive.set(l, (inclusive.get(l) ?? 0) + s.ms);
+          seen.add(l);
+        }
+      }
+      const top = (m: Map<string, number>) =>
+        [...m]
+          .sort((a, b) => b[1] - a[1])
+          .slice(0, 8)
+          .map(([l, v]) => `      ${v.toFixed(0).padStart(5)} ms  ${l}`)
+          .join("\n");
+      console.log(
+        `  [${cores} worker(s)] busy ${ms.toFixed(0)} ms; self time:\n${top(self)}\n    inclusive:\n${top(inclusive)}`,
+      );
+    }
+    start = -1;
+    stretch = [];
+  };
+  for (let i = 0; i < samples.length; i++) {
+    at += (deltas[i] ?? 0) / 1000;
+    const idle = nodes.get(samples[i])?.callFrame.functionName === "(idle)";
+    if (idle) flush(at);
+    else {
+      if (start < 0) start = at;
+      stretch.push({ id: samples[i], ms: (deltas[i + 1] ?? 0) / 1000 });
+    }
+  }
+  flush(at);
 }
 
 export async function run(): Promise<void> {

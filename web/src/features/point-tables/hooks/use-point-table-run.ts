@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useRef, useState } from "react";
+import { startTransition, useCallback, useEffect, useRef, useState } from "react";
 import {
   PipelineCancelled,
   runPipeline,
@@ -25,7 +25,8 @@ const startWorker = (): WorkerPort =>
 /**
  * Runs the worker pipeline for one table and keeps its state for the page: progress while it
  * runs (at most one update per animation frame, so a million points do not re-render the page a
- * thousand times), the result, a cancellation or an error. Leaving the page stops the workers.
+ * thousand times), the result (rendered as a transition), a cancellation or an error. Leaving the
+ * page stops the workers.
  */
 export function usePointTableRun() {
   const [state, setState] = useState<RunState>({ status: "idle" });
@@ -56,7 +57,10 @@ export function usePointTableRun() {
     run.done.then(
       (result) => {
         cancelRef.current = null;
-        setState({ status: "done", result, seconds: (performance.now() - began) / 1000 });
+        const seconds = (performance.now() - began) / 1000;
+        // a transition: React renders the results (histogram, governing points, the list, the 3D
+        // view) in slices, yielding to the browser between components, instead of in one task
+        startTransition(() => setState({ status: "done", result, seconds }));
       },
       (error: unknown) => {
         cancelRef.current = null;

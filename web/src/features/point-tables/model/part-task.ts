@@ -14,6 +14,7 @@ import {
   type PointTableOptions,
   type PointTableSpec,
 } from "../../../../../core";
+import { cloudBuffers, type CloudBuffers } from "./cloud-buffers";
 
 /** What the page asks a worker to do. */
 export type PartRequest = {
@@ -24,6 +25,8 @@ export type PartRequest = {
   includeUnsuited: boolean;
   /** how many of the part's worst points to keep */
   worstCount: number;
+  /** also make the 3D view's arrays (cloud-buffers.ts): only when this part is the whole table */
+  cloud?: boolean;
 };
 
 /** A part's rating without the per-criterion and per-point arrays the page does not keep. */
@@ -36,7 +39,14 @@ export type PartEvaluation = Pick<
 
 export type PartMessage =
   | { kind: "progress"; phase: "parse" | "evaluate"; done: number; total: number }
-  | { kind: "done"; table: PointTable; evaluation: PartEvaluation; timings: PartTimings }
+  | {
+      kind: "done";
+      table: PointTable;
+      evaluation: PartEvaluation;
+      timings: PartTimings;
+      /** the 3D view's arrays, when asked for and the table has coordinates */
+      cloud?: CloudBuffers | null;
+    }
   | { kind: "error"; message: string };
 
 /** How long the worker spent reading and rating its part (ms), for the benchmark and the page's note. */
@@ -44,31 +54,39 @@ export type PartTimings = { parseMs: number; evaluateMs: number };
 
 export type Post = (message: PartMessage, transfer: Transferable[]) => void;
 
-/** Progress is posted at most this often while reading (bytes), so messages stay few. */
-const PROGRESS_BYTES = 1 << 20;
+/**
+ * How much of its slice a worker reads at a time: the next piece is already being read while this
+ * one is parsed, and progress is posted after each.
+ */
+export const READ_PIECE_BYTES = 4 << 20;
 
+/**
+ * The rows a slice of `size` bytes holds, about, by core's estimateRows on its first piece: decoded
+ * one character per byte (windows-1252), so that lengths in characters are lengths in bytes.
+ */
+const rowsEstimate = (first: Uint8Array, size: number) =>
+  estimateRows(new TextDecoder("windows-1252").decode(first.subarray(0, 65_536)), size);
+
+/**
+ * Reads the worker's slice of the file itself (`Blob.slice(…).arrayBuffer()`, a piece at a time,
+ * the next piece read while this one is parsed) and hands the bytes to core's parser undecoded:
+ * the page never holds the file's bytes or text.
+ */
 async function parseBlob(blob: Blob, options: PointTableOptions, post: Post): Promise<PointTable> {
-  const reader = blob.stream().getReader();
-  const decoder = new TextDecoder();
+  const read = (at: number) => blob.slice(at, Math.min(blob.size, at + READ_PIECE_BYTES)).arrayBuffer();
   let parser: PointTableParser | null = null;
-  let done = 0;
-  let reported = 0;
-  for (;;) {
-    const next = await reader.read();
-    if (next.done) break;
-    const text = decoder.decode(next.value, { stream: true });
-    // the first chunk tells how long the lines are, so the arrays are allocated once
-    parser ??= new PointTableParser({ ...options, expectedRows: estimateRows(text, blob.size) });
-    parser.push(text);
-    done += next.value.byteLength;
-    if (done - reported >= PROGRESS_BYTES) {
-      reported = done;
-      post({ kind: "progress", phase: "parse", done, total: blob.size }, []);
-    }
+  let next = blob.size > 0 ? read(0) : null;
+  for (let at = 0; next !== null;) {
+    const bytes = new Uint8Array(await next);
+    at += bytes.length;
+    next = at < blob.size && bytes.length > 0 ? read(at) : null;
+    // the first piece tells how long the lines are, so the arrays are allocated once
+    parser ??= new PointTableParser({ ...options, expectedRows: rowsEstimate(bytes, blob.size) });
+    parser.pushBytes(bytes);
+    post({ kind: "progress", phase: "parse", done: at, total: blob.size }, []);
   }
   parser ??= new PointTableParser(options);
-  parser.push(decoder.decode());
-  post({ kind: "progress", phase: "parse", done: blob.size, total: blob.size }, []);
+  if (blob.size === 0) post({ kind: "progress", phase: "parse", done: 0, total: 0 }, []);
   return parser.finish();
 }
 
@@ -107,6 +125,14 @@ export function transferablesOf(table: PointTable, evaluation: PartEvaluation): 
   return [...buffers];
 }
 
+/** The 3D view's arrays of a table with coordinates, else null. */
+export const cloudOf = (table: PointTable, evaluation: Pick<PartEvaluation, "utilisation">) =>
+  table.coordinates === null ? null : cloudBuffers(table.coordinates, evaluation.utilisation);
+
+/** The buffers of the 3D view's arrays, to transfer. */
+export const cloudTransferables = (cloud: CloudBuffers | null): ArrayBuffer[] =>
+  cloud === null ? [] : [cloud.positions.buffer as ArrayBuffer, cloud.colours.buffer as ArrayBuffer];
+
 /** Runs one part and posts its progress, then its result (arrays transferred) or the error. */
 export async function runPart(request: PartRequest, post: Post): Promise<void> {
   try {
@@ -118,7 +144,11 @@ export async function runPart(request: PartRequest, post: Post): Promise<void> {
     const parsed = performance.now();
     const evaluation = evaluate(table, request, post);
     const timings = { parseMs: parsed - began, evaluateMs: performance.now() - parsed };
-    post({ kind: "done", table, evaluation, timings }, transferablesOf(table, evaluation));
+    const cloud = request.cloud === true ? cloudOf(table, evaluation) : null;
+    post({ kind: "done", table, evaluation, timings, cloud }, [
+      ...transferablesOf(table, evaluation),
+      ...cloudTransferables(cloud),
+    ]);
   } catch (error) {
     post({ kind: "error", message: error instanceof Error ? error.message : String(error) }, []);
   }

@@ -7,7 +7,9 @@ import {
 } from "../../../../../core";
 import { seededRandom } from "../../../../../core/testing/fixtures";
 import { byteLineCuts } from "./byte-cuts";
-import { runPart, type PartMessage, type PartRequest } from "./part-task";
+import { cloudBuffers } from "./cloud-buffers";
+import { handleWorkerRequest, type WorkerMessage, type WorkerRequest } from "./merge-task";
+import { READ_PIECE_BYTES, runPart, type PartMessage } from "./part-task";
 import { PipelineCancelled, WORST_KEPT, runPipeline, workerCountFor, type WorkerPort } from "./pipeline";
 
 // The reference for every check here is core's own one-piece path (parsePointTable then
@@ -42,19 +44,25 @@ function generated(rows: number, bad: ReadonlySet<number> = new Set()): string {
   return lines.join("\r\n") + "\r\n";
 }
 
-/** A fake Worker: runs the part in this thread on the next turn, delivering what it posts. */
+/** A fake Worker: answers each request in this thread on the next turn, delivering what it posts. */
 class FakeWorker implements WorkerPort {
-  onmessage: ((event: { data: PartMessage }) => void) | null = null;
+  onmessage: ((event: { data: WorkerMessage }) => void) | null = null;
   onerror: ((event: { message?: string }) => void) | null = null;
   terminated = false;
-  received: PartRequest | null = null;
+  /** the first request (the part), and every request */
+  received: WorkerRequest | null = null;
+  requests: WorkerRequest[] = [];
+  /** what the page moved here, and what this worker moved back */
+  given: Transferable[] = [];
   transferred: Transferable[] = [];
-  constructor(private readonly hold = false) {}
-  postMessage(message: PartRequest) {
-    this.received = message;
-    if (this.hold) return;
+  constructor(private readonly hold: (request: WorkerRequest) => boolean = () => false) {}
+  postMessage(message: WorkerRequest, transfer: Transferable[] = []) {
+    this.received ??= message;
+    this.requests.push(message);
+    this.given.push(...transfer);
+    if (this.hold(message)) return;
     setTimeout(() => {
-      void runPart(message, (m, transfer) => {
+      void handleWorkerRequest(message, (m, transfer) => {
         this.transferred.push(...transfer);
         if (!this.terminated) this.onmessage?.({ data: m });
       });
@@ -96,7 +104,9 @@ describe("runPipeline", () => {
       ref.evaluation.criteria.map((c) => [c.governing, c.failing, c.close]),
     );
     // parts after the first read neither the title line nor the header
-    expect(workers[1].received?.options).toMatchObject({ skipRows: 0, header: false, columnNames: NAMES });
+    expect(workers[1].received).toMatchObject({
+      options: { skipRows: 0, header: false, columnNames: NAMES },
+    });
   });
 
   it("when a file is read by two fake workers, then a bad row in the second half is named by its line in the whole file", async () => {
@@ -131,6 +141,81 @@ describe("runPipeline", () => {
     expect(worker.transferred).toContain(table.coordinates!.buffer);
   });
 
+  it("when two workers finish, then worker 0 joins the parts: their arrays go to it by transfer and the whole comes back by transfer", async () => {
+    const text = generated(3000, new Set([2500]));
+    const ref = reference(text);
+    const workers: FakeWorker[] = [];
+    const { table, evaluation } = await runPipeline(
+      { source: { text }, options: OPTIONS, spec: SPEC, includeUnsuited: false, columnNames: NAMES },
+      {
+        createWorker: () => (workers.push(new FakeWorker()), workers.at(-1)!),
+        workers: 2,
+        onProgress: () => {},
+      },
+    ).done;
+    expect(workers[0].requests.map((r) => ("kind" in r ? r.kind : "part"))).toEqual(["part", "merge"]);
+    expect(workers[1].requests).toHaveLength(1);
+    // every array of both parts is handed over, none copied on the page
+    const merge = workers[0].requests[1];
+    if (!("kind" in merge)) throw new Error("the second request is not a merge");
+    for (const part of merge.parts) {
+      expect(workers[0].given).toContain(part.table.components.buffer);
+      expect(workers[0].given).toContain(part.evaluation.utilisation.buffer);
+    }
+    expect(workers[0].transferred).toContain(table.components.buffer);
+    expect(workers[0].transferred).toContain(evaluation.utilisation.buffer);
+    expect(workers.every((w) => w.terminated)).toBe(true);
+    expect(table.badRows).toEqual(ref.table.badRows);
+    expect(Array.from(evaluation.utilisation)).toEqual(Array.from(ref.evaluation.utilisation));
+  });
+
+  it("when the 3D view's arrays are asked for, then one worker or the joining worker makes them for the whole table, and without the ask there are none", async () => {
+    const text = generated(3000);
+    const ref = reference(text);
+    const expected = cloudBuffers(ref.table.coordinates!, ref.evaluation.utilisation);
+    for (const workers of [1, 2]) {
+      const made: FakeWorker[] = [];
+      const input = {
+        source: { text },
+        options: OPTIONS,
+        spec: SPEC,
+        includeUnsuited: false,
+        columnNames: NAMES,
+      };
+      const setup = {
+        createWorker: () => (made.push(new FakeWorker()), made.at(-1)!),
+        workers,
+        onProgress: () => {},
+      };
+      const { cloud } = await runPipeline({ ...input, cloud: true }, setup).done;
+      expect(cloud, `${workers} worker(s)`).toEqual(expected);
+      expect(made[0].transferred).toContain(cloud!.positions.buffer);
+      expect((await runPipeline(input, setup).done).cloud).toBeNull();
+    }
+  });
+
+  it("when the run is cancelled while worker 0 joins the parts, then it rejects as cancelled and worker 0 is terminated", async () => {
+    const workers: FakeWorker[] = [];
+    const run = runPipeline(
+      {
+        source: { text: generated(3000) },
+        options: OPTIONS,
+        spec: SPEC,
+        includeUnsuited: false,
+        columnNames: NAMES,
+      },
+      {
+        createWorker: () => (workers.push(new FakeWorker((r) => "kind" in r)), workers.at(-1)!),
+        workers: 2,
+        onProgress: () => {},
+      },
+    );
+    await expect.poll(() => workers[0]?.requests.length).toBe(2);
+    run.cancel();
+    await expect(run.done).rejects.toBeInstanceOf(PipelineCancelled);
+    expect(workers[0].terminated).toBe(true);
+  });
+
   it("when the run is cancelled, then it rejects as cancelled and every worker is terminated", async () => {
     const workers: FakeWorker[] = [];
     const run = runPipeline(
@@ -142,7 +227,7 @@ describe("runPipeline", () => {
         columnNames: NAMES,
       },
       {
-        createWorker: () => (workers.push(new FakeWorker(true)), workers.at(-1)!),
+        createWorker: () => (workers.push(new FakeWorker(() => true)), workers.at(-1)!),
         workers: 2,
         onProgress: () => {},
       },
@@ -190,6 +275,37 @@ describe("runPipeline", () => {
     expect(fractions.length).toBeGreaterThan(2);
     for (let i = 1; i < fractions.length; i++) expect(fractions[i]).toBeGreaterThanOrEqual(fractions[i - 1]);
     expect(fractions.at(-1)).toBe(1);
+  });
+});
+
+describe("runPart on a file slice", () => {
+  it("when a worker's slice is longer than one read piece, then lines cut between pieces are read whole and progress is posted per piece", async () => {
+    // about 5 MB: two pieces of READ_PIECE_BYTES (4 MB)
+    const text = generated(60_000, new Set([59_000]));
+    const bytes = new TextEncoder().encode(text);
+    expect(bytes.length).toBeGreaterThan(READ_PIECE_BYTES);
+    const messages: PartMessage[] = [];
+    await runPart(
+      {
+        source: { blob: new Blob([bytes]) },
+        options: OPTIONS,
+        spec: SPEC,
+        includeUnsuited: false,
+        worstCount: 10,
+      },
+      (m) => messages.push(m),
+    );
+    const done = messages.find((m) => m.kind === "done");
+    if (done?.kind !== "done") throw new Error(`no result: ${JSON.stringify(messages.at(-1))}`);
+    const ref = parsePointTable(text, OPTIONS);
+    expect(done.table.count).toBe(ref.count);
+    expect(done.table.badRows).toEqual(ref.badRows);
+    expect(Array.from(done.table.components)).toEqual(Array.from(ref.components));
+    const reading = messages.filter((m) => m.kind === "progress" && m.phase === "parse");
+    expect(reading.map((m) => (m.kind === "progress" ? m.done : 0))).toEqual([
+      READ_PIECE_BYTES,
+      bytes.length,
+    ]);
   });
 });
 

@@ -1,26 +1,29 @@
 /**
- * Reads and rates a point table in Web Workers, one per core: cuts the text into runs of whole
- * lines, gives each worker one (parse + evaluate, see part-task.ts), adds up their progress, and
- * joins their parts with core's mergePointTables and mergeEvaluations. Cancelling stops every
- * worker at once. The workers are made by the caller (`createWorker`), so the tests drive this
- * with fake workers in Node.
+ * Reads and rates a point table in Web Workers, one per core: cuts the file into runs of whole
+ * lines, gives each worker one (it reads its slice of the file itself, parses and rates it, see
+ * part-task.ts), adds up their progress, and has worker 0 join the parts (merge-task.ts), so the
+ * page only passes arrays on by transfer and never copies or scans the table. Cancelling stops
+ * every worker at once. The workers are made by the caller (`createWorker`), so the tests drive
+ * this with fake workers in Node.
  */
-import {
-  lineCuts,
-  mergePointTables,
-  type PointTable,
-  type PointTableOptions,
-  type PointTableSpec,
-} from "../../../../../core";
+import { lineCuts, type PointTable, type PointTableOptions, type PointTableSpec } from "../../../../../core";
 import { byteLineCuts } from "./byte-cuts";
-import { mergeEvaluations, type TableEvaluation } from "./merge-evaluations";
+import type { CloudBuffers } from "./cloud-buffers";
+import type { TableEvaluation } from "./merge-evaluations";
+import {
+  mergeTransferables,
+  type FinishedPart,
+  type MergedMessage,
+  type WorkerMessage,
+  type WorkerRequest,
+} from "./merge-task";
 import type { PartMessage, PartRequest, PartTimings } from "./part-task";
 
 /** The part of a Worker the pipeline uses. */
 export type WorkerPort = {
-  postMessage(message: PartRequest): void;
+  postMessage(message: WorkerRequest, transfer?: Transferable[]): void;
   terminate(): void;
-  onmessage: ((event: { data: PartMessage }) => void) | null;
+  onmessage: ((event: { data: WorkerMessage }) => void) | null;
   onerror: ((event: { message?: string }) => void) | null;
 };
 
@@ -31,6 +34,11 @@ export type PipelineInput = {
   includeUnsuited: boolean;
   /** names of the columns, for the bad-row reasons of parts after the first */
   columnNames: readonly string[] | null;
+  /**
+   * Also make the 3D view's arrays in a worker (positions, colours, bounding sphere:
+   * cloud-buffers.ts), so the page need not build them; default false.
+   */
+  cloud?: boolean;
 };
 
 export type PipelineProgress = { phase: "parse" | "evaluate"; fraction: number };
@@ -41,6 +49,11 @@ export type PipelineResult = {
   workers: number;
   /** per part, in file order */
   timings: PartTimings[];
+  /**
+   * the 3D view's arrays, when the input asked for them and the table has coordinates; else null
+   * (optional, so results built elsewhere, e.g. from a stored table, need not name it)
+   */
+  cloud?: CloudBuffers | null;
 };
 
 /** Thrown (as the run's rejection) when the engineer cancelled. */
@@ -108,6 +121,11 @@ export function runPipeline(
     for (const w of started) w.terminate();
     started.length = 0;
   };
+  const fail = (reject: (error: Error) => void, message: string) => {
+    stopped = true;
+    endAll();
+    reject(new Error(message));
+  };
   const cancel = () => {
     if (stopped) return;
     stopped = true;
@@ -122,19 +140,15 @@ export function runPipeline(
       const sum = progress.reduce((s, p) => s + PARSE_SHARE * p.parse + (1 - PARSE_SHARE) * p.evaluate, 0);
       setup.onProgress({ phase, fraction: sum / progress.length });
     };
-    const results = await new Promise<Extract<PartMessage, { kind: "done" }>[]>((resolve, reject) => {
+    type Done = Extract<PartMessage, { kind: "done" }>;
+    const results = await new Promise<Done[]>((resolve, reject) => {
       stop = reject;
-      const out: Extract<PartMessage, { kind: "done" }>[] = new Array(sources.length);
+      const out: Done[] = new Array(sources.length);
       let left = sources.length;
-      const fail = (message: string) => {
-        stopped = true;
-        endAll();
-        reject(new Error(message));
-      };
       sources.forEach((source, i) => {
         const worker = setup.createWorker();
         started.push(worker);
-        worker.onerror = (e) => fail(e.message ?? "A worker stopped unexpectedly.");
+        worker.onerror = (e) => fail(reject, e.message ?? "A worker stopped unexpectedly.");
         worker.onmessage = ({ data }) => {
           if (stopped) return;
           if (data.kind === "progress") {
@@ -142,12 +156,13 @@ export function runPipeline(
             if (data.phase === "evaluate") progress[i].parse = 1;
             report(data.phase);
           } else if (data.kind === "error") {
-            fail(data.message);
-          } else {
+            fail(reject, data.message);
+          } else if (data.kind === "done") {
             out[i] = data;
             progress[i] = { parse: 1, evaluate: 1 };
             report("evaluate");
-            worker.terminate();
+            // worker 0 stays to join the parts when there are several
+            if (i > 0 || sources.length === 1) worker.terminate();
             if (--left === 0) resolve(out);
           }
         };
@@ -157,16 +172,33 @@ export function runPipeline(
           spec: input.spec,
           includeUnsuited: input.includeUnsuited,
           worstCount: WORST_KEPT,
+          cloud: input.cloud === true && sources.length === 1,
         });
       });
     });
-    started.length = 0;
-    const table = results.length === 1 ? results[0].table : mergePointTables(results.map((r) => r.table));
-    const evaluation = mergeEvaluations(
-      results.map((r) => r.evaluation),
-      WORST_KEPT,
-    );
-    return { table, evaluation, workers: results.length, timings: results.map((r) => r.timings) };
+    const timings = results.map((r) => r.timings);
+    if (results.length === 1) {
+      started.length = 0;
+      const { table, evaluation, cloud } = results[0];
+      return { table, evaluation, workers: 1, timings, cloud: cloud ?? null };
+    }
+    const merged = await new Promise<MergedMessage>((resolve, reject) => {
+      stop = reject;
+      const joiner = started[0];
+      joiner.onmessage = ({ data }) => {
+        if (stopped) return;
+        if (data.kind === "merged") resolve(data);
+        else if (data.kind === "error") fail(reject, data.message);
+      };
+      const parts: FinishedPart[] = results.map((r) => ({ table: r.table, evaluation: r.evaluation }));
+      joiner.postMessage(
+        { kind: "merge", parts, worstCount: WORST_KEPT, cloud: input.cloud === true },
+        mergeTransferables(parts),
+      );
+    });
+    endAll();
+    const { table, evaluation, cloud } = merged;
+    return { table, evaluation, workers: results.length, timings, cloud: cloud ?? null };
   })();
   return { done, cancel };
 }

@@ -1,3 +1,6 @@
+import { readFileSync } from "node:fs";
+import { createRequire } from "node:module";
+import * as fontkit from "fontkit";
 import { extractText } from "unpdf";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { RESULTS_CAUTION } from "../../core/contract/cautions";
@@ -16,6 +19,7 @@ import { renderReportPdf } from "../../api/domain/report/render-pdf";
 import { buildTestApp } from "../support/app";
 import { mpa, projectTeam, projectWithLocations, wsPath, type ProjectTeam } from "../support/project-team";
 
+const require = createRequire(import.meta.url);
 const { app, context, close } = buildTestApp({ webDist: null });
 afterAll(close);
 
@@ -164,6 +168,28 @@ describe("the report's text (extracted from the PDF with unpdf)", () => {
     expect(text).toContain(flat(VERIFY_CERTIFICATE_NOTE));
   });
 
+  it("when the report is drawn, then both of the app's faces are embedded (Source Sans 3 for prose, JetBrains Mono for numbers), σ and τ come out as glyphs, and ≥ ✓ print as words only because no shipped file of either face has them", async () => {
+    const pdf = await renderReportPdf(buildReportModel(content, { kind: "draft" }));
+    // pdfkit writes each embedded subset as /BaseFont /XXXXXX+PostScriptName (ISO 32000-1 §9.6.4, subset tags).
+    const baseFonts = new Set(pdf.toString("latin1").match(/\/BaseFont \/[A-Z]{6}\+[\w-]+/g));
+    expect([...baseFonts].some((f) => f.endsWith("+SourceSans3-Roman"))).toBe(true);
+    expect([...baseFonts].some((f) => f.endsWith("+JetBrainsMono-Regular"))).toBe(true);
+    expect(text).toContain("Shear components are tensor components (σxy = σyx)");
+    expect(text).toContain("Maximum shear τmax");
+    for (const ch of ["≥", "✓"]) {
+      const shipped = [
+        "@fontsource-variable/source-sans-3/files/source-sans-3-latin-wght-normal.woff2",
+        "@fontsource-variable/source-sans-3/files/source-sans-3-greek-wght-normal.woff2",
+        "@fontsource/jetbrains-mono/files/jetbrains-mono-latin-400-normal.woff",
+        "@fontsource/jetbrains-mono/files/jetbrains-mono-greek-400-normal.woff",
+      ].some((file) =>
+        fontkit.create(readFileSync(require.resolve(file))).hasGlyphForCodePoint(ch.codePointAt(0)!),
+      );
+      expect(shipped, `a shipped file has ${ch}`).toBe(false);
+    }
+    expect(text).toContain("ordered σ1 >= σ2 >= σ3");
+  });
+
   it("when the same content is drawn twice, then the text and the bytes are the same (dates from the content, nothing random)", async () => {
     const model = buildReportModel(content, { kind: "draft" });
     const [a, b] = [
@@ -228,7 +254,11 @@ describe("GET …/records/{recordId}/report.pdf (a frozen record's report)", () 
     const recordId: string = submitted.body.id;
     await team.reviewer.agent.post(`${base()}/records/${recordId}/approve`).send({}).expect(200);
     const path = `${base()}/records/${recordId}/report.pdf`;
-    const before = await team.viewer.agent.get(path).buffer(true).parse(binary as never).expect(200);
+    const before = await team.viewer.agent
+      .get(path)
+      .buffer(true)
+      .parse(binary as never)
+      .expect(200);
     expect(before.headers["content-type"]).toMatch(/application\/pdf/);
     const pages = await pagesOf(before.body as Buffer);
     for (const page of pages) {
@@ -252,13 +282,22 @@ describe("GET …/records/{recordId}/report.pdf (a frozen record's report)", () 
       .put(`${base()}/load-cases/${design.id}/states/${locations[0].id}`)
       .send({ version: design.version, stress: mpa(240, 60) })
       .expect(200);
-    const after = await team.viewer.agent.get(path).buffer(true).parse(binary as never).expect(200);
+    const after = await team.viewer.agent
+      .get(path)
+      .buffer(true)
+      .parse(binary as never)
+      .expect(200);
     expect(Buffer.compare(after.body as Buffer, before.body as Buffer)).toBe(0);
     // …while the draft does change with the edit (the record is not just a copy of the draft).
     const draft = flat(
       (
         await pagesOf(
-          (await team.viewer.agent.get(`${base()}/report.pdf`).buffer(true).parse(binary as never)).body as Buffer,
+          (
+            await team.viewer.agent
+              .get(`${base()}/report.pdf`)
+              .buffer(true)
+              .parse(binary as never)
+          ).body as Buffer,
         )
       ).join(" "),
     );

@@ -1,22 +1,27 @@
 import type PdfDocument from "pdfkit";
-import { printedLength, runsOf, type Weight } from "./fonts";
+import { runsOf, type Family, type Weight } from "./fonts";
 
 type Doc = InstanceType<typeof PdfDocument>;
 
-/** A line's look: size in points, weight and colour. */
-export type TextStyle = { size: number; weight: Weight; color: string };
-
-/** JetBrains Mono's advance, the same for every glyph of every script file: 600 units per 1000 em. */
-const ADVANCE_PER_EM = 0.6;
+/** A line's look: size in points, weight, colour, and the face — prose ("text", the default) or numbers. */
+export type TextStyle = { size: number; weight: Weight; color: string; family?: Family };
 
 /**
- * Width of `text` in points in `style`. JetBrains Mono is monospaced (every glyph of every script
- * file the report embeds advances 600/1000 em; checked when the faces were chosen), so a line's
- * width is its printed character count times the advance — no font layout per word tried while
- * breaking lines, which took most of a large report's time.
+ * Width of `text` in points in `style`: the sum of its glyphs' advances in the files that draw it
+ * (the embedded faces carry no kerning or ligatures, so this is the width pdfkit draws).
  */
 export function textWidth(_doc: Doc, text: string, style: TextStyle): number {
-  return printedLength(text) * ADVANCE_PER_EM * style.size;
+  let em = 0;
+  for (const run of runsOf(text, style.family ?? "text", style.weight)) em += run.em;
+  return em * style.size;
+}
+
+/**
+ * The face a value is set in: numbers (a value that starts with a digit or a signed digit, e.g.
+ * "120 MPa", "−3.5", "1.52", and hex hashes) in the number face, everything else as prose.
+ */
+export function familyOf(text: string): Family {
+  return /^\s*[−+-]?\.?\d/.test(text) || /^[0-9a-f]{16,}$/.test(text) ? "number" : "text";
 }
 
 /** The colour last set on each document, so a run of lines in one colour sets it once. */
@@ -45,10 +50,10 @@ export function drawLine(
     doc.fillColor(style.color);
     lastColor.set(doc, style.color);
   }
-  for (const run of runsOf(text, style.weight)) {
+  for (const run of runsOf(text, style.family ?? "text", style.weight)) {
     doc.font(run.font).fontSize(style.size);
     doc.text(run.text, at, y, { lineBreak: false, baseline: "alphabetic" });
-    at += textWidth(doc, run.text, style);
+    at += run.em * style.size;
   }
 }
 

@@ -43,6 +43,11 @@ export const recordContentSchema = z.object({
   ),
   /** The comparison of those inputs: every row (not a page), the governing checks, the cautions. */
   results: comparisonWithSectionsSchema,
+  /**
+   * Each point table's file as it was read (its SHA-256), so a checker can match the file they hold
+   * to the one rated. Absent from records frozen before it was kept.
+   */
+  pointTableFiles: z.array(z.object({ tableId: z.uuid(), sha256: z.string() })).optional(),
 });
 export type RecordContent = z.infer<typeof recordContentSchema>;
 

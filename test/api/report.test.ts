@@ -1,3 +1,4 @@
+import { createHash } from "node:crypto";
 import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import * as fontkit from "fontkit";
@@ -15,6 +16,7 @@ import {
 } from "../../core/report";
 import { findProject } from "../../api/domain/projects/scope";
 import { buildRecordContent } from "../../api/domain/records/content";
+import { STAND_INS } from "../../api/domain/report/fonts";
 import { renderReportPdf } from "../../api/domain/report/render-pdf";
 import { buildTestApp } from "../support/app";
 import { mpa, projectTeam, projectWithLocations, wsPath, type ProjectTeam } from "../support/project-team";
@@ -302,5 +304,104 @@ describe("GET …/records/{recordId}/report.pdf (a frozen record's report)", () 
       ).join(" "),
     );
     expect(draft).toContain("240");
+  });
+});
+
+describe("the report's sections beside the comparison: stress classification lines and point tables", () => {
+  /** Three points in MPa (id; x y z; six components), the one with pure shear 100 MPa at (5, 6, 7). */
+  const CSV =
+    "id;x;y;z;xx;yy;zz;xy;yz;zx\n10;0;0;0;100;0;0;0;0;0\n20;5;6;7;0;0;0;100;0;0\n30;1;1;1;50;0;0;0;0;0\n";
+  const sha256 = createHash("sha256").update(CSV).digest("hex");
+
+  it("when the project has a saved line and a rated point table, then the PDF prints the line's classification and its checks with verdicts and sources, and the table's file, SHA-256, point count and governing point per criterion", async () => {
+    const made = await projectWithLocations(
+      team,
+      {
+        name: "Report nozzle FE",
+        defaultMaterial: { kind: "published", id: "sa516-70" },
+        requirements: [{ criterion: "tresca", requiredFactor: 1.5 }],
+      },
+      ["Nozzle"],
+    );
+    const path = wsPath(team, `/projects/${made.projectId}`);
+    const hydro = await team.editor.agent
+      .post(`${path}/load-cases`)
+      .send({ name: "Hydrotest", category: "test" })
+      .expect(201);
+    const caseId = hydro.body.loadCase.id as string;
+    const tables = `${path}/load-cases/${caseId}/point-tables`;
+    const declared = await team.editor.agent
+      .post(tables)
+      .send({
+        fileName: "n2.csv",
+        sizeBytes: Buffer.byteLength(CSV),
+        sha256,
+        layout: { separator: ";", header: true },
+        columns: { id: 0, x: 1, y: 2, z: 3, xx: 4, yy: 5, zz: 6, xy: 7, yz: 8, zx: 9 },
+        unit: "MPa",
+      })
+      .expect(201);
+    await team.editor.agent
+      .put(`${tables}/${declared.body.id}/content`)
+      .set("Content-Type", "application/octet-stream")
+      .send(Buffer.from(CSV))
+      .expect(200);
+    // A linear through-wall distribution σyy = 200 − 20·d MPa over a 10 mm wall (as in linearizations.test.ts).
+    await team.editor.agent
+      .post(`${path}/load-cases/${caseId}/linearizations`)
+      .send({
+        name: "Nozzle wall, inside to outside",
+        locationId: made.locationIds[0],
+        path: {
+          positions: "distance",
+          lengthUnit: "mm",
+          stressUnit: "MPa",
+          lineDirection: [1, 0, 0],
+          points: Array.from({ length: 11 }, (_, i) => ({
+            distance: i,
+            xx: -1,
+            yy: 200 - 20 * i,
+            zz: 50,
+            xy: 0,
+            yz: 0,
+            zx: 0,
+          })),
+        },
+        secondAxis: [0, 1, 0],
+        classification: { membrane: "local", stresses: "primary" },
+        allowables: { source: "typed", S: 138 },
+      })
+      .expect(201);
+
+    const content = await buildRecordContent(
+      context.sequelize,
+      await findProject(team.workspaceId, made.projectId),
+    );
+    const [line] = content.results.linearizations!;
+    const [table] = content.results.pointTables!;
+    expect(content.pointTableFiles).toEqual([{ tableId: table.tableId, sha256 }]);
+
+    const res = await team.viewer.agent
+      .get(`${path}/report.pdf`)
+      .buffer(true)
+      .parse(binary as never)
+      .expect(200);
+    const text = (await pagesOf(res.body as Buffer)).join(" ");
+    expect(text).toContain("Stress classification lines");
+    expect(text).toContain("Nozzle wall, inside to outside — Hydrotest");
+    expect(text).toContain("Classification local membrane, primary");
+    expect(line.checks.length).toBeGreaterThan(0);
+    // ≤ and ≥ print as their stand-ins: no shipped file of either face has them (fonts.test.ts).
+    const printed = (t: string) => flat(t).replace(/[≤≥∞✓]/g, (ch) => STAND_INS[ch]);
+    for (const check of line.checks) {
+      expect(text).toContain(printed(check.rule));
+      expect(text).toContain(printed(check.source));
+    }
+    expect(text).toContain("Finite-element point tables");
+    expect(text).toContain("File n2.csv");
+    expect(text).toContain(`SHA-256 ${sha256}`);
+    expect(text).toContain("Points 3");
+    // Pure shear τ = 100 MPa: σ1 − σ3 = 2τ = 200 MPa governs Tresca (Mohr's circle, recalled from memory).
+    expect(text).toMatch(/Tresca 20 \(5, 6, 7\)/);
   });
 });

@@ -9,7 +9,8 @@ import { VERDICT_TEXT } from "./location-sections";
 
 /**
  * The sections that stand beside the comparison's rows, as the record froze them: each stress
- * classification line (linearization) with its category checks, and each finite-element point
+ * classification line (linearization) with where it runs, its equivalent stresses at both ends
+ * and its category checks, and each finite-element point
  * table with its governing point per criterion. A record frozen before a section existed has
  * none, and the report leaves that section out.
  */
@@ -24,9 +25,11 @@ export function linearizationSection(content: RecordContent): ReportSection | nu
       text: "Each saved stress classification line through the wall: its stresses linearized into membrane (M), bending (B) and peak parts, and each category's equivalent stress checked against its allowable. Values in the line's own stress unit.",
     },
   ];
+  const ends = new Map((content.linearizationEnds ?? []).map((e) => [e.id, e]));
   for (const line of lines) {
     const unit = line.stressUnit;
     const text = (v: number) => stressText(convertStress(v, unit, "Pa"), unit);
+    const where = ends.get(line.id);
     blocks.push(
       { kind: "heading", text: `${line.name} — ${line.caseName}` },
       {
@@ -37,6 +40,14 @@ export function linearizationSection(content: RecordContent): ReportSection | nu
           ["Classification", line.category],
           ["Equivalent stress", line.equivalent === "tresca" ? "Tresca (stress intensity)" : "von Mises"],
           ["Governing check", line.governingRule ?? "none made"],
+          ...(where
+            ? ([
+                [
+                  "Line",
+                  `from ${positionText(where.start)} to ${positionText(where.end)} ${where.lengthUnit}; thickness ${numberText(where.thickness)} ${where.lengthUnit}; ${where.pointCount} points`,
+                ],
+              ] as [string, string][])
+            : []),
         ],
       },
       {
@@ -60,14 +71,56 @@ export function linearizationSection(content: RecordContent): ReportSection | nu
         empty: "No check could be made (an allowable is missing).",
       },
     );
+    if (where) {
+      const e = where.equivalent;
+      const all = [
+        e.membrane,
+        e.membranePlusBending.start,
+        e.membranePlusBending.end,
+        e.peak.start,
+        e.peak.end,
+      ];
+      const aligned = (v: number) =>
+        stressText(
+          convertStress(v, unit, "Pa"),
+          unit,
+          all.map((a) => convertStress(a, unit, "Pa")),
+        );
+      blocks.push({
+        kind: "table",
+        columns: [
+          { title: `Equivalent stress (${e.label})`, align: "left", width: 3 },
+          { title: `At the start, ${unit}`, align: "right", width: 1.6 },
+          { title: `At the end, ${unit}`, align: "right", width: 1.6 },
+        ],
+        rows: [
+          ["Membrane (M)", aligned(e.membrane), aligned(e.membrane)],
+          [
+            "Membrane + bending (M + B)",
+            aligned(e.membranePlusBending.start),
+            aligned(e.membranePlusBending.end),
+          ],
+          ["Peak", aligned(e.peak.start), aligned(e.peak.end)],
+        ],
+      });
+    }
   }
   return { id: "linearizations", title: "Stress classification lines", pageBreakBefore: true, blocks };
 }
 
-/** "(12.5, 0, 3.25)", or "—" for a table without coordinates. */
-function positionText(p: { x: number | null; y: number | null; z: number | null }): string {
-  if (p.x === null || p.y === null || p.z === null) return "—";
-  return `(${[p.x, p.y, p.z].map((v) => String(Number(v.toPrecision(6)))).join(", ")})`;
+/** A length or coordinate to six significant figures, without trailing zeros: "12.5", "0", "3.25". */
+function numberText(v: number): string {
+  return String(Number(v.toPrecision(6)));
+}
+
+/** "(12.5, 0, 3.25)" for coordinates, "d = 4.2" for a distance along the line. */
+function positionText(p: readonly number[]): string {
+  return p.length === 1 ? `d = ${numberText(p[0])}` : `(${p.map(numberText).join(", ")})`;
+}
+
+/** A governing point's place, or "—" for a table without coordinates. */
+function pointPositionText(p: { x: number | null; y: number | null; z: number | null }): string {
+  return p.x === null || p.y === null || p.z === null ? "—" : positionText([p.x, p.y, p.z]);
 }
 
 /** Each point table: its file, how many points, and per criterion the point that governs. */
@@ -109,7 +162,7 @@ export function pointTableSection(content: RecordContent): ReportSection | null 
         rows: t.perCriterion.map((c) => [
           CRITERION_LABELS[c.criterion],
           c.governing ? String(c.governing.id) : c.status === "not-applicable" ? "n/a" : "—",
-          c.governing ? positionText(c.governing) : "",
+          c.governing ? pointPositionText(c.governing) : "",
           c.status === "evaluated" ? formatFactor(c.factor) : "",
           fixed(c.requiredFactor, 2),
           c.utilisation === null ? "" : percentText(c.utilisation),

@@ -348,6 +348,22 @@ describe("buildReportModel", () => {
       },
     ];
     c.pointTableFiles = [{ tableId: "d28c0d0e-9ab1-4d0f-8e8e-708192a3b4c6", sha256: "ab".repeat(32) }];
+    c.linearizationEnds = [
+      {
+        id: "c17b9cfd-8fa0-4cef-9e7d-6f8192a3b4c5",
+        lengthUnit: "mm",
+        pointCount: 11,
+        thickness: 12,
+        start: [0, 0, 0],
+        end: [12, 0, 0],
+        equivalent: {
+          label: "von Mises",
+          membrane: 151.25,
+          membranePlusBending: { start: 199.5, end: 103 },
+          peak: { start: 4.5, end: 0 },
+        },
+      },
+    ];
     const model = buildReportModel(recordContentSchema.parse(c), draft);
     const ids = model.sections.map((s) => s.id);
     expect(ids.slice(ids.indexOf("comparison"))).toEqual([
@@ -365,6 +381,17 @@ describe("buildReportModel", () => {
     ]);
     expect(texts(lines.blocks)).toContain('["Classification","local membrane, primary"]');
     expect(texts(lines.blocks)).toContain('["Governing check","PL + Pb ≤ 1.5 S"]');
+    expect(texts(lines.blocks)).toContain(
+      '["Line","from (0, 0, 0) to (12, 0, 0) mm; thickness 12 mm; 11 points"]',
+    );
+    const ends = lines.blocks.filter((b) => b.kind === "table")[1];
+    expect(ends.kind === "table" && ends.columns[0].title).toBe("Equivalent stress (von Mises)");
+    // One column of values aligned on the decimal point (the largest, 199.5, sets one decimal).
+    expect(ends.kind === "table" && ends.rows).toEqual([
+      ["Membrane (M)", "151.3", "151.3"],
+      ["Membrane + bending (M + B)", "199.5", "103.0"],
+      ["Peak", "4.5", "0.0"],
+    ]);
 
     const tables = model.sections.find((s) => s.id === "point-tables")!;
     const text = texts(tables.blocks);

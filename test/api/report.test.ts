@@ -397,6 +397,26 @@ describe("the report's sections beside the comparison: stress classification lin
       expect(text).toContain(printed(check.rule));
       expect(text).toContain(printed(check.source));
     }
+    // The linear wall: membrane = the mean (σxx −1, σyy 100, σzz 50 MPa), M + B = the surface values
+    // (σyy 200 at the start, 0 at the end), peak 0 (common practice, no source); von Mises of normal
+    // stresses √(½[(σx−σy)² + (σy−σz)² + (σz−σx)²]) (recalled from memory).
+    const vm = (x: number, y: number, z: number) =>
+      Math.sqrt(0.5 * ((x - y) ** 2 + (y - z) ** 2 + (z - x) ** 2));
+    const [ends] = content.linearizationEnds!;
+    expect(ends).toMatchObject({ id: line.id, lengthUnit: "mm", pointCount: 11, start: [0], end: [10] });
+    expect(ends.thickness).toBeCloseTo(10, 9);
+    expect(ends.equivalent.membrane).toBeCloseTo(vm(-1, 100, 50), 6);
+    expect(ends.equivalent.membranePlusBending.start).toBeCloseTo(vm(-1, 200, 50), 6);
+    expect(ends.equivalent.membranePlusBending.end).toBeCloseTo(vm(-1, 0, 50), 6);
+    expect(ends.equivalent.peak.start).toBeCloseTo(0, 6);
+    expect(ends.equivalent.peak.end).toBeCloseTo(0, 6);
+    expect(text).toContain("Line from d = 0 to d = 10 mm; thickness 10 mm; 11 points");
+    expect(text).toContain(`Membrane (M) ${vm(-1, 100, 50).toFixed(1)} ${vm(-1, 100, 50).toFixed(1)}`);
+    expect(text).toContain(
+      `Membrane + bending (M + B) ${vm(-1, 200, 50).toFixed(1)} ${vm(-1, 0, 50).toFixed(1)}`,
+    );
+    expect(text).toContain("Peak 0.0 0.0");
+
     expect(text).toContain("Finite-element point tables");
     expect(text).toContain("File n2.csv");
     expect(text).toContain(`SHA-256 ${sha256}`);

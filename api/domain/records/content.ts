@@ -17,6 +17,7 @@ import {
 } from "../comparison/load";
 import { comparisonPageWithSections } from "../comparison/sections";
 import { exportProjectWithKeys } from "../projects/export";
+import { linearizationEndsOf } from "./linearization-ends";
 
 const invert = (m: Map<string, string>): Record<string, string> =>
   Object.fromEntries([...m].map(([id, key]) => [key, id]));
@@ -73,8 +74,9 @@ export async function buildRecordContent(
         savedBy: s.createdBy,
       })),
     results: results satisfies ComparisonWithSections,
-    // Only with tables, so a record of a project without any reads (and hashes) as before.
+    // Only with tables or lines, so a record of a project without any reads (and hashes) as before.
     ...pointTableFilesOf(results, tables),
+    ...(await linearizationEndsOf(results, transaction)),
   };
 }
 

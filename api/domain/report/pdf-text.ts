@@ -57,24 +57,34 @@ export function drawLine(
   }
 }
 
-/** `text` broken into lines no wider than `width` (at spaces; a word wider than a line is cut). */
+/**
+ * `text` broken into lines no wider than `width` (at spaces; a word wider than a line is cut). A
+ * line's width is the sum of its words' and spaces' widths (the faces carry no kerning), so each
+ * word is measured once rather than the whole line again for every word tried.
+ */
 export function wrapText(doc: Doc, text: string, width: number, style: TextStyle): string[] {
   const lines: string[] = [];
+  const space = textWidth(doc, " ", style);
   for (const paragraph of text.split("\n")) {
     let line = "";
+    let lineWidth = 0;
     for (const word of paragraph.split(" ")) {
-      const candidate = line === "" ? word : `${line} ${word}`;
-      if (textWidth(doc, candidate, style) <= width) {
-        line = candidate;
+      const wordWidth = textWidth(doc, word, style);
+      const candidate = line === "" ? wordWidth : lineWidth + space + wordWidth;
+      if (candidate <= width) {
+        line = line === "" ? word : `${line} ${word}`;
+        lineWidth = candidate;
         continue;
       }
       if (line !== "") lines.push(line);
       line = word;
-      while (textWidth(doc, line, style) > width && line.length > 1) {
+      lineWidth = wordWidth;
+      while (lineWidth > width && line.length > 1) {
         let cut = line.length - 1;
         while (cut > 1 && textWidth(doc, line.slice(0, cut), style) > width) cut--;
         lines.push(line.slice(0, cut));
         line = line.slice(cut);
+        lineWidth = textWidth(doc, line, style);
       }
     }
     lines.push(line);

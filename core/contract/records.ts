@@ -43,6 +43,34 @@ export const recordContentSchema = z.object({
   ),
   /** The comparison of those inputs: every row (not a page), the governing checks, the cautions. */
   results: comparisonWithSectionsSchema,
+  /**
+   * Each point table's file as it was read (its SHA-256), so a checker can match the file they hold
+   * to the one rated. Absent from records frozen before it was kept.
+   */
+  pointTableFiles: z.array(z.object({ tableId: z.uuid(), sha256: z.string() })).optional(),
+  /**
+   * Each stress classification line of the comparison: where it runs (a distance, or x y z, in its
+   * length unit) and its equivalent stresses (the line's stress unit) — membrane, membrane plus
+   * bending and peak at both ends. Absent from records frozen before it was kept.
+   */
+  linearizationEnds: z
+    .array(
+      z.object({
+        id: z.uuid(),
+        lengthUnit: z.string(),
+        pointCount: z.int(),
+        thickness: z.number(),
+        start: z.array(z.number()),
+        end: z.array(z.number()),
+        equivalent: z.object({
+          label: z.string(),
+          membrane: z.number(),
+          membranePlusBending: z.object({ start: z.number(), end: z.number() }),
+          peak: z.object({ start: z.number(), end: z.number() }),
+        }),
+      }),
+    )
+    .optional(),
 });
 export type RecordContent = z.infer<typeof recordContentSchema>;
 

@@ -286,4 +286,127 @@ describe("buildReportModel", () => {
     expect(inputs).toContain("verify them against your material certificate");
     expect(inputs).toContain("Mill certificate 4711");
   });
+
+  it("when the record holds a stress classification line and a point table, then each has a section after the comparison, in the order frozen, carrying the record's values as they are", () => {
+    const c = content();
+    // The values below are the record's own; the report repeats them (no computation here).
+    c.results.linearizations = [
+      {
+        id: "c17b9cfd-8fa0-4cef-9e7d-6f8192a3b4c5",
+        name: "Nozzle neck, inside to outside",
+        caseId: ID.operating,
+        caseName: "Operating",
+        locationName: "Nozzle neck",
+        category: "local membrane, primary",
+        equivalent: "von-mises",
+        stressUnit: "MPa",
+        checks: [
+          {
+            rule: "PL ≤ 1.5 S",
+            value: 151.25,
+            limit: 207,
+            ratio: 0.7307,
+            verdict: "pass",
+            source: "Check A",
+          },
+          {
+            rule: "PL + Pb ≤ 1.5 S",
+            value: 199.5,
+            limit: 207,
+            ratio: 0.9638,
+            verdict: "close",
+            source: "Check B",
+          },
+        ],
+        governingRule: "PL + Pb ≤ 1.5 S",
+      },
+    ];
+    c.results.pointTables = [
+      {
+        tableId: "d28c0d0e-9ab1-4d0f-8e8e-708192a3b4c6",
+        fileName: "nozzle-fe.csv",
+        caseId: ID.operating,
+        caseName: "Operating",
+        category: "operating",
+        pointCount: 1204,
+        material: { label: "Test plate", note: "Sy 250 MPa" },
+        perCriterion: [
+          {
+            criterion: "von-mises",
+            status: "evaluated",
+            reason: null,
+            governing: { index: 17, id: 1018, x: 12.5, y: 0, z: 3.25 },
+            factor: 1.62,
+            utilisation: 0.926,
+            verdict: "close",
+            requiredFactor: 1.5,
+            category: null,
+            countFail: 0,
+            countClose: 3,
+          },
+        ],
+      },
+    ];
+    c.pointTableFiles = [{ tableId: "d28c0d0e-9ab1-4d0f-8e8e-708192a3b4c6", sha256: "ab".repeat(32) }];
+    c.linearizationEnds = [
+      {
+        id: "c17b9cfd-8fa0-4cef-9e7d-6f8192a3b4c5",
+        lengthUnit: "mm",
+        pointCount: 11,
+        thickness: 12,
+        start: [0, 0, 0],
+        end: [12, 0, 0],
+        equivalent: {
+          label: "von Mises",
+          membrane: 151.25,
+          membranePlusBending: { start: 199.5, end: 103 },
+          peak: { start: 4.5, end: 0 },
+        },
+      },
+    ];
+    const model = buildReportModel(recordContentSchema.parse(c), draft);
+    const ids = model.sections.map((s) => s.id);
+    expect(ids.slice(ids.indexOf("comparison"))).toEqual([
+      "comparison",
+      "linearizations",
+      "point-tables",
+      "cautions",
+    ]);
+
+    const lines = model.sections.find((s) => s.id === "linearizations")!;
+    const lineTable = lines.blocks.find((b) => b.kind === "table")!;
+    expect(lineTable.kind === "table" && lineTable.rows).toEqual([
+      ["PL ≤ 1.5 S", "151.3", "207.0", "0.73", "✓ passes", "Check A"],
+      ["PL + Pb ≤ 1.5 S", "199.5", "207.0", "0.96", "≈ close", "Check B"],
+    ]);
+    expect(texts(lines.blocks)).toContain('["Classification","local membrane, primary"]');
+    expect(texts(lines.blocks)).toContain('["Governing check","PL + Pb ≤ 1.5 S"]');
+    expect(texts(lines.blocks)).toContain(
+      '["Line","from (0, 0, 0) to (12, 0, 0) mm; thickness 12 mm; 11 points"]',
+    );
+    const ends = lines.blocks.filter((b) => b.kind === "table")[1];
+    expect(ends.kind === "table" && ends.columns[0].title).toBe("Equivalent stress (von Mises)");
+    // One column of values aligned on the decimal point (the largest, 199.5, sets one decimal).
+    expect(ends.kind === "table" && ends.rows).toEqual([
+      ["Membrane (M)", "151.3", "151.3"],
+      ["Membrane + bending (M + B)", "199.5", "103.0"],
+      ["Peak", "4.5", "0.0"],
+    ]);
+
+    const tables = model.sections.find((s) => s.id === "point-tables")!;
+    const text = texts(tables.blocks);
+    expect(text).toContain('["File","nozzle-fe.csv"]');
+    expect(text).toContain(`["SHA-256","${"ab".repeat(32)}"]`);
+    expect(text).toContain('["Points","1204"]');
+    const pointTable = tables.blocks.find((b) => b.kind === "table")!;
+    expect(pointTable.kind === "table" && pointTable.rows).toEqual([
+      ["von Mises", "1018", "(12.5, 0, 3.25)", "1.62", "1.50", "92.6 %", "≈ close", "0 / 3"],
+    ]);
+  });
+
+  it("when the record holds neither lines nor point tables, then the report has no such sections", () => {
+    const ids = buildReportModel(content(), draft).sections.map((s) => s.id);
+    expect(ids).not.toContain("linearizations");
+    expect(ids).not.toContain("point-tables");
+  });
 });

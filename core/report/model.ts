@@ -4,6 +4,7 @@ import { formatFactor, governingSentence } from "../contract/comparison";
 import { CRITERION_LABELS, CRITERION_NAMES, type CriterionName } from "../contract/projects";
 import type { RecordContent } from "../contract/records";
 import type { StressUnit } from "../units/stress";
+import { linearizationSection, pointTableSection } from "./beside-sections";
 import type { ReportBlock, ReportSection } from "./blocks";
 import { dateText, percentText, reportUnit } from "./format";
 import { inputsSection } from "./inputs-section";
@@ -269,12 +270,15 @@ function cautionSection(content: RecordContent): ReportSection {
 /**
  * The calculation report of a record's content: cover (project, record, revisions, signatures),
  * scope, inputs with units and sources, method, one section per location, the comparison with the
- * governing case, calculator inputs where a state came from one, and the cautions. Pure: the same
+ * governing case, the stress classification lines and point tables where the record has them,
+ * calculator inputs where a state came from one, and the cautions. Pure: the same
  * content and meta always give the same model.
  */
 export function buildReportModel(content: RecordContent, meta: ReportMeta): ReportModel {
   const unit = reportUnit(content.inputs.project.unitSystem);
   const calculators = calculatorSection(content);
+  const lines = linearizationSection(content);
+  const tables = pointTableSection(content);
   return {
     title: `Calculation report: ${content.inputs.project.name}`,
     projectName: content.inputs.project.name,
@@ -290,6 +294,8 @@ export function buildReportModel(content: RecordContent, meta: ReportMeta): Repo
       methodSection(content),
       ...locationSections(content, unit),
       comparisonSection(content),
+      ...(lines ? [lines] : []),
+      ...(tables ? [tables] : []),
       ...(calculators ? [calculators] : []),
       cautionSection(content),
     ],

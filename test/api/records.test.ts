@@ -7,6 +7,7 @@ import {
   recordSummarySchema,
   type RecordContent,
 } from "../../core/contract/records";
+import { approvedDifferenceComputations } from "../../api/domain/records/approved-difference";
 import { canonicalJson, recordHash } from "../../api/domain/records/content";
 import { Membership } from "../../db/models/membership";
 import * as recordsMigration from "../../db/migrations/20261203-1440-create-calculation-records";
@@ -296,6 +297,24 @@ describe("approving a record", () => {
       .send({})
       .expect(409);
     expect(again.body.error.id).toBe("already_approved");
+  });
+
+  it("when the review status is read again with nothing changed, then the project's content is not taken again; when a state is edited, then it is, and the status says the results differ", async () => {
+    expect((await review()).currentDiffersFromApproved).toBe(false);
+    const before = approvedDifferenceComputations();
+    expect(await review()).toMatchObject({ status: "approved", currentDiffersFromApproved: false });
+    expect(await review()).toMatchObject({ status: "approved", currentDiffersFromApproved: false });
+    expect(approvedDifferenceComputations()).toBe(before);
+
+    await stateAt(team.editor, locationIds[0], 310);
+    expect(await review()).toMatchObject({
+      status: "in-work",
+      revision: "B",
+      currentDiffersFromApproved: true,
+    });
+    expect(approvedDifferenceComputations()).toBe(before + 1);
+    expect((await review()).currentDiffersFromApproved).toBe(true);
+    expect(approvedDifferenceComputations()).toBe(before + 1);
   });
 
   it("when the owner requires two approvals and edits an input, then the owner cannot approve the next record, and it needs two other checkers", async () => {

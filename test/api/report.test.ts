@@ -1,3 +1,7 @@
+import { createHash } from "node:crypto";
+import { readFileSync } from "node:fs";
+import { createRequire } from "node:module";
+import * as fontkit from "fontkit";
 import { extractText } from "unpdf";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { RESULTS_CAUTION } from "../../core/contract/cautions";
@@ -12,10 +16,12 @@ import {
 } from "../../core/report";
 import { findProject } from "../../api/domain/projects/scope";
 import { buildRecordContent } from "../../api/domain/records/content";
+import { STAND_INS } from "../../api/domain/report/fonts";
 import { renderReportPdf } from "../../api/domain/report/render-pdf";
 import { buildTestApp } from "../support/app";
 import { mpa, projectTeam, projectWithLocations, wsPath, type ProjectTeam } from "../support/project-team";
 
+const require = createRequire(import.meta.url);
 const { app, context, close } = buildTestApp({ webDist: null });
 afterAll(close);
 
@@ -164,6 +170,28 @@ describe("the report's text (extracted from the PDF with unpdf)", () => {
     expect(text).toContain(flat(VERIFY_CERTIFICATE_NOTE));
   });
 
+  it("when the report is drawn, then both of the app's faces are embedded (Source Sans 3 for prose, JetBrains Mono for numbers), σ and τ come out as glyphs, and ≥ ✓ print as words only because no shipped file of either face has them", async () => {
+    const pdf = await renderReportPdf(buildReportModel(content, { kind: "draft" }));
+    // pdfkit writes each embedded subset as /BaseFont /XXXXXX+PostScriptName (ISO 32000-1 §9.6.4, subset tags).
+    const baseFonts = new Set(pdf.toString("latin1").match(/\/BaseFont \/[A-Z]{6}\+[\w-]+/g));
+    expect([...baseFonts].some((f) => f.endsWith("+SourceSans3-Roman"))).toBe(true);
+    expect([...baseFonts].some((f) => f.endsWith("+JetBrainsMono-Regular"))).toBe(true);
+    expect(text).toContain("Shear components are tensor components (σxy = σyx)");
+    expect(text).toContain("Maximum shear τmax");
+    for (const ch of ["≥", "✓"]) {
+      const shipped = [
+        "@fontsource-variable/source-sans-3/files/source-sans-3-latin-wght-normal.woff2",
+        "@fontsource-variable/source-sans-3/files/source-sans-3-greek-wght-normal.woff2",
+        "@fontsource/jetbrains-mono/files/jetbrains-mono-latin-400-normal.woff",
+        "@fontsource/jetbrains-mono/files/jetbrains-mono-greek-400-normal.woff",
+      ].some((file) =>
+        fontkit.create(readFileSync(require.resolve(file))).hasGlyphForCodePoint(ch.codePointAt(0)!),
+      );
+      expect(shipped, `a shipped file has ${ch}`).toBe(false);
+    }
+    expect(text).toContain("ordered σ1 >= σ2 >= σ3");
+  });
+
   it("when the same content is drawn twice, then the text and the bytes are the same (dates from the content, nothing random)", async () => {
     const model = buildReportModel(content, { kind: "draft" });
     const [a, b] = [
@@ -228,7 +256,11 @@ describe("GET …/records/{recordId}/report.pdf (a frozen record's report)", () 
     const recordId: string = submitted.body.id;
     await team.reviewer.agent.post(`${base()}/records/${recordId}/approve`).send({}).expect(200);
     const path = `${base()}/records/${recordId}/report.pdf`;
-    const before = await team.viewer.agent.get(path).buffer(true).parse(binary as never).expect(200);
+    const before = await team.viewer.agent
+      .get(path)
+      .buffer(true)
+      .parse(binary as never)
+      .expect(200);
     expect(before.headers["content-type"]).toMatch(/application\/pdf/);
     const pages = await pagesOf(before.body as Buffer);
     for (const page of pages) {
@@ -252,16 +284,144 @@ describe("GET …/records/{recordId}/report.pdf (a frozen record's report)", () 
       .put(`${base()}/load-cases/${design.id}/states/${locations[0].id}`)
       .send({ version: design.version, stress: mpa(240, 60) })
       .expect(200);
-    const after = await team.viewer.agent.get(path).buffer(true).parse(binary as never).expect(200);
+    const after = await team.viewer.agent
+      .get(path)
+      .buffer(true)
+      .parse(binary as never)
+      .expect(200);
     expect(Buffer.compare(after.body as Buffer, before.body as Buffer)).toBe(0);
     // …while the draft does change with the edit (the record is not just a copy of the draft).
     const draft = flat(
       (
         await pagesOf(
-          (await team.viewer.agent.get(`${base()}/report.pdf`).buffer(true).parse(binary as never)).body as Buffer,
+          (
+            await team.viewer.agent
+              .get(`${base()}/report.pdf`)
+              .buffer(true)
+              .parse(binary as never)
+          ).body as Buffer,
         )
       ).join(" "),
     );
     expect(draft).toContain("240");
+  });
+});
+
+describe("the report's sections beside the comparison: stress classification lines and point tables", () => {
+  /** Three points in MPa (id; x y z; six components), the one with pure shear 100 MPa at (5, 6, 7). */
+  const CSV =
+    "id;x;y;z;xx;yy;zz;xy;yz;zx\n10;0;0;0;100;0;0;0;0;0\n20;5;6;7;0;0;0;100;0;0\n30;1;1;1;50;0;0;0;0;0\n";
+  const sha256 = createHash("sha256").update(CSV).digest("hex");
+
+  it("when the project has a saved line and a rated point table, then the PDF prints the line's classification and its checks with verdicts and sources, and the table's file, SHA-256, point count and governing point per criterion", async () => {
+    const made = await projectWithLocations(
+      team,
+      {
+        name: "Report nozzle FE",
+        defaultMaterial: { kind: "published", id: "sa516-70" },
+        requirements: [{ criterion: "tresca", requiredFactor: 1.5 }],
+      },
+      ["Nozzle"],
+    );
+    const path = wsPath(team, `/projects/${made.projectId}`);
+    const hydro = await team.editor.agent
+      .post(`${path}/load-cases`)
+      .send({ name: "Hydrotest", category: "test" })
+      .expect(201);
+    const caseId = hydro.body.loadCase.id as string;
+    const tables = `${path}/load-cases/${caseId}/point-tables`;
+    const declared = await team.editor.agent
+      .post(tables)
+      .send({
+        fileName: "n2.csv",
+        sizeBytes: Buffer.byteLength(CSV),
+        sha256,
+        layout: { separator: ";", header: true },
+        columns: { id: 0, x: 1, y: 2, z: 3, xx: 4, yy: 5, zz: 6, xy: 7, yz: 8, zx: 9 },
+        unit: "MPa",
+      })
+      .expect(201);
+    await team.editor.agent
+      .put(`${tables}/${declared.body.id}/content`)
+      .set("Content-Type", "application/octet-stream")
+      .send(Buffer.from(CSV))
+      .expect(200);
+    // A linear through-wall distribution σyy = 200 − 20·d MPa over a 10 mm wall (as in linearizations.test.ts).
+    await team.editor.agent
+      .post(`${path}/load-cases/${caseId}/linearizations`)
+      .send({
+        name: "Nozzle wall, inside to outside",
+        locationId: made.locationIds[0],
+        path: {
+          positions: "distance",
+          lengthUnit: "mm",
+          stressUnit: "MPa",
+          lineDirection: [1, 0, 0],
+          points: Array.from({ length: 11 }, (_, i) => ({
+            distance: i,
+            xx: -1,
+            yy: 200 - 20 * i,
+            zz: 50,
+            xy: 0,
+            yz: 0,
+            zx: 0,
+          })),
+        },
+        secondAxis: [0, 1, 0],
+        classification: { membrane: "local", stresses: "primary" },
+        allowables: { source: "typed", S: 138 },
+      })
+      .expect(201);
+
+    const content = await buildRecordContent(
+      context.sequelize,
+      await findProject(team.workspaceId, made.projectId),
+    );
+    const [line] = content.results.linearizations!;
+    const [table] = content.results.pointTables!;
+    expect(content.pointTableFiles).toEqual([{ tableId: table.tableId, sha256 }]);
+
+    const res = await team.viewer.agent
+      .get(`${path}/report.pdf`)
+      .buffer(true)
+      .parse(binary as never)
+      .expect(200);
+    const text = (await pagesOf(res.body as Buffer)).join(" ");
+    expect(text).toContain("Stress classification lines");
+    expect(text).toContain("Nozzle wall, inside to outside — Hydrotest");
+    expect(text).toContain("Classification local membrane, primary");
+    expect(line.checks.length).toBeGreaterThan(0);
+    // ≤ and ≥ print as their stand-ins: no shipped file of either face has them (fonts.test.ts).
+    const printed = (t: string) => flat(t).replace(/[≤≥∞✓]/g, (ch) => STAND_INS[ch]);
+    for (const check of line.checks) {
+      expect(text).toContain(printed(check.rule));
+      expect(text).toContain(printed(check.source));
+    }
+    // The linear wall: membrane = the mean (σxx −1, σyy 100, σzz 50 MPa), M + B = the surface values
+    // (σyy 200 at the start, 0 at the end), peak 0 (common practice, no source); von Mises of normal
+    // stresses √(½[(σx−σy)² + (σy−σz)² + (σz−σx)²]) (recalled from memory).
+    const vm = (x: number, y: number, z: number) =>
+      Math.sqrt(0.5 * ((x - y) ** 2 + (y - z) ** 2 + (z - x) ** 2));
+    const [ends] = content.linearizationEnds!;
+    expect(ends).toMatchObject({ id: line.id, lengthUnit: "mm", pointCount: 11, start: [0], end: [10] });
+    expect(ends.thickness).toBeCloseTo(10, 9);
+    expect(ends.equivalent.membrane).toBeCloseTo(vm(-1, 100, 50), 6);
+    expect(ends.equivalent.membranePlusBending.start).toBeCloseTo(vm(-1, 200, 50), 6);
+    expect(ends.equivalent.membranePlusBending.end).toBeCloseTo(vm(-1, 0, 50), 6);
+    expect(ends.equivalent.peak.start).toBeCloseTo(0, 6);
+    expect(ends.equivalent.peak.end).toBeCloseTo(0, 6);
+    expect(text).toContain("Line from d = 0 to d = 10 mm; thickness 10 mm; 11 points");
+    expect(text).toContain(`Membrane (M) ${vm(-1, 100, 50).toFixed(1)} ${vm(-1, 100, 50).toFixed(1)}`);
+    expect(text).toContain(
+      `Membrane + bending (M + B) ${vm(-1, 200, 50).toFixed(1)} ${vm(-1, 0, 50).toFixed(1)}`,
+    );
+    expect(text).toContain("Peak 0.0 0.0");
+
+    expect(text).toContain("Finite-element point tables");
+    expect(text).toContain("File n2.csv");
+    expect(text).toContain(`SHA-256 ${sha256}`);
+    expect(text).toContain("Points 3");
+    // Pure shear τ = 100 MPa: σ1 − σ3 = 2τ = 200 MPa governs Tresca (Mohr's circle, recalled from memory).
+    expect(text).toMatch(/Tresca 20 \(5, 6, 7\)/);
   });
 });

@@ -1,5 +1,7 @@
+import { readFile } from "node:fs/promises";
 import path from "node:path";
 import type { BrowserContext, Page } from "playwright-core";
+import { extractText } from "unpdf";
 import { beforeAll, describe, expect, it } from "vitest";
 import { screenshotDir, signUpInContext } from "../support/browser";
 import { browserTeam, type BrowserTeam } from "../support/browser-team";
@@ -48,6 +50,23 @@ describe.skipIf(!serverHasRecords)("review and sign-off in the browser", () => {
     return page;
   }
 
+  /** Presses the record page's "PDF report" link and reads the file the browser saves. */
+  async function downloadRecordPdf(page: Page): Promise<Buffer> {
+    const [download] = await Promise.all([
+      page.waitForEvent("download", { timeout: 60_000 }),
+      page.getByRole("link", { name: "PDF report" }).click(),
+    ]);
+    expect(download.suggestedFilename()).toMatch(/-report\.pdf$/);
+    const file = await download.path();
+    return readFile(file);
+  }
+
+  /** The PDF's text with every run of white space as one space (lines wrap anywhere). */
+  async function pdfTextOf(pdf: Buffer): Promise<string> {
+    const { text } = await extractText(new Uint8Array(pdf), { mergePages: true });
+    return text.replace(/\s+/g, " ");
+  }
+
   /** The originator (the editor) saves the hydrostatic test state again with σx in MPa. */
   async function saveHydroState(sx: number) {
     const origin = world.server.url;
@@ -70,7 +89,7 @@ describe.skipIf(!serverHasRecords)("review and sign-off in the browser", () => {
     expect(saved.status()).toBeLessThan(300);
   }
 
-  it("when the originator submits, a checker comments and returns, the originator answers, changes a state and resubmits, and two checkers approve, then the approved record shows the diff and the signatures", async () => {
+  it("when the originator submits, a checker comments and returns, the originator answers, changes a state and resubmits, and two checkers approve, then the approved record shows the diff and the signatures, and its PDF, downloaded through the page, names the record, carries the signatures and stays the same after a later edit", async () => {
     const shot = (page: Page, name: string) =>
       page.screenshot({ path: path.join(screenshotDir, `review-${name}.png`), fullPage: true });
     const records = `${team.projectPath}/records`;
@@ -192,6 +211,16 @@ describe.skipIf(!serverHasRecords)("review and sign-off in the browser", () => {
     expect(await sol.getByTestId("results-caution").count()).toBe(1);
     await shot(sol, "approved");
 
+    // The approved record's PDF, through the page's own link: it names the record and carries the signatures.
+    const approvedPdf = await downloadRecordPdf(sol);
+    const recordId = recordTwo.split("/").pop()!;
+    const pdfText = await pdfTextOf(approvedPdf);
+    expect(pdfText).toContain(recordId);
+    expect(pdfText).not.toContain("DRAFT");
+    expect(pdfText).toMatch(/Originator Eda Marlow/);
+    expect(pdfText).toContain("Rui Tanager");
+    expect(pdfText).toContain("Sol Brannigan");
+
     // The revision table lists both records; the first was returned, the second approved.
     await owner.reload({ waitUntil: "networkidle" });
     const rows = owner.getByTestId("revision-table").locator("tbody tr");
@@ -203,6 +232,9 @@ describe.skipIf(!serverHasRecords)("review and sign-off in the browser", () => {
     await saveHydroState(170);
     await eda.goto(`${world.server.url}${team.projectPath}`, { waitUntil: "networkidle" });
     await eda.getByText("The results shown differ from the last approved record.").waitFor();
+    // ... and the approved record's PDF is byte for byte what it was before the edit.
+    await sol.reload({ waitUntil: "networkidle" });
+    expect((await downloadRecordPdf(sol)).equals(approvedPdf)).toBe(true);
   });
 
   it("when a viewer opens a record, then it reads only, and says who may comment", async () => {

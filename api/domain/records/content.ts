@@ -7,6 +7,7 @@ import {
   RECORD_CONTENT_VERSION,
   type RecordContent,
 } from "../../../core/contract/records";
+import { listReadyPointTablesOfProject, type PointTableRow } from "../../../db/repositories/point-tables";
 import type { ProjectRow } from "../../../db/repositories/projects";
 import {
   comparisonInputFrom,
@@ -16,6 +17,7 @@ import {
 } from "../comparison/load";
 import { comparisonPageWithSections } from "../comparison/sections";
 import { exportProjectWithKeys } from "../projects/export";
+import { linearizationEndsOf } from "./linearization-ends";
 
 const invert = (m: Map<string, string>): Record<string, string> =>
   Object.fromEntries([...m].map(([id, key]) => [key, id]));
@@ -35,11 +37,12 @@ export async function buildRecordContent(
   project: ProjectRow,
   transaction?: Transaction,
 ): Promise<RecordContent> {
-  const [{ file, keys }, source] = await Promise.all([
+  const [{ file, keys }, source, tables] = await Promise.all([
     exportProjectWithKeys(project, transaction),
     transaction
       ? comparisonSourceIn(sequelize, project, transaction)
       : loadComparisonSource(sequelize, project.workspaceId, project.id),
+    listReadyPointTablesOfProject(project.id, transaction),
   ]);
   if (source === null) throw new Error(`project ${project.id} vanished while its record was taken`);
   const input = comparisonInputFrom(project.id, source.source);
@@ -71,7 +74,20 @@ export async function buildRecordContent(
         savedBy: s.createdBy,
       })),
     results: results satisfies ComparisonWithSections,
+    // Only with tables or lines, so a record of a project without any reads (and hashes) as before.
+    ...pointTableFilesOf(results, tables),
+    ...(await linearizationEndsOf(results, transaction)),
   };
+}
+
+/** The SHA-256 of each point table the comparison rated, as the report prints it. */
+function pointTableFilesOf(
+  results: ComparisonWithSections,
+  tables: readonly Pick<PointTableRow, "id" | "sha256">[],
+): Pick<RecordContent, "pointTableFiles"> {
+  const rated = new Set((results.pointTables ?? []).map((t) => t.tableId));
+  const files = tables.filter((t) => rated.has(t.id)).map((t) => ({ tableId: t.id, sha256: t.sha256 }));
+  return files.length === 0 ? {} : { pointTableFiles: files };
 }
 
 /**

@@ -1,19 +1,18 @@
 import type { Sequelize } from "sequelize";
-import type { ProjectReview, RecordContent } from "../../../core/contract/records";
+import type { ProjectReview } from "../../../core/contract/records";
 import type { ProjectRow } from "../../../db/repositories/projects";
-import { findRecord, listRecordHeads } from "../../../db/repositories/records";
-import { freezeProjectContent } from "./freeze";
+import { listRecordHeads } from "../../../db/repositories/records";
+import { differsFromApproved } from "./approved-difference";
 import { nextRevisionLetter } from "./revision";
-import { sameCalculation } from "./same-calculation";
 import { projectReviewStatus } from "./status";
 import { recordSummaries } from "./summary";
 
 /**
  * Where a project stands in its review: its status, the approvals its records need, the
  * revision being worked on, its latest and last approved records, and whether the project as it
- * is now differs from the last approved record. That last answer computes the project's record
- * content afresh (the full comparison, yielding the event loop between runs) and compares it with
- * the approved one, leaving out when each was taken.
+ * is now differs from the last approved record. That last answer compares the project's record
+ * content taken afresh with the approved one (leaving out when each was taken), and is kept while
+ * the project's inputs stamp stands (approved-difference.ts), so repeated reads stay cheap.
  */
 export async function projectReview(sequelize: Sequelize, project: ProjectRow): Promise<ProjectReview> {
   const heads = await listRecordHeads(project.id);
@@ -21,11 +20,7 @@ export async function projectReview(sequelize: Sequelize, project: ProjectRow): 
   const approvedHead = heads.find((r) => r.status === "approved") ?? null;
   const [latest, lastApproved] = await recordSummaries([latestHead, approvedHead].filter((r) => r !== null));
   let differs: boolean | null = null;
-  if (approvedHead) {
-    const approved = await findRecord(project.id, approvedHead.id);
-    const now = await freezeProjectContent(sequelize, project.workspaceId, project.id);
-    differs = !sameCalculation(approved!.content as RecordContent, now.content);
-  }
+  if (approvedHead) differs = await differsFromApproved(sequelize, project, approvedHead.id);
   let revision = "A";
   if (latestHead) {
     revision =

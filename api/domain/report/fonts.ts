@@ -1,73 +1,117 @@
 import { readFileSync } from "node:fs";
 import { createRequire } from "node:module";
+import * as fontkit from "fontkit";
+import { instanceVariableFont } from "./instance-variable-font";
 import { woffToSfnt } from "./woff-to-sfnt";
 
 /**
- * The app's own number face, JetBrains Mono from @fontsource (shipped with the app, no network),
- * for the PDF. @fontsource splits a face into files by script (latin, latin-ext, greek …), each
- * covering the code points its unicode.json names — the same ranges the browser picks files by —
- * so a line with σ in it is drawn in runs, each in the file that covers its characters.
+ * The app's own faces for the PDF, shipped with the app (no network): prose in its text face,
+ * Source Sans 3, and numbers in its number face, JetBrains Mono — as on the screens. @fontsource
+ * splits a face into files by script (latin, greek, latin-ext …); a line is drawn in runs, each in
+ * the first file whose glyphs cover its characters (checked against each file's own character map).
  *
- * Why not Source Sans 3, the screens' text face: the app ships it only as a variable WOFF2, and the
- * font engine under pdfkit (fontkit 2) neither instances it at a text weight (the default instance is
- * weight 200) nor subsets its composite glyphs (it throws while embedding). JetBrains Mono comes as
- * static WOFF files at 400 and 600, which embed cleanly.
+ * Source Sans 3 comes only as a variable WOFF2 (@fontsource-variable), which fontkit under pdfkit
+ * cannot embed at a text weight: it is instanced here at 400 and 600 (instance-variable-font.ts).
+ * JetBrains Mono comes as static WOFF files at 400 and 600, unpacked with woff-to-sfnt.
  */
 
 const require = createRequire(import.meta.url);
-const PACKAGE = "@fontsource/jetbrains-mono";
 /** The scripts the report needs, in the order a character is looked up. */
 const SUBSETS = ["latin", "greek", "latin-ext"] as const;
 export type Weight = "regular" | "bold";
-const WEIGHT_FILE: Readonly<Record<Weight, string>> = { regular: "400", bold: "600" };
+/** Which of the app's faces a piece of text is set in: prose, or numbers (and formulas, ids, hashes). */
+export type Family = "text" | "number";
+const WEIGHT_VALUE: Readonly<Record<Weight, number>> = { regular: 400, bold: 600 };
 
-/** One registered file: its pdfkit name, the code points it covers, and its bytes. */
-export type FontFace = { name: string; weight: Weight; ranges: [number, number][]; data: Buffer };
-
-/** "U+0000-00FF,U+0131" → [[0x0, 0xff], [0x131, 0x131]]. */
-export function parseUnicodeRanges(text: string): [number, number][] {
-  return text.split(",").map((part) => {
-    const [from, to = from] = part.trim().replace(/^U\+/i, "").split("-");
-    return [parseInt(from, 16), parseInt(to, 16)];
-  });
-}
+/** One registered file: its pdfkit name, the characters it has glyphs for, its advances, and its bytes. */
+export type FontFace = {
+  name: string;
+  family: Family;
+  weight: Weight;
+  /** The code points the file has a glyph for (its cmap). */
+  covers: ReadonlySet<number>;
+  /** Advance width of a code point's glyph, in em (for the text face's widths; no kerning is applied). */
+  advance: (codePoint: number) => number;
+  data: Buffer;
+};
 
 /**
  * The layout tables left out of the embedded faces. JetBrains Mono's GSUB draws "->", "==", "..."
  * as code ligatures, and its per-script files lack some of those glyphs (fontkit throws on them); a
- * calculation sheet writes the characters typed. Without GSUB and GPOS (a monospaced face needs no
- * kerning) fontkit's shaping has nothing to do, which also makes laying out text several times faster.
+ * calculation sheet writes the characters typed. Without GSUB and GPOS fontkit's shaping has nothing
+ * to do, so a line's width is the sum of its glyphs' advances, which the layout here computes itself.
  */
 const LAYOUT_TABLES = ["GSUB", "GPOS"] as const;
 
+function faceOf(name: string, family: Family, weight: Weight, data: Buffer): FontFace {
+  const font = fontkit.create(data) as fontkit.Font & { characterSet: number[] };
+  const widths = new Map<number, number>();
+  return {
+    name,
+    family,
+    weight,
+    covers: new Set(font.characterSet),
+    advance: (codePoint) => {
+      let width = widths.get(codePoint);
+      if (width === undefined) {
+        width = font.glyphForCodePoint(codePoint).advanceWidth / font.unitsPerEm;
+        widths.set(codePoint, width);
+      }
+      return width;
+    },
+    data,
+  };
+}
+
 let cached: FontFace[] | null = null;
 
-/** The report's faces (read once per process). */
+/** The report's faces (read, and the text face instanced, once per process). */
 export function reportFaces(): FontFace[] {
   if (cached) return cached;
-  const ranges = JSON.parse(readFileSync(require.resolve(`${PACKAGE}/unicode.json`), "utf8")) as Record<
-    string,
-    string
-  >;
-  cached = (Object.keys(WEIGHT_FILE) as Weight[]).flatMap((weight) =>
-    SUBSETS.map((subset) => ({
-      name: `mono-${weight}-${subset}`,
-      weight,
-      ranges: parseUnicodeRanges(ranges[subset]),
-      data: woffToSfnt(
-        readFileSync(
-          require.resolve(`${PACKAGE}/files/jetbrains-mono-${subset}-${WEIGHT_FILE[weight]}-normal.woff`),
+  const weights = Object.keys(WEIGHT_VALUE) as Weight[];
+  const text = weights.flatMap((weight) =>
+    SUBSETS.map((subset) =>
+      faceOf(
+        `text-${weight}-${subset}`,
+        "text",
+        weight,
+        instanceVariableFont(
+          readFileSync(
+            require.resolve(
+              `@fontsource-variable/source-sans-3/files/source-sans-3-${subset}-wght-normal.woff2`,
+            ),
+          ),
+          { wght: WEIGHT_VALUE[weight] },
         ),
-        LAYOUT_TABLES,
       ),
-    })),
+    ),
   );
+  const number = weights.flatMap((weight) =>
+    SUBSETS.map((subset) =>
+      faceOf(
+        `number-${weight}-${subset}`,
+        "number",
+        weight,
+        woffToSfnt(
+          readFileSync(
+            require.resolve(
+              `@fontsource/jetbrains-mono/files/jetbrains-mono-${subset}-${WEIGHT_VALUE[weight]}-normal.woff`,
+            ),
+          ),
+          LAYOUT_TABLES,
+        ),
+      ),
+    ),
+  );
+  cached = [...text, ...number];
   return cached;
 }
 
 /**
- * What the report writes for a character no embedded file carries (the screens' fonts have these
- * from the system's fallback; a PDF must not show an empty box instead).
+ * What the report writes for a character that no embedded file has a glyph for (the screens get
+ * these from the system's fallback fonts; a PDF must not show an empty box instead). Only used when
+ * neither face carries the glyph; Source Sans 3's and JetBrains Mono's @fontsource files carry σ
+ * and τ (greek) but not ∞ ≥ ≤ ✓.
  */
 export const STAND_INS: Readonly<Record<string, string>> = {
   "∞": "infinite",
@@ -80,38 +124,37 @@ export const STAND_INS: Readonly<Record<string, string>> = {
   "√": "sqrt",
 };
 
-function isLatin1(text: string): boolean {
-  for (let i = 0; i < text.length; i++) if (text.charCodeAt(i) > 0xff) return false;
-  return true;
-}
+/** A piece of a line drawn in one file, and its width in em. */
+export type Run = { font: string; text: string; em: number };
 
-/** How many characters `text` prints as: each character once, a stand-in as its own length. */
-export function printedLength(text: string): number {
-  if (isLatin1(text)) return text.length;
-  let n = 0;
-  for (const ch of text) n += STAND_INS[ch]?.length ?? 1;
-  return n;
-}
-
-/** A piece of a line drawn in one file. */
-export type Run = { font: string; text: string };
-
-/** `text` cut into runs by the file that covers each character; uncovered characters become their stand-ins. */
-export function runsOf(text: string, weight: Weight, faces: FontFace[] = reportFaces()): Run[] {
+/**
+ * `text` cut into runs by the file that covers each character: the family's own files first, then
+ * the other family's (a glyph of the other face beats a word), then the character's stand-in.
+ */
+export function runsOf(
+  text: string,
+  family: Family,
+  weight: Weight,
+  faces: FontFace[] = reportFaces(),
+): Run[] {
   const mine = faces.filter((f) => f.weight === weight);
-  // Most text is Latin-1, which the first (latin) file covers whole: one run, no lookups.
-  if (isLatin1(text)) return [{ font: mine[0].name, text }];
-  const covers = (f: FontFace, cp: number) => f.ranges.some(([a, b]) => cp >= a && cp <= b);
+  const order = [...mine.filter((f) => f.family === family), ...mine.filter((f) => f.family !== family)];
+  const first = order[0];
   const runs: Run[] = [];
-  const push = (font: string, piece: string) => {
+  const push = (face: FontFace, piece: string) => {
+    let em = 0;
+    for (const ch of piece) em += face.advance(ch.codePointAt(0)!);
     const last = runs[runs.length - 1];
-    if (last && last.font === font) last.text += piece;
-    else runs.push({ font, text: piece });
+    if (last && last.font === face.name) {
+      last.text += piece;
+      last.em += em;
+    } else runs.push({ font: face.name, text: piece, em });
   };
   for (const ch of text) {
-    const face = mine.find((f) => covers(f, ch.codePointAt(0)!));
-    if (face) push(face.name, ch);
-    else push(mine[0].name, STAND_INS[ch] ?? "?");
+    const cp = ch.codePointAt(0)!;
+    const face = order.find((f) => f.covers.has(cp));
+    if (face) push(face, ch);
+    else push(first, STAND_INS[ch] ?? "?");
   }
   return runs;
 }

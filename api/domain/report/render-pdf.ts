@@ -1,7 +1,7 @@
 import PdfDocument from "pdfkit";
 import type { ReportBlock, ReportColumn, ReportModel, ReportMohr, ReportSection } from "../../../core/report";
 import { reportFaces } from "./fonts";
-import { colorUnknown, drawLine, textWidth, wrapText, type TextStyle } from "./pdf-text";
+import { colorUnknown, drawLine, familyOf, textWidth, wrapText, type TextStyle } from "./pdf-text";
 
 type Doc = InstanceType<typeof PdfDocument>;
 
@@ -30,6 +30,8 @@ const STYLE = {
   note: { size: 7.6, weight: "regular", color: COLOR.soft },
   caution: { size: 7.6, weight: "bold", color: COLOR.close },
   cell: { size: 7, weight: "regular", color: COLOR.graphite },
+  numberCell: { size: 7, weight: "regular", color: COLOR.graphite, family: "number" },
+  formula: { size: 8.2, weight: "regular", color: COLOR.ink, family: "number" },
   cellHead: { size: 7, weight: "bold", color: COLOR.soft },
   furniture: { size: 6.6, weight: "regular", color: COLOR.soft },
 } satisfies Record<string, TextStyle>;
@@ -88,7 +90,8 @@ class Sheet {
 function drawFields(sheet: Sheet, rows: [string, string][]): void {
   const labelWidth = CONTENT_WIDTH * 0.3;
   for (const [label, value] of rows) {
-    const values = wrapText(sheet.doc, value, CONTENT_WIDTH - labelWidth, STYLE.body);
+    const style: TextStyle = { ...STYLE.body, family: familyOf(value) };
+    const values = wrapText(sheet.doc, value, CONTENT_WIDTH - labelWidth, style);
     const height = values.length * lineHeight(STYLE.body);
     sheet.need(height);
     const top = sheet.y;
@@ -99,7 +102,7 @@ function drawFields(sheet: Sheet, rows: [string, string][]): void {
         v,
         PAGE.left + labelWidth,
         top + STYLE.body.size + i * lineHeight(STYLE.body),
-        STYLE.body,
+        style,
       ),
     );
     sheet.y = top + height + 1;
@@ -120,10 +123,16 @@ async function drawTable(
   const total = columns.reduce((s, c) => s + c.width, 0);
   const widths = columns.map((c) => (c.width / total) * CONTENT_WIDTH);
   const pad = 3;
+  // Numbers in the number face: a right-aligned column's cells, and any cell that is a number.
+  const cellStyle = (text: string, i: number, style: TextStyle): TextStyle =>
+    style === STYLE.cell && (columns[i].align === "right" || familyOf(text) === "number")
+      ? STYLE.numberCell
+      : style;
   const drawRow = (cells: string[], style: TextStyle, head: boolean) => {
-    const wrapped = cells.map((text, i) => wrapText(doc, text, widths[i] - 2 * pad, style));
+    const styles = cells.map((text, i) => cellStyle(text, i, style));
+    const wrapped = cells.map((text, i) => wrapText(doc, text, widths[i] - 2 * pad, styles[i]));
     const height = Math.max(...wrapped.map((w) => w.length)) * lineHeight(style) + 2 * pad;
-    return { wrapped, height, style, head };
+    return { wrapped, styles, height, style, head };
   };
   const header = drawRow(
     columns.map((c) => c.title),
@@ -142,7 +151,7 @@ async function drawTable(
           line,
           right ? x + widths[i] - pad : x + pad,
           top + pad + row.style.size + j * lineHeight(row.style),
-          { ...row.style, color },
+          { ...row.styles[i], color },
           right ? "end" : "start",
         ),
       );
@@ -195,7 +204,7 @@ function drawMohr(sheet: Sheet, figure: ReportMohr, caption: string): void {
     .strokeColor(COLOR.soft)
     .stroke();
   doc.undash();
-  const tick = { size: 10, weight: "regular", color: COLOR.soft } as const;
+  const tick = { size: 10, weight: "regular", color: COLOR.soft, family: "number" } as const;
   const bottom = plot.y + plot.height;
   for (const x of figure.xTicks) {
     doc
@@ -217,7 +226,7 @@ function drawMohr(sheet: Sheet, figure: ReportMohr, caption: string): void {
   }
   drawLine(doc, figure.xTitle, plot.x + plot.width, bottom + 30, tick, "end");
   drawLine(doc, figure.yTitle, plot.x + 4, plot.y + 11, tick, "start");
-  const label = { size: 12, weight: "regular", color: COLOR.graphite } as const;
+  const label = { size: 12, weight: "regular", color: COLOR.graphite, family: "number" } as const;
   for (const p of figure.principal) {
     doc.circle(p.cx, p.cy, 3.2).fill(COLOR.ink);
     drawLine(doc, p.text, p.label.x, p.label.y, label, p.label.anchor);
@@ -264,7 +273,7 @@ async function drawBlock(sheet: Sheet, block: ReportBlock): Promise<void> {
       await drawTable(sheet, block.columns, block.rows, block.empty);
       return;
     case "formulas":
-      for (const line of block.lines) sheet.lines(line, { ...STYLE.body, color: COLOR.ink }, 12);
+      for (const line of block.lines) sheet.lines(line, STYLE.formula, 12);
       sheet.lines(`Source: ${block.source}.`, STYLE.note, 12);
       sheet.gap(2);
       return;
@@ -347,7 +356,8 @@ export function yieldToEventLoop(): Promise<void> {
 }
 
 /**
- * The report as a PDF (A4), with the app's own faces embedded and every diagram drawn as vectors.
+ * The report as a PDF (A4), with the app's own faces embedded (prose in Source Sans 3, numbers in
+ * JetBrains Mono) and every diagram drawn as vectors.
  * Deterministic: the document's dates are the content's `takenAt` and nothing random goes in, so
  * the same model always gives the same bytes. Yields to the event loop between sections and every
  * 60 table rows.

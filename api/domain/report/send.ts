@@ -1,7 +1,7 @@
 import type { Response } from "express";
 import type { RecordContent } from "../../../core/contract/records";
-import { buildReportModel, type ReportMeta } from "../../../core/report";
-import { renderReportPdf } from "./render-pdf";
+import type { ReportMeta } from "../../../core/report";
+import { renderReportInWorker } from "./render-in-worker";
 
 /** A file name safe in a Content-Disposition header: "ct-7-shell-draft-report.pdf". */
 export function reportFileName(projectName: string, meta: ReportMeta): string {
@@ -16,10 +16,11 @@ export function reportFileName(projectName: string, meta: ReportMeta): string {
 
 /**
  * Answers with the PDF report of `content` as `meta` describes it (a draft, or a frozen record with
- * its signatures): the one place the draft route and the record route share.
+ * its signatures): the one place the draft route and the record route share. The PDF is drawn in
+ * the report worker thread, so the server keeps answering meanwhile.
  */
 export async function sendReportPdf(res: Response, content: RecordContent, meta: ReportMeta): Promise<void> {
-  const pdf = await renderReportPdf(buildReportModel(content, meta));
+  const pdf = await renderReportInWorker(content, meta);
   res
     .set("Cache-Control", "no-store")
     .set("Content-Disposition", `attachment; filename="${reportFileName(content.inputs.project.name, meta)}"`)

@@ -1,4 +1,5 @@
 import { inflateSync } from "node:zlib";
+import { writeSfnt } from "./sfnt";
 
 /**
  * A WOFF 1.0 file unpacked to the plain TrueType/OpenType file it wraps (W3C WOFF File Format 1.0:
@@ -22,29 +23,10 @@ export function woffToSfnt(woff: Buffer, drop: readonly string[] = []): Buffer {
       throw new RangeError(`WOFF table ${woff.toString("latin1", at, at + 4)} has the wrong length`);
     return { tag: woff.subarray(at, at + 4), checksum: woff.readUInt32BE(at + 16), data };
   });
-  const tables = all.filter((t) => !drop.includes(t.tag.toString("latin1")));
-  const numTables = tables.length;
-  // The sfnt offset table's binary-search fields (OpenType spec, "Table directory").
-  const entrySelector = Math.floor(Math.log2(numTables));
-  const searchRange = 2 ** entrySelector * 16;
-  const header = Buffer.alloc(12 + 16 * numTables);
-  header.writeUInt32BE(flavor, 0);
-  header.writeUInt16BE(numTables, 4);
-  header.writeUInt16BE(searchRange, 6);
-  header.writeUInt16BE(entrySelector, 8);
-  header.writeUInt16BE(numTables * 16 - searchRange, 10);
-  const bodies: Buffer[] = [];
-  let offset = header.length;
-  tables.forEach((t, i) => {
-    const record = 12 + i * 16;
-    t.tag.copy(header, record);
-    header.writeUInt32BE(t.checksum, record + 4);
-    header.writeUInt32BE(offset, record + 8);
-    header.writeUInt32BE(t.data.length, record + 12);
-    const padded = Buffer.alloc((t.data.length + 3) & ~3);
-    t.data.copy(padded);
-    bodies.push(padded);
-    offset += padded.length;
-  });
-  return Buffer.concat([header, ...bodies]);
+  const kept = all.filter((t) => !drop.includes(t.tag.toString("latin1")));
+  return writeSfnt(
+    flavor,
+    kept.map((t) => ({ tag: t.tag.toString("latin1"), data: Buffer.from(t.data) })),
+    new Map(kept.map((t) => [t.tag.toString("latin1"), t.checksum])),
+  );
 }

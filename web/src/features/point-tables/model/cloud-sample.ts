@@ -1,0 +1,100 @@
+/**
+ * Which points the 3D view draws. A million points in one draw call held the page for 3–10 s on
+ * the first frame in the browser bench (Chromium drawing WebGL in software, BENCH_POINT_PROFILE=1),
+ * and a screen of a few hundred thousand pixels shows no more detail than a few hundred thousand
+ * points. So above `maxDrawn` the view draws every point from the most utilised down (those an
+ * engineer looks for) and an even sample of the rest, and says so.
+ */
+export type CloudSample = {
+  /** Indices into the table, in table order; null: every point is drawn. */
+  indices: Uint32Array | null;
+  /** Points drawn. */
+  drawn: number;
+  /** Points in the table. */
+  total: number;
+  /** Every point with a utilisation at or above this is drawn (null: all drawn). */
+  keptFrom: number | null;
+};
+
+/** Points the view draws at most. */
+export const MAX_DRAWN_POINTS = 200_000;
+const BINS = 4096;
+
+/** NaN (not rated) sorts below every rated point; ∞ above. */
+const rank = (u: number) => (Number.isNaN(u) ? -Infinity : u);
+
+/**
+ * Picks the points to draw: the most utilised half of the budget by a histogram threshold (no sort of
+ * a million values), then an even share of the others to fill the budget exactly.
+ */
+export function cloudSample(utilisation: Float64Array, maxDrawn = MAX_DRAWN_POINTS): CloudSample {
+  const total = utilisation.length;
+  if (total <= maxDrawn) return { indices: null, drawn: total, total, keptFrom: null };
+  const keptFrom = thresholdForTop(utilisation, Math.floor(maxDrawn / 2));
+  const chosen = new Uint8Array(total);
+  const top = (i: number) => rank(utilisation[i]) >= keptFrom;
+  const topCount = countWhere(total, top);
+  let drawn = 0;
+  if (topCount <= maxDrawn) {
+    for (let i = 0; i < total; i++) if (top(i)) chosen[i] = 1;
+    drawn = topCount;
+  } else {
+    // Ties at the threshold outnumber the budget: the infinitely utilised first, then an even share.
+    for (let i = 0; i < total && drawn < maxDrawn; i++)
+      if (utilisation[i] === Infinity) ((chosen[i] = 1), drawn++);
+  }
+  drawn += pickEvenly(chosen, (i) => !chosen[i] && (topCount <= maxDrawn || top(i)), maxDrawn - drawn);
+  const indices = new Uint32Array(drawn);
+  for (let i = 0, j = 0; i < chosen.length; i++) if (chosen[i]) indices[j++] = i;
+  return { indices, drawn, total, keptFrom };
+}
+
+function countWhere(total: number, test: (i: number) => boolean): number {
+  let n = 0;
+  for (let i = 0; i < total; i++) if (test(i)) n++;
+  return n;
+}
+
+/** Marks `room` of the points passing `test`, spread evenly through the table; returns how many it marked. */
+function pickEvenly(chosen: Uint8Array, test: (i: number) => boolean, room: number): number {
+  const candidates = countWhere(chosen.length, test);
+  const want = Math.min(room, candidates);
+  if (want <= 0) return 0;
+  let seen = 0;
+  let picked = 0;
+  for (let i = 0; i < chosen.length && picked < want; i++) {
+    if (!test(i)) continue;
+    // The j-th candidate is taken when ⌊(j + 1)·want/candidates⌋ steps up: exactly `want` in all.
+    if (Math.floor(((seen + 1) * want) / candidates) > Math.floor((seen * want) / candidates)) {
+      chosen[i] = 1;
+      picked++;
+    }
+    seen++;
+  }
+  return picked;
+}
+
+/** A utilisation such that about `count` points (at least `count`, unless ties) are at or above it. */
+function thresholdForTop(utilisation: Float64Array, count: number): number {
+  let lo = Infinity;
+  let hi = -Infinity;
+  let infinite = 0;
+  for (const u of utilisation) {
+    if (u === Infinity) infinite++;
+    else if (Number.isFinite(u)) {
+      if (u < lo) lo = u;
+      if (u > hi) hi = u;
+    }
+  }
+  if (infinite >= count || hi === -Infinity) return infinite > 0 ? Infinity : -Infinity;
+  if (hi === lo) return lo;
+  const counts = new Uint32Array(BINS);
+  const scale = (BINS - 1) / (hi - lo);
+  for (const u of utilisation) if (Number.isFinite(u)) counts[Math.floor((u - lo) * scale)]++;
+  let above = infinite;
+  for (let b = BINS - 1; b >= 0; b--) {
+    above += counts[b];
+    if (above >= count) return lo + b / scale;
+  }
+  return lo;
+}

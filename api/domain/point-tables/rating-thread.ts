@@ -1,45 +1,16 @@
-import { Worker } from "node:worker_threads";
+import { JobThread } from "./job-thread";
 import type { ChunkRating, ChunkRatingBasis } from "./rate-chunk";
-import type { RatingAnswer, RatingJob } from "./rating-worker";
-
-type Pending = { resolve: (rating: ChunkRating) => void; reject: (error: Error) => void };
+import type { RatingJob } from "./rating-worker";
 
 /**
- * One worker thread that rates stored chunks for the whole process, started on first use. One is
- * enough: the machine it is sized for has two cores, one for the event loop and PostgreSQL's
- * reads, one for the batch kernels; concurrent evaluations queue their chunks in it.
+ * One worker thread rates stored chunks for the whole process. One is enough: the machine it is
+ * sized for has two cores, one for the event loop and PostgreSQL's reads, one for the batch
+ * kernels; concurrent evaluations queue their chunks in it.
  */
-let worker: Worker | null = null;
-const pending = new Map<number, Pending>();
-let nextJob = 1;
-
-/** Rejects every job the worker had and forgets it, so the next job starts a new worker. */
-function abandon(error: Error): void {
-  worker = null;
-  for (const p of pending.values()) p.reject(error);
-  pending.clear();
-}
-
-function startWorker(): Worker {
-  const w = new Worker(new URL("./rating-worker.mjs", import.meta.url));
-  w.on("message", (answer: RatingAnswer) => {
-    const p = pending.get(answer.job);
-    if (!p) return;
-    pending.delete(answer.job);
-    // An idle worker must not keep the process alive (a server that closes, a test run that ends).
-    if (pending.size === 0) w.unref();
-    if (answer.ok) p.resolve(answer.rating);
-    else p.reject(new Error(`rating a point-table chunk failed: ${answer.message}`));
-  });
-  w.on("error", (error) => {
-    if (worker === w) abandon(error);
-  });
-  w.on("exit", (code) => {
-    if (worker === w) abandon(new Error(`the point-table rating worker stopped (exit code ${code})`));
-  });
-  w.unref();
-  return w;
-}
+const thread = new JobThread<RatingJob, ChunkRating>(
+  new URL("./rating-worker.mjs", import.meta.url),
+  "the point-table rating worker",
+);
 
 /**
  * Rates one stored chunk in the rating worker (see rate-chunk.ts) and answers its rating. The
@@ -51,13 +22,5 @@ export function rateInWorker(
   n: number,
   basis: ChunkRatingBasis,
 ): Promise<ChunkRating> {
-  worker ??= startWorker();
-  const w = worker;
-  const job = nextJob++;
-  return new Promise<ChunkRating>((resolve, reject) => {
-    pending.set(job, { resolve, reject });
-    w.ref();
-    const message: RatingJob = { job, columns, n, basis };
-    w.postMessage(message, [columns.buffer as ArrayBuffer]);
-  });
+  return thread.run({ columns, n, basis }, [columns.buffer as ArrayBuffer]);
 }

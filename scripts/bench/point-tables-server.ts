@@ -32,7 +32,7 @@ function streamOf(bytes: Buffer): ReadableStream<Uint8Array> {
   });
 }
 
-/** Declares a table of `text` in a load case and sends its bytes (PUT …/content, streamed by fetch). */
+/** Declares a table of `text` in a load case and sends its bytes (PUT …/content), whole or as a stream. */
 async function upload(
   session: Session,
   casePath: string,

@@ -23,38 +23,49 @@ export function doublesOf(bytes: Buffer): Float64Array {
   return out;
 }
 
+/** How many chunks of {@link POINTS_PER_CHUNK} points a table of `count` points is stored as. */
+export function chunkCountOf(count: number): number {
+  return Math.ceil(count / POINTS_PER_CHUNK);
+}
+
 /**
- * A parsed table cut into chunks of {@link POINTS_PER_CHUNK} points, each as binary columns:
- * components from the parser's interleaved xx yy zz xy yz zx per point to one column after
- * another (xx[n] yy[n] …), coordinates likewise (x[n] y[n] z[n]).
+ * Chunk `index` of a parsed table (its points `index`·{@link POINTS_PER_CHUNK} on) as binary
+ * columns, each in a buffer of its own: components from the parser's interleaved xx yy zz xy yz zx
+ * per point to one column after another (xx[n] yy[n] …), coordinates likewise (x[n] y[n] z[n]).
  */
-export function* chunksOf(table: PointTable): Generator<NewPointTableChunk> {
-  for (let start = 0, index = 0; start < table.count; start += POINTS_PER_CHUNK, index++) {
-    const n = Math.min(POINTS_PER_CHUNK, table.count - start);
-    const components = new Float64Array(6 * n);
-    for (let k = 0; k < n; k++) {
-      const from = 6 * (start + k);
-      for (let c = 0; c < 6; c++) components[c * n + k] = table.components[from + c];
-    }
-    let coordinates: Buffer | null = null;
-    if (table.coordinates) {
-      const xyz = new Float64Array(3 * n);
-      for (let k = 0; k < n; k++) {
-        const from = 3 * (start + k);
-        for (let c = 0; c < 3; c++) xyz[c * n + k] = table.coordinates[from + c];
-      }
-      coordinates = bytesOf(xyz);
-    }
-    const ids = table.ids;
-    yield {
-      chunkIndex: index,
-      pointCount: n,
-      components: bytesOf(components),
-      coordinates,
-      numericIds: ids instanceof Float64Array ? bytesOf(ids.slice(start, start + n)) : null,
-      textIds: Array.isArray(ids) ? ids.slice(start, start + n) : null,
-    };
+export function chunkAt(table: PointTable, index: number): NewPointTableChunk {
+  const start = index * POINTS_PER_CHUNK;
+  const n = Math.min(POINTS_PER_CHUNK, table.count - start);
+  if (!(n > 0)) throw new RangeError(`chunk ${index} is past the table's ${table.count} points`);
+  const components = new Float64Array(6 * n);
+  for (let c = 0; c < 6; c++) {
+    const column = c * n;
+    for (let k = 0, from = 6 * start + c; k < n; k++, from += 6)
+      components[column + k] = table.components[from];
   }
+  let coordinates: Buffer | null = null;
+  if (table.coordinates) {
+    const xyz = new Float64Array(3 * n);
+    for (let c = 0; c < 3; c++) {
+      const column = c * n;
+      for (let k = 0, from = 3 * start + c; k < n; k++, from += 3) xyz[column + k] = table.coordinates[from];
+    }
+    coordinates = bytesOf(xyz);
+  }
+  const ids = table.ids;
+  return {
+    chunkIndex: index,
+    pointCount: n,
+    components: bytesOf(components),
+    coordinates,
+    numericIds: ids instanceof Float64Array ? bytesOf(ids.slice(start, start + n)) : null,
+    textIds: Array.isArray(ids) ? ids.slice(start, start + n) : null,
+  };
+}
+
+/** A parsed table cut into chunks of {@link POINTS_PER_CHUNK} points ({@link chunkAt}), in order. */
+export function* chunksOf(table: PointTable): Generator<NewPointTableChunk> {
+  for (let index = 0; index < chunkCountOf(table.count); index++) yield chunkAt(table, index);
 }
 
 /** A stored chunk's points as core's evaluator takes them: interleaved xx yy zz xy yz zx per point. */

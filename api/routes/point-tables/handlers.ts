@@ -6,11 +6,11 @@ import {
   deletePointTable,
   listPointTables,
   storePointTableContent,
+  type PointTableRow,
 } from "../../../db/repositories/point-tables";
 import { currentMembership, currentUser } from "../../auth/guards";
 import type { AppContext } from "../../context";
 import { recordAudit } from "../../domain/audit/record";
-import { chunksOf } from "../../../db/repositories/point-table-chunks";
 import { currentEvaluation } from "../../domain/point-tables/evaluate";
 import { pointTableLimitError } from "../../domain/point-tables/limits";
 import { loadRating } from "../../domain/point-tables/spec";
@@ -102,7 +102,8 @@ export function createPointTableHandler(
 
 /**
  * PUT …/content: the file's bytes, parsed as they arrive and checked against the declaration;
- * then stored as binary chunks in one transaction, evaluated, and answered with the table's summary.
+ * then stored as binary chunks in one transaction (cut by the upload worker, the next while one is
+ * written), evaluated, and answered with the table's summary.
  */
 export function putContentHandler(context: AppContext): RouteHandler<TableParams, NoInput, NoInput> {
   return async (req, res) => {
@@ -115,26 +116,31 @@ export function putContentHandler(context: AppContext): RouteHandler<TableParams
         `The point table "${found.table.fileName}" already holds its points; declare a new table to upload another file.`,
       );
     }
-    const parsed = await receiveContent(req, found.table);
-    const stored = await context.sequelize.transaction(async (transaction) => {
-      const { table } = await findTable(workspace.id, params, { transaction, lock: true });
-      if (table.status === "ready") {
-        throw errors.conflictWithId(
-          "content_present",
-          `The point table "${table.fileName}" received its points from another upload meanwhile.`,
+    const { summary, parse } = await receiveContent(req, found.table);
+    let stored: PointTableRow;
+    try {
+      stored = await context.sequelize.transaction(async (transaction) => {
+        const { table } = await findTable(workspace.id, params, { transaction, lock: true });
+        if (table.status === "ready") {
+          throw errors.conflictWithId(
+            "content_present",
+            `The point table "${table.fileName}" received its points from another upload meanwhile.`,
+          );
+        }
+        return storePointTableContent(
+          table.id,
+          {
+            chunks: parse.chunks(summary.chunkCount),
+            pointCount: summary.count,
+            hasCoordinates: summary.hasCoordinates,
+            badRows: summary.badRows,
+          },
+          transaction,
         );
-      }
-      return storePointTableContent(
-        table.id,
-        {
-          chunks: chunksOf(parsed),
-          pointCount: parsed.count,
-          hasCoordinates: parsed.coordinates !== null,
-          badRows: parsed.badRows,
-        },
-        transaction,
-      );
-    });
+      });
+    } finally {
+      await parse.drop();
+    }
     const evaluation = await currentEvaluation(
       stored,
       await loadRating(found.project, found.loadCase.category),

@@ -68,7 +68,7 @@ export function PointTableResults({
           {table.coordinates !== null ? (
             <>
               <div
-                className="h-72 rounded border border-rule bg-panel"
+                className="relative h-72 rounded border border-rule bg-panel"
                 role="group"
                 aria-label="Points in 3D, coloured by utilisation; click a point to open it in the bench"
               >

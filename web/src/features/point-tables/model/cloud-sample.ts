@@ -40,8 +40,11 @@ export function cloudSample(utilisation: Float64Array, maxDrawn = MAX_DRAWN_POIN
     drawn = topCount;
   } else {
     // Ties at the threshold outnumber the budget: the infinitely utilised first, then an even share.
-    for (let i = 0; i < total && drawn < maxDrawn; i++)
-      if (utilisation[i] === Infinity) ((chosen[i] = 1), drawn++);
+    for (let i = 0; i < total && drawn < maxDrawn; i++) {
+      if (utilisation[i] !== Infinity) continue;
+      chosen[i] = 1;
+      drawn++;
+    }
   }
   drawn += pickEvenly(chosen, (i) => !chosen[i] && (topCount <= maxDrawn || top(i)), maxDrawn - drawn);
   const indices = new Uint32Array(drawn);

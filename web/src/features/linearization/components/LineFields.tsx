@@ -3,6 +3,7 @@ import { STRESS_UNIT_NAMES } from "../../../../../core/contract/materials";
 import { LENGTH_UNITS } from "../../../../../core/contract/linearizations";
 import { classificationExplained, type LineForm } from "../model/line-form";
 import type { ParsedPath } from "../model/path-text";
+import { VectorField } from "./VectorField";
 
 type Set = <K extends keyof LineForm>(key: K, value: LineForm[K]) => void;
 type Errors = Record<string, string | undefined>;
@@ -47,48 +48,6 @@ function Choice<T extends string>({
         ))}
       </div>
       {children}
-    </fieldset>
-  );
-}
-
-function Vector({
-  id,
-  legend,
-  value,
-  onChange,
-  error,
-  hint,
-}: {
-  id: string;
-  legend: string;
-  value: [string, string, string];
-  onChange: (v: [string, string, string]) => void;
-  error?: string;
-  hint: string;
-}) {
-  return (
-    <fieldset className="space-y-1" aria-describedby={error ? `${id}-error` : undefined}>
-      <legend className={label}>{legend}</legend>
-      <div className="flex gap-2">
-        {(["x", "y", "z"] as const).map((axis, i) => (
-          <label key={axis} className="flex items-center gap-1 text-sm">
-            {axis}
-            <input
-              id={`${id}-${axis}`}
-              inputMode="decimal"
-              className={`${input} num w-20`}
-              value={value[i]}
-              onChange={(e) => {
-                const next = [...value] as [string, string, string];
-                next[i] = e.target.value;
-                onChange(next);
-              }}
-            />
-          </label>
-        ))}
-      </div>
-      <p className="text-[13px] text-graphite-soft">{hint}</p>
-      <Problem id={`${id}-error`} text={error} />
     </fieldset>
   );
 }
@@ -179,7 +138,7 @@ export function PathFields({
       </div>
       <div className="grid gap-3 sm:grid-cols-2">
         {(!parsed.ok || parsed.positions === "distance") && (
-          <Vector
+          <VectorField
             id="line-direction"
             legend="Line direction (through the thickness)"
             value={form.lineDirection}
@@ -188,7 +147,7 @@ export function PathFields({
             hint="In the stresses' frame, from the first point to the last. Used only when points are placed by distance."
           />
         )}
-        <Vector
+        <VectorField
           id="second-axis"
           legend="Second local axis (e.g. hoop)"
           value={form.secondAxis}

@@ -6,55 +6,11 @@ import { FormMessage, quietButton } from "../../../lib/forms";
 import { usePathFromPointTable } from "../api/path-from-point-table";
 import { useDebounced } from "../hooks/use-debounced";
 import type { LineForm } from "../model/line-form";
+import { VectorField } from "./VectorField";
 import { EMPTY_PICK, pickableTables, pickRequestOf, pickSummary, type PickForm } from "../model/pick-form";
 
 const input = "w-full rounded border border-rule-strong bg-panel px-2 py-1 text-[15px]";
 const label = "block text-sm font-semibold text-graphite";
-
-function End({
-  id,
-  legend,
-  value,
-  onChange,
-  error,
-}: {
-  id: string;
-  legend: string;
-  value: [string, string, string];
-  onChange: (v: [string, string, string]) => void;
-  error?: string;
-}) {
-  return (
-    <fieldset className="space-y-1" aria-describedby={error ? `${id}-error` : undefined}>
-      <legend className={label}>{legend}</legend>
-      <div className="flex gap-2">
-        {(["x", "y", "z"] as const).map((axis, i) => (
-          <label key={axis} className="flex items-center gap-1 text-sm">
-            {axis}
-            <input
-              id={`${id}-${axis}`}
-              aria-label={`${legend} ${axis}`}
-              inputMode="decimal"
-              className={`${input} num w-20`}
-              value={value[i]}
-              onChange={(e) => {
-                const next = [...value] as [string, string, string];
-                next[i] = e.target.value;
-                onChange(next);
-              }}
-            />
-          </label>
-        ))}
-      </div>
-      {error && (
-        <p id={`${id}-error`} className="text-sm text-fail">
-          <span aria-hidden="true">✗ </span>
-          {error}
-        </p>
-      )}
-    </fieldset>
-  );
-}
 
 /**
  * Picking the path out of a stored finite-element point table of the load case: the engineer
@@ -126,14 +82,14 @@ export function PointTablePick({
           )}
         </div>
         <div className="grid gap-3 sm:grid-cols-2">
-          <End
+          <VectorField
             id="pick-start"
             legend="First end"
             value={form.start}
             onChange={(v) => set("start", v)}
             error={errors.start}
           />
-          <End
+          <VectorField
             id="pick-end"
             legend="Second end"
             value={form.end}

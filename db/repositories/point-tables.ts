@@ -90,10 +90,10 @@ export async function countPointTables(
   loadCaseId: string,
   transaction?: Transaction,
 ): Promise<{ inLoadCase: number; inProject: number }> {
-  const [inLoadCase, inProject] = await Promise.all([
-    PointTable.count({ where: { loadCaseId }, transaction }),
-    PointTable.count({ where: { projectId }, transaction }),
-  ]);
+  // One after another: on a transaction both go through one connection, and pg deprecates
+  // issuing them concurrently.
+  const inLoadCase = await PointTable.count({ where: { loadCaseId }, transaction });
+  const inProject = await PointTable.count({ where: { projectId }, transaction });
   return { inLoadCase, inProject };
 }
 

@@ -37,13 +37,13 @@ export async function buildRecordContent(
   project: ProjectRow,
   transaction?: Transaction,
 ): Promise<RecordContent> {
-  const [{ file, keys }, source, tables] = await Promise.all([
-    exportProjectWithKeys(project, transaction),
-    transaction
-      ? comparisonSourceIn(sequelize, project, transaction)
-      : loadComparisonSource(sequelize, project.workspaceId, project.id),
-    listReadyPointTablesOfProject(project.id, transaction),
-  ]);
+  // One after another: on a transaction every statement goes through one connection, and pg
+  // deprecates issuing them concurrently.
+  const { file, keys } = await exportProjectWithKeys(project, transaction);
+  const source = transaction
+    ? await comparisonSourceIn(sequelize, project, transaction)
+    : await loadComparisonSource(sequelize, project.workspaceId, project.id);
+  const tables = await listReadyPointTablesOfProject(project.id, transaction);
   if (source === null) throw new Error(`project ${project.id} vanished while its record was taken`);
   const input = comparisonInputFrom(project.id, source.source);
   const { paging: _paging, ...results } = await comparisonPageWithSections(input, {

@@ -32,11 +32,11 @@ export async function inputEditorsOf(
   const locationIds = new Set(Object.values(content.ids.locations));
   const caseIds = new Set(Object.values(content.ids.loadCases));
   const combinationNames = new Set(content.inputs.combinations.map((c) => c.name));
-  const [locations, cases, combinations] = await Promise.all([
-    listLiveLocations(project.id, transaction),
-    listLiveLoadCases(project.id, transaction),
-    listLiveCombinations(project.id, transaction),
-  ]);
+  // One after another: statements on one transaction's connection queue anyway, and pg deprecates
+  // issuing them concurrently.
+  const locations = await listLiveLocations(project.id, transaction);
+  const cases = await listLiveLoadCases(project.id, transaction);
+  const combinations = await listLiveCombinations(project.id, transaction);
   for (const l of locations) {
     if (locationIds.has(l.id)) add(l.updatedBy ?? l.createdBy, `the location "${l.name}"`);
   }

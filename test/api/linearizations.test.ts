@@ -5,6 +5,7 @@ import { LINEARIZATION_LIMITS } from "../../core/contract/limits";
 import { linearizationResponseSchema } from "../../core/contract/linearizations";
 import { AuditEvent } from "../../db/models/audit-event";
 import { buildTestApp } from "../support/app";
+import { linearWall } from "../support/linear-wall";
 import { mpa, projectTeam, projectWithLocations, wsPath, type ProjectTeam } from "../support/project-team";
 
 const { app, close } = buildTestApp({ webDist: null });
@@ -16,37 +17,6 @@ let base: string;
 let nozzle: string;
 let caseId: string;
 const lines = (c = caseId) => `${base}/load-cases/${c}/linearizations`;
-
-/**
- * A linear hoop stress σyy = 200 − 20·d MPa (d in mm) through a 10 mm wall, at 11 evenly spaced
- * points, the line along the global x axis. A linear distribution is split exactly into membrane
- * (its mean, 100 MPa) and bending (±100 MPa at the surfaces) with no peak (common practice, no
- * source: the membrane is the mean and the bending the linear part of a distribution).
- */
-function linearWall(name = "Nozzle junction, inside to outside") {
-  return {
-    name,
-    locationId: nozzle,
-    path: {
-      positions: "distance",
-      lengthUnit: "mm",
-      stressUnit: "MPa",
-      lineDirection: [1, 0, 0],
-      points: Array.from({ length: 11 }, (_, i) => ({
-        distance: i,
-        xx: -1,
-        yy: 200 - 20 * i,
-        zz: 50,
-        xy: 0,
-        yz: 0,
-        zx: 0,
-      })),
-    },
-    secondAxis: [0, 1, 0],
-    classification: { membrane: "local", stresses: "primary" },
-    allowables: { source: "typed", S: 138 },
-  };
-}
 
 beforeAll(async () => {
   team = await projectTeam(app);
@@ -63,7 +33,7 @@ beforeAll(async () => {
 
 describe("saving and reading a line", () => {
   it("when an editor saves a linear hoop distribution, then the server's membrane is its mean, the bending its linear part and the peak zero, as core computes them", async () => {
-    const body = linearWall();
+    const body = linearWall(nozzle);
     const created = await team.editor.agent.post(lines()).send(body);
     expect(created.status, JSON.stringify(created.body)).toBe(201);
     const { linearization } = linearizationResponseSchema.parse(created.body);
@@ -100,7 +70,7 @@ describe("saving and reading a line", () => {
 
   it("when a client sends a result of its own, then the server ignores it and stores its own computation", async () => {
     const body = {
-      ...linearWall("Forged result"),
+      ...linearWall(nozzle, "Forged result"),
       result: { checks: [{ id: "PL", ratio: 0.01, verdict: "pass" }] },
     };
     const created = await team.editor.agent.post(lines()).send(body).expect(201);
@@ -122,7 +92,7 @@ describe("saving and reading a line", () => {
       .send({ name: "head knuckle", material: { kind: "workspace", id: material.body.material.id } })
       .expect(201);
     const body = {
-      ...linearWall("Knuckle, primary + secondary"),
+      ...linearWall(nozzle, "Knuckle, primary + secondary"),
       locationId: loc.body.location.id,
       classification: { membrane: "local", stresses: "primary-plus-secondary" },
       allowables: { source: "material", S: 138 },
@@ -147,19 +117,19 @@ describe("bad input", () => {
   };
 
   it("when a line has two points, then 400 naming path.points", async () => {
-    const body = linearWall();
+    const body = linearWall(nozzle);
     body.path.points = body.path.points.slice(0, 2);
     expect(await bad(body)).toContain("path.points");
   });
 
   it("when points are placed by distance without a direction, then 400 naming path.lineDirection", async () => {
-    const body = { ...linearWall(), path: { ...linearWall().path, lineDirection: null } };
+    const body = { ...linearWall(nozzle), path: { ...linearWall(nozzle).path, lineDirection: null } };
     expect(await bad(body)).toContain("path.lineDirection");
   });
 
   it("when a distance goes back, then 400 naming that point's distance, and nothing is stored", async () => {
     const before = (await team.viewer.agent.get(lines()).expect(200)).body.linearizations.length;
-    const body = linearWall("Goes back");
+    const body = linearWall(nozzle, "Goes back");
     body.path.points[3].distance = 1.5;
     expect(await bad(body)).toContain("path.points.3.distance");
     const after = (await team.viewer.agent.get(lines()).expect(200)).body.linearizations.length;
@@ -167,7 +137,7 @@ describe("bad input", () => {
   });
 
   it("when a point lacks a component or S is not positive or the options are unknown, then 400 names each field", async () => {
-    const body = linearWall() as Record<string, unknown> & ReturnType<typeof linearWall>;
+    const body = linearWall(nozzle) as Record<string, unknown> & ReturnType<typeof linearWall>;
     const points = body.path.points.map((p) => ({ ...p })) as Record<string, unknown>[];
     delete points[4].zx;
     const paths = await bad({
@@ -183,15 +153,15 @@ describe("bad input", () => {
   });
 
   it("when the second axis lies along the line, then 400 naming secondAxis", async () => {
-    expect(await bad({ ...linearWall(), secondAxis: [2, 0, 0] })).toContain("secondAxis");
+    expect(await bad({ ...linearWall(nozzle), secondAxis: [2, 0, 0] })).toContain("secondAxis");
   });
 
   it("when the location is not one of the project's, then 400 naming locationId", async () => {
-    expect(await bad({ ...linearWall(), locationId: crypto.randomUUID() })).toContain("locationId");
+    expect(await bad({ ...linearWall(nozzle), locationId: crypto.randomUUID() })).toContain("locationId");
   });
 
   it(`when a line has more than ${LINEARIZATION_LIMITS.pointsPerLine} points, then 400 naming path.points`, async () => {
-    const body = linearWall();
+    const body = linearWall(nozzle);
     body.path.points = Array.from({ length: LINEARIZATION_LIMITS.pointsPerLine + 1 }, (_, i) => ({
       distance: i,
       xx: 0,
@@ -205,28 +175,29 @@ describe("bad input", () => {
   });
 
   it("when the positions are so close together that the bending integral overflows, then 400 naming path.points", async () => {
-    const body = linearWall();
+    const body = linearWall(nozzle);
     body.path.points = body.path.points.slice(0, 3).map((p, i) => ({ ...p, distance: i * 1e-200 }));
     expect(await bad(body)).toContain("path.points");
   });
 
   it("when the load case is not the project's, then 404", async () => {
-    await team.editor.agent.post(lines(crypto.randomUUID())).send(linearWall()).expect(404);
+    await team.editor.agent.post(lines(crypto.randomUUID())).send(linearWall(nozzle)).expect(404);
   });
 });
 
 describe("roles and versions", () => {
   it("when a viewer lists, reads and previews, then 200; when a viewer saves, changes or deletes, then 403, an outsider gets 404, and nothing changes", async () => {
-    const saved = (await team.editor.agent.post(lines()).send(linearWall("Viewer target")).expect(201)).body
-      .linearization;
+    const saved = (
+      await team.editor.agent.post(lines()).send(linearWall(nozzle, "Viewer target")).expect(201)
+    ).body.linearization;
     await team.viewer.agent.get(lines()).expect(200);
     await team.viewer.agent.get(`${lines()}/${saved.id}`).expect(200);
-    const preview = await team.viewer.agent.post(`${lines()}/preview`).send(linearWall()).expect(200);
+    const preview = await team.viewer.agent.post(`${lines()}/preview`).send(linearWall(nozzle)).expect(200);
     expect(preview.body.result.membrane[1]).toBeCloseTo(100, 10);
-    await team.viewer.agent.post(lines()).send(linearWall()).expect(403);
+    await team.viewer.agent.post(lines()).send(linearWall(nozzle)).expect(403);
     await team.viewer.agent
       .put(`${lines()}/${saved.id}`)
-      .send({ version: 1, ...linearWall("Renamed by viewer") })
+      .send({ version: 1, ...linearWall(nozzle, "Renamed by viewer") })
       .expect(403);
     await team.viewer.agent.delete(`${lines()}/${saved.id}`).expect(403);
     // Someone outside the workspace is not told that it exists.
@@ -236,12 +207,12 @@ describe("roles and versions", () => {
   });
 
   it("when two editors change a line from the same version, then one gets 200 and the other 409 with the current version, and the first change is kept", async () => {
-    const saved = (await team.editor.agent.post(lines()).send(linearWall("Contested")).expect(201)).body
-      .linearization;
+    const saved = (await team.editor.agent.post(lines()).send(linearWall(nozzle, "Contested")).expect(201))
+      .body.linearization;
     const path = `${lines()}/${saved.id}`;
     const responses = await Promise.all([
-      team.editor.agent.put(path).send({ version: 1, ...linearWall("First") }),
-      team.editor2.agent.put(path).send({ version: 1, ...linearWall("Second") }),
+      team.editor.agent.put(path).send({ version: 1, ...linearWall(nozzle, "First") }),
+      team.editor2.agent.put(path).send({ version: 1, ...linearWall(nozzle, "Second") }),
     ]);
     const statuses = responses.map((r) => r.status).sort();
     expect(statuses).toEqual([200, 409]);
@@ -254,8 +225,8 @@ describe("roles and versions", () => {
   });
 
   it("when an editor deletes a line, then it is gone and the audit trail keeps its inputs", async () => {
-    const saved = (await team.editor.agent.post(lines()).send(linearWall("To delete")).expect(201)).body
-      .linearization;
+    const saved = (await team.editor.agent.post(lines()).send(linearWall(nozzle, "To delete")).expect(201))
+      .body.linearization;
     await team.editor.agent.delete(`${lines()}/${saved.id}`).expect(204);
     await team.viewer.agent.get(`${lines()}/${saved.id}`).expect(404);
     const trail = await AuditEvent.findOne({ where: { entityId: saved.id, action: "delete" } });
@@ -271,10 +242,13 @@ describe("limits and the comparison", () => {
     for (let i = 0; i < LINEARIZATION_LIMITS.linesPerLoadCase; i++) {
       await team.editor.agent
         .post(lines(id))
-        .send(linearWall(`Line ${i}`))
+        .send(linearWall(nozzle, `Line ${i}`))
         .expect(201);
     }
-    const refused = await team.editor.agent.post(lines(id)).send(linearWall("One too many")).expect(400);
+    const refused = await team.editor.agent
+      .post(lines(id))
+      .send(linearWall(nozzle, "One too many"))
+      .expect(400);
     expect(refused.body.error.id).toBe("project_limit");
     expect(refused.body.error.details.limit).toBe("linesPerLoadCase");
     await team.editor.agent.delete(`${base}/load-cases/${id}`).expect(204);
@@ -288,8 +262,8 @@ describe("limits and the comparison", () => {
     const before = await comparison();
     expect(before.linearizations.some((l) => l.caseId === id)).toBe(false);
 
-    const saved = (await team.editor.agent.post(lines(id)).send(linearWall("Test line")).expect(201)).body
-      .linearization;
+    const saved = (await team.editor.agent.post(lines(id)).send(linearWall(nozzle, "Test line")).expect(201))
+      .body.linearization;
     const first = (await comparison()).linearizations.find((l) => l.id === saved.id)!;
     expect(first).toMatchObject({ name: "Test line", caseName: "Hydrotest", locationName: "nozzle" });
     expect(first.category).toBe("local membrane, primary");
@@ -300,7 +274,7 @@ describe("limits and the comparison", () => {
     // A smaller S raises every ratio: the comparison must not answer from its earlier copy.
     await team.editor.agent
       .put(`${lines(id)}/${saved.id}`)
-      .send({ version: 1, ...linearWall("Test line"), allowables: { source: "typed", S: 100 } })
+      .send({ version: 1, ...linearWall(nozzle, "Test line"), allowables: { source: "typed", S: 100 } })
       .expect(200);
     const second = (await comparison()).linearizations.find((l) => l.id === saved.id)!;
     expect(second.checks[1].limit).toBe(150);

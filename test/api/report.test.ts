@@ -19,6 +19,7 @@ import { buildRecordContent } from "../../api/domain/records/content";
 import { STAND_INS } from "../../api/domain/report/fonts";
 import { renderReportPdf } from "../../api/domain/report/render-pdf";
 import { buildTestApp } from "../support/app";
+import { linearWall } from "../support/linear-wall";
 import { mpa, projectTeam, projectWithLocations, wsPath, type ProjectTeam } from "../support/project-team";
 
 const require = createRequire(import.meta.url);
@@ -346,31 +347,10 @@ describe("the report's sections beside the comparison: stress classification lin
       .set("Content-Type", "application/octet-stream")
       .send(Buffer.from(CSV))
       .expect(200);
-    // A linear through-wall distribution σyy = 200 − 20·d MPa over a 10 mm wall (as in linearizations.test.ts).
+    // A linear through-wall distribution σyy = 200 − 20·d MPa over a 10 mm wall (test/support/linear-wall.ts).
     await team.editor.agent
       .post(`${path}/load-cases/${caseId}/linearizations`)
-      .send({
-        name: "Nozzle wall, inside to outside",
-        locationId: made.locationIds[0],
-        path: {
-          positions: "distance",
-          lengthUnit: "mm",
-          stressUnit: "MPa",
-          lineDirection: [1, 0, 0],
-          points: Array.from({ length: 11 }, (_, i) => ({
-            distance: i,
-            xx: -1,
-            yy: 200 - 20 * i,
-            zz: 50,
-            xy: 0,
-            yz: 0,
-            zx: 0,
-          })),
-        },
-        secondAxis: [0, 1, 0],
-        classification: { membrane: "local", stresses: "primary" },
-        allowables: { source: "typed", S: 138 },
-      })
+      .send(linearWall(made.locationIds[0], "Nozzle wall, inside to outside"))
       .expect(201);
 
     const content = await buildRecordContent(

@@ -8,6 +8,7 @@
  */
 import path from "node:path";
 import { fileURLToPath } from "node:url";
+import { warmReportWorker } from "./domain/report/render-in-worker";
 import { EnvError, isLoopback, parseEnv } from "./env";
 import { startServer } from "./server";
 
@@ -22,6 +23,8 @@ try {
   const listening = `http://${env.HOST}:${running.port}`;
   running.context.logger.info({ listening, publicOrigin: running.url }, "listening");
   console.log(`Sigmacube API listening on ${listening}`);
+  // After listening, so requests are served while the report worker instances its fonts.
+  warmReportWorker();
   if (running.context.mailer.fake && !isLoopback(env.HOST)) {
     // Allowed only with SIGMACUBE_FAKE_MAILBOX=1 (parseEnv refuses it otherwise).
     running.context.logger.warn(

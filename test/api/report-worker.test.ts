@@ -5,7 +5,11 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { buildReportModel } from "../../core/report";
 import { findProject } from "../../api/domain/projects/scope";
 import { buildRecordContent } from "../../api/domain/records/content";
-import { renderReportInWorker, stopReportWorker } from "../../api/domain/report/render-in-worker";
+import {
+  renderReportInWorker,
+  stopReportWorker,
+  warmReportWorker,
+} from "../../api/domain/report/render-in-worker";
 import { renderReportPdf } from "../../api/domain/report/render-pdf";
 import { seedProject } from "../../scripts/bench/support/seed-project";
 import { buildTestApp } from "../support/app";
@@ -74,6 +78,17 @@ describe("the report drawn in a worker thread", () => {
     const inWorker = await renderReportInWorker(content, { kind: "draft" });
     const here = await renderReportPdf(buildReportModel(content, { kind: "draft" }));
     expect(inWorker.subarray(0, 5).toString("latin1")).toBe("%PDF-");
+    expect(inWorker.equals(here)).toBe(true);
+  });
+
+  it("when a fresh worker is warmed (twice, as two quick starts might) before its first report, then that report is drawn and has the same bytes as one drawn on the calling thread", async () => {
+    await stopReportWorker();
+    warmReportWorker();
+    warmReportWorker();
+    const project = await findProject(team.workspaceId, projectId);
+    const content = await buildRecordContent(context.sequelize, project);
+    const inWorker = await renderReportInWorker(content, { kind: "draft" });
+    const here = await renderReportPdf(buildReportModel(content, { kind: "draft" }));
     expect(inWorker.equals(here)).toBe(true);
   });
 });

@@ -15,6 +15,9 @@ declare module "fontkit" {
   export type Font = {
     numGlyphs: number;
     postscriptName: string;
+    fullName: string | null;
+    copyright: string | null;
+    namedVariations: Record<string, Record<string, number>>;
     unitsPerEm: number;
     variationAxes: Record<string, { min: number; default: number; max: number }>;
     directory: { tables: Record<string, { offset: number; length: number } | undefined> };

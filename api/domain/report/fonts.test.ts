@@ -72,6 +72,29 @@ describe("the report's faces", () => {
     }
   });
 
+  it("when Source Sans 3 is instanced at 400 and 600, then each file is named after its own named instance (read back with fontkit) and keeps the variable file's copyright and licence names (OpenType spec, name ids 0, 6 and 14)", () => {
+    const original = fontkit.create(
+      readFileSync(
+        require.resolve("@fontsource-variable/source-sans-3/files/source-sans-3-latin-wght-normal.woff2"),
+      ),
+    );
+    const byName = new Map(reportFaces().map((f) => [f.name, fontkit.create(f.data)]));
+    const regular = byName.get("text-regular-latin")!;
+    const bold = byName.get("text-bold-latin")!;
+    expect(regular.postscriptName).toBe("SourceSans3-Regular");
+    expect(bold.postscriptName).toBe("SourceSans3-SemiBold");
+    expect(regular.fullName).toBe("Source Sans 3 Regular");
+    expect(bold.fullName).toBe("Source Sans 3 SemiBold");
+    expect(regular.copyright).toBe(original.copyright);
+    expect(bold.copyright).toBe(original.copyright);
+    const licenceUrl = (font: fontkit.Font) =>
+      (font as unknown as { name: { records: { licenseURL?: Record<string, string> } } }).name.records
+        .licenseURL;
+    expect(licenceUrl(bold)).toEqual(licenceUrl(original));
+    // Every other script's file of a weight carries the same name as its latin file.
+    expect(byName.get("text-bold-greek")!.postscriptName).toBe("SourceSans3-SemiBold");
+  });
+
   it("when numbers are set, then they come from the number face and a run's width is its glyphs' advances", () => {
     const [run] = runsOf("120.5", "number", "bold");
     expect(run.font).toBe("number-bold-latin");

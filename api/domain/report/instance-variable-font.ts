@@ -1,4 +1,5 @@
 import * as fontkit from "fontkit";
+import { nameOf, readNameRecords, replaceNames } from "./name-table";
 import { writeSfnt, type SfntTable } from "./sfnt";
 
 /**
@@ -32,7 +33,54 @@ type Internals = {
 type GlyphInternals = { _getContours(): Contour[]; _getPhantomPoints(glyph: unknown): Point[] };
 
 /** The tables copied as they are; everything else is either rewritten here or left out. */
-const COPIED = ["cmap", "name", "OS/2", "post"] as const;
+const COPIED = ["cmap", "post"] as const;
+
+/** Name ids (OpenType "name"): family, subfamily, unique id, full name, PostScript name, typographic family and subfamily, variations PostScript prefix. */
+const NAME = {
+  family: 1,
+  subfamily: 2,
+  unique: 3,
+  full: 4,
+  postscript: 6,
+  typoFamily: 16,
+  typoSubfamily: 17,
+  variationsPrefix: 25,
+} as const;
+
+/**
+ * The name table of the instance: named after the face's named instance at `coords` (e.g.
+ * "SemiBold"), or after its weight when no named instance sits there. The variable file names
+ * only its default instance, so without this every weight would carry that one PostScript name.
+ */
+function instanceNames(font: fontkit.Font, coords: Readonly<Record<string, number>>): Buffer {
+  const table = rawTable(font, "name");
+  const records = readNameRecords(table);
+  const named = Object.entries(font.namedVariations).find(([, at]) =>
+    Object.entries(at).every(([axis, value]) => coords[axis.trim()] === value),
+  );
+  const style = named?.[0] ?? `W${Math.round(coords.wght ?? 0)}`;
+  // The family without the default instance's style ("Source Sans 3 ExtraLight" → "Source Sans 3").
+  const defaultStyle = nameOf(records, NAME.typoSubfamily) ?? "";
+  const family =
+    nameOf(records, NAME.typoFamily) ??
+    (nameOf(records, NAME.family) ?? "").replace(new RegExp(` ${defaultStyle}$`), "");
+  const prefix = nameOf(records, NAME.variationsPrefix) ?? font.postscriptName.split("-")[0];
+  const postscript = `${prefix}-${style.replace(/[^A-Za-z0-9]/g, "")}`;
+  const regular = style === "Regular";
+  return replaceNames(
+    table,
+    new Map<number, string>([
+      [NAME.family, regular ? family : `${family} ${style}`],
+      [NAME.subfamily, "Regular"],
+      [NAME.unique, postscript],
+      [NAME.full, `${family} ${style}`],
+      [NAME.postscript, postscript],
+      [NAME.typoFamily, family],
+      [NAME.typoSubfamily, style],
+    ]),
+    new Set([NAME.variationsPrefix]),
+  );
+}
 
 /** The bytes of one table of `font` as stored (WOFF2 tables that are not transformed). */
 function rawTable(font: fontkit.Font, tag: string): Buffer {
@@ -176,7 +224,8 @@ export function instanceVariableFont(file: Uint8Array, axes: Readonly<Record<str
     { tag: "hmtx", data: hmtx },
     { tag: "loca", data: loca },
     { tag: "glyf", data: Buffer.concat(glyphs) },
-    ...COPIED.filter((tag) => tag !== "OS/2").map((tag) => ({ tag, data: rawTable(font, tag) })),
+    ...COPIED.map((tag) => ({ tag, data: rawTable(font, tag) })),
+    { tag: "name", data: instanceNames(font, axes) },
     { tag: "OS/2", data: os2 },
   ];
   const sfnt = writeSfnt(0x00010000, tables);

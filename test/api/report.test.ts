@@ -175,8 +175,11 @@ describe("the report's text (extracted from the PDF with unpdf)", () => {
     const pdf = await renderReportPdf(buildReportModel(content, { kind: "draft" }));
     // pdfkit writes each embedded subset as /BaseFont /XXXXXX+PostScriptName (ISO 32000-1 §9.6.4, subset tags).
     const baseFonts = new Set(pdf.toString("latin1").match(/\/BaseFont \/[A-Z]{6}\+[\w-]+/g));
-    expect([...baseFonts].some((f) => f.endsWith("+SourceSans3-Roman"))).toBe(true);
-    expect([...baseFonts].some((f) => f.endsWith("+JetBrainsMono-Regular"))).toBe(true);
+    // Each weight under its own name: prose in regular and semibold (headings), numbers in regular.
+    const postscriptNames = new Set([...baseFonts].map((f) => f.split("+")[1]));
+    expect(postscriptNames).toContain("SourceSans3-Regular");
+    expect(postscriptNames).toContain("SourceSans3-SemiBold");
+    expect(postscriptNames).toContain("JetBrainsMono-Regular");
     expect(text).toContain("Shear components are tensor components (σxy = σyx)");
     expect(text).toContain("Maximum shear τmax");
     for (const ch of ["≥", "✓"]) {

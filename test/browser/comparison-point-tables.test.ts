@@ -74,6 +74,12 @@ describe("the comparison's point-table section in Chromium", () => {
     expect(text).toContain(`${vonMises.factor.toFixed(2)} / 1.5`);
     expect(text).toMatch(/2 · 0/); // ids 12 and 13 fail, none within the close band
     expect(text).toMatch(/fails/);
+    // No state at a location: the rows section says where the ratings are instead of an empty table and chart.
+    await expect
+      .poll(() => page.getByTestId("no-case-rows").innerText())
+      .toMatch(/no case × location row.*finite-element point tables/s);
+    expect(await page.getByRole("table", { name: "Comparison of load cases and locations" }).count()).toBe(0);
+    expect(await page.locator("#utilisation-title").count()).toBe(0);
     await page.getByRole("link", { name: "n4-points.csv" }).click();
     await page.waitForURL(new RegExp(`/load-cases/${caseId}/point-tables\\?table=${declared.id}$`));
     // The link opens that table's stored results, whose governing point is the same one.

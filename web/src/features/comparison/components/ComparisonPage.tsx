@@ -42,8 +42,13 @@ export function ComparisonPage({ review }: { review?: ReactNode } = {}) {
   // The server's evaluator picked it (core's one governing rule); nothing is re-ranked here.
   const top = c.governingOverall;
   const pointTables = c.pointTables ?? [];
-  // The sections after the rows, chart and per-location list are numbered on from 4 as they appear.
-  const sectionAfterRows = c.governingByLocation.length > 0 ? 4 : 3;
+  // A project checked only through point tables or classification lines has no case × location row:
+  // say so in place of an empty table and an empty chart, and point at the sections that do rate it.
+  const onlyBesideRows = c.paging.totalRows === 0 && (pointTables.length > 0 || c.linearizations.length > 0);
+  // Sections are numbered in the order they appear.
+  const utilisationIndex = 2;
+  const byLocationIndex = onlyBesideRows ? 2 : 3;
+  const sectionAfterRows = byLocationIndex + (c.governingByLocation.length > 0 ? 1 : 0);
 
   return (
     <div className="space-y-5">
@@ -144,13 +149,34 @@ export function ComparisonPage({ review }: { review?: ReactNode } = {}) {
         title="Cases × locations"
         subtitle={`principal stresses σ₁ ≥ σ₂ ≥ σ₃ in ${unit}; SF against the required factor`}
       >
-        <ComparisonTable
-          comparison={c}
-          unit={unit}
-          workspaceId={workspaceId}
-          paging={c.paging}
-          onPage={setPage}
-        />
+        {onlyBesideRows ? (
+          <p className="px-3 py-3 text-graphite-soft" data-testid="no-case-rows">
+            No load case has a stress state at a location of this project yet, so there is no case × location
+            row. This project is rated through its{" "}
+            {[
+              pointTables.length > 0 && "finite-element point tables",
+              c.linearizations.length > 0 && "stress classification lines",
+            ]
+              .filter(Boolean)
+              .join(" and ")}{" "}
+            below; states entered on the{" "}
+            <Link
+              to={`/workspaces/${workspaceId}/projects/${projectId}`}
+              className="text-ink underline underline-offset-2"
+            >
+              project page
+            </Link>{" "}
+            join this table.
+          </p>
+        ) : (
+          <ComparisonTable
+            comparison={c}
+            unit={unit}
+            workspaceId={workspaceId}
+            paging={c.paging}
+            onPage={setPage}
+          />
+        )}
         {c.skipped.length > 0 && (
           <p className="border-t border-rule px-3 py-2 text-[13px] text-graphite-soft">
             Not compared:{" "}
@@ -159,26 +185,28 @@ export function ComparisonPage({ review }: { review?: ReactNode } = {}) {
         )}
       </Panel>
 
-      <Panel
-        id="utilisation"
-        index="2"
-        title="Utilisation per case"
-        subtitle="u = required factor / safety factor; the allowable is u = 1"
-        tools={c.requirements.map((r) => (
-          <ToolButton
-            key={r.criterion}
-            pressed={criterion === r.criterion}
-            onClick={() => setChartCriterion(r.criterion)}
-          >
-            {CRITERION_LABELS[r.criterion]}
-          </ToolButton>
-        ))}
-      >
-        <UtilisationChart comparison={c} criterion={criterion} />
-      </Panel>
+      {!onlyBesideRows && (
+        <Panel
+          id="utilisation"
+          index={String(utilisationIndex)}
+          title="Utilisation per case"
+          subtitle="u = required factor / safety factor; the allowable is u = 1"
+          tools={c.requirements.map((r) => (
+            <ToolButton
+              key={r.criterion}
+              pressed={criterion === r.criterion}
+              onClick={() => setChartCriterion(r.criterion)}
+            >
+              {CRITERION_LABELS[r.criterion]}
+            </ToolButton>
+          ))}
+        >
+          <UtilisationChart comparison={c} criterion={criterion} />
+        </Panel>
+      )}
 
       {c.governingByLocation.length > 0 && (
-        <Panel id="by-location" index="3" title="Governing case per location">
+        <Panel id="by-location" index={String(byLocationIndex)} title="Governing case per location">
           <ul className="divide-y divide-rule text-[14px]">
             {c.governingByLocation.map((l) => (
               <li key={l.locationId} className="px-3 py-2">

@@ -71,11 +71,13 @@ export function ReportBlockView({ block }: { block: ReportBlock }) {
       );
     case "fields":
       return (
-        <dl className="my-2 grid grid-cols-[minmax(10rem,30%)_1fr] gap-x-4 gap-y-0.5 text-[14px]">
+        // On a phone each label stands above its value, so dates and words keep whole; only an
+        // unbroken run such as a hash or an id wraps inside itself (overflow-wrap: anywhere).
+        <dl className="my-2 grid grid-cols-1 gap-x-4 gap-y-0.5 text-[14px] sm:grid-cols-[minmax(10rem,30%)_1fr]">
           {block.rows.map(([label, value]) => (
             <div key={label} className="contents">
               <dt className="text-graphite-soft">{label}</dt>
-              <dd className="num break-all">{value}</dd>
+              <dd className="num mb-1.5 [overflow-wrap:anywhere] sm:mb-0">{value}</dd>
             </div>
           ))}
         </dl>

@@ -29,6 +29,11 @@ describe("page titles in Chromium", () => {
     await expect
       .poll(() => page.title(), { timeout: 10_000 })
       .toBe("Draft calculation report · Drum D-2 · Sigmacube");
+    // A page under a section of the project (the trail ends in "Comparison") still names the project.
+    await page.goto(`${project}/linearization`);
+    await expect
+      .poll(() => page.title(), { timeout: 10_000 })
+      .toBe("Stress linearization · Drum D-2 · Sigmacube");
     await page.goto(`${server.url}/bench`);
     await expect.poll(() => page.title(), { timeout: 10_000 }).toMatch(/ · Sigmacube$/);
     expect(await page.title()).toBe(`${(await page.locator("main h1").innerText()).trim()} · Sigmacube`);

@@ -1,10 +1,12 @@
 import { useEffect } from "react";
 
 const PRODUCT = "Sigmacube";
+/** A workspace's or a project's own page. */
+const OWNER_PATH = /^\/workspaces\/[^/]+(\/projects\/[^/]+)?\/?$/;
 
 /**
- * The tab's title for what `main` shows: its heading, then the last link of the trail above the
- * heading (the project or workspace it belongs to), then the product — "Comparison · CT-7 shell
+ * The tab's title for what `main` shows: its heading, then the project or workspace it belongs to
+ * (the deepest one linked in the trail above the heading), then the product — "Comparison · CT-7 shell
  * and heads · Sigmacube". An engineer with a bench, a comparison and a record open in three tabs
  * tells them apart, and the browser's history lists pages by name.
  * @param text the heading's text and the trail's last link, as found in the page
@@ -33,8 +35,11 @@ export function usePageTitle() {
       const above = heading?.previousElementSibling;
       const trailLine = above?.tagName === "P" ? above : above?.querySelector("p");
       const trailLinks = trailLine?.querySelectorAll("a");
-      const trail =
-        trailLinks && trailLinks.length > 0 ? trailLinks[trailLinks.length - 1].textContent : null;
+      const links = trailLinks ? [...trailLinks] : [];
+      // What the page belongs to is the deepest workspace or project in the trail, not a section of
+      // it ("Stress linearization · CT-7 nozzle N2", not "… · Comparison").
+      const owner = links.filter((a) => OWNER_PATH.test(a.pathname)).at(-1) ?? links.at(-1);
+      const trail = owner?.textContent ?? null;
       const next = pageTitle(heading?.textContent ?? null, trail);
       if (document.title !== next) document.title = next;
     };

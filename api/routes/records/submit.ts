@@ -32,12 +32,15 @@ export function submitRecordHandler(
     const user = currentUser(res);
     const { workspace } = currentMembership(res);
     const { projectId } = res.locals.input.params;
-    const { reason } = res.locals.input.body;
+    const { reason, scope } = res.locals.input.body;
     // Refuse early, before the comparison is computed for nothing.
     const project = await findProject(workspace.id, projectId);
     assertNothingPending((await listRecordHeads(project.id))[0] ?? null);
 
-    const frozen = await freezeProjectContent(context.sequelize, workspace.id, projectId);
+    const frozen = await freezeProjectContent(context.sequelize, workspace.id, projectId, {
+      scope,
+      unknownIds: "refuse",
+    });
     const record = await context.sequelize.transaction(async (transaction) => {
       const locked = await findProject(workspace.id, projectId, { transaction, lock: true });
       const latest = (await listRecordHeads(locked.id, transaction))[0] ?? null;

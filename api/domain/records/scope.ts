@@ -28,8 +28,15 @@ export function resolveRecordScope(
   unknownIds: UnknownScopeIds,
 ): RecordScope | undefined {
   if (!choice) return undefined;
-  const loadCases = chosen(live.loadCases, choice.loadCaseIds, "loadCaseIds", "load case", unknownIds);
-  const locations = chosen(live.locations, choice.locationIds, "locationIds", "location", unknownIds);
+  if (unknownIds === "refuse") {
+    const problems = [
+      ...unknown(live.loadCases, choice.loadCaseIds, "loadCaseIds", "load case"),
+      ...unknown(live.locations, choice.locationIds, "locationIds", "location"),
+    ];
+    if (problems.length > 0) throw errors.invalidInput(problems);
+  }
+  const loadCases = chosen(live.loadCases, choice.loadCaseIds);
+  const locations = chosen(live.locations, choice.locationIds);
   if (loadCases.length === live.loadCases.length && locations.length === live.locations.length) {
     return undefined;
   }
@@ -41,27 +48,28 @@ export function resolveRecordScope(
   };
 }
 
-function chosen(
+/** A problem for each chosen id that is not a live one, named by its place in the list. */
+function unknown(
   live: readonly Named[],
   ids: readonly string[],
   field: "loadCaseIds" | "locationIds",
   what: string,
-  unknownIds: UnknownScopeIds,
-): Named[] {
+): { path: string; message: string }[] {
   const liveIds = new Set(live.map((x) => x.id));
-  if (unknownIds === "refuse") {
-    const problems = ids.flatMap((id, i) =>
-      liveIds.has(id)
-        ? []
-        : [
-            {
-              path: `scope.${field}.${i}`,
-              message: `is not a ${what} of this project (it may be in the trash)`,
-            },
-          ],
-    );
-    if (problems.length > 0) throw errors.invalidInput(problems);
-  }
+  return ids.flatMap((id, i) =>
+    liveIds.has(id)
+      ? []
+      : [
+          {
+            path: `scope.${field}.${i}`,
+            message: `is not a ${what} of this project (it may be in the trash)`,
+          },
+        ],
+  );
+}
+
+/** The live entries that were chosen, in the project's order, each once. */
+function chosen(live: readonly Named[], ids: readonly string[]): Named[] {
   const wanted = new Set(ids);
   return live.filter((x) => wanted.has(x.id)).map(({ id, name }) => ({ id, name }));
 }

@@ -267,6 +267,9 @@ describe("a record of chosen load cases and locations", () => {
 
     const list = recordListSchema.parse((await team.viewer.agent.get(`${base}/records`).expect(200)).body);
     expect(list.records[0].scope).toEqual(expectedScope);
+    const audit = (await team.viewer.agent.get(wsPath(team, `/audit?entityId=${summary.id}`)).expect(200))
+      .body;
+    expect(audit.events[0].summary).toContain("covering 2 of 3 load cases and 2 of 3 locations");
   });
 
   it("when the record's PDF is read, then it says it covers 2 of 3 load cases and 2 of 3 locations by name", async () => {

@@ -1,4 +1,4 @@
-import type { SubmitRecordBody } from "../../../core/contract/records";
+import type { RecordScope, SubmitRecordBody } from "../../../core/contract/records";
 import {
   insertRecord,
   insertRecordEvent,
@@ -95,9 +95,15 @@ export function submitRecordHandler(
         entityType: "record",
         entityId: created.id,
         action: "submit",
-        summary: `submitted "${locked.name}" for check as record ${created.number}, revision ${created.revision}`,
+        summary: `submitted "${locked.name}" for check as record ${created.number}, revision ${created.revision}${frozen.content.scope ? `, covering ${coverage(frozen.content.scope)}` : ""}`,
         changes: {
-          after: { number: created.number, revision: created.revision, reason, hash: created.hash },
+          after: {
+            number: created.number,
+            revision: created.revision,
+            reason,
+            hash: created.hash,
+            scope: coverage(frozen.content.scope),
+          },
         },
       });
       return created;
@@ -105,4 +111,10 @@ export function submitRecordHandler(
     await notifySubmitted(context, project, record);
     res.status(201).json(await recordSummary(record));
   };
+}
+
+/** What a record covers in words, as the audit trail writes it: "whole project" or "2 of 3 load cases and 1 of 4 locations". */
+function coverage(scope: RecordScope | undefined): string {
+  if (!scope) return "whole project";
+  return `${scope.loadCases.length} of ${scope.projectLoadCases} load cases and ${scope.locations.length} of ${scope.projectLocations} locations`;
 }

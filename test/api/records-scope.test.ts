@@ -1,3 +1,4 @@
+import { QueryTypes } from "sequelize";
 import { extractText } from "unpdf";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import {
@@ -11,6 +12,7 @@ import {
 import { findProject } from "../../api/domain/projects/scope";
 import { buildRecordContent, recordHash } from "../../api/domain/records/content";
 import { calculationHash } from "../../api/domain/records/same-calculation";
+import * as scopeColumn from "../../db/migrations/20261203-2100-add-scope-to-calculation-records";
 import { insertRecord, setRecordStatus } from "../../db/repositories/records";
 import { buildTestApp } from "../support/app";
 import { linearWall } from "../support/linear-wall";
@@ -427,5 +429,62 @@ describe("the OpenAPI document", () => {
     expect(schema.properties.scope.default).toBeNull();
     expect(JSON.stringify(schema.properties.scope)).toContain("loadCaseIds");
     expect(JSON.stringify(schema.properties.scope)).toContain("locationIds");
+  });
+});
+
+describe("the migration that adds the scope column", () => {
+  it("when it is undone and applied again, then the column goes and comes back filled from each record's content, and cannot be written itself", async () => {
+    const sequelize = context.sequelize;
+    const rollback = new Error("roll back the schema test");
+    const seen: unknown[] = [];
+    const chosen = { loadCases: [], locations: [], projectLoadCases: 2, projectLocations: 1 };
+    await expect(
+      sequelize.transaction(async (transaction) => {
+        const migrationContext = { queryInterface: sequelize.getQueryInterface(), sequelize, transaction };
+        const scopeOf = async (id: string) =>
+          (
+            await sequelize.query<{ scope: unknown }>(`select scope from calculation_records where id = $1`, {
+              bind: [id],
+              transaction,
+              type: QueryTypes.SELECT,
+            })
+          )[0].scope;
+        const [record] = await sequelize.query<{ id: string }>(
+          `insert into calculation_records (project_id, workspace_id, number, revision, status, reason, content, hash,
+             engine_version, required_approvals, submitted_by_name, submitted_at)
+           values ($1, $2, 99, 'A', 'returned', 'r', $3::jsonb, repeat('a', 64), 'x', 1, 'Someone', now()) returning id`,
+          {
+            bind: [projectId, team.workspaceId, JSON.stringify({ scope: chosen })],
+            transaction,
+            type: QueryTypes.SELECT,
+          },
+        );
+        seen.push(await scopeOf(record.id));
+        await scopeColumn.down(migrationContext);
+        seen.push(
+          (
+            await sequelize.query(
+              `select 1 from information_schema.columns where table_name = 'calculation_records' and column_name = 'scope'`,
+              { transaction, type: QueryTypes.SELECT },
+            )
+          ).length,
+        );
+        await scopeColumn.up(migrationContext);
+        seen.push(await scopeOf(record.id));
+        await sequelize.query(`savepoint before_update`, { transaction });
+        try {
+          await sequelize.query(`update calculation_records set scope = null where id = $1`, {
+            bind: [record.id],
+            transaction,
+          });
+          seen.push("updated");
+        } catch (error) {
+          seen.push((error as Error).message);
+        }
+        throw rollback;
+      }),
+    ).rejects.toBe(rollback);
+    expect(seen.slice(0, 3)).toEqual([chosen, 0, chosen]);
+    expect(seen[3]).toMatch(/can only be updated to DEFAULT/);
   });
 });

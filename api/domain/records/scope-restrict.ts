@@ -10,7 +10,7 @@ import type { ExportKeys } from "../projects/export";
  * those of the scope: a case outside the scope that governs the whole project must not govern here.
  */
 
-/** One thing a rule keeps or drops: in scope when its case and (where it has one) its location are. */
+/** The chosen load case and location ids. */
 type ScopeSets = { cases: ReadonlySet<string>; locations: ReadonlySet<string> };
 
 function idsOf(scope: RecordScope): ScopeSets {

@@ -159,6 +159,16 @@ function content(unitSystem: "SI" | "US" = "SI"): RecordContent {
 }
 
 const draft: ReportMeta = { kind: "draft" };
+const recordMeta: ReportMeta = {
+  kind: "record",
+  recordId: "c17d9cfd-8fa0-4cef-9e7d-60819203b4c5",
+  number: "CR-0012",
+  revision: "A",
+  status: "submitted for check",
+  hash: "0f".repeat(32),
+  revisions: [],
+  signatures: { originator: { name: "Ada", at: "2026-12-01T10:00:00.000Z" }, checkers: [], approver: null },
+};
 const texts = (blocks: ReportBlock[]): string =>
   JSON.stringify(blocks.map((b) => (b.kind === "mohr" ? b.caption : b)));
 
@@ -408,5 +418,34 @@ describe("buildReportModel", () => {
     const ids = buildReportModel(content(), draft).sections.map((s) => s.id);
     expect(ids).not.toContain("linearizations");
     expect(ids).not.toContain("point-tables");
+  });
+
+  it("when the record covers the whole project, then its cover and scope section say so with the project's counts", () => {
+    const model = buildReportModel(content(), recordMeta);
+    const sentence = "This record covers the whole project: 1 load case and 2 locations.";
+    expect(texts(model.sections.find((s) => s.id === "cover")!.blocks)).toContain(sentence);
+    expect(texts(model.sections.find((s) => s.id === "scope")!.blocks)).toContain(sentence);
+    expect(JSON.stringify(model)).not.toContain("results outside it");
+    const draftCover = texts(buildReportModel(content(), draft).sections[0].blocks);
+    expect(draftCover).toContain("This draft covers the whole project: 1 load case and 2 locations.");
+  });
+
+  it("when the record covers chosen load cases and locations, then its cover and scope section say how many of how many, by name, and that results outside it are not part of it", () => {
+    const whole = content();
+    const subset = recordContentSchema.parse({
+      ...whole,
+      scope: {
+        loadCases: [{ id: ID.operating, name: "Operating" }],
+        locations: [{ id: ID.neck, name: "Nozzle neck" }],
+        projectLoadCases: 3,
+        projectLocations: 2,
+      },
+    });
+    const model = buildReportModel(subset, recordMeta);
+    const sentence =
+      "This record covers 1 of 3 load cases (Operating) and 1 of 2 locations (Nozzle neck); results outside it are not part of this record.";
+    expect(texts(model.sections.find((s) => s.id === "cover")!.blocks)).toContain(sentence);
+    expect(texts(model.sections.find((s) => s.id === "scope")!.blocks)).toContain(sentence);
+    expect(JSON.stringify(model)).not.toContain("covers the whole project");
   });
 });

@@ -6,6 +6,7 @@ import type { RecordContent } from "../contract/records";
 import type { StressUnit } from "../units/stress";
 import { linearizationSection, pointTableSection } from "./beside-sections";
 import type { ReportBlock, ReportSection } from "./blocks";
+import { coverageSentence } from "./coverage";
 import { dateText, percentText, reportUnit } from "./format";
 import { inputsSection } from "./inputs-section";
 import { locationSections, VERDICT_TEXT } from "./location-sections";
@@ -56,6 +57,7 @@ function coverSection(content: RecordContent, meta: ReportMeta): ReportSection {
           tone: "caution",
           text: `${DRAFT_WATERMARK}: taken from the project as it is now, not a frozen record; nobody has checked or approved it.`,
         },
+        { kind: "paragraph", text: coverageSentence(content, "draft") },
         { kind: "fields", rows: [...common, ["Record", "none (draft)"], ["Status", "draft — not checked"]] },
       ],
     };
@@ -78,6 +80,7 @@ function coverSection(content: RecordContent, meta: ReportMeta): ReportSection {
           ["Content hash (SHA-256)", meta.hash],
         ],
       },
+      { kind: "paragraph", text: coverageSentence(content, "record") },
       { kind: "heading", text: "Revisions" },
       {
         kind: "table",
@@ -117,7 +120,7 @@ function coverSection(content: RecordContent, meta: ReportMeta): ReportSection {
   };
 }
 
-function scopeSection(content: RecordContent): ReportSection {
+function scopeSection(content: RecordContent, meta: ReportMeta): ReportSection {
   const inputs = content.inputs;
   const r = content.results;
   const loadCaseRows = r.rows.filter((row) => row.kind === "load-case").length;
@@ -129,6 +132,7 @@ function scopeSection(content: RecordContent): ReportSection {
       ...(inputs.project.description
         ? [{ kind: "paragraph", text: inputs.project.description } as ReportBlock]
         : []),
+      { kind: "paragraph", text: coverageSentence(content, meta.kind === "draft" ? "draft" : "record") },
       {
         kind: "paragraph",
         text: `This report checks the stress states of ${inputs.loadCases.length} load case(s) and ${inputs.combinations.length} combination(s) at ${inputs.locations.length} location(s) against the criteria and safety factors the project requires: ${r.rows.length} checked state(s), ${loadCaseRows} from load cases and ${r.rows.length - loadCaseRows} from combinations.`,
@@ -289,7 +293,7 @@ export function buildReportModel(content: RecordContent, meta: ReportMeta): Repo
     caution: RESULTS_CAUTION,
     sections: [
       coverSection(content, meta),
-      scopeSection(content),
+      scopeSection(content, meta),
       inputsSection(content, unit),
       methodSection(content),
       ...locationSections(content, unit),

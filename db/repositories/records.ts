@@ -24,6 +24,7 @@ export type NewRecord = Omit<
   | "returnedAt"
   | "returnComment"
   | "approvedAt"
+  | "scope"
   | "createdAt"
   | "updatedAt"
 >;

@@ -4,6 +4,7 @@ import type { ProjectRow } from "../../../db/repositories/projects";
 import { findRecord } from "../../../db/repositories/records";
 import { inputsStampSql } from "../comparison/stamp";
 import { freezeProjectContent } from "./freeze";
+import { comparableContents } from "./comparable-content";
 import { sameCalculation } from "./same-calculation";
 
 /**
@@ -15,6 +16,10 @@ import { sameCalculation } from "./same-calculation";
  * point tables, the workspace's materials), so while it stands, the answer stands, and a read costs
  * one small statement. The stamp is read before the content is taken: a change that lands meanwhile
  * raises it past the kept one, so the next read computes again rather than trusting a stale answer.
+ *
+ * The project is taken as the approved record took it: cut to the approved record's scope (an edit
+ * outside that scope changes nothing the record holds), and without the optional fields the
+ * approved content lacks (comparable-content.ts).
  */
 
 type Kept = { recordId: string; stamp: string; differs: boolean };
@@ -43,9 +48,18 @@ export async function differsFromApproved(
   const known = kept.get(project.id);
   if (known && known.recordId === recordId && known.stamp === stamp) return known.differs;
   computations++;
-  const approved = await findRecord(project.id, recordId);
-  const now = await freezeProjectContent(sequelize, project.workspaceId, project.id);
-  const differs = !sameCalculation(approved!.content as RecordContent, now.content);
+  const approved = (await findRecord(project.id, recordId))!.content as RecordContent;
+  const now = await freezeProjectContent(sequelize, project.workspaceId, project.id, {
+    scope: approved.scope
+      ? {
+          loadCaseIds: approved.scope.loadCases.map((c) => c.id),
+          locationIds: approved.scope.locations.map((l) => l.id),
+        }
+      : null,
+    // A case or location of the approved scope deleted since is simply missing now (and so differs).
+    unknownIds: "leave-out",
+  });
+  const differs = !sameCalculation(...comparableContents(approved, now.content));
   kept.delete(project.id);
   kept.set(project.id, { recordId, stamp, differs });
   if (kept.size > MAX_KEPT) kept.delete(kept.keys().next().value!);

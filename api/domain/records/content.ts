@@ -6,6 +6,7 @@ import {
   RECORD_CONTENT_FORMAT,
   RECORD_CONTENT_VERSION,
   type RecordContent,
+  type RecordScopeInput,
 } from "../../../core/contract/records";
 import { listReadyPointTablesOfProject, type PointTableRow } from "../../../db/repositories/point-tables";
 import type { ProjectRow } from "../../../db/repositories/projects";
@@ -18,6 +19,8 @@ import {
 import { comparisonPageWithSections } from "../comparison/sections";
 import { exportProjectWithKeys } from "../projects/export";
 import { linearizationEndsOf } from "./linearization-ends";
+import { resolveRecordScope, type UnknownScopeIds } from "./scope";
+import { restrictComparisonInput, restrictExport } from "./scope-restrict";
 
 const invert = (m: Map<string, string>): Record<string, string> =>
   Object.fromEntries([...m].map(([id, key]) => [key, id]));
@@ -31,21 +34,42 @@ const invert = (m: Map<string, string>): Record<string, string> =>
  * The inputs and the comparison are read by separate statements. Pass a REPEATABLE READ
  * `transaction` (see freeze.ts) and every statement reads the same snapshot, so no write can
  * land between the inputs and the comparison; without one, the reads are independent.
+ *
+ * With a `scope` (scope.ts) that is not the whole project, the inputs and the comparison's input
+ * are cut to the chosen load cases and locations before the comparison is built (so its governing
+ * cases are the scope's) and the content names the scope; without one, or with one that chooses
+ * everything, the content is exactly what it was before scopes existed (same fields, same hash).
  */
 export async function buildRecordContent(
   sequelize: Sequelize,
   project: ProjectRow,
   transaction?: Transaction,
+  scopeChoice: { scope: RecordScopeInput | null; unknownIds: UnknownScopeIds } = {
+    scope: null,
+    unknownIds: "refuse",
+  },
 ): Promise<RecordContent> {
   // One after another: on a transaction every statement goes through one connection, and pg
   // deprecates issuing them concurrently.
-  const { file, keys } = await exportProjectWithKeys(project, transaction);
+  const whole = await exportProjectWithKeys(project, transaction);
   const source = transaction
     ? await comparisonSourceIn(sequelize, project, transaction)
     : await loadComparisonSource(sequelize, project.workspaceId, project.id);
   const tables = await listReadyPointTablesOfProject(project.id, transaction);
   if (source === null) throw new Error(`project ${project.id} vanished while its record was taken`);
-  const input = comparisonInputFrom(project.id, source.source);
+  const caseIdOf = invert(whole.keys.loadCases);
+  const locationIdOf = invert(whole.keys.locations);
+  const scope = resolveRecordScope(
+    scopeChoice.scope,
+    {
+      loadCases: whole.file.loadCases.map((c) => ({ id: caseIdOf[c.key], name: c.name })),
+      locations: whole.file.locations.map((l) => ({ id: locationIdOf[l.key], name: l.name })),
+    },
+    scopeChoice.unknownIds,
+  );
+  const { file, keys } = scope ? restrictExport(whole.file, whole.keys, scope) : whole;
+  const wholeInput = comparisonInputFrom(project.id, source.source);
+  const input = scope ? restrictComparisonInput(wholeInput, scope) : wholeInput;
   const { paging: _paging, ...results } = await comparisonPageWithSections(input, {
     page: 1,
     limit: Number.MAX_SAFE_INTEGER,
@@ -77,6 +101,8 @@ export async function buildRecordContent(
     // Only with tables or lines, so a record of a project without any reads (and hashes) as before.
     ...pointTableFilesOf(results, tables),
     ...(await linearizationEndsOf(results, transaction)),
+    // Only for a subset, so a whole-project record reads (and hashes) as before.
+    ...(scope ? { scope } : {}),
   };
 }
 

@@ -1,5 +1,6 @@
 import type { ComparisonRowView } from "../../../core/contract/comparison";
 import type { RecordChange, RecordContent, RecordDiff } from "../../../core/contract/records";
+import { scopeChanges } from "./scope-diff";
 
 /**
  * What differs between two frozen records — what a checker reads first on a resubmission: the
@@ -149,9 +150,12 @@ const componentsText = (componentsPa: Record<string, number>) =>
     .map(([k, v]) => `${COMPONENT_SYMBOLS[k] ?? k} ${formatPa(v)}`)
     .join(", ");
 
-/** The inputs added, changed and removed from record `from` to record `to`. */
+/**
+ * The inputs added, changed and removed from record `from` to record `to`; a change of what the
+ * records cover (their scope) comes first, as it explains inputs that appear or go with it.
+ */
 export function diffInputs(from: RecordContent, to: RecordContent): Changes {
-  const out: Changes = { added: [], changed: [], removed: [] };
+  const out: Changes = { added: [], changed: [...scopeChanges(from, to)], removed: [] };
   const sides = { from: namesOf(from.inputs), to: namesOf(to.inputs) };
 
   out.changed.push(...fieldChanges("project", "Project", from.inputs.project, to.inputs.project, sides, []));

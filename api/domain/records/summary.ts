@@ -1,5 +1,5 @@
 import type { Transaction } from "sequelize";
-import type { RecordSummary } from "../../../core/contract/records";
+import type { RecordScope, RecordSummary } from "../../../core/contract/records";
 import { approvalsOf, type RecordApprovalRow, type RecordHeadRow } from "../../../db/repositories/records";
 
 /**
@@ -32,6 +32,8 @@ export function presentRecordSummary(row: RecordHeadRow, approvals: RecordApprov
           }
         : null,
     approvedAt: row.approvedAt ? row.approvedAt.toISOString() : null,
+    // The content's scope (the table generates the column from it); absent for the whole project.
+    scope: (row.scope as RecordScope | null | undefined) ?? null,
   };
 }
 

@@ -1,4 +1,4 @@
-import type { SubmitRecordBody } from "../../../core/contract/records";
+import type { RecordScope, SubmitRecordBody } from "../../../core/contract/records";
 import {
   insertRecord,
   insertRecordEvent,
@@ -32,12 +32,15 @@ export function submitRecordHandler(
     const user = currentUser(res);
     const { workspace } = currentMembership(res);
     const { projectId } = res.locals.input.params;
-    const { reason } = res.locals.input.body;
+    const { reason, scope } = res.locals.input.body;
     // Refuse early, before the comparison is computed for nothing.
     const project = await findProject(workspace.id, projectId);
     assertNothingPending((await listRecordHeads(project.id))[0] ?? null);
 
-    const frozen = await freezeProjectContent(context.sequelize, workspace.id, projectId);
+    const frozen = await freezeProjectContent(context.sequelize, workspace.id, projectId, {
+      scope,
+      unknownIds: "refuse",
+    });
     const record = await context.sequelize.transaction(async (transaction) => {
       const locked = await findProject(workspace.id, projectId, { transaction, lock: true });
       const latest = (await listRecordHeads(locked.id, transaction))[0] ?? null;
@@ -92,9 +95,15 @@ export function submitRecordHandler(
         entityType: "record",
         entityId: created.id,
         action: "submit",
-        summary: `submitted "${locked.name}" for check as record ${created.number}, revision ${created.revision}`,
+        summary: `submitted "${locked.name}" for check as record ${created.number}, revision ${created.revision}${frozen.content.scope ? `, covering ${coverage(frozen.content.scope)}` : ""}`,
         changes: {
-          after: { number: created.number, revision: created.revision, reason, hash: created.hash },
+          after: {
+            number: created.number,
+            revision: created.revision,
+            reason,
+            hash: created.hash,
+            scope: coverage(frozen.content.scope),
+          },
         },
       });
       return created;
@@ -102,4 +111,10 @@ export function submitRecordHandler(
     await notifySubmitted(context, project, record);
     res.status(201).json(await recordSummary(record));
   };
+}
+
+/** What a record covers in words, as the audit trail writes it: "whole project" or "2 of 3 load cases and 1 of 4 locations". */
+function coverage(scope: RecordScope | undefined): string {
+  if (!scope) return "whole project";
+  return `${scope.loadCases.length} of ${scope.projectLoadCases} load cases and ${scope.locations.length} of ${scope.projectLocations} locations`;
 }

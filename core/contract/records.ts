@@ -20,6 +20,18 @@ export const RECORD_CONTENT_VERSION = 1;
 
 const keyToId = z.record(z.string(), z.uuid());
 
+/**
+ * What a record covers when it does not cover the whole project: the chosen load cases and
+ * locations (in the project's order) and how many the project had when it was frozen.
+ */
+export const recordScopeSchema = z.object({
+  loadCases: z.array(z.object({ id: z.uuid(), name: z.string() })),
+  locations: z.array(z.object({ id: z.uuid(), name: z.string() })),
+  projectLoadCases: z.int(),
+  projectLocations: z.int(),
+});
+export type RecordScope = z.infer<typeof recordScopeSchema>;
+
 export const recordContentSchema = z.object({
   format: z.literal(RECORD_CONTENT_FORMAT),
   contentVersion: z.literal(RECORD_CONTENT_VERSION),
@@ -71,6 +83,8 @@ export const recordContentSchema = z.object({
       }),
     )
     .optional(),
+  /** The chosen load cases and locations; absent for a whole-project record (so its hash stays as it was). */
+  scope: recordScopeSchema.optional(),
 });
 export type RecordContent = z.infer<typeof recordContentSchema>;
 
@@ -114,6 +128,8 @@ export const recordSummarySchema = z.object({
   returned: z.object({ by: recordPersonSchema, at: z.iso.datetime(), comment: z.string() }).nullable(),
   /** When the last required approval was given, else null. */
   approvedAt: z.iso.datetime().nullable(),
+  /** What the record covers; null = the whole project. */
+  scope: recordScopeSchema.nullable(),
 });
 export type RecordSummary = z.infer<typeof recordSummarySchema>;
 
@@ -164,7 +180,7 @@ export type ProjectReview = z.infer<typeof projectReviewSchema>;
 
 /** One input that differs between two records; values are display strings with units (MPa for stresses). */
 export const recordChangeSchema = z.object({
-  kind: z.enum(["state", "location", "load-case", "combination", "material", "project"]),
+  kind: z.enum(["state", "location", "load-case", "combination", "material", "project", "scope"]),
   /** What it is, e.g. "Design at shell". */
   label: z.string(),
   field: z.string().optional(),
@@ -201,12 +217,25 @@ const requiredApprovalsInput = z.union([z.literal(1), z.literal(2)], { error: "m
 export const updateReviewBodySchema = z.object({ requiredApprovals: requiredApprovalsInput });
 export type UpdateReviewBody = z.infer<typeof updateReviewBodySchema>;
 
+/** A chosen set of the project's load cases and locations to submit (at least one of each). */
+export const recordScopeInputSchema = z.object({
+  loadCaseIds: z
+    .array(z.uuid({ error: "must be a load case id (UUID)" }))
+    .min(1, "Choose at least one load case."),
+  locationIds: z
+    .array(z.uuid({ error: "must be a location id (UUID)" }))
+    .min(1, "Choose at least one location."),
+});
+export type RecordScopeInput = z.infer<typeof recordScopeInputSchema>;
+
 export const submitRecordBodySchema = z.object({
   reason: z
     .string({ error: "Say what changed and why (1 to 2000 characters)." })
     .trim()
     .min(1, "Say what changed and why (1 to 2000 characters).")
     .max(2000, "At most 2000 characters."),
+  /** null or left out: the whole project. */
+  scope: recordScopeInputSchema.nullable().default(null),
 });
 export type SubmitRecordBody = z.infer<typeof submitRecordBodySchema>;
 

@@ -50,24 +50,28 @@ export function SubmitRecordForm({
   const [reasonError, setReasonError] = useState<string | null>(null);
   const [scopeErrors, setScopeErrors] = useState<ScopeErrors>({});
   const [sent, setSent] = useState<RecordScopeInput | null>(null);
+  // The API's scope errors speak of the lists as they were sent: once a box changes, they are old.
+  const [scopeChangedSinceSend, setScopeChangedSinceSend] = useState(false);
 
   const options = {
     loadCases: loadCaseOptions(loadCases.data ?? []),
     locations: locationOptions(locations.data ?? []),
   };
   const serverFields = fieldErrorsOf(error);
-  const serverScope = scopeServerErrors(serverFields, sent, options);
+  const serverScope = scopeChangedSinceSend ? {} : scopeServerErrors(serverFields, sent, options);
   const shownReason = reasonError ?? (serverFields.reason ? `${REASON_LABEL}: ${serverFields.reason}` : null);
   const shownScope: ScopeErrors = {
     loadCases: scopeErrors.loadCases ?? serverScope.loadCases,
     locations: scopeErrors.locations ?? serverScope.locations,
   };
   const anyFieldNamed =
-    Boolean(serverFields.reason) || Boolean(serverScope.loadCases) || Boolean(serverScope.locations);
+    Boolean(serverFields.reason) ||
+    Object.keys(serverFields).some((field) => field === "scope" || field.startsWith("scope."));
 
   const change = (next: ScopeChoice) => {
     setChoice(next);
     setScopeErrors({});
+    setScopeChangedSinceSend(true);
   };
   const submit = (e: FormEvent) => {
     e.preventDefault();
@@ -77,6 +81,7 @@ export function SubmitRecordForm({
     setScopeErrors(readS.ok ? {} : readS.errors);
     if (!readR.ok || !readS.ok) return;
     setSent(readS.value);
+    setScopeChangedSinceSend(false);
     onSend({ reason: readR.value, scope: readS.value }).catch(() => undefined);
   };
 

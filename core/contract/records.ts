@@ -21,8 +21,8 @@ export const RECORD_CONTENT_VERSION = 1;
 const keyToId = z.record(z.string(), z.uuid());
 
 /**
- * What a record covers when it does not cover the whole project: the chosen load cases and
- * locations (in the project's order) and how many the project had when it was frozen.
+ * What a record covers when it is not the whole project: the chosen load cases and locations (in
+ * the project's order) and how many the project had when frozen, so the record can say "covers N of M".
  */
 export const recordScopeSchema = z.object({
   loadCases: z.array(z.object({ id: z.uuid(), name: z.string() })),
@@ -83,7 +83,7 @@ export const recordContentSchema = z.object({
       }),
     )
     .optional(),
-  /** The chosen load cases and locations; absent for a whole-project record (so its hash stays as it was). */
+  /** The chosen subset; ABSENT for a whole-project record (so whole-project records keep their hash). */
   scope: recordScopeSchema.optional(),
 });
 export type RecordContent = z.infer<typeof recordContentSchema>;
@@ -217,7 +217,7 @@ const requiredApprovalsInput = z.union([z.literal(1), z.literal(2)], { error: "m
 export const updateReviewBodySchema = z.object({ requiredApprovals: requiredApprovalsInput });
 export type UpdateReviewBody = z.infer<typeof updateReviewBodySchema>;
 
-/** A chosen set of the project's load cases and locations to submit (at least one of each). */
+/** The load cases and locations a record is to cover (the submit form's choice). */
 export const recordScopeInputSchema = z.object({
   loadCaseIds: z
     .array(z.uuid({ error: "must be a load case id (UUID)" }))
@@ -234,7 +234,7 @@ export const submitRecordBodySchema = z.object({
     .trim()
     .min(1, "Say what changed and why (1 to 2000 characters).")
     .max(2000, "At most 2000 characters."),
-  /** null or left out: the whole project. */
+  /** null or omitted = the whole project. */
   scope: recordScopeInputSchema.nullable().default(null),
 });
 export type SubmitRecordBody = z.infer<typeof submitRecordBodySchema>;

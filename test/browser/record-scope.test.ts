@@ -230,6 +230,66 @@ describe.skipIf(!serverHasRecords)("a record of chosen load cases and locations"
       await page.evaluate(() => document.documentElement.scrollWidth - document.documentElement.clientWidth),
     ).toBe(0);
     await shot(page, "record-phone");
+
+    // The print page (the report's HTML form) says the same, from the report's own model.
+    await page.getByRole("link", { name: "Print page" }).click();
+    await page
+      .getByText(
+        "This record covers 2 of 4 load cases (Operating, Hydrostatic test) and 2 of 3 locations " +
+          "(mid-shell, nozzle N1); results outside it are not part of this record.",
+      )
+      .first()
+      .waitFor();
+    await page.close();
+  });
+
+  // Continues with record 1 of the walk above (tests in a file run in order).
+  it("when the checker returns that record and the editor resubmits for the whole project, then the new record says so and its diff lists the change of scope first", async () => {
+    const origin = world.server.url;
+    const reviewer = team.contexts.reviewer;
+    const listed = await reviewer.request.get(`${origin}/api${team.projectPath}/records`);
+    const first = ((await listed.json()) as { records: { id: string; number: number }[] }).records.find(
+      (r) => r.number === 1,
+    )!;
+    const returned = await reviewer.request.post(
+      `${origin}/api${team.projectPath}/records/${first.id}/return`,
+      { data: { comment: "Cover the whole shell, wind included." }, headers: { Origin: origin } },
+    );
+    expect(returned.status()).toBeLessThan(300);
+
+    const page = await team.contexts.editor.newPage();
+    page.setDefaultTimeout(10_000);
+    await page.goto(`${origin}${team.projectPath}`, { waitUntil: "networkidle" });
+    const status = page.getByRole("region", { name: "Review status" });
+    await status.getByRole("button", { name: "Submit for check" }).click();
+    await status.getByLabel("What changed and why").fill("Whole shell, wind included, as the checker asked.");
+    // Left on the default: the whole project.
+    await status.getByRole("button", { name: "Submit for check" }).click();
+    await status.getByText("Record 2 (revision A) is submitted for check.").waitFor();
+    expect(await status.getByText(/It covers/).count()).toBe(0);
+    await status.getByRole("link", { name: "Open record 2" }).click();
+    await page.waitForURL(/\/records\/[0-9a-f-]+$/);
+
+    await page.getByRole("heading", { name: /Record 2 · revision A/, level: 1 }).waitFor();
+    expect(await page.getByTestId("record-scope").textContent()).toBe(
+      "This record covers the whole project: every load case at every location.",
+    );
+    const diff = page.getByTestId("record-diff");
+    await diff.getByText("Record 1 (revision A) → record 2 (revision A)").waitFor();
+    expect(await diff.locator("h3").first().textContent()).toBe("What the records cover");
+    expect(
+      await diff.getByRole("region", { name: "What the records cover" }).locator("li").allTextContents(),
+    ).toEqual([
+      "Scope — load cases: Operating, Hydrostatic test → whole project",
+      "Scope — locations: mid-shell, nozzle N1 → whole project",
+    ]);
+    await shot(page, "diff");
+
+    await page.goto(`${origin}${team.projectPath}/records`, { waitUntil: "networkidle" });
+    expect(await page.getByTestId("revision-scope").allTextContents()).toEqual([
+      "whole project",
+      "2 of 4 load cases, 2 of 3 locations",
+    ]);
     await page.close();
   });
 });

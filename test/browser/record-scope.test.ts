@@ -272,7 +272,7 @@ describe.skipIf(!serverHasRecords)("a record of chosen load cases and locations"
 
     await page.getByRole("heading", { name: /Record 2 · revision A/, level: 1 }).waitFor();
     expect(await page.getByTestId("record-scope").textContent()).toBe(
-      "This record covers the whole project: every load case at every location.",
+      "This record covers the whole project: 4 load cases and 3 locations.",
     );
     const diff = page.getByTestId("record-diff");
     await diff.getByText("Record 1 (revision A) → record 2 (revision A)").waitFor();

@@ -80,7 +80,10 @@ export function RecordPage() {
             {r.reason}
           </p>
           <p className="mt-1 max-w-3xl text-[14px]" data-testid="record-scope">
-            {scopeSentence(scope)}
+            {scopeSentence(scope, {
+              loadCases: r.content.inputs.loadCases.length,
+              locations: r.content.inputs.locations.length,
+            })}
           </p>
           <p className="mt-1 max-w-3xl break-all text-[12px] text-graphite-soft">
             {provenance(r.content, r.hash)}

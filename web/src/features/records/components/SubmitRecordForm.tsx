@@ -7,6 +7,7 @@ import { readReason } from "../model/forms";
 import {
   loadCaseOptions,
   locationOptions,
+  namesAFormField,
   readScope,
   scopeCountLine,
   scopeServerErrors,
@@ -64,9 +65,7 @@ export function SubmitRecordForm({
     loadCases: scopeErrors.loadCases ?? serverScope.loadCases,
     locations: scopeErrors.locations ?? serverScope.locations,
   };
-  const anyFieldNamed =
-    Boolean(serverFields.reason) ||
-    Object.keys(serverFields).some((field) => field === "scope" || field.startsWith("scope."));
+  const anyFieldNamed = namesAFormField(serverFields);
 
   const change = (next: ScopeChoice) => {
     setChoice(next);

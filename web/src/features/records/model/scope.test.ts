@@ -5,6 +5,7 @@ import {
   LOCATIONS_NONE,
   loadCaseOptions,
   locationOptions,
+  namesAFormField,
   readScope,
   scopeCountLine,
   scopeSentence,
@@ -47,15 +48,15 @@ describe("scope in words", () => {
   it("when a record covers the whole project (scope null or absent), then the table says 'whole project' and the page says so in a sentence", () => {
     expect(scopeWords(null)).toBe("whole project");
     expect(scopeWords(undefined)).toBe("whole project");
-    expect(scopeSentence(null)).toBe(
-      "This record covers the whole project: every load case at every location.",
+    expect(scopeSentence(null, { loadCases: 4, locations: 1 })).toBe(
+      "This record covers the whole project: 4 load cases and 1 location.",
     );
     expect(frozenResultsSubtitle(null)).toMatch(/^every case and combination at every location/);
   });
 
   it("when a record covers 2 of 4 load cases and 1 of 3 locations, then the table counts them and the page names them in the project's order", () => {
     expect(scopeWords(SUBSET)).toBe("2 of 4 load cases, 1 of 3 locations");
-    expect(scopeSentence(SUBSET)).toBe(
+    expect(scopeSentence(SUBSET, { loadCases: 2, locations: 1 })).toBe(
       "This record covers 2 of 4 load cases (Operating, Design) and 1 of 3 locations (mid-shell); " +
         "results outside it are not part of this record.",
     );
@@ -187,5 +188,13 @@ describe("the API's scope errors beside the lists", () => {
 
   it("when the API's errors name no scope field, then nothing is put beside the lists", () => {
     expect(scopeServerErrors({ reason: "Say what changed and why." }, null, OPTIONS)).toEqual({});
+  });
+
+  it("when the API's 400 names the reason or a scope field, then the form needs no general message; otherwise it does", () => {
+    expect(namesAFormField({ reason: "Say what changed and why." })).toBe(true);
+    expect(namesAFormField({ "scope.locationIds.0": "is gone" })).toBe(true);
+    expect(namesAFormField({ scope: "must be an object or null" })).toBe(true);
+    expect(namesAFormField({ scopeNote: "unknown" })).toBe(false);
+    expect(namesAFormField({})).toBe(false);
   });
 });

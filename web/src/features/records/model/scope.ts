@@ -27,10 +27,18 @@ const names = (items: readonly { name: string }[]) => items.map((i) => i.name).j
 
 /**
  * The record page's sentence, with the names: "This record covers 2 of 4 load cases (Operating,
- * Design) and 1 of 3 locations (mid-shell); results outside it are not part of this record."
+ * Design) and 1 of 3 locations (mid-shell); results outside it are not part of this record." A
+ * whole-project record gives the counts it froze, as the printed report's cover does.
  */
-export function scopeSentence(scope: RecordScope | null | undefined): string {
-  if (!scope) return "This record covers the whole project: every load case at every location.";
+export function scopeSentence(
+  scope: RecordScope | null | undefined,
+  frozen: { loadCases: number; locations: number },
+): string {
+  if (!scope)
+    return (
+      `This record covers the whole project: ${counted(frozen.loadCases, "load case", "load cases")} ` +
+      `and ${counted(frozen.locations, "location", "locations")}.`
+    );
   return (
     `This record covers ${scope.loadCases.length} of ${counted(scope.projectLoadCases, "load case", "load cases")} ` +
     `(${names(scope.loadCases)}) and ${scope.locations.length} of ` +
@@ -117,6 +125,10 @@ export function scopeCountLine(
     places === options.locations.length;
   return everything ? `${line}: every one of both, so the record covers the whole project` : line;
 }
+
+/** Whether the API's 400 names the reason or a scope field, so the form's general message is not needed. */
+export const namesAFormField = (fieldErrors: Readonly<Record<string, string>>) =>
+  Object.keys(fieldErrors).some((f) => f === "reason" || f === "scope" || f.startsWith("scope."));
 
 /** Errors beside the lists, each naming its list. */
 export type ScopeErrors = Partial<Record<ScopeList, string>>;

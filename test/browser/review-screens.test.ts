@@ -27,6 +27,8 @@ type Summary = {
   approvals: { by: Person; at: string; comment: string }[];
   returned: { by: Person; at: string; comment: string } | null;
   approvedAt: string | null;
+  /** null: the record covers the whole project. */
+  scope: null;
 };
 
 const RECORD_1 = "0d5f3c1e-0000-4000-8000-0000000000a1";
@@ -65,6 +67,7 @@ describe("review screens against a stand-in records API", () => {
     approvals: [],
     returned: null,
     approvedAt: null,
+    scope: null,
     ...over,
   });
 
@@ -189,7 +192,7 @@ describe("review screens against a stand-in records API", () => {
   const shot = (page: Page, name: string) =>
     page.screenshot({ path: path.join(screenshotDir, `review-screens-${name}.png`), fullPage: true });
 
-  it("when an editor submits from the project page, then an empty reason is refused naming the field, and the reason is sent", async () => {
+  it("when an editor submits from the project page, then an empty reason is refused naming the field, and the reason is sent with the whole project as the scope", async () => {
     fake.review = {
       status: "returned",
       requiredApprovals: 1,
@@ -212,7 +215,12 @@ describe("review screens against a stand-in records API", () => {
     await status.getByRole("button", { name: "Submit for check" }).click();
     await status.getByText("Record 2 (revision A) is submitted for check.").waitFor();
     expect(fake.sent).toEqual([
-      { method: "POST", path: "/records", body: { reason: "Hydrostatic test state corrected." } },
+      // Left on "The whole project", the form sends scope null (the contract's whole project).
+      {
+        method: "POST",
+        path: "/records",
+        body: { reason: "Hydrostatic test state corrected.", scope: null },
+      },
     ]);
     await shot(page, "project-submitted");
   });

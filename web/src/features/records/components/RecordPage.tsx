@@ -10,6 +10,7 @@ import { useSession } from "../../../lib/session";
 import { commentThreads } from "../model/comments";
 import { provenance } from "../model/frozen-inputs";
 import { recordPdfPath, recordPrintPath, recordsPagePath } from "../model/paths";
+import { frozenResultsSubtitle, scopeSentence } from "../model/scope";
 import { recordStatusWords } from "../model/status";
 import { CommentThreads, type CommentPermission } from "./CommentThreads";
 import { DecisionPanel } from "./DecisionPanel";
@@ -36,6 +37,8 @@ export function RecordPage() {
   if (record.error) return <FormMessage error={record.error} />;
   const r = record.data;
   const ids = { workspaceId, projectId, recordId };
+  // The frozen content is what the record is; the summary's copy is the same for records the API writes.
+  const scope = r.content.scope ?? r.scope;
   const threads = commentThreads(r.comments);
   const roleNote = role.role ? reviewActionNote(role.role, "comment") : null;
   const permission: CommentPermission =
@@ -76,6 +79,12 @@ export function RecordPage() {
             <span className="text-graphite-soft">What changed and why: </span>
             {r.reason}
           </p>
+          <p className="mt-1 max-w-3xl text-[14px]" data-testid="record-scope">
+            {scopeSentence(scope, {
+              loadCases: r.content.inputs.loadCases.length,
+              locations: r.content.inputs.locations.length,
+            })}
+          </p>
           <p className="mt-1 max-w-3xl break-all text-[12px] text-graphite-soft">
             {provenance(r.content, r.hash)}
           </p>
@@ -109,12 +118,7 @@ export function RecordPage() {
         <RecordDiffPanel ids={ids} />
       </Panel>
 
-      <Panel
-        id="frozen-results"
-        index="4"
-        title="Results as frozen"
-        subtitle={`every case and combination at every location; SF against the required factor`}
-      >
+      <Panel id="frozen-results" index="4" title="Results as frozen" subtitle={frozenResultsSubtitle(scope)}>
         <FrozenResults content={r.content} threads={threads} ids={ids} permission={permission} />
         <Caution className="border-t border-rule px-3 py-2" />
       </Panel>

@@ -6,16 +6,17 @@ import { useWorkspaceRole } from "../../../entities/workspace/queries";
 import { ApiError } from "../../../lib/api-client";
 import { quietButton } from "../../../lib/forms";
 import { reviewActionNote } from "../../../lib/role-note";
-import { readReason } from "../model/forms";
 import { reviewSummary, submitBlockedReason } from "../model/review-summary";
 import { recordsPagePath } from "../model/paths";
+import { scopeWords, type RecordScope } from "../model/scope";
 import { StatusBadge } from "./StatusBadge";
-import { TextForm } from "./TextForm";
+import { SubmitRecordForm } from "./SubmitRecordForm";
 
 /**
  * The project's review status as the project and comparison pages show it: the status in words,
  * the revision, whether the results on screen differ from the last approved record, a link to the
- * records, and "Submit for check" (asking what changed and why) for editors and owners.
+ * records, and "Submit for check" (asking what changed and why, and what the record covers) for
+ * editors and owners.
  */
 export function ReviewStatus({ linkToRecords = true }: { linkToRecords?: boolean } = {}) {
   const { workspaceId = "", projectId = "" } = useParams();
@@ -23,7 +24,12 @@ export function ReviewStatus({ linkToRecords = true }: { linkToRecords?: boolean
   const review = useReview(workspaceId, projectId);
   const submit = useSubmitRecord(workspaceId, projectId);
   const [asking, setAsking] = useState(false);
-  const [submitted, setSubmitted] = useState<{ id: string; number: number; revision: string } | null>(null);
+  const [submitted, setSubmitted] = useState<{
+    id: string;
+    number: number;
+    revision: string;
+    scope: RecordScope | null;
+  } | null>(null);
 
   // Until the records API answers (or where it does not exist), the pages stand as they were.
   if (review.isPending || role.isPending) return null;
@@ -69,6 +75,7 @@ export function ReviewStatus({ linkToRecords = true }: { linkToRecords?: boolean
         <p role="status" className="text-[14px] text-pass">
           <span aria-hidden="true">✓ </span>
           Record {submitted.number} (revision {submitted.revision}) is submitted for check.{" "}
+          {submitted.scope && <>It covers {scopeWords(submitted.scope)}. </>}
           <Link to={`${records}/${submitted.id}`} className="text-ink underline underline-offset-2">
             Open record {submitted.number}
           </Link>
@@ -79,17 +86,14 @@ export function ReviewStatus({ linkToRecords = true }: { linkToRecords?: boolean
       ) : blocked ? (
         <p className="text-[13px] text-graphite-soft">{blocked}</p>
       ) : asking ? (
-        <TextForm
-          label="What changed and why"
-          hint="Shown in the revision table. The inputs and results are frozen as they are now; a checker reviews them."
-          submitLabel="Submit for check"
-          field="reason"
-          read={readReason}
+        <SubmitRecordForm
+          workspaceId={workspaceId}
+          projectId={projectId}
           pending={submit.isPending}
           error={submit.error}
           onCancel={() => setAsking(false)}
-          onSend={(reason) =>
-            submit.mutateAsync({ reason }).then((record) => {
+          onSend={(body) =>
+            submit.mutateAsync(body).then((record) => {
               setSubmitted(record);
               setAsking(false);
             })

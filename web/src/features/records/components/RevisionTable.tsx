@@ -24,7 +24,7 @@ export function RevisionTable({
   const th = "px-2 py-1.5 text-left font-semibold";
   return (
     <TableScroll label="Revision table">
-      <table className="w-full min-w-[720px] text-[14px]" data-testid="revision-table">
+      <table className="w-full min-w-[800px] text-[14px]" data-testid="revision-table">
         <thead className="border-b border-rule bg-paper text-[13px] text-graphite-soft">
           <tr>
             <th scope="col" className={th}>
@@ -35,6 +35,9 @@ export function RevisionTable({
             </th>
             <th scope="col" className={th}>
               Status
+            </th>
+            <th scope="col" className={th}>
+              Scope
             </th>
             <th scope="col" className={th}>
               What changed and why
@@ -65,6 +68,9 @@ export function RevisionTable({
               <td className="num px-2 py-1.5">{r.revision}</td>
               <td className="px-2 py-1.5">
                 <StatusBadge status={r.status} of="record" />
+              </td>
+              <td className="px-2 py-1.5 text-[13px]" data-testid="revision-scope">
+                {r.scope}
               </td>
               <td className="max-w-[28rem] whitespace-pre-line px-2 py-1.5">{r.reason}</td>
               <td className="px-2 py-1.5">

@@ -71,6 +71,52 @@ describe("record diff", () => {
     expect(inputChangeSentence({ kind: "project", label: "CT-7 shell" })).toBe("Project · CT-7 shell");
   });
 
+  it("when the two records cover different load cases, then the scope change is its own first section, before the verdicts, and read from → to", () => {
+    const sections = diffSections(
+      diff({
+        inputs: {
+          changed: [
+            {
+              kind: "scope",
+              label: "Scope",
+              field: "load cases",
+              from: "whole project",
+              to: "Operating, Design",
+            },
+            { kind: "state", label: "Operating at mid-shell", field: "σx", from: "75 MPa", to: "80 MPa" },
+          ],
+          added: [],
+          removed: [],
+        },
+        verdictChanges: [
+          {
+            rowId: "a",
+            caseName: "Operating",
+            locationName: "mid-shell",
+            criterion: "tresca",
+            from: { verdict: "pass", factor: 3.4 },
+            to: { verdict: "pass", factor: 3.2 },
+          },
+        ],
+      }),
+    );
+    expect(sections.map((s) => s.id)).toEqual(["scope", "verdicts", "changed"]);
+    expect(sections[0].lines).toEqual(["Scope — load cases: whole project → Operating, Design"]);
+    // The scope line is not repeated among the other inputs.
+    expect(sections[2].lines).toEqual(["State · Operating at mid-shell — σx: 75 MPa → 80 MPa"]);
+  });
+
+  it("when the scope change carries a label of its own, then it is read after the kind like any other input", () => {
+    expect(
+      inputChangeSentence({
+        kind: "scope",
+        label: "Locations covered",
+        from: "mid-shell",
+        to: "whole project",
+      }),
+    ).toBe("Scope · Locations covered: mid-shell → whole project");
+  });
+
   it("when nothing changed, then there are no sections, and the heading names both records", () => {
     expect(diffSections(diff())).toEqual([]);
     expect(diffHeading(diff())).toBe("Record 1 (revision A) → record 2 (revision A)");

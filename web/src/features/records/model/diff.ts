@@ -12,6 +12,7 @@ const KIND_WORD: Readonly<Record<InputChange["kind"], string>> = {
   combination: "Combination",
   material: "Material",
   project: "Project",
+  scope: "Scope",
 };
 
 const criterionLabel = (criterion: string) => CRITERION_LABELS[criterion as CriterionName] ?? criterion;
@@ -34,9 +35,14 @@ function severity(c: VerdictChange): number {
   return 2;
 }
 
-/** "State · Design at shell — σx: 150 MPa → 155 MPa". */
+/**
+ * "State · Design at shell — σx: 150 MPa → 155 MPa"; a label that only repeats the kind is said
+ * once ("Scope — load cases: whole project → Operating, Design").
+ */
 export function inputChangeSentence(c: InputChange): string {
-  const what = `${KIND_WORD[c.kind]} · ${c.label}${c.field ? ` — ${c.field}` : ""}`;
+  const kind = KIND_WORD[c.kind];
+  const name = c.label === kind ? kind : `${kind} · ${c.label}`;
+  const what = `${name}${c.field ? ` — ${c.field}` : ""}`;
   if (c.from != null && c.to != null) return `${what}: ${c.from} → ${c.to}`;
   if (c.to != null) return `${what}: ${c.to}`;
   if (c.from != null) return `${what}: was ${c.from}`;
@@ -47,20 +53,26 @@ export function inputChangeSentence(c: InputChange): string {
 export type DiffSection = { id: string; title: string; lines: string[] };
 
 /**
- * The diff as a checker reads it on a resubmission: results whose verdict changed first (new
- * failures at the top), then the inputs changed, added and removed. Empty sections are left out;
- * `sections` empty means the two records hold the same inputs and verdicts.
+ * The diff as a checker reads it on a resubmission: first whether the two records cover
+ * different load cases or locations (every other line must be read in that light), then results
+ * whose verdict changed (new failures at the top), then the inputs changed, added and removed.
+ * Empty sections are left out; `sections` empty means the two records hold the same inputs and
+ * verdicts.
  */
 export function diffSections(diff: RecordDiff): DiffSection[] {
   const verdicts = [...diff.verdictChanges]
     .map((c, i) => ({ c, i }))
     .sort((a, b) => severity(a.c) - severity(b.c) || a.i - b.i)
     .map(({ c }) => verdictChangeSentence(c));
+  const isScope = (c: InputChange) => c.kind === "scope";
+  const notScope = (list: InputChange[]) => list.filter((c) => !isScope(c)).map(inputChangeSentence);
+  const scope = [...diff.inputs.changed, ...diff.inputs.added, ...diff.inputs.removed].filter(isScope);
   const sections: DiffSection[] = [
+    { id: "scope", title: "What the records cover", lines: scope.map(inputChangeSentence) },
     { id: "verdicts", title: "Verdicts that changed", lines: verdicts },
-    { id: "changed", title: "Inputs changed", lines: diff.inputs.changed.map(inputChangeSentence) },
-    { id: "added", title: "Inputs added", lines: diff.inputs.added.map(inputChangeSentence) },
-    { id: "removed", title: "Inputs removed", lines: diff.inputs.removed.map(inputChangeSentence) },
+    { id: "changed", title: "Inputs changed", lines: notScope(diff.inputs.changed) },
+    { id: "added", title: "Inputs added", lines: notScope(diff.inputs.added) },
+    { id: "removed", title: "Inputs removed", lines: notScope(diff.inputs.removed) },
   ];
   return sections.filter((s) => s.lines.length > 0);
 }

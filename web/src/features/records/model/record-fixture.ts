@@ -176,6 +176,7 @@ export function recordSummary(overrides: Partial<RecordSummary> = {}): RecordSum
     approvals: [],
     returned: null,
     approvedAt: null,
+    scope: null,
     ...overrides,
   };
 }

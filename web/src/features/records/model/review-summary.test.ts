@@ -1,6 +1,6 @@
 import { describe, expect, it } from "vitest";
 import type { Review } from "../../../entities/record/api-types";
-import { recordSummary } from "./record-fixture";
+import { IDS, recordSummary } from "./record-fixture";
 import { DIFFERS_SENTENCE, reviewSummary, submitBlockedReason } from "./review-summary";
 
 const review = (over: Partial<Review> = {}): Review => ({
@@ -37,6 +37,21 @@ describe("review summary", () => {
     expect(s.differs).toBe(DIFFERS_SENTENCE);
     expect(s.differs).toBe("The results shown differ from the last approved record.");
     expect(s.approved).toBe("Last approved: record 2, revision A.");
+  });
+
+  it("when the last approved record covers chosen load cases and locations, then the line says which part it covers", () => {
+    const approved = recordSummary({
+      status: "approved",
+      scope: {
+        loadCases: [{ id: IDS.hydro, name: "Hydrostatic test" }],
+        locations: [{ id: IDS.location, name: "mid-shell" }],
+        projectLoadCases: 3,
+        projectLocations: 2,
+      },
+    });
+    expect(reviewSummary(review({ status: "approved", lastApproved: approved })).approved).toBe(
+      "Last approved: record 1, revision A. It covers 1 of 3 load cases, 1 of 2 locations.",
+    );
   });
 
   it("when the results are the approved ones, then no warning is given", () => {

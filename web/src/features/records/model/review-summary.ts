@@ -1,4 +1,5 @@
 import type { Review } from "../../../entities/record/api-types";
+import { scopeWords } from "./scope";
 import { projectStatusWords, type StatusWords } from "./status";
 
 /** What the project and comparison pages say about the review, line by line. */
@@ -13,6 +14,15 @@ export type ReviewSummary = StatusWords & {
 
 export const DIFFERS_SENTENCE = "The results shown differ from the last approved record.";
 
+/**
+ * "Last approved: record 2, revision A." and, when that record covers only part of the project,
+ * which part: whether the results differ is judged within it, so the reader must know it.
+ */
+function lastApprovedSentence(record: NonNullable<Review["lastApproved"]>): string {
+  const which = `Last approved: record ${record.number}, revision ${record.revision}.`;
+  return record.scope ? `${which} It covers ${scopeWords(record.scope)}.` : which;
+}
+
 /** The review answer as the sentences a practitioner reads. */
 export function reviewSummary(review: Review): ReviewSummary {
   const words = projectStatusWords(review.status);
@@ -24,9 +34,7 @@ export function reviewSummary(review: Review): ReviewSummary {
     ...words,
     revision,
     differs: review.currentDiffersFromApproved === true ? DIFFERS_SENTENCE : null,
-    approved: review.lastApproved
-      ? `Last approved: record ${review.lastApproved.number}, revision ${review.lastApproved.revision}.`
-      : null,
+    approved: review.lastApproved ? lastApprovedSentence(review.lastApproved) : null,
   };
 }
 

@@ -34,6 +34,23 @@ describe("revision table", () => {
     expect(rows[1].decided).toBe(`returned ${formatDateTime("2026-12-01T12:00:00.000Z")} by Rui Tanager`);
   });
 
+  it("when one record covers the whole project and the next a chosen subset, then the table says 'whole project' and counts the subset", () => {
+    const rows = revisionRows([
+      recordSummary({
+        id: "r2",
+        number: 2,
+        scope: {
+          loadCases: [{ id: IDS.hydro, name: "Hydrostatic test" }],
+          locations: [{ id: IDS.location, name: "mid-shell" }],
+          projectLoadCases: 2,
+          projectLocations: 3,
+        },
+      }),
+      recordSummary({ id: "r1", scope: null }),
+    ]);
+    expect(rows.map((r) => r.scope)).toEqual(["1 of 2 load cases, 1 of 3 locations", "whole project"]);
+  });
+
   it("when a record waits for its check, then it has no decision yet", () => {
     expect(revisionRows([recordSummary()])[0].decided).toBe("—");
   });

@@ -1,5 +1,6 @@
 import type { RecordSummary } from "../../../entities/record/api-types";
 import { formatDateTime } from "./dates";
+import { scopeWords } from "./scope";
 import { recordStatusWords } from "./status";
 
 /** One line of the revision table, every cell already in words. */
@@ -16,6 +17,8 @@ export type RevisionRow = {
   decided: string;
   /** "1 of 2 (Rui Tanager)". */
   approvals: string;
+  /** What the record covers: "whole project" or "2 of 4 load cases, 1 of 3 locations". */
+  scope: string;
 };
 
 /** When and by whom the record was returned or approved. */
@@ -41,5 +44,6 @@ export function revisionRows(records: readonly RecordSummary[]): RevisionRow[] {
     approvals:
       `${r.approvals.length} of ${r.requiredApprovals}` +
       (r.approvals.length ? ` (${r.approvals.map((a) => a.by.name).join(", ")})` : ""),
+    scope: scopeWords(r.scope),
   }));
 }

@@ -8,7 +8,6 @@
  */
 import path from "node:path";
 import { fileURLToPath } from "node:url";
-import { warmReportWorker } from "./domain/report/render-in-worker";
 import { EnvError, isLoopback, parseEnv } from "./env";
 import { startServer } from "./server";
 
@@ -19,12 +18,11 @@ try {
   const running = await startServer(env, {
     // WEB_DIST="" serves the API only (npm run dev, where Vite serves the app).
     webDist: process.env.WEB_DIST === "" ? null : (process.env.WEB_DIST ?? defaultWebDist),
+    warmReports: true,
   });
   const listening = `http://${env.HOST}:${running.port}`;
   running.context.logger.info({ listening, publicOrigin: running.url }, "listening");
   console.log(`Sigmacube API listening on ${listening}`);
-  // After listening, so requests are served while the report worker instances its fonts.
-  warmReportWorker();
   if (running.context.mailer.fake && !isLoopback(env.HOST)) {
     // Allowed only with SIGMACUBE_FAKE_MAILBOX=1 (parseEnv refuses it otherwise).
     running.context.logger.warn(

@@ -3,6 +3,7 @@ import { createServer, type Server } from "node:http";
 import { createSequelize } from "../db/sequelize";
 import { initModels } from "../db/models";
 import { createApp } from "./app";
+import { warmReportWorker } from "./domain/report/render-in-worker";
 import { buildAppContext, type AppContext } from "./context";
 import { publicOrigin, type Env } from "./env";
 import { createLogger } from "./logger";
@@ -20,7 +21,16 @@ export type RunningServer = {
 /** Opens the database pool, builds the app and listens on env.HOST:env.PORT (0 = any free port). */
 export async function startServer(
   env: Env,
-  options: { webDist: string | null; rateLimits?: Partial<AppContext["rateLimits"]> },
+  options: {
+    webDist: string | null;
+    rateLimits?: Partial<AppContext["rateLimits"]>;
+    /**
+     * Start the report worker and have it read its fonts once listening (1.5 to 4 s of one core),
+     * so the first report after a start does not wait for them. Off for test servers, which
+     * mostly draw no report and share the machine's cores.
+     */
+    warmReports?: boolean;
+  },
 ): Promise<RunningServer> {
   const logger = createLogger(env);
   const sequelize = createSequelize(env.DATABASE_URL);
@@ -46,6 +56,7 @@ export async function startServer(
     server.listen(env.PORT, env.HOST, () => resolve());
   });
   const port = (server.address() as AddressInfo).port;
+  if (options.warmReports) warmReportWorker();
   context.publicOrigin = publicOrigin(env, port);
   let closing: Promise<void> | null = null;
   return {

@@ -44,7 +44,7 @@ async function main() {
   const env = parseEnv({ ...process.env, DATABASE_URL: databaseUrl });
   if (await ensureWebBuild(say)) say("web app built");
   if (stopping) return;
-  server = await startServer(env, { webDist });
+  server = await startServer(env, { webDist, warmReports: true });
   say(`Sigmacube is running at ${server.url}  (Ctrl-C stops it)`);
 }
 

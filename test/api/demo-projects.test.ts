@@ -141,6 +141,13 @@ describe("the demo seed's projects step", () => {
     expect(approved.status).toBe("approved");
     expect(approved.submittedBy.name).toBe("Teo Valdric");
     expect(approved.approvals.map((a) => a.by.name)).toEqual(["Ines Okafor-Lund"]);
+    // Nothing changed after the approval, so the demo's review does not warn that results differ.
+    const shaftProject = projects.find((x: { name: string }) => x.name === "CT-7 agitator shaft");
+    const review = (
+      await agent.get(`/api/workspaces/${workspace.id}/projects/${shaftProject.id}/review`).expect(200)
+    ).body;
+    expect(review.status).toBe("approved");
+    expect(review.currentDiffersFromApproved).toBe(false);
     const returned = await recordsOf("CT-7 shell and heads");
     expect(returned.status).toBe("returned");
     expect(returned.returned?.by.name).toBe("Ines Okafor-Lund");

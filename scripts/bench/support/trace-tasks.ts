@@ -66,8 +66,12 @@ export function describeTraceTasks(
     .sort((a, b) => a.ts - b.ts || b.dur! - a.dur!);
   const click = onMain.find((e) => e.name === "EventDispatch" && e.args?.data?.type === "click");
   const fromUs = click?.ts ?? onMain[0]?.ts ?? 0;
-  const tasks = onMain.filter(
+  const runs = onMain.filter(
     (e) => (e.name === "ThreadControllerImpl::RunTask" || e.name === "RunTask") && e.ts >= fromUs,
+  );
+  // the trace names a task twice (RunTask inside ThreadControllerImpl::RunTask): keep the outer one
+  const tasks = runs.filter(
+    (e) => !runs.some((o) => o !== e && o.ts <= e.ts && o.ts + o.dur! >= e.ts + e.dur! && o.dur! > e.dur!),
   );
   const long = tasks
     .filter((t) => t.dur! / 1000 > options.overMs)

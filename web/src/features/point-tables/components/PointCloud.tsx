@@ -1,66 +1,94 @@
 /**
  * The points in 3D (react-three-fiber, loaded as its own chunk), one THREE.Points with a colour
  * per point from the utilisation colour table: one draw call, so a million points turn smoothly.
- * It draws only: positions are the table's coordinates scaled into a unit box, colours come from
- * model/colour-scale.ts, and a click hands the point's index back. Above 200,000 points it draws a
- * sample (model/cloud-sample.ts) and says so.
+ * It draws only: what it draws (the sample above 200,000 points, positions in a unit box, colours,
+ * bounding sphere) comes made (model/cloud-view.ts), and a click hands the point's index back.
+ *
+ * It paints a picture a slice of points per frame on top of the last (the drawing buffer is kept),
+ * starting again whenever the camera or the canvas changes: headless Chromium draws WebGL in
+ * software, where 200,000 points in one frame held the page for 600–800 ms
+ * (scripts/bench/point-tables-browser.ts, BENCH_POINT_TRACE=1: the main thread waiting on the GPU
+ * process). Its first frame only compiles the shaders, so that wait is not added to a draw's.
  */
 import { OrbitControls } from "@react-three/drei";
-import { Canvas, type ThreeEvent } from "@react-three/fiber";
-import { useMemo } from "react";
-import { BufferAttribute, BufferGeometry } from "three";
-import { cloudSample } from "../model/cloud-sample";
-import { colourTable, fillColours } from "../model/colour-scale";
+import { Canvas, useFrame, type ThreeEvent } from "@react-three/fiber";
+import { useMemo, useRef } from "react";
+import { BufferAttribute, BufferGeometry, Sphere, Vector3 } from "three";
+import type { CloudView } from "../model/cloud-view";
+
+/** Points drawn per frame: in software WebGL about 3–4 µs each, so a frame stays near 30 ms. */
+export const POINTS_PER_FRAME = 8_000;
 
 /**
- * Coordinates (3 per point) into a box of half-size 1 around the origin, keeping proportions; the
- * box is the whole table's, the output only the points in `indices` (all when null).
+ * Draws the scene's points a slice per frame, from the start again when the view (camera, canvas
+ * size, points) changes; tells `onDrawn` how many points the picture holds after each slice.
  */
-function unitPositions(coordinates: Float64Array, indices: Uint32Array | null): Float32Array {
-  const lo = [Infinity, Infinity, Infinity];
-  const hi = [-Infinity, -Infinity, -Infinity];
-  for (let i = 0; i < coordinates.length; i += 3) {
-    for (let a = 0; a < 3; a++) {
-      const v = coordinates[i + a];
-      if (v < lo[a]) lo[a] = v;
-      if (v > hi[a]) hi[a] = v;
+function SlicedDrawing({
+  geometry,
+  count,
+  onDrawn,
+}: {
+  geometry: BufferGeometry;
+  count: number;
+  onDrawn: (drawn: number) => void;
+}) {
+  const progress = useRef({ compiled: false, drawnTo: 0, fresh: true, view: "" });
+  useFrame(({ gl, scene, camera, size, invalidate }) => {
+    const p = progress.current;
+    if (!p.compiled) {
+      // the shaders compile in the GPU process while the page waits for the next frame
+      gl.compile(scene, camera);
+      p.compiled = true;
+      invalidate();
+      return;
     }
-  }
-  const centre = lo.map((l, a) => (l + hi[a]) / 2);
-  const span = Math.max(...hi.map((h, a) => h - lo[a])) || 1;
-  const count = indices ? indices.length : coordinates.length / 3;
-  const out = new Float32Array(3 * count);
-  for (let k = 0; k < count; k++) {
-    const i = 3 * (indices ? indices[k] : k);
-    for (let a = 0; a < 3; a++) out[3 * k + a] = (2 * (coordinates[i + a] - centre[a])) / span;
-  }
-  return out;
+    const view = [
+      geometry.uuid,
+      ...camera.position.toArray(),
+      ...camera.quaternion.toArray(),
+      size.width,
+      size.height,
+    ].join();
+    if (view !== p.view) {
+      p.view = view;
+      p.drawnTo = 0;
+      p.fresh = true;
+    }
+    if (!p.fresh && p.drawnTo >= count) return;
+    gl.autoClear = false;
+    if (p.fresh) gl.clear();
+    p.fresh = false;
+    const to = Math.min(count, p.drawnTo + POINTS_PER_FRAME);
+    geometry.setDrawRange(p.drawnTo, to - p.drawnTo);
+    gl.render(scene, camera);
+    // a click looks for the point among all of them
+    geometry.setDrawRange(0, Infinity);
+    p.drawnTo = to;
+    onDrawn(to);
+    if (to < count) invalidate();
+  }, 1);
+  return null;
 }
 
 export default function PointCloud({
-  coordinates,
-  utilisation,
+  view,
   onPick,
+  onDrawn = () => {},
 }: {
-  coordinates: Float64Array;
-  utilisation: Float64Array;
+  view: CloudView;
   onPick: (index: number) => void;
+  /** how many points the picture holds, after each frame's slice */
+  onDrawn?: (drawn: number) => void;
 }) {
-  const sample = useMemo(() => cloudSample(utilisation), [utilisation]);
+  const { sample } = view;
   const geometry = useMemo(() => {
     const g = new BufferGeometry();
-    const { indices } = sample;
-    g.setAttribute("position", new BufferAttribute(unitPositions(coordinates, indices), 3));
-    const drawnUtilisation = indices ? Float64Array.from(indices, (i) => utilisation[i]) : utilisation;
-    const colours = fillColours(
-      drawnUtilisation,
-      colourTable(),
-      new Float32Array(3 * drawnUtilisation.length),
-    );
-    g.setAttribute("color", new BufferAttribute(colours, 3));
-    g.computeBoundingSphere();
+    g.setAttribute("position", new BufferAttribute(view.positions, 3));
+    g.setAttribute("color", new BufferAttribute(view.colours, 3));
+    const [x, y, z] = view.sphere.centre;
+    g.boundingSphere = new Sphere(new Vector3(x, y, z), view.sphere.radius);
     return g;
-  }, [coordinates, utilisation, sample]);
+  }, [view]);
 
   const onClick = (e: ThreeEvent<MouseEvent>) => {
     e.stopPropagation();
@@ -81,6 +109,8 @@ export default function PointCloud({
       )}
       <Canvas
         frameloop="demand"
+        // kept between frames, since each frame adds a slice of points to the picture
+        gl={{ preserveDrawingBuffer: true, antialias: false }}
         camera={{ position: [2.2, 1.8, 2.6], fov: 40 }}
         raycaster={{
           params: { Points: { threshold: 0.02 }, Mesh: {}, Line: { threshold: 1 }, LOD: {}, Sprite: {} },
@@ -92,6 +122,7 @@ export default function PointCloud({
         </points>
         <axesHelper args={[1.2]} />
         <OrbitControls makeDefault enableDamping={false} />
+        <SlicedDrawing geometry={geometry} count={sample.drawn} onDrawn={onDrawn} />
       </Canvas>
     </>
   );

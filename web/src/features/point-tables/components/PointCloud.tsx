@@ -32,15 +32,43 @@ function SlicedDrawing({
   count: number;
   onDrawn: (drawn: number) => void;
 }) {
-  const progress = useRef({ compiled: false, drawnTo: 0, fresh: true, view: "" });
+  const progress = useRef({
+    shown: false,
+    compiled: null as WebGLSync | null | "ready",
+    drawnTo: 0,
+    fresh: true,
+    view: "",
+  });
   useFrame(({ gl, scene, camera, size, invalidate }) => {
     const p = progress.current;
-    if (!p.compiled) {
-      // the shaders compile in the GPU process while the page waits for the next frame
-      gl.compile(scene, camera);
-      p.compiled = true;
+    const context = gl.getContext();
+    if (!p.shown) {
+      // the new canvas is shown empty first: showing it reads it back from the GPU process, which
+      // would otherwise wait there for the shaders' compilation as well
+      p.shown = true;
       invalidate();
       return;
+    }
+    if (p.compiled === null) {
+      // the shaders compile in the GPU process while the page goes on; a fence says when it is done
+      gl.compile(scene, camera);
+      p.compiled =
+        context instanceof WebGL2RenderingContext
+          ? context.fenceSync(context.SYNC_GPU_COMMANDS_COMPLETE, 0)
+          : "ready";
+      context.flush();
+      invalidate();
+      return;
+    }
+    if (p.compiled !== "ready") {
+      const c = context as WebGL2RenderingContext;
+      // asks without waiting: the answer changes only between tasks
+      if (c.getSyncParameter(p.compiled, c.SYNC_STATUS) !== c.SIGNALED) {
+        invalidate();
+        return;
+      }
+      c.deleteSync(p.compiled);
+      p.compiled = "ready";
     }
     const view = [
       geometry.uuid,

@@ -55,7 +55,7 @@ export function PointTableResults({
   onPick: (index: number) => void;
   testId?: string;
 }) {
-  const shown = useStagedReveal(SECTIONS, evaluation);
+  const shown = useStagedReveal(SECTIONS, table);
   const view = useCloudView(table.coordinates, evaluation.utilisation, cloud);
   const drawing = useRef<HTMLDivElement>(null);
   // for the benchmark: how much of the picture is drawn, written straight to the element each frame

@@ -38,6 +38,8 @@ const PROFILE = process.env.BENCH_POINT_PROFILE === "1";
  * calls waiting on the GPU process.
  */
 const TRACE = process.env.BENCH_POINT_TRACE === "1";
+/** BENCH_POINT_SHOT=<file>.png: a picture of the finished 3D view per worker count (<file>-1.png, <file>-2.png), to look at. */
+const SHOT = process.env.BENCH_POINT_SHOT;
 /** The table's float64 size: six components, three coordinates and the id per point. */
 const TABLE_BYTES = ROWS * 10 * 8;
 
@@ -133,6 +135,11 @@ async function oneRun(browser: Browser, origin: string, file: string, cores: num
     { timeout: 120_000, polling: 50 },
   );
   const pictureSeconds = (performance.now() - t0) / 1000;
+  if (SHOT !== undefined) {
+    await page
+      .locator("[data-points-drawn]")
+      .screenshot({ path: SHOT.replace(/(\.png)?$/, `-${cores}.png`) });
+  }
   // what the page does just after (the list's first scroll measure, a late frame) counts too
   await page.waitForTimeout(SETTLE_MS);
   sampling = false;

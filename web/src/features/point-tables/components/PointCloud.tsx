@@ -13,11 +13,20 @@
 import { OrbitControls } from "@react-three/drei";
 import { Canvas, useFrame, type ThreeEvent } from "@react-three/fiber";
 import { useMemo, useRef } from "react";
-import { BufferAttribute, BufferGeometry, Sphere, Vector3 } from "three";
+import { BufferAttribute, BufferGeometry, Color, Sphere, Vector3 } from "three";
 import type { CloudView } from "../model/cloud-view";
 
 /** Points drawn per frame: in software WebGL about 3–4 µs each, so a frame stays near 30 ms. */
 export const POINTS_PER_FRAME = 8_000;
+
+/** The CSS colour of the nearest box behind `element` that has a background of its own. */
+function backgroundBehind(element: HTMLElement): string {
+  for (let e: HTMLElement | null = element; e !== null; e = e.parentElement) {
+    const colour = getComputedStyle(e).backgroundColor;
+    if (colour !== "" && colour !== "transparent" && !/^rgba\(.*,\s*0\)$/.test(colour)) return colour;
+  }
+  return "#ffffff";
+}
 
 /**
  * Draws the scene's points a slice per frame, from the start again when the view (camera, canvas
@@ -84,7 +93,11 @@ function SlicedDrawing({
     }
     if (!p.fresh && p.drawnTo >= count) return;
     gl.autoClear = false;
-    if (p.fresh) gl.clear();
+    if (p.fresh) {
+      // a kept drawing buffer is shown opaque here, so the picture is cleared to the colour behind it
+      gl.setClearColor(new Color(backgroundBehind(gl.domElement)), 1);
+      gl.clear();
+    }
     p.fresh = false;
     const to = Math.min(count, p.drawnTo + POINTS_PER_FRAME);
     geometry.setDrawRange(p.drawnTo, to - p.drawnTo);

@@ -8,12 +8,12 @@
  * starting again whenever the camera or the canvas changes: headless Chromium draws WebGL in
  * software, where 200,000 points in one frame held the page for 600–800 ms
  * (scripts/bench/point-tables-browser.ts, BENCH_POINT_TRACE=1: the main thread waiting on the GPU
- * process). Its first frame only compiles the shaders, so that wait is not added to a draw's.
+ * process). Its first frames get the canvas, shaders and buffers ready one step a frame (Stage).
  */
 import { OrbitControls } from "@react-three/drei";
 import { Canvas, useFrame, type ThreeEvent } from "@react-three/fiber";
 import { useMemo, useRef } from "react";
-import { BufferAttribute, BufferGeometry, Color, Sphere, Vector3 } from "three";
+import { BufferAttribute, BufferGeometry, Color, Sphere, Vector3, type Points } from "three";
 import type { CloudView } from "../model/cloud-view";
 
 /** Points drawn per frame: in software WebGL about 3–4 µs each, so a frame stays near 30 ms. */
@@ -29,55 +29,73 @@ function backgroundBehind(element: HTMLElement): string {
 }
 
 /**
+ * What the first frames do, one step each, so that no frame waits long on the GPU process (in
+ * software WebGL each of these made the page wait 50–200 ms when done together): show the new
+ * canvas empty (its first read-back waits for the context's start), compile the shaders and put a
+ * fence after them, wait for the fence without blocking, link the programs on a one-point stand-in
+ * (three.js's first use of a program waits for the link), upload the points' buffers, then draw.
+ */
+type Stage = "show" | "compile" | { fence: WebGLSync } | "link" | "upload" | "draw";
+
+/** The name the points go by in the scene, where the drawing finds them. */
+const POINTS_NAME = "rated-points";
+
+/** A one-point geometry with the points' attributes, to link their program without their buffers. */
+const standIn = () => {
+  const g = new BufferGeometry();
+  g.setAttribute("position", new BufferAttribute(new Float32Array(3), 3));
+  g.setAttribute("color", new BufferAttribute(new Float32Array(3), 3));
+  return g;
+};
+
+/**
  * Draws the scene's points a slice per frame, from the start again when the view (camera, canvas
  * size, points) changes; tells `onDrawn` how many points the picture holds after each slice.
  */
-function SlicedDrawing({
-  geometry,
-  count,
-  onDrawn,
-}: {
-  geometry: BufferGeometry;
-  count: number;
-  onDrawn: (drawn: number) => void;
-}) {
-  const progress = useRef({
-    shown: false,
-    compiled: null as WebGLSync | null | "ready",
-    drawnTo: 0,
-    fresh: true,
-    view: "",
-  });
+function SlicedDrawing({ count, onDrawn }: { count: number; onDrawn: (drawn: number) => void }) {
+  const progress = useRef({ stage: "show" as Stage, drawnTo: 0, fresh: true, view: "" });
   useFrame(({ gl, scene, camera, size, invalidate }) => {
     const p = progress.current;
+    const object = scene.getObjectByName(POINTS_NAME) as Points | undefined;
+    if (object === undefined) return;
+    const geometry = object.geometry;
     const context = gl.getContext();
-    if (!p.shown) {
-      // the new canvas is shown empty first: showing it reads it back from the GPU process, which
-      // would otherwise wait there for the shaders' compilation as well
-      p.shown = true;
-      invalidate();
-      return;
-    }
-    if (p.compiled === null) {
-      // the shaders compile in the GPU process while the page goes on; a fence says when it is done
-      gl.compile(scene, camera);
-      p.compiled =
-        context instanceof WebGL2RenderingContext
-          ? context.fenceSync(context.SYNC_GPU_COMMANDS_COMPLETE, 0)
-          : "ready";
-      context.flush();
-      invalidate();
-      return;
-    }
-    if (p.compiled !== "ready") {
-      const c = context as WebGL2RenderingContext;
-      // asks without waiting: the answer changes only between tasks
-      if (c.getSyncParameter(p.compiled, c.SYNC_STATUS) !== c.SIGNALED) {
-        invalidate();
-        return;
+    gl.autoClear = false;
+    // draws nothing of the points, but makes three.js prepare them (program, buffers)
+    const prepare = (with_: BufferGeometry) => {
+      object.geometry = with_;
+      with_.setDrawRange(0, 0);
+      gl.render(scene, camera);
+      with_.setDrawRange(0, Infinity);
+      object.geometry = geometry;
+    };
+    if (p.stage !== "draw") {
+      if (p.stage === "show") p.stage = "compile";
+      else if (p.stage === "compile") {
+        gl.compile(scene, camera);
+        p.stage =
+          context instanceof WebGL2RenderingContext
+            ? { fence: context.fenceSync(context.SYNC_GPU_COMMANDS_COMPLETE, 0)! }
+            : "link";
+        context.flush();
+      } else if (typeof p.stage === "object") {
+        const c = context as WebGL2RenderingContext;
+        // asked without waiting: the answer changes only between tasks
+        if (c.getSyncParameter(p.stage.fence, c.SYNC_STATUS) === c.SIGNALED) {
+          c.deleteSync(p.stage.fence);
+          p.stage = "link";
+        }
+      } else if (p.stage === "link") {
+        const stand = standIn();
+        prepare(stand);
+        stand.dispose();
+        p.stage = "upload";
+      } else if (p.stage === "upload") {
+        prepare(geometry);
+        p.stage = "draw";
       }
-      c.deleteSync(p.compiled);
-      p.compiled = "ready";
+      invalidate();
+      return;
     }
     const view = [
       geometry.uuid,
@@ -92,7 +110,6 @@ function SlicedDrawing({
       p.fresh = true;
     }
     if (!p.fresh && p.drawnTo >= count) return;
-    gl.autoClear = false;
     if (p.fresh) {
       // a kept drawing buffer is shown opaque here, so the picture is cleared to the colour behind it
       gl.setClearColor(new Color(backgroundBehind(gl.domElement)), 1);
@@ -158,12 +175,12 @@ export default function PointCloud({
         }}
         data-testid="point-cloud"
       >
-        <points geometry={geometry} onClick={onClick}>
+        <points name={POINTS_NAME} geometry={geometry} onClick={onClick}>
           <pointsMaterial size={3} sizeAttenuation={false} vertexColors />
         </points>
         <axesHelper args={[1.2]} />
         <OrbitControls makeDefault enableDamping={false} />
-        <SlicedDrawing geometry={geometry} count={sample.drawn} onDrawn={onDrawn} />
+        <SlicedDrawing count={sample.drawn} onDrawn={onDrawn} />
       </Canvas>
     </>
   );

@@ -13,11 +13,39 @@
 import { OrbitControls } from "@react-three/drei";
 import { Canvas, useFrame, type ThreeEvent } from "@react-three/fiber";
 import { useMemo, useRef } from "react";
-import { BufferAttribute, BufferGeometry, Color, Sphere, Vector3, type Points } from "three";
+import {
+  BufferAttribute,
+  BufferGeometry,
+  Color,
+  Sphere,
+  Vector3,
+  WebGLRenderer,
+  type Points,
+  type WebGLRendererParameters,
+} from "three";
 import type { CloudView } from "../model/cloud-view";
+import { yieldToPage } from "../model/steps";
 
 /** Points drawn per frame: in software WebGL about 3–4 µs each, so a frame stays near 30 ms. */
 export const POINTS_PER_FRAME = 8_000;
+
+/**
+ * The renderer, made in two tasks: the WebGL context first (the GPU process starts it meanwhile),
+ * then three.js's renderer on it; together they were one task of 50–70 ms in software WebGL. The
+ * drawing buffer is kept between frames, since each frame adds a slice of points to the picture.
+ */
+async function rendererInTwoTasks(defaults: WebGLRendererParameters): Promise<WebGLRenderer> {
+  const attributes = {
+    alpha: true,
+    antialias: false,
+    preserveDrawingBuffer: true,
+    powerPreference: "high-performance",
+  } as const;
+  const canvas = defaults.canvas as HTMLCanvasElement;
+  const context = canvas.getContext("webgl2", attributes) as WebGL2RenderingContext | null;
+  await yieldToPage();
+  return new WebGLRenderer({ ...defaults, ...attributes, ...(context === null ? {} : { context }) });
+}
 
 /** The CSS colour of the nearest box behind `element` that has a background of its own. */
 function backgroundBehind(element: HTMLElement): string {
@@ -167,8 +195,7 @@ export default function PointCloud({
       )}
       <Canvas
         frameloop="demand"
-        // kept between frames, since each frame adds a slice of points to the picture
-        gl={{ preserveDrawingBuffer: true, antialias: false }}
+        gl={rendererInTwoTasks}
         camera={{ position: [2.2, 1.8, 2.6], fov: 40 }}
         raycaster={{
           params: { Points: { threshold: 0.02 }, Mesh: {}, Line: { threshold: 1 }, LOD: {}, Sprite: {} },

@@ -1,10 +1,11 @@
 /**
  * The points in 3D (react-three-fiber, loaded as its own chunk), one THREE.Points with a colour
- * per point from the utilisation colour table: one draw call, so a million points turn smoothly.
+ * per point from the utilisation colour table.
  * It draws only: what it draws (the sample above 200,000 points, positions in a unit box, colours,
  * bounding sphere) comes made (model/cloud-view.ts), and a click hands the point's index back.
  *
- * It paints a picture a slice of points per frame on top of the last (the drawing buffer is kept),
+ * It paints a picture a slice of points per frame on top of the last (the drawing buffer is kept;
+ * the slice follows how long frames take, model/draw-pace.ts),
  * starting again whenever the camera or the canvas changes: headless Chromium draws WebGL in
  * software, where 200,000 points in one frame held the page for 600–800 ms
  * (scripts/bench/point-tables-browser.ts, BENCH_POINT_TRACE=1: the main thread waiting on the GPU
@@ -24,10 +25,8 @@ import {
   type WebGLRendererParameters,
 } from "three";
 import type { CloudView } from "../model/cloud-view";
+import { FIRST_SLICE, nextSlice } from "../model/draw-pace";
 import { yieldToPage } from "../model/steps";
-
-/** Points drawn per frame: in software WebGL about 3–4 µs each, so a frame stays near 30 ms. */
-export const POINTS_PER_FRAME = 8_000;
 
 /**
  * The renderer, made in two tasks: the WebGL context first (the GPU process starts it meanwhile),
@@ -81,7 +80,15 @@ const standIn = () => {
  * size, points) changes; tells `onDrawn` how many points the picture holds after each slice.
  */
 function SlicedDrawing({ count, onDrawn }: { count: number; onDrawn: (drawn: number) => void }) {
-  const progress = useRef({ stage: "show" as Stage, drawnTo: 0, fresh: true, view: "" });
+  const progress = useRef({
+    stage: "show" as Stage,
+    drawnTo: 0,
+    fresh: true,
+    view: "",
+    slice: FIRST_SLICE,
+    /** when the last slice's frame began (ms), 0 when the last frame drew no slice */
+    sliceAt: 0,
+  });
   useFrame(({ gl, scene, camera, size, invalidate }) => {
     const p = progress.current;
     const object = scene.getObjectByName(POINTS_NAME) as Points | undefined;
@@ -137,14 +144,21 @@ function SlicedDrawing({ count, onDrawn }: { count: number; onDrawn: (drawn: num
       p.drawnTo = 0;
       p.fresh = true;
     }
-    if (!p.fresh && p.drawnTo >= count) return;
+    if (!p.fresh && p.drawnTo >= count) {
+      p.sliceAt = 0;
+      return;
+    }
+    // the time since the last slice's frame began is that frame's drawing and the wait for it
+    const now = performance.now();
+    if (p.sliceAt > 0) p.slice = nextSlice(p.slice, now - p.sliceAt);
+    p.sliceAt = now;
     if (p.fresh) {
       // a kept drawing buffer is shown opaque here, so the picture is cleared to the colour behind it
       gl.setClearColor(new Color(backgroundBehind(gl.domElement)), 1);
       gl.clear();
     }
     p.fresh = false;
-    const to = Math.min(count, p.drawnTo + POINTS_PER_FRAME);
+    const to = Math.min(count, p.drawnTo + p.slice);
     geometry.setDrawRange(p.drawnTo, to - p.drawnTo);
     gl.render(scene, camera);
     // a click looks for the point among all of them
@@ -152,6 +166,7 @@ function SlicedDrawing({ count, onDrawn }: { count: number; onDrawn: (drawn: num
     p.drawnTo = to;
     onDrawn(to);
     if (to < count) invalidate();
+    else p.sliceAt = 0;
   }, 1);
   return null;
 }

@@ -4,11 +4,13 @@
  * the frames: smaller when a frame took longer than {@link SLOW_FRAME_MS}, larger when it was
  * quick, so a frame (drawing and the wait for it) stays well under the 50 ms of a long task.
  */
+import { MAX_DRAWN_POINTS } from "./cloud-sample";
 
 /** Points in the first slice. */
 export const FIRST_SLICE = 8_000;
 export const MIN_SLICE = 1_000;
-export const MAX_SLICE = 100_000;
+/** The whole sample the view draws at most: on a graphics card a frame draws the whole picture. */
+export const MAX_SLICE = MAX_DRAWN_POINTS;
 /** Frames longer than this shrink the next slice. */
 export const SLOW_FRAME_MS = 35;
 /** Frames shorter than this grow it. */

@@ -16,8 +16,11 @@ import { WorstPointsTable } from "./WorstPointsTable";
 
 const PointCloud = lazy(loadPointCloud);
 
-/** The sections shown one after another: the summary, governing points and histogram; the worst points; the 3D view. */
-const SECTIONS = 3;
+/**
+ * The sections shown one after another: the summary and governing points; the histogram with the
+ * 3D view's frame and key; the worst points; the 3D view's picture.
+ */
+const SECTIONS = 4;
 
 /**
  * What a rated table shows, whether it was just read in this browser or opened from the project:
@@ -77,35 +80,37 @@ export function PointTableResults({
       </div>
       <BadRowsNote badRows={table.badRows} />
       <GoverningPoints table={table} evaluation={evaluation} />
-      <div className="grid gap-4 lg:grid-cols-2">
-        <UtilisationHistogram histogram={evaluation.histogram} />
-        <div className="space-y-2">
-          {table.coordinates !== null ? (
-            <>
-              <div
-                ref={drawing}
-                className="relative h-72 rounded border border-rule bg-panel"
-                role="group"
-                aria-label="Points in 3D, coloured by utilisation; click a point to open it in the bench"
-              >
-                {shown >= 3 && view !== null ? (
-                  <Suspense fallback={drawingNote}>
-                    <PointCloud view={view} onPick={onPick} onDrawn={onDrawn} />
-                  </Suspense>
-                ) : (
-                  drawingNote
-                )}
-              </div>
-              <UtilisationLegend />
-            </>
-          ) : (
-            <p className="text-sm text-graphite-soft">
-              The table has no coordinates mapped, so the points cannot be placed in 3D.
-            </p>
-          )}
-        </div>
-      </div>
       {shown >= 2 && (
+        <div className="grid gap-4 lg:grid-cols-2">
+          <UtilisationHistogram histogram={evaluation.histogram} />
+          <div className="space-y-2">
+            {table.coordinates !== null ? (
+              <>
+                <div
+                  ref={drawing}
+                  className="relative h-72 rounded border border-rule bg-panel"
+                  role="group"
+                  aria-label="Points in 3D, coloured by utilisation; click a point to open it in the bench"
+                >
+                  {shown >= 4 && view !== null ? (
+                    <Suspense fallback={drawingNote}>
+                      <PointCloud view={view} onPick={onPick} onDrawn={onDrawn} />
+                    </Suspense>
+                  ) : (
+                    drawingNote
+                  )}
+                </div>
+                <UtilisationLegend />
+              </>
+            ) : (
+              <p className="text-sm text-graphite-soft">
+                The table has no coordinates mapped, so the points cannot be placed in 3D.
+              </p>
+            )}
+          </div>
+        </div>
+      )}
+      {shown >= 3 && (
         <WorstPointsTable
           table={table}
           utilisation={evaluation.utilisation}

@@ -38,6 +38,8 @@ const PROFILE = process.env.BENCH_POINT_PROFILE === "1";
  * calls waiting on the GPU process.
  */
 const TRACE = process.env.BENCH_POINT_TRACE === "1";
+/** BENCH_POINT_TRACE_MS: the trace lists tasks over this (default 50 ms), e.g. 25 to see how close the longest come. */
+const TRACE_OVER_MS = Number(process.env.BENCH_POINT_TRACE_MS ?? LONG_TASK_MS);
 /** BENCH_POINT_SHOT=<file>.png: a picture of the finished 3D view per worker count (<file>-1.png, <file>-2.png), to look at. */
 const SHOT = process.env.BENCH_POINT_SHOT;
 /** The table's float64 size: six components, three coordinates and the id per point. */
@@ -150,7 +152,7 @@ async function oneRun(browser: Browser, origin: string, file: string, cores: num
       typeof describeTraceTasks
     >[0];
     console.log(`  [${cores} worker(s)] trace of the long main-thread tasks:`);
-    for (const l of describeTraceTasks(trace, { overMs: LONG_TASK_MS, top: TOP_TASKS }))
+    for (const l of describeTraceTasks(trace, { overMs: TRACE_OVER_MS, top: TOP_TASKS }))
       console.log(`    ${l}`);
   }
   const text = await results.innerText();

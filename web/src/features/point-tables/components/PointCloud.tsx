@@ -60,9 +60,11 @@ function backgroundBehind(element: HTMLElement): string {
  * software WebGL each of these made the page wait 50–200 ms when done together): show the new
  * canvas empty (its first read-back waits for the context's start), compile the shaders and put a
  * fence after them, wait for the fence without blocking, link the programs on a one-point stand-in
- * (three.js's first use of a program waits for the link), upload the points' buffers, then draw.
+ * (three.js's first use of a program waits for the link), draw the stand-in's one point (software
+ * WebGL compiles a program's machine code at its first draw), upload the points' buffers, then
+ * draw (the first picture clears the stand-in's point away).
  */
-type Stage = "show" | "compile" | { fence: WebGLSync } | "link" | "upload" | "draw";
+type Stage = "show" | "compile" | { fence: WebGLSync } | "link" | "pipeline" | "upload" | "draw";
 
 /** The name the points go by in the scene, where the drawing finds them. */
 const POINTS_NAME = "rated-points";
@@ -97,9 +99,9 @@ function SlicedDrawing({ count, onDrawn }: { count: number; onDrawn: (drawn: num
     const context = gl.getContext();
     gl.autoClear = false;
     // draws nothing of the points, but makes three.js prepare them (program, buffers)
-    const prepare = (with_: BufferGeometry) => {
+    const prepare = (with_: BufferGeometry, points = 0) => {
       object.geometry = with_;
-      with_.setDrawRange(0, 0);
+      with_.setDrawRange(0, points);
       gl.render(scene, camera);
       with_.setDrawRange(0, Infinity);
       object.geometry = geometry;
@@ -120,11 +122,11 @@ function SlicedDrawing({ count, onDrawn }: { count: number; onDrawn: (drawn: num
           c.deleteSync(p.stage.fence);
           p.stage = "link";
         }
-      } else if (p.stage === "link") {
+      } else if (p.stage === "link" || p.stage === "pipeline") {
         const stand = standIn();
-        prepare(stand);
+        prepare(stand, p.stage === "link" ? 0 : 1);
         stand.dispose();
-        p.stage = "upload";
+        p.stage = p.stage === "link" ? "pipeline" : "upload";
       } else if (p.stage === "upload") {
         prepare(geometry);
         p.stage = "draw";

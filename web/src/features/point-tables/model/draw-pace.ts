@@ -7,7 +7,7 @@
 import { MAX_DRAWN_POINTS } from "./cloud-sample";
 
 /** Points in the first slice. */
-export const FIRST_SLICE = 8_000;
+export const FIRST_SLICE = 4_000;
 export const MIN_SLICE = 1_000;
 /** The whole sample the view draws at most: on a graphics card a frame draws the whole picture. */
 export const MAX_SLICE = MAX_DRAWN_POINTS;

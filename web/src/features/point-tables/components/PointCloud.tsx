@@ -57,14 +57,29 @@ function backgroundBehind(element: HTMLElement): string {
 
 /**
  * What the first frames do, one step each, so that no frame waits long on the GPU process (in
- * software WebGL each of these made the page wait 50–200 ms when done together): show the new
- * canvas empty (its first read-back waits for the context's start), compile the shaders and put a
- * fence after them, wait for the fence without blocking, link the programs on a one-point stand-in
- * (three.js's first use of a program waits for the link), draw the stand-in's one point (software
- * WebGL compiles a program's machine code at its first draw), upload the points' buffers, then
- * draw (the first picture clears the stand-in's point away).
+ * software WebGL each of these made the page wait 30–200 ms, and all of them together in one frame):
+ * show the new canvas empty (its first read-back waits for the context's start), compile the
+ * shaders and put a fence after them, wait for the fence without blocking, link the points'
+ * program on a one-point stand-in (three.js's first use of a program waits for the link), draw the
+ * stand-in's one point (software WebGL compiles a program's machine code at its first draw), link
+ * and draw the axes' program likewise, upload the points' buffers, then draw (the first picture
+ * clears the stand-in's point and the axes' first drawing away).
  */
-type Stage = "show" | "compile" | { fence: WebGLSync } | "link" | "pipeline" | "upload" | "draw";
+type Stage = "show" | "compile" | { fence: WebGLSync } | "link" | "pipeline" | "axes" | "upload" | "draw";
+
+/** The steps after the fence, in order: what each prepares. */
+const PREPARED: Record<
+  "link" | "pipeline" | "axes" | "upload",
+  { next: Stage; standIn: boolean; points: number; axes: boolean }
+> = {
+  link: { next: "pipeline", standIn: true, points: 0, axes: false },
+  pipeline: { next: "axes", standIn: true, points: 1, axes: false },
+  axes: { next: "upload", standIn: true, points: 0, axes: true },
+  upload: { next: "draw", standIn: false, points: 0, axes: false },
+};
+
+/** The name the axes go by in the scene. */
+const AXES_NAME = "axes";
 
 /** The name the points go by in the scene, where the drawing finds them. */
 const POINTS_NAME = "rated-points";
@@ -98,11 +113,15 @@ function SlicedDrawing({ count, onDrawn }: { count: number; onDrawn: (drawn: num
     const geometry = object.geometry;
     const context = gl.getContext();
     gl.autoClear = false;
-    // draws nothing of the points, but makes three.js prepare them (program, buffers)
-    const prepare = (with_: BufferGeometry, points = 0) => {
+    const axes = scene.getObjectByName(AXES_NAME);
+    // draws `points` of `with_` (none or the stand-in's one), so three.js prepares their program
+    // and buffers, with or without the axes
+    const prepare = (with_: BufferGeometry, points: number, withAxes: boolean) => {
       object.geometry = with_;
       with_.setDrawRange(0, points);
+      if (axes !== undefined) axes.visible = withAxes;
       gl.render(scene, camera);
+      if (axes !== undefined) axes.visible = true;
       with_.setDrawRange(0, Infinity);
       object.geometry = geometry;
     };
@@ -122,14 +141,12 @@ function SlicedDrawing({ count, onDrawn }: { count: number; onDrawn: (drawn: num
           c.deleteSync(p.stage.fence);
           p.stage = "link";
         }
-      } else if (p.stage === "link" || p.stage === "pipeline") {
-        const stand = standIn();
-        prepare(stand, p.stage === "link" ? 0 : 1);
-        stand.dispose();
-        p.stage = p.stage === "link" ? "pipeline" : "upload";
-      } else if (p.stage === "upload") {
-        prepare(geometry);
-        p.stage = "draw";
+      } else {
+        const step = PREPARED[p.stage];
+        const stand = step.standIn ? standIn() : geometry;
+        prepare(stand, step.points, step.axes);
+        if (stand !== geometry) stand.dispose();
+        p.stage = step.next;
       }
       invalidate();
       return;
@@ -222,7 +239,7 @@ export default function PointCloud({
         <points name={POINTS_NAME} geometry={geometry} onClick={onClick}>
           <pointsMaterial size={3} sizeAttenuation={false} vertexColors />
         </points>
-        <axesHelper args={[1.2]} />
+        <axesHelper name={AXES_NAME} args={[1.2]} />
         <OrbitControls makeDefault enableDamping={false} />
         <SlicedDrawing count={sample.drawn} onDrawn={onDrawn} />
       </Canvas>

@@ -82,6 +82,8 @@ export function AddPointTable({
         spec,
         includeUnsuited,
         columnNames: preview.names,
+        // the workers also make what the 3D view draws, so the page does not
+        cloud: true,
       },
       source,
       draft,

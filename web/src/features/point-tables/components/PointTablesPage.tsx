@@ -180,6 +180,7 @@ export function PointTablesPage() {
           <PointTableResults
             table={result.table}
             evaluation={result.evaluation}
+            cloud={result.cloud}
             unit={unit}
             summary={
               <p>

@@ -6,6 +6,7 @@ import type { StressUnitName } from "../../../../../core/contract/materials";
 import { Verdict } from "../../../components/Verdict";
 import { quietButton } from "../../../lib/forms";
 import { formatStress } from "../../../lib/stress";
+import { useWorstInBox } from "../hooks/use-worst-in-box";
 import { WORST_KEPT } from "../model/pipeline";
 import {
   DEFAULT_SORT,
@@ -15,7 +16,6 @@ import {
   coordinateText,
   rowsOf,
   sortRows,
-  worstInBox,
   type CoordinateBox,
   type SortKey,
 } from "../model/worst-points";
@@ -57,12 +57,9 @@ export function WorstPointsTable({
   const [sort, setSort] = useState(DEFAULT_SORT);
   const scroller = useRef<HTMLDivElement>(null);
 
-  const indices = useMemo(
-    () => worstInBox(utilisation, table.coordinates, box, WORST_KEPT),
-    [utilisation, table.coordinates, box],
-  );
+  const indices = useWorstInBox(utilisation, table.coordinates, box, WORST_KEPT);
   const rows = useMemo(
-    () => sortRows(rowsOf(table, utilisation, indices), sort),
+    () => (indices === null ? [] : sortRows(rowsOf(table, utilisation, indices), sort)),
     [table, utilisation, indices, sort],
   );
   // TanStack Virtual returns fresh functions each render by design (it re-renders the list on
@@ -147,10 +144,16 @@ export function WorstPointsTable({
           )}
         </form>
       )}
-      <p className="text-[13px] text-graphite-soft">
-        <span className="num">{rows.length.toLocaleString("en-US")}</span> worst points
-        {table.coordinates !== null ? " in the region" : ""} (at most {WORST_KEPT.toLocaleString("en-US")});
-        stresses in {unit}, coordinates as in the file
+      <p className="text-[13px] text-graphite-soft" aria-live="polite">
+        {indices === null ? (
+          "Finding the worst points…"
+        ) : (
+          <>
+            <span className="num">{rows.length.toLocaleString("en-US")}</span> worst points
+            {table.coordinates !== null ? " in the region" : ""} (at most {WORST_KEPT.toLocaleString("en-US")}
+            ); stresses in {unit}, coordinates as in the file
+          </>
+        )}
       </p>
       <div
         className="overflow-auto rounded border border-rule bg-panel"

@@ -40,3 +40,29 @@ describe("cloudBuffers (the 3D view's arrays, made in a worker)", () => {
     expect(colourStep(1)).toBe(Math.round((COLOUR_STEPS - 1) / 1.5));
   });
 });
+
+describe("cloudBuffers of a sample of the points", () => {
+  it("when only some points are drawn, then each drawn point has the position and colour it has among all points (the box stays the whole table's), and the sphere is three.js's of the drawn positions", () => {
+    const random = seededRandom(5);
+    const n = 3000;
+    const coordinates = Float64Array.from({ length: 3 * n }, () => 100 * random() - 30);
+    const utilisation = Float64Array.from({ length: n }, () => 1.6 * random());
+    const indices = Uint32Array.from({ length: 400 }, (_, k) => 7 * k + (k % 5));
+    const all = cloudBuffers(coordinates, utilisation);
+    const some = cloudBuffers(coordinates, utilisation, indices);
+    expect(some.positions.length).toBe(3 * indices.length);
+    indices.forEach((i, k) => {
+      expect(Array.from(some.positions.subarray(3 * k, 3 * k + 3))).toEqual(
+        Array.from(all.positions.subarray(3 * i, 3 * i + 3)),
+      );
+      expect(Array.from(some.colours.subarray(3 * k, 3 * k + 3))).toEqual(
+        Array.from(all.colours.subarray(3 * i, 3 * i + 3)),
+      );
+    });
+    const g = new BufferGeometry();
+    g.setAttribute("position", new BufferAttribute(some.positions, 3));
+    g.computeBoundingSphere();
+    expect(some.sphere.radius).toBeCloseTo(g.boundingSphere!.radius, 6);
+    expect(some.sphere.centre[0]).toBeCloseTo(g.boundingSphere!.center.x, 6);
+  });
+});

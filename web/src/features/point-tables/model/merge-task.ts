@@ -7,10 +7,9 @@
  */
 import { mergePointTables, type PointTable } from "../../../../../core";
 import { mergeEvaluations, type TableEvaluation } from "./merge-evaluations";
-import type { CloudBuffers } from "./cloud-buffers";
+import { cloudViewTransferables, type CloudView } from "./cloud-view";
 import {
   cloudOf,
-  cloudTransferables,
   runPart,
   transferablesOf,
   type PartEvaluation,
@@ -26,7 +25,7 @@ export type MergeRequest = {
   kind: "merge";
   parts: FinishedPart[];
   worstCount: number;
-  /** also make the 3D view's arrays of the whole (cloud-buffers.ts) */
+  /** also make what the 3D view draws of the whole (cloud-view.ts) */
   cloud?: boolean;
 };
 
@@ -38,7 +37,7 @@ export type MergedMessage = {
   kind: "merged";
   table: PointTable;
   evaluation: TableEvaluation;
-  cloud?: CloudBuffers | null;
+  cloud?: CloudView | null;
 };
 
 /** Every message a point-table worker posts. */
@@ -62,7 +61,7 @@ export function runMerge(request: MergeRequest, post: WorkerPost): void {
     const cloud = request.cloud === true ? cloudOf(table, evaluation) : null;
     post({ kind: "merged", table, evaluation, cloud }, [
       ...transferablesOf(table, evaluation),
-      ...cloudTransferables(cloud),
+      ...cloudViewTransferables(cloud),
     ]);
   } catch (error) {
     post({ kind: "error", message: error instanceof Error ? error.message : String(error) }, []);

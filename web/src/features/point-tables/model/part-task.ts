@@ -14,7 +14,7 @@ import {
   type PointTableOptions,
   type PointTableSpec,
 } from "../../../../../core";
-import { cloudBuffers, type CloudBuffers } from "./cloud-buffers";
+import { cloudView, cloudViewTransferables, type CloudView } from "./cloud-view";
 
 /** What the page asks a worker to do. */
 export type PartRequest = {
@@ -25,7 +25,7 @@ export type PartRequest = {
   includeUnsuited: boolean;
   /** how many of the part's worst points to keep */
   worstCount: number;
-  /** also make the 3D view's arrays (cloud-buffers.ts): only when this part is the whole table */
+  /** also make what the 3D view draws (cloud-view.ts): only when this part is the whole table */
   cloud?: boolean;
 };
 
@@ -45,7 +45,7 @@ export type PartMessage =
       evaluation: PartEvaluation;
       timings: PartTimings;
       /** the 3D view's arrays, when asked for and the table has coordinates */
-      cloud?: CloudBuffers | null;
+      cloud?: CloudView | null;
     }
   | { kind: "error"; message: string };
 
@@ -125,13 +125,9 @@ export function transferablesOf(table: PointTable, evaluation: PartEvaluation): 
   return [...buffers];
 }
 
-/** The 3D view's arrays of a table with coordinates, else null. */
+/** What the 3D view draws of a table with coordinates (its sample and arrays), else null. */
 export const cloudOf = (table: PointTable, evaluation: Pick<PartEvaluation, "utilisation">) =>
-  table.coordinates === null ? null : cloudBuffers(table.coordinates, evaluation.utilisation);
-
-/** The buffers of the 3D view's arrays, to transfer. */
-export const cloudTransferables = (cloud: CloudBuffers | null): ArrayBuffer[] =>
-  cloud === null ? [] : [cloud.positions.buffer as ArrayBuffer, cloud.colours.buffer as ArrayBuffer];
+  table.coordinates === null ? null : cloudView(table.coordinates, evaluation.utilisation);
 
 /** Runs one part and posts its progress, then its result (arrays transferred) or the error. */
 export async function runPart(request: PartRequest, post: Post): Promise<void> {
@@ -147,7 +143,7 @@ export async function runPart(request: PartRequest, post: Post): Promise<void> {
     const cloud = request.cloud === true ? cloudOf(table, evaluation) : null;
     post({ kind: "done", table, evaluation, timings, cloud }, [
       ...transferablesOf(table, evaluation),
-      ...cloudTransferables(cloud),
+      ...cloudViewTransferables(cloud),
     ]);
   } catch (error) {
     post({ kind: "error", message: error instanceof Error ? error.message : String(error) }, []);

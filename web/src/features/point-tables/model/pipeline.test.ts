@@ -7,7 +7,7 @@ import {
 } from "../../../../../core";
 import { seededRandom } from "../../../../../core/testing/fixtures";
 import { byteLineCuts } from "./byte-cuts";
-import { cloudBuffers } from "./cloud-buffers";
+import { cloudView } from "./cloud-view";
 import { handleWorkerRequest, type WorkerMessage, type WorkerRequest } from "./merge-task";
 import { READ_PIECE_BYTES, runPart, type PartMessage } from "./part-task";
 import { PipelineCancelled, WORST_KEPT, runPipeline, workerCountFor, type WorkerPort } from "./pipeline";
@@ -169,10 +169,10 @@ describe("runPipeline", () => {
     expect(Array.from(evaluation.utilisation)).toEqual(Array.from(ref.evaluation.utilisation));
   });
 
-  it("when the 3D view's arrays are asked for, then one worker or the joining worker makes them for the whole table, and without the ask there are none", async () => {
+  it("when what the 3D view draws is asked for, then one worker or the joining worker makes it for the whole table, and without the ask there is none", async () => {
     const text = generated(3000);
     const ref = reference(text);
-    const expected = cloudBuffers(ref.table.coordinates!, ref.evaluation.utilisation);
+    const expected = cloudView(ref.table.coordinates!, ref.evaluation.utilisation);
     for (const workers of [1, 2]) {
       const made: FakeWorker[] = [];
       const input = {

@@ -8,7 +8,7 @@
  */
 import { lineCuts, type PointTable, type PointTableOptions, type PointTableSpec } from "../../../../../core";
 import { byteLineCuts } from "./byte-cuts";
-import type { CloudBuffers } from "./cloud-buffers";
+import type { CloudView } from "./cloud-view";
 import type { TableEvaluation } from "./merge-evaluations";
 import {
   mergeTransferables,
@@ -35,8 +35,8 @@ export type PipelineInput = {
   /** names of the columns, for the bad-row reasons of parts after the first */
   columnNames: readonly string[] | null;
   /**
-   * Also make the 3D view's arrays in a worker (positions, colours, bounding sphere:
-   * cloud-buffers.ts), so the page need not build them; default false.
+   * Also make what the 3D view draws in a worker (its sample of the points, their positions,
+   * colours and bounding sphere: cloud-view.ts), so the page need not; default false.
    */
   cloud?: boolean;
 };
@@ -50,10 +50,10 @@ export type PipelineResult = {
   /** per part, in file order */
   timings: PartTimings[];
   /**
-   * the 3D view's arrays, when the input asked for them and the table has coordinates; else null
+   * what the 3D view draws, when the input asked for it and the table has coordinates; else null
    * (optional, so results built elsewhere, e.g. from a stored table, need not name it)
    */
-  cloud?: CloudBuffers | null;
+  cloud?: CloudView | null;
 };
 
 /** Thrown (as the run's rejection) when the engineer cancelled. */

@@ -11,6 +11,7 @@ import {
   rowsOf,
   sortRows,
   worstInBox,
+  worstInBoxSteps,
   type CoordinateBox,
 } from "./worst-points";
 
@@ -92,6 +93,24 @@ describe("worstInBox", () => {
     const got = worstInBox(u, coords, box, 30);
     expect(got).toEqual(expected);
     expect(got.length).toBe(30);
+  });
+
+  it("when the list is found in slices of 700 points (as the page does), then it is the same top of a full sort, found over one pause per slice", () => {
+    const box: CoordinateBox = { x: [1, 8], y: [null, null], z: [null, 9] };
+    const within = (i: number) => coords[3 * i] >= 1 && coords[3 * i] <= 8 && coords[3 * i + 2] <= 9;
+    const expected = Array.from(u.keys())
+      .filter((i) => !Number.isNaN(u[i]) && within(i))
+      .sort((a, b) => u[b] - u[a] || a - b)
+      .slice(0, 40);
+    const steps = worstInBoxSteps(u, coords, box, 40, 700);
+    let pauses = 0;
+    let next = steps.next();
+    while (next.done !== true) {
+      pauses++;
+      next = steps.next();
+    }
+    expect(next.value).toEqual(expected);
+    expect(pauses).toBe(Math.ceil(n / 700) - 1);
   });
 });
 

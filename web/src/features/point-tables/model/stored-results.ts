@@ -14,6 +14,7 @@ import {
 } from "../../../../../core";
 import type { PointTableDetailView, PointTableEvaluationView } from "../../../entities/point-table/contract";
 import type { TableEvaluation } from "./merge-evaluations";
+import { yieldToPage } from "./steps";
 
 /** The columns the server sends, in order: six components (Pa), then three coordinates. */
 const COLUMNS = 9;
@@ -60,22 +61,6 @@ export type SliceOptions = { pause?: () => Promise<void>; slice?: number; isCanc
 
 /** Points turned from columns between two yields to the page. */
 export const TURNING_SLICE = 65_536;
-
-/**
- * Yields to the page through a message (a macrotask: input and drawing run first) rather than
- * setTimeout, which browsers hold back by at least 4 ms once timeouts nest.
- */
-export function yieldToPage(): Promise<void> {
-  if (typeof MessageChannel === "undefined") return new Promise((resolve) => setTimeout(resolve, 0));
-  return new Promise((resolve) => {
-    const channel = new MessageChannel();
-    channel.port1.onmessage = () => {
-      channel.port1.close();
-      resolve();
-    };
-    channel.port2.postMessage(null);
-  });
-}
 
 /** The table's arrays allocated, ids read, and `turn(from, to)` to fill points from..to-1 from the columns. */
 function startTurning(

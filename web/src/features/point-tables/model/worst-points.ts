@@ -11,6 +11,7 @@ import {
   type StressTensor,
   type Verdict,
 } from "../../../../../core";
+import { runSteps, sweep, type Steps } from "./steps";
 
 /** Per axis, the lowest and highest coordinate kept (null: open on that side). */
 export type CoordinateBox = Record<"x" | "y" | "z", [number | null, number | null]>;
@@ -72,36 +73,47 @@ function inside(coordinates: Float64Array, index: number, box: CoordinateBox): b
  * (equal ones: lower index first); points without a utilisation are left out. Without
  * coordinates the box cannot apply and every point is a candidate.
  */
-export function worstInBox(
+export const worstInBox = (
   utilisation: Float64Array,
   coordinates: Float64Array | null,
   box: CoordinateBox,
   limit: number,
-): number[] {
+): number[] => runSteps(worstInBoxSteps(utilisation, coordinates, box, limit));
+
+/** {@link worstInBox} as steps of at most `slice` points, so the page can run it without a long task. */
+export function* worstInBoxSteps(
+  utilisation: Float64Array,
+  coordinates: Float64Array | null,
+  box: CoordinateBox,
+  limit: number,
+  slice = Infinity,
+): Steps<number[]> {
   const open = coordinates === null || isOpenBox(box);
   // kept sorted ascending by (u, −index) so the least critical kept one is at [0]; the list is
   // short (a thousand) next to the table (a million), so most points fail the first comparison
   const keptU: number[] = [];
   const keptI: number[] = [];
-  for (let i = 0; i < utilisation.length; i++) {
-    const u = utilisation[i];
-    if (u !== u) continue;
-    if (keptU.length === limit && !(u > keptU[0])) continue;
-    if (!open && !inside(coordinates, i, box)) continue;
-    let at = 0;
-    let hi = keptU.length;
-    while (at < hi) {
-      const mid = (at + hi) >> 1;
-      if (keptU[mid] < u || (keptU[mid] === u && keptI[mid] > i)) at = mid + 1;
-      else hi = mid;
+  yield* sweep(utilisation.length, slice, (from, to) => {
+    for (let i = from; i < to; i++) {
+      const u = utilisation[i];
+      if (u !== u) continue;
+      if (keptU.length === limit && !(u > keptU[0])) continue;
+      if (!open && !inside(coordinates, i, box)) continue;
+      let at = 0;
+      let hi = keptU.length;
+      while (at < hi) {
+        const mid = (at + hi) >> 1;
+        if (keptU[mid] < u || (keptU[mid] === u && keptI[mid] > i)) at = mid + 1;
+        else hi = mid;
+      }
+      keptU.splice(at, 0, u);
+      keptI.splice(at, 0, i);
+      if (keptU.length > limit) {
+        keptU.shift();
+        keptI.shift();
+      }
     }
-    keptU.splice(at, 0, u);
-    keptI.splice(at, 0, i);
-    if (keptU.length > limit) {
-      keptU.shift();
-      keptI.shift();
-    }
-  }
+  });
   return keptI.reverse();
 }
 

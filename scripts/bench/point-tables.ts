@@ -98,7 +98,8 @@ export async function run(): Promise<void> {
     [
       "full",
       () => {
-        const table = parsePointTable(text, GENERATED_LAYOUT);
+        // The page's steps (bytes, rows estimated, then the evaluator), in this thread.
+        const table = parseBytes(encoded);
         const result = evaluatePointTable(table.components, BENCH_SPEC, { includeUnsuited: true });
         count = result.evaluated;
         bad = table.badRows.count;
@@ -170,18 +171,25 @@ export async function run(): Promise<void> {
     console.log(`${"uDSV typed parse (typedArrs), baseline".padEnd(50)} ${rate(udsvMs)}`);
     console.log(`${"point table parse alone (text)".padEnd(50)} ${rate(parseMs)}`);
     console.log(`${"point table parse alone (UTF-8 bytes, as workers)".padEnd(50)} ${rate(bytesMs)}`);
-    console.log(`${"point table parse + evaluate".padEnd(50)} ${rate(fullMs)}`);
+    console.log(`${"point table parse + evaluate, in this thread".padEnd(50)} ${rate(fullMs)}`);
     console.log(`${"one worker: parse + evaluate".padEnd(50)} ${rate(oneMs)}`);
     console.log(`${"two workers: parse + evaluate, half each".padEnd(50)} ${rate(twoMs)}`);
-    const vsUdsv = udsvMs / fullMs;
+    // The headline is the product's path: one worker (one core, a heap of its own) reading the
+    // bytes and rating them, as each of the page's workers does. In this thread the same steps
+    // run in a heap that has just held uDSV's million row arrays (see the note above run()).
+    const vsUdsv = udsvMs / oneMs;
+    const twoVsUdsv = udsvMs / twoMs;
     const twoVsOne = oneMs / twoMs;
     console.log(
       `point table parse / uDSV parse: ${(udsvMs / parseMs).toFixed(2)}× (from bytes ${(udsvMs / bytesMs).toFixed(2)}×)`,
     );
-    console.log(`point table parse+evaluate / uDSV parse: ${vsUdsv.toFixed(2)}×`);
+    console.log(
+      `point table parse+evaluate / uDSV parse: ${vsUdsv.toFixed(2)}× (one worker; in this thread ${(udsvMs / fullMs).toFixed(2)}×)`,
+    );
+    console.log(`point table two workers parse+evaluate / uDSV parse: ${twoVsUdsv.toFixed(2)}×`);
     console.log(`point table two workers / one: ${twoVsOne.toFixed(2)}×`);
     console.log(
-      `targets: parse+evaluate ≥ 1.2× uDSV (${vsUdsv >= 1.2 ? "met" : "NOT met"}), two workers ≥ 1.8× one (${twoVsOne >= 1.8 ? "met" : "NOT met"})`,
+      `targets: parse+evaluate ≥ 1.2× uDSV on one core (${vsUdsv >= 1.2 ? "met" : "NOT met"}), ≥ 1.8× uDSV with two workers (${twoVsUdsv >= 1.8 ? "met" : "NOT met"}); two workers / one ≥ 1.8× (${twoVsOne >= 1.8 ? "met" : "NOT met"})`,
     );
   } finally {
     await Promise.all(workers.map((w) => w.terminate()));

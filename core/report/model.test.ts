@@ -237,20 +237,7 @@ describe("buildReportModel", () => {
     const d = buildReportModel(content(), draft);
     expect(d.watermark).toBe(DRAFT_WATERMARK);
     expect(d.pageIdentifier).toContain("DRAFT of Nozzle N2");
-    const r = buildReportModel(content(), {
-      kind: "record",
-      recordId: "c17d9cfd-8fa0-4cef-9e7d-60819203b4c5",
-      number: "CR-0012",
-      revision: "A",
-      status: "submitted for check",
-      hash: "0f".repeat(32),
-      revisions: [],
-      signatures: {
-        originator: { name: "Ada", at: "2026-12-01T10:00:00.000Z" },
-        checkers: [],
-        approver: null,
-      },
-    });
+    const r = buildReportModel(content(), recordMeta);
     expect(r.watermark).toBeNull();
     expect(r.pageIdentifier).toBe("Record CR-0012 rev. A · c17d9cfd-8fa0-4cef-9e7d-60819203b4c5");
     const cover = texts(r.sections[0].blocks);

@@ -15,6 +15,7 @@ import { calculationHash } from "../../api/domain/records/same-calculation";
 import * as scopeColumn from "../../db/migrations/20261203-2100-add-scope-to-calculation-records";
 import { insertRecord, setRecordStatus } from "../../db/repositories/records";
 import { buildTestApp } from "../support/app";
+import { binaryBody } from "../support/binary-body";
 import { linearWall } from "../support/linear-wall";
 import { mpa, projectTeam, projectWithLocations, wsPath, type ProjectTeam } from "../support/project-team";
 
@@ -73,13 +74,6 @@ const detail = async (recordId: string) =>
 
 const errorPaths = (body: { error: { details?: { path: string }[] } }) =>
   (body.error.details ?? []).map((d) => d.path);
-
-/** supertest keeps a binary body as a Buffer only when told how to collect it. */
-function binary(res: NodeJS.ReadableStream, done: (error: Error | null, body: Buffer) => void): void {
-  const chunks: Buffer[] = [];
-  res.on("data", (c: Buffer) => chunks.push(c));
-  res.on("end", () => done(null, Buffer.concat(chunks)));
-}
 
 beforeAll(async () => {
   team = await projectTeam(app);
@@ -278,7 +272,7 @@ describe("a record of chosen load cases and locations", () => {
     const res = await team.viewer.agent
       .get(`${base}/records/${records[0]}/report.pdf`)
       .buffer(true)
-      .parse(binary as never)
+      .parse(binaryBody as never)
       .expect(200);
     const { text } = await extractText(new Uint8Array(res.body as Buffer), { mergePages: true });
     const flat = text.replace(/\s+/g, " ");

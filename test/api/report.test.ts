@@ -19,6 +19,7 @@ import { buildRecordContent } from "../../api/domain/records/content";
 import { STAND_INS } from "../../api/domain/report/fonts";
 import { renderReportPdf } from "../../api/domain/report/render-pdf";
 import { buildTestApp } from "../support/app";
+import { binaryBody } from "../support/binary-body";
 import { linearWall } from "../support/linear-wall";
 import { mpa, projectTeam, projectWithLocations, wsPath, type ProjectTeam } from "../support/project-team";
 
@@ -36,13 +37,6 @@ async function pagesOf(pdf: Buffer | Uint8Array): Promise<string[]> {
   return text.map((page) => page.replace(/\s+/g, " "));
 }
 const flat = (text: string) => text.replace(/\s+/g, " ");
-
-/** supertest keeps a binary body as a Buffer only when told how to collect it. */
-function binary(res: NodeJS.ReadableStream, done: (error: Error | null, body: Buffer) => void): void {
-  const chunks: Buffer[] = [];
-  res.on("data", (c: Buffer) => chunks.push(c));
-  res.on("end", () => done(null, Buffer.concat(chunks)));
-}
 
 beforeAll(async () => {
   team = await projectTeam(app);
@@ -92,7 +86,7 @@ describe("GET …/projects/{projectId}/report.pdf (the draft report)", () => {
     const res = await team.viewer.agent
       .get(`${base()}/report.pdf`)
       .buffer(true)
-      .parse(binary as never)
+      .parse(binaryBody as never)
       .expect(200);
     expect(res.headers["content-type"]).toMatch(/^application\/pdf/);
     expect(res.headers["content-disposition"]).toBe('attachment; filename="report-vessel-draft-report.pdf"');
@@ -263,7 +257,7 @@ describe("GET …/records/{recordId}/report.pdf (a frozen record's report)", () 
     const before = await team.viewer.agent
       .get(path)
       .buffer(true)
-      .parse(binary as never)
+      .parse(binaryBody as never)
       .expect(200);
     expect(before.headers["content-type"]).toMatch(/application\/pdf/);
     const pages = await pagesOf(before.body as Buffer);
@@ -291,7 +285,7 @@ describe("GET …/records/{recordId}/report.pdf (a frozen record's report)", () 
     const after = await team.viewer.agent
       .get(path)
       .buffer(true)
-      .parse(binary as never)
+      .parse(binaryBody as never)
       .expect(200);
     expect(Buffer.compare(after.body as Buffer, before.body as Buffer)).toBe(0);
     // …while the draft does change with the edit (the record is not just a copy of the draft).
@@ -302,7 +296,7 @@ describe("GET …/records/{recordId}/report.pdf (a frozen record's report)", () 
             await team.viewer.agent
               .get(`${base()}/report.pdf`)
               .buffer(true)
-              .parse(binary as never)
+              .parse(binaryBody as never)
           ).body as Buffer,
         )
       ).join(" "),
@@ -367,7 +361,7 @@ describe("the report's sections beside the comparison: stress classification lin
     const res = await team.viewer.agent
       .get(`${path}/report.pdf`)
       .buffer(true)
-      .parse(binary as never)
+      .parse(binaryBody as never)
       .expect(200);
     const text = (await pagesOf(res.body as Buffer)).join(" ");
     expect(text).toContain("Stress classification lines");

@@ -24,7 +24,10 @@ export async function linearizationEndsOf(
   if (listed.length === 0) return {};
   const wanted = new Set(listed.map((l) => l.id));
   const caseIds = [...new Set(listed.map((l) => l.caseId))];
-  const rows = (await Promise.all(caseIds.map((id) => listLinearizations(id, transaction)))).flat();
+  // One case after another: the reads share the freeze's transaction, and pg deprecates
+  // queueing several queries on one client at once.
+  const rows: Awaited<ReturnType<typeof listLinearizations>> = [];
+  for (const id of caseIds) rows.push(...(await listLinearizations(id, transaction)));
   const byId = new Map(rows.filter((r) => wanted.has(r.id)).map((r) => [r.id, r]));
   const ends = listed.flatMap((line) => {
     const row = byId.get(line.id);

@@ -7,6 +7,8 @@ import { histogramGeometry } from "../model/histogram";
 const W = 520;
 const H = 180;
 const M = { left: 66, right: 12, top: 10, bottom: 40 };
+/** Room for the "u = 1 (required factor)" label at 11 px (98 px in the SVG's units, measured in Chromium) and a margin. */
+const LABEL_ROOM = 110;
 
 /** How many points have each governing utilisation, in bins; the line u = 1 is the required factor. */
 export function UtilisationHistogram({ histogram }: { histogram: Histogram }) {
@@ -48,7 +50,13 @@ export function UtilisationHistogram({ histogram }: { histogram: Histogram }) {
               className="stroke-fail"
               strokeDasharray="4 3"
             />
-            <text x={g.requiredAt + 4} y={10} className="fill-fail text-[11px]">
+            {/* Beside the line, on whichever side leaves the label inside the plot. */}
+            <text
+              x={g.requiredAt > pw - LABEL_ROOM ? g.requiredAt - 4 : g.requiredAt + 4}
+              y={10}
+              textAnchor={g.requiredAt > pw - LABEL_ROOM ? "end" : "start"}
+              className="fill-fail text-[11px]"
+            >
               u = 1 (required factor)
             </text>
             <SvgAxis

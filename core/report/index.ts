@@ -11,3 +11,4 @@ export { buildReportModel, RESPONSIBILITY } from "./model";
 export { VERIFY_CERTIFICATE_NOTE } from "./inputs-section";
 export { VERDICT_TEXT } from "./location-sections";
 export { recordReportMeta } from "./record-meta";
+export { scopeCoverageSentence } from "./coverage";

@@ -1,4 +1,5 @@
 import { Link, useParams } from "react-router-dom";
+import { scopeCoverageSentence } from "../../../../../core/report";
 import { Caution } from "../../../components/Caution";
 import { Panel } from "../../../components/Panel";
 import { useProject } from "../../../entities/project/queries";
@@ -10,7 +11,7 @@ import { useSession } from "../../../lib/session";
 import { commentThreads } from "../model/comments";
 import { provenance } from "../model/frozen-inputs";
 import { recordPdfPath, recordPrintPath, recordsPagePath } from "../model/paths";
-import { frozenResultsSubtitle, scopeSentence } from "../model/scope";
+import { frozenResultsSubtitle } from "../model/scope";
 import { recordStatusWords } from "../model/status";
 import { CommentThreads, type CommentPermission } from "./CommentThreads";
 import { DecisionPanel } from "./DecisionPanel";
@@ -80,10 +81,11 @@ export function RecordPage() {
             {r.reason}
           </p>
           <p className="mt-1 max-w-3xl text-[14px]" data-testid="record-scope">
-            {scopeSentence(scope, {
-              loadCases: r.content.inputs.loadCases.length,
-              locations: r.content.inputs.locations.length,
-            })}
+            {scopeCoverageSentence(
+              scope,
+              { loadCases: r.content.inputs.loadCases.length, locations: r.content.inputs.locations.length },
+              "record",
+            )}
           </p>
           <p className="mt-1 max-w-3xl break-all text-[12px] text-graphite-soft">
             {provenance(r.content, r.hash)}

@@ -1,4 +1,5 @@
 import { describe, expect, it } from "vitest";
+import { scopeCoverageSentence } from "../../../../../core/report";
 import {
   frozenResultsSubtitle,
   LOAD_CASES_NONE,
@@ -8,7 +9,6 @@ import {
   namesAFormField,
   readScope,
   scopeCountLine,
-  scopeSentence,
   scopeServerErrors,
   scopeWords,
   setScopeList,
@@ -48,7 +48,7 @@ describe("scope in words", () => {
   it("when a record covers the whole project (scope null or absent), then the table says 'whole project' and the page says so in a sentence", () => {
     expect(scopeWords(null)).toBe("whole project");
     expect(scopeWords(undefined)).toBe("whole project");
-    expect(scopeSentence(null, { loadCases: 4, locations: 1 })).toBe(
+    expect(scopeCoverageSentence(null, { loadCases: 4, locations: 1 }, "record")).toBe(
       "This record covers the whole project: 4 load cases and 1 location.",
     );
     expect(frozenResultsSubtitle(null)).toMatch(/^every case and combination at every location/);
@@ -56,7 +56,7 @@ describe("scope in words", () => {
 
   it("when a record covers 2 of 4 load cases and 1 of 3 locations, then the table counts them and the page names them in the project's order", () => {
     expect(scopeWords(SUBSET)).toBe("2 of 4 load cases, 1 of 3 locations");
-    expect(scopeSentence(SUBSET, { loadCases: 2, locations: 1 })).toBe(
+    expect(scopeCoverageSentence(SUBSET, { loadCases: 2, locations: 1 }, "record")).toBe(
       "This record covers 2 of 4 load cases (Operating, Design) and 1 of 3 locations (mid-shell); " +
         "results outside it are not part of this record.",
     );

@@ -23,30 +23,6 @@ export function scopeWords(scope: RecordScope | null | undefined): string {
   );
 }
 
-const names = (items: readonly { name: string }[]) => items.map((i) => i.name).join(", ");
-
-/**
- * The record page's sentence, with the names: "This record covers 2 of 4 load cases (Operating,
- * Design) and 1 of 3 locations (mid-shell); results outside it are not part of this record." A
- * whole-project record gives the counts it froze, as the printed report's cover does.
- */
-export function scopeSentence(
-  scope: RecordScope | null | undefined,
-  frozen: { loadCases: number; locations: number },
-): string {
-  if (!scope)
-    return (
-      `This record covers the whole project: ${counted(frozen.loadCases, "load case", "load cases")} ` +
-      `and ${counted(frozen.locations, "location", "locations")}.`
-    );
-  return (
-    `This record covers ${scope.loadCases.length} of ${counted(scope.projectLoadCases, "load case", "load cases")} ` +
-    `(${names(scope.loadCases)}) and ${scope.locations.length} of ` +
-    `${counted(scope.projectLocations, "location", "locations")} (${names(scope.locations)}); ` +
-    "results outside it are not part of this record."
-  );
-}
-
 /** The subtitle of the record's frozen results: a subset record must not claim every case. */
 export function frozenResultsSubtitle(scope: RecordScope | null | undefined): string {
   return scope

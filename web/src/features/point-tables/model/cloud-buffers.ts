@@ -37,17 +37,7 @@ export function* cloudBuffersSteps(
 ): Steps<CloudBuffers> {
   const n = utilisation.length;
   if (coordinates.length !== 3 * n) throw new RangeError("coordinates must hold 3 entries per point");
-  const lo = [Infinity, Infinity, Infinity];
-  const hi = [-Infinity, -Infinity, -Infinity];
-  yield* sweep(n, slice, (from, to) => {
-    for (let i = 3 * from; i < 3 * to; i += 3) {
-      for (let a = 0; a < 3; a++) {
-        const v = coordinates[i + a];
-        if (v < lo[a]) lo[a] = v;
-        if (v > hi[a]) hi[a] = v;
-      }
-    }
-  });
+  const { lo, hi } = yield* boundingBox(coordinates, slice);
   const mid = lo.map((l, a) => (l + hi[a]) / 2);
   const span = Math.max(...hi.map((h, a) => h - lo[a])) || 1;
   const drawn = indices === null ? n : indices.length;
@@ -67,21 +57,30 @@ export function* cloudBuffersSteps(
   return { positions, colours, sphere };
 }
 
-/** The centre of the positions' bounding box and the largest distance from it (three.js's way). */
-function* boundingSphere(positions: Float32Array, slice: number): Steps<CloudBuffers["sphere"]> {
-  const n = positions.length / 3;
-  if (n === 0) return { centre: [0, 0, 0], radius: 0 };
+/** The smallest and largest x, y and z of points stored as x y z triples, `slice` points a step. */
+function* boundingBox(
+  xyz: Float64Array | Float32Array,
+  slice: number,
+): Steps<{ lo: number[]; hi: number[] }> {
   const lo = [Infinity, Infinity, Infinity];
   const hi = [-Infinity, -Infinity, -Infinity];
-  yield* sweep(n, slice, (from, to) => {
+  yield* sweep(xyz.length / 3, slice, (from, to) => {
     for (let i = 3 * from; i < 3 * to; i += 3) {
       for (let a = 0; a < 3; a++) {
-        const v = positions[i + a];
+        const v = xyz[i + a];
         if (v < lo[a]) lo[a] = v;
         if (v > hi[a]) hi[a] = v;
       }
     }
   });
+  return { lo, hi };
+}
+
+/** The centre of the positions' bounding box and the largest distance from it (three.js's way). */
+function* boundingSphere(positions: Float32Array, slice: number): Steps<CloudBuffers["sphere"]> {
+  const n = positions.length / 3;
+  if (n === 0) return { centre: [0, 0, 0], radius: 0 };
+  const { lo, hi } = yield* boundingBox(positions, slice);
   const [cx, cy, cz] = lo.map((l, a) => (l + hi[a]) / 2);
   let most = 0;
   yield* sweep(n, slice, (from, to) => {
